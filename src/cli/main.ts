@@ -1,0 +1,61 @@
+/**
+ * Trialbook's command line, for desktop use on exported files:
+ *   npm run --silent cli -- COMMAND [options]
+ * Each command lives in commands/NAME.ts and is registered below.
+ */
+import { InputError } from '../core/errors.ts';
+import type { Command } from './command.ts';
+
+const commands: Record<string, () => Promise<Command>> = {
+  analyze: async () => (await import('./commands/analyze.ts')).analyze,
+};
+
+function usage(): string {
+  return [
+    'Trialbook command line: analyse and plan two-level experiments from exported files.',
+    '',
+    'Usage: npm run --silent cli -- COMMAND [options]   (COMMAND --help for its options)',
+    '',
+    'Commands:',
+    ...Object.keys(commands).map((name) => `  ${name}`),
+  ].join('\n');
+}
+
+async function main(argv: string[]): Promise<number> {
+  const [name, ...rest] = argv;
+  if (!name || name === '--help' || name === '-h' || name === 'help') {
+    process.stdout.write(usage() + '\n');
+    return name ? 0 : 2;
+  }
+  const load = commands[name];
+  if (!load) {
+    process.stderr.write(`Unknown command "${name}".\n\n${usage()}\n`);
+    return 2;
+  }
+  const command = await load();
+  if (rest.includes('--help') || rest.includes('-h')) {
+    process.stdout.write(command.usage + '\n');
+    return 0;
+  }
+  try {
+    const out = await command.run(rest);
+    process.stdout.write(out.endsWith('\n') ? out : out + '\n');
+    return 0;
+  } catch (err) {
+    if (err instanceof InputError) {
+      process.stderr.write(`trialbook ${name}: ${err.message}\n`);
+      return 2;
+    }
+    throw err;
+  }
+}
+
+main(process.argv.slice(2)).then(
+  (code) => {
+    process.exitCode = code;
+  },
+  (err: unknown) => {
+    process.stderr.write(`trialbook: unexpected failure, please report it: ${err instanceof Error ? err.stack : String(err)}\n`);
+    process.exitCode = 1;
+  },
+);

@@ -1,0 +1,16 @@
+/**
+ * Numerical tolerances, named and set once (house style: relative, exported once).
+ */
+
+/** A column whose remaining norm falls below this fraction of its original norm during
+ * Householder QR is treated as a linear combination of earlier columns. Common practice:
+ * R's lm uses 1e-7 (the `tol` argument of qr.default / LINPACK dqrdc2). */
+export const RANK_TOLERANCE = 1e-7;
+
+/** Two coded settings closer than this count as the same point (pure error groups, center runs,
+ * "exactly +-1" checks for the Yates path). Common practice: a coded value is the real setting
+ * over half the range, so 1e-9 is far below any gauge resolution. */
+export const SETTING_TOLERANCE = 1e-9;
+
+/** A response whose spread is below this fraction of its magnitude is constant. Common practice. */
+export const CONSTANT_TOLERANCE = 1e-12;
