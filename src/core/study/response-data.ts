@@ -1,0 +1,23 @@
+/**
+ * The runs of one response, ready for the analysis: what the command line reads from a CSV or a
+ * backup and what the screens pass from the store. Rows are the runs used (logged, not
+ * excluded, with a value for this response); settings are the coded ACTUAL settings.
+ */
+import type { Factor } from '../factor/factor.ts';
+
+export interface ResponseData {
+  readonly factors: readonly Factor[];
+  /** Response name (with its unit, if any, kept apart). */
+  readonly response: string;
+  readonly unit?: string;
+  /** Coded actual settings, one row per run used, one value per factor in declared order. */
+  readonly coded: readonly (readonly number[])[];
+  /** The response at each run (the mean of its readings when a run has several). */
+  readonly y: readonly number[];
+  /** Block of each run, or null when the runs carry no block. */
+  readonly blocks: readonly number[] | null;
+  /** Run labels for reports (run numbers), aligned with the rows. */
+  readonly labels: readonly string[];
+  /** What was skipped and why ("2 excluded runs skipped"), for the report. */
+  readonly notes: readonly string[];
+}
