@@ -1,0 +1,82 @@
+/**
+ * The file and model options shared by analyze, predict, solve and path: which file, which
+ * factor and response columns, their coding, the model terms and the block column.
+ */
+import { readFileSync } from 'node:fs';
+import { InputError } from '../core/errors.ts';
+import { parseTerms, termsUpToOrder, defaultTerms } from '../core/model/formula.ts';
+import type { Term } from '../core/model/term.ts';
+import type { ResponseData } from '../core/study/response-data.ts';
+import { readTable } from '../io/csv/read-table.ts';
+import { tableResponseData } from '../io/csv/table-response-data.ts';
+import { parseAssignments, type OptionSpec } from './args.ts';
+
+export const modelOptionSpec = {
+  factors: { type: 'string' },
+  response: { type: 'string' },
+  levels: { type: 'string' },
+  terms: { type: 'string' },
+  order: { type: 'string' },
+  block: { type: 'string' },
+  study: { type: 'string' },
+  json: { type: 'boolean' },
+} as const satisfies OptionSpec;
+
+export const modelOptionUsage = `  FILE                 a CSV with a header row (factor columns hold real settings or level labels)
+  --factors A,B,C      the factor columns, in the order that gives their letters A, B, C ...
+  --response NAME      the response column
+  --levels A=low:high,B=labelLow:labelHigh
+                       the coding; without it a numeric factor runs from the column's min to max
+                       and a categorical factor's first label in the file is -1
+  --terms "A*B*C"      model terms in Wilkinson-Rogers notation (A + B + A:B, A*B*C, (A+B+C)^2)
+  --order N            or: all terms up to order N (default: main effects and two-factor interactions)
+  --block COLUMN       a column holding each run's block, fitted as a fixed effect
+  --json               one JSON object on stdout instead of the report`;
+
+type Values = { [K in keyof typeof modelOptionSpec]?: (typeof modelOptionSpec)[K]['type'] extends 'boolean' ? boolean : string };
+
+export interface ModelInput {
+  readonly data: ResponseData;
+  readonly terms: Term[];
+}
+
+function readFile(path: string): string {
+  try {
+    return readFileSync(path, 'utf8');
+  } catch (err) {
+    throw new InputError(`Cannot read the file "${path}": ${(err as NodeJS.ErrnoException).code === 'ENOENT' ? 'it does not exist' : (err as Error).message}`);
+  }
+}
+
+export function loadModelInput(positionals: string[], values: Values): ModelInput {
+  if (positionals.length !== 1) throw new InputError(`Give one file to analyse, got ${positionals.length === 0 ? 'none' : positionals.join(', ')}`);
+  const [path] = positionals;
+  if (!values.response) throw new InputError('Name the response with --response NAME');
+  const text = readFile(path);
+  if (/\.json$/i.test(path) || /^\s*\{/.test(text)) {
+    throw new InputError('Reading backups is not available in this version; export the study as CSV');
+  }
+  if (!values.factors) throw new InputError('Name the factor columns with --factors A,B,C');
+  const levels: Record<string, [string, string]> = {};
+  if (values.levels) {
+    for (const [name, range] of parseAssignments(values.levels, '--levels')) {
+      const parts = range.split(':');
+      if (parts.length !== 2 || parts.some((p) => p.trim() === '')) throw new InputError(`--levels: expected ${name}=low:high, got "${name}=${range}"`);
+      levels[name] = [parts[0].trim(), parts[1].trim()];
+    }
+  }
+  const factors = values.factors.split(',').map((f) => f.trim()).filter((f) => f !== '');
+  const data = tableResponseData(readTable(text), { factors, response: values.response, levels, ...(values.block ? { block: values.block } : {}) });
+  return { data, terms: modelTerms(data, values) };
+}
+
+export function modelTerms(data: ResponseData, values: Values): Term[] {
+  if (values.terms && values.order) throw new InputError('Give either --terms or --order, not both');
+  if (values.terms) return parseTerms(values.terms, data.factors);
+  if (values.order) {
+    const order = Number(values.order);
+    if (!Number.isInteger(order) || order < 1) throw new InputError(`--order needs a whole number of 1 or more, got "${values.order}"`);
+    return termsUpToOrder(data.factors.length, Math.min(order, data.factors.length));
+  }
+  return defaultTerms(data.factors.length);
+}

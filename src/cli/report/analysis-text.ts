@@ -1,0 +1,89 @@
+/** The analyze command's readable report, in Trialbook's own plain-words layout. */
+import type { Analysis, AnovaTable } from '../../core/fit/analysis.ts';
+import { num, pval, table } from './numbers.ts';
+
+function anovaText(t: AnovaTable): string {
+  return table(
+    ['source', 'df', 'sum of squares', 'mean square', 'F', 'p'],
+    t.rows.map((r) => [r.source, String(r.df), num(r.ss, 6), num(r.ms, 6), num(r.f), pval(r.p)]),
+  );
+}
+
+export function analysisText(a: Analysis): string {
+  const out: string[] = [];
+  const how = a.method === 'yates' ? "Yates' algorithm (complete, balanced factorial)" : 'least squares (Householder QR)';
+  out.push(`Analysis of ${a.response}: ${a.n} runs, fitted by ${how}, in coded units`);
+  out.push('');
+  out.push('Coding used (real setting -> coded value)');
+  for (const c of a.coding) {
+    const unit = c.unit ? ` ${c.unit}` : '';
+    const log = c.scale === 'log' ? ', log scale' : '';
+    out.push(`  ${c.letter}  ${c.name}: ${c.low}${unit} -> -1, ${c.high}${unit} -> +1${c.kind === 'numeric' ? `${log}, center 0` : ' (two named levels)'}`);
+  }
+  out.push('');
+  out.push('Effects (effect = 2 x coefficient: the change from -1 to +1 with the other factors at 0)');
+  const lenthCol = a.df.residual === 0;
+  const head = ['term', 'letters', 'effect', 'coefficient', 'std error', 't', 'p', '95% CI of coefficient'];
+  if (lenthCol) head.push('Lenth t');
+  const rows = [
+    ['Intercept (fit at center)', 'I', '-', num(a.intercept.coef), num(a.intercept.se), num(a.intercept.t), pval(a.intercept.p), '-', ...(lenthCol ? ['-'] : [])],
+    ...[...a.terms]
+      .sort((x, y) => Math.abs(y.effect) - Math.abs(x.effect))
+      .map((t) => [
+        t.name,
+        t.estimates ?? t.letters,
+        num(t.effect),
+        num(t.coef),
+        num(t.se),
+        num(t.t),
+        pval(t.p),
+        t.ci ? `${num(t.ci[0])} to ${num(t.ci[1])}` : '-',
+        ...(lenthCol ? [num(t.lenthT)] : []),
+      ]),
+  ];
+  out.push(table(head, rows));
+  if (a.blocks) out.push(`  block effects (sum to zero): ${a.blocks.map((b) => `block ${b.block} ${num(b.effect)}`).join(', ')}`);
+  out.push('');
+  out.push('How well the model fits');
+  out.push(`  noise (residual SD)               ${num(a.sigma)}   on ${a.df.residual} residual df`);
+  out.push(`  explained (R^2)                   ${num(a.r2)}`);
+  out.push(`  explained, for model size (adj R^2) ${num(a.r2adj)}`);
+  out.push(`  cross-validated (predicted R^2)   ${num(a.r2pred)}`);
+  out.push('');
+  out.push('ANOVA, sequential sums of squares (each term after those above it)');
+  out.push(anovaText(a.anova));
+  if (a.anovaAdjusted) {
+    out.push('');
+    out.push('ANOVA, adjusted sums of squares (each term after all the others)');
+    out.push(anovaText(a.anovaAdjusted));
+  }
+  if (a.curvature) {
+    const c = a.curvature;
+    out.push('');
+    out.push(`Curvature from ${c.nCenter} center runs: factorial mean - center mean = ${num(c.estimate)}, std error ${num(c.se)}, t ${num(c.t)}, p ${pval(c.p)}`);
+  }
+  if (a.lenth) {
+    const l = a.lenth;
+    out.push('');
+    out.push(`Lenth's method over ${l.m} effects (d = ${num(l.df)} df): pseudo standard error ${num(l.pse)}, margin of error ${num(l.me)}, simultaneous margin ${num(l.sme)}`);
+    const marked = [...l.effects].reverse().filter((e) => e.mark);
+    out.push(
+      marked.length > 0
+        ? `  beyond the margins: ${marked.map((e) => `${e.letters} ${num(e.effect)} (${e.mark === 'active' ? 'beyond the simultaneous margin' : 'beyond the margin of error'})`).join('; ')}`
+        : '  no effect is beyond the margin of error',
+    );
+  }
+  if (a.aliased.length > 0) {
+    out.push('');
+    out.push('Terms these runs cannot separate');
+    for (const t of a.aliased) {
+      out.push(`  ${t.letters} = ${t.combination.map((c, i) => `${i === 0 ? (c.weight < 0 ? '-' : '') : c.weight < 0 ? ' - ' : ' + '}${Math.abs(Math.abs(c.weight) - 1) < 1e-9 ? '' : num(Math.abs(c.weight)) + ' '}${c.letters}`).join('')}`);
+    }
+  }
+  if (a.warnings.length > 0) {
+    out.push('');
+    out.push('Notes');
+    for (const w of a.warnings) out.push(`  * ${w}`);
+  }
+  return out.join('\n');
+}

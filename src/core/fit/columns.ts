@@ -1,0 +1,57 @@
+/**
+ * The columns of the model matrix: the intercept, then blocks as a fixed effect, then the
+ * model terms in model order. Blocks use effect (sum-to-zero) coding: for B blocks, B-1 columns,
+ * column b is +1 in block b, -1 in the last block, 0 elsewhere, so the intercept stays the
+ * average over blocks and a prediction is for an average block (Montgomery, Design and Analysis
+ * of Experiments, 8th ed., section 7.2; the coding is common practice for fixed block effects).
+ */
+import { termValue, type Term } from '../model/term.ts';
+
+export type Column =
+  | { readonly kind: 'intercept' }
+  | { readonly kind: 'block'; readonly block: number }
+  | { readonly kind: 'term'; readonly term: Term };
+
+/** The distinct block labels in ascending order. */
+export function blockLevels(blocks: readonly number[] | null | undefined): number[] {
+  if (!blocks) return [];
+  return [...new Set(blocks)].sort((a, b) => a - b);
+}
+
+/** Column list for the given block levels and terms. */
+export function modelColumns(levels: readonly number[], terms: readonly Term[]): Column[] {
+  const cols: Column[] = [{ kind: 'intercept' }];
+  for (let b = 0; b < levels.length - 1; b++) cols.push({ kind: 'block', block: levels[b] });
+  for (const t of terms) cols.push({ kind: 'term', term: t });
+  return cols;
+}
+
+/** Value of a column at one run. */
+export function columnValue(c: Column, coded: ArrayLike<number>, block: number | undefined, lastBlock: number): number {
+  switch (c.kind) {
+    case 'intercept':
+      return 1;
+    case 'block':
+      return block === c.block ? 1 : block === lastBlock ? -1 : 0;
+    case 'term':
+      return termValue(c.term, coded);
+  }
+}
+
+/** The model matrix, column-major n x p. */
+export function modelMatrix(
+  cols: readonly Column[],
+  coded: readonly (readonly number[])[],
+  blocks: readonly number[] | null | undefined,
+): Float64Array {
+  const n = coded.length;
+  const p = cols.length;
+  const levels = blockLevels(blocks);
+  const last = levels[levels.length - 1];
+  const x = new Float64Array(n * p);
+  for (let j = 0; j < p; j++) {
+    const c = cols[j];
+    for (let i = 0; i < n; i++) x[j * n + i] = columnValue(c, coded[i], blocks?.[i], last);
+  }
+  return x;
+}

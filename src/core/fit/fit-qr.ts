@@ -1,0 +1,93 @@
+/**
+ * Least squares by Householder QR with rank detection (see linalg/householder-qr.ts).
+ * Coefficients b = R^-1 Q1'y; sequential sums of squares are the squares of the entries of Q'y
+ * in model order; residuals Q (0, Q2'y); (X'X)^-1 = R^-1 R^-T; leverage h_i = x_i'(X'X)^-1 x_i.
+ * Source: Golub and Van Loan, Matrix Computations, 4th ed., section 5.3 (the full-rank LS problem);
+ * Seber and Lee, Linear Regression Analysis, 2nd ed., section 11.3 (QR for regression, sequential SS).
+ * Cost O(n p^2).
+ */
+import { RANK_TOLERANCE } from '../tolerance.ts';
+import { applyQ, applyQt, householderQr } from '../linalg/householder-qr.ts';
+import { crossInverse, invertUpper, solveUpper } from '../linalg/triangular.ts';
+import type { Column } from './columns.ts';
+import type { AliasedColumn, LinearFit } from './linear-fit.ts';
+
+/** Weights below this are rounding noise in an alias combination (common practice). */
+const ALIAS_WEIGHT_TOLERANCE = 1e-8;
+
+export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<number>): LinearFit {
+  const n = y.length;
+  const p = columns.length;
+  const f = householderQr(x, n, p, RANK_TOLERANCE);
+  const m = f.rank;
+  const qty = Float64Array.from(y);
+  applyQt(f, qty);
+  const coef = qty.slice(0, m);
+  solveUpper(f.r, m, coef);
+  const seqSS = new Float64Array(m);
+  for (let k = 0; k < m; k++) seqSS[k] = qty[k] * qty[k];
+  const z = new Float64Array(n);
+  let rss = 0;
+  for (let i = m; i < n; i++) {
+    z[i] = qty[i];
+    rss += qty[i] * qty[i];
+  }
+  applyQ(f, z);
+  const residuals = z;
+  const fitted = new Float64Array(n);
+  for (let i = 0; i < n; i++) fitted[i] = y[i] - residuals[i];
+  const rinv = invertUpper(f.r, m);
+  const covUnscaled = crossInverse(rinv, m);
+
+  // Leverage h_i = || R^-T x_i ||^2 over the kept columns (Seber and Lee section 10.2).
+  const leverage = new Float64Array(n);
+  const w = new Float64Array(m);
+  for (let i = 0; i < n; i++) {
+    for (let a = 0; a < m; a++) {
+      // w = R^-T x_i: w_a = sum_{k<=a} Rinv[k,a] x_i[kept k]
+      let s = 0;
+      for (let k = 0; k <= a; k++) s += rinv[a * m + k] * x[f.kept[k] * n + i];
+      w[a] = s;
+    }
+    let h = 0;
+    for (let a = 0; a < m; a++) h += w[a] * w[a];
+    leverage[i] = h;
+  }
+
+  const aliased: AliasedColumn[] = [];
+  for (let a = 0; a < f.aliased.length; a++) {
+    const b = f.aliasedTop.slice(a * m, (a + 1) * m);
+    solveUpper(f.r, m, b);
+    const combination = [];
+    for (let k = 0; k < m; k++) if (Math.abs(b[k]) > ALIAS_WEIGHT_TOLERANCE) combination.push({ column: f.kept[k], weight: b[k] });
+    aliased.push({ column: f.aliased[a], combination });
+  }
+
+  // Orthogonal when R is diagonal up to rounding: |R_ij| small beside the column norms.
+  let orthogonal = true;
+  for (let j = 0; j < m && orthogonal; j++) {
+    for (let i = 0; i < j; i++) {
+      if (Math.abs(f.r[j * m + i]) > 1e-9 * Math.sqrt(Math.abs(f.r[i * m + i] * f.r[j * m + j]))) {
+        orthogonal = false;
+        break;
+      }
+    }
+  }
+
+  return {
+    n,
+    columns,
+    kept: f.kept,
+    coef,
+    covUnscaled,
+    seqSS,
+    fitted,
+    residuals,
+    leverage,
+    rss,
+    dfResidual: n - m,
+    aliased,
+    orthogonal,
+    method: 'qr',
+  };
+}

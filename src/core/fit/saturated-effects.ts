@@ -1,0 +1,52 @@
+/**
+ * The saturated set of effects that the factorial runs can estimate, for Lenth's method and the
+ * half-normal chart: one per column of an unreplicated full factorial, one per alias chain of a
+ * fraction (represented by its shortest word, since terms are offered lowest order first), with
+ * blocks, when present, taken out first. Found by Householder QR with rank detection over the
+ * factorial runs alone, adding terms order by order until the runs are used up.
+ * Cost O(n r T) for n factorial runs, rank r and T terms tried.
+ */
+import { termOrder, type Term } from '../model/term.ts';
+import { blockLevels, modelColumns, modelMatrix } from './columns.ts';
+import { fitQr } from './fit-qr.ts';
+
+export interface SaturatedEffect {
+  readonly term: Term;
+  readonly effect: number;
+  /** Terms whose columns equal (weight +1) or mirror (weight -1) this one in the factorial runs. */
+  readonly aliases: readonly { readonly term: Term; readonly weight: number }[];
+}
+
+export function saturatedEffects(
+  k: number,
+  coded: readonly (readonly number[])[],
+  y: readonly number[],
+  blocks: readonly number[] | null,
+): SaturatedEffect[] {
+  const levels = blockLevels(blocks);
+  const target = coded.length; // the most columns the runs can separate
+  let terms: Term[] = [];
+  let fit = null as ReturnType<typeof fitQr> | null;
+  for (let order = 1; order <= k; order++) {
+    for (let t = 1; t < 1 << k; t++) if (termOrder(t) === order) terms.push(t);
+    const cols = modelColumns(levels, terms);
+    fit = fitQr(cols, modelMatrix(cols, coded, blocks), y);
+    if (fit.kept.length >= target) break;
+  }
+  if (!fit) return [];
+  const byColumn = new Map<number, { term: Term; weight: number }[]>();
+  for (const a of fit.aliased) {
+    const c = fit.columns[a.column];
+    if (c.kind !== 'term' || a.combination.length !== 1) continue;
+    const list = byColumn.get(a.combination[0].column) ?? [];
+    list.push({ term: c.term, weight: a.combination[0].weight });
+    byColumn.set(a.combination[0].column, list);
+  }
+  const out: SaturatedEffect[] = [];
+  for (let j = 0; j < fit.kept.length; j++) {
+    const c = fit.columns[fit.kept[j]];
+    if (c.kind !== 'term') continue;
+    out.push({ term: c.term, effect: 2 * fit.coef[j], aliases: byColumn.get(fit.kept[j]) ?? [] });
+  }
+  return out;
+}

@@ -1,0 +1,78 @@
+/**
+ * From a study's logged runs to the data the analysis takes for one response: the coded ACTUAL
+ * settings of every run used, and the mean of its readings. Excluded runs and runs without a
+ * reading of the response are skipped and counted in the notes. Several readings of one run are
+ * repeat measurements: their mean is the run's value, and they are never counted as replicates
+ * (true replicates are separate runs of the plan).
+ * Example: a run with readings [10, 12] contributes one row with y = 11.
+ */
+import { InputError } from '../errors.ts';
+import { toCoded } from '../factor/coding.ts';
+import type { Response } from './response.ts';
+import type { ResponseData } from './response-data.ts';
+import { meanReading, plannedRunOf, type LoggedRun, type StudyPlan } from './study.ts';
+
+/** Finds a response by name (case-insensitive, surrounding spaces ignored); throws listing the names otherwise. */
+export function findResponse(study: Pick<StudyPlan, 'responses' | 'title'>, name: string): { response: Response; index: number } {
+  const key = name.trim().toLowerCase();
+  const index = study.responses.findIndex((r) => r.name.trim().toLowerCase() === key);
+  if (index < 0) {
+    const names = study.responses.map((r) => `"${r.name}"`).join(', ') || 'none';
+    throw new InputError(`Study "${study.title}" has no response "${name}"; its responses are ${names}`);
+  }
+  return { response: study.responses[index], index };
+}
+
+function plural(n: number, one: string, many: string): string {
+  return `${n} ${n === 1 ? one : many}`;
+}
+
+/** The analysis data of one response from the current state of a study's logged runs. */
+export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[], responseName: string): ResponseData {
+  const { response, index } = findResponse(study, responseName);
+  const ordered = [...runs].sort((a, b) => a.plannedRun - b.plannedRun || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+  const coded: number[][] = [];
+  const y: number[] = [];
+  const blocks: number[] = [];
+  const labels: string[] = [];
+  const seen = new Map<number, number>();
+  let excluded = 0;
+  let missing = 0;
+  let repeated = 0;
+  for (const run of ordered) {
+    if (run.excluded) {
+      excluded++;
+      continue;
+    }
+    const readings = run.readings[index] ?? [];
+    const mean = meanReading(readings);
+    if (mean === null) {
+      missing++;
+      continue;
+    }
+    if (readings.length > 1) repeated++;
+    coded.push(study.factors.map((f, i) => toCoded(f, run.actual[i])));
+    y.push(mean);
+    blocks.push(plannedRunOf(study, run.plannedRun)?.block ?? 1);
+    const k = (seen.get(run.plannedRun) ?? 0) + 1;
+    seen.set(run.plannedRun, k);
+    labels.push(k === 1 ? String(run.plannedRun) : `${run.plannedRun}#${k}`);
+  }
+  const notes: string[] = [];
+  if (excluded > 0) notes.push(`${plural(excluded, 'excluded run', 'excluded runs')} skipped`);
+  if (missing > 0) notes.push(`${plural(missing, 'run', 'runs')} without a value for ${response.name} skipped`);
+  if (repeated > 0) {
+    notes.push(`${plural(repeated, 'run has', 'runs have')} several readings of ${response.name}: each run's mean is used, and repeat readings are not counted as replicates`);
+  }
+  const blocked = blocks.some((b) => b !== 1);
+  return {
+    factors: study.factors,
+    response: response.name,
+    ...(response.unit ? { unit: response.unit } : {}),
+    coded,
+    y,
+    blocks: blocked ? blocks : null,
+    labels,
+    notes,
+  };
+}

@@ -1,0 +1,135 @@
+/**
+ * Turns a table of runs into the data for one response: factor columns hold real settings
+ * (numbers) or level labels, coded with the given levels or, without them, with a numeric
+ * column's minimum and maximum as low and high and a categorical column's first label in file
+ * order as -1. Columns are matched by name with any unit in parentheses ignored; where an
+ * "<name> actual" column exists (a Trialbook export), the actual settings are used. Runs whose
+ * response cell is empty are skipped, and so are runs marked excluded; the notes say how many.
+ * Throws InputError naming row and column for a value that cannot be read.
+ */
+import { InputError } from '../../core/errors.ts';
+import { parseNumber, toCoded } from '../../core/factor/coding.ts';
+import { defineFactors, type FactorSpec } from '../../core/factor/factor.ts';
+import type { ResponseData } from '../../core/study/response-data.ts';
+import { bareColumnName, columnUnit, type Table } from './read-table.ts';
+
+export interface TableColumns {
+  /** Factor column names, in the order that gives their letters. */
+  readonly factors: readonly string[];
+  readonly response: string;
+  /** Per factor name: [low, high] as text (numbers or level labels). */
+  readonly levels?: Readonly<Record<string, readonly [string, string]>>;
+  /** Column holding the block of each run. */
+  readonly block?: string;
+}
+
+const EXCLUDED_WORDS = new Set(['yes', 'true', '1', 'y', 'x', 'excluded']);
+
+function findColumn(table: Table, name: string, what: string): number {
+  const key = bareColumnName(name);
+  const bare = table.header.map(bareColumnName);
+  const actual = bare.indexOf(`${key} actual`);
+  if (actual >= 0) return actual;
+  const exact = table.header.findIndex((h) => h.toLowerCase() === name.trim().toLowerCase());
+  if (exact >= 0) return exact;
+  const loose = bare.indexOf(key);
+  if (loose >= 0) return loose;
+  throw new InputError(`The ${what} column "${name}" is not in the file (columns: ${table.header.join(', ')})`);
+}
+
+export function tableResponseData(table: Table, cols: TableColumns): ResponseData {
+  if (cols.factors.length === 0) throw new InputError('Name at least one factor column');
+  const fIdx = cols.factors.map((f) => findColumn(table, f, 'factor'));
+  const yIdx = findColumn(table, cols.response, 'response');
+  const bIdx = cols.block ? findColumn(table, cols.block, 'block') : -1;
+  const exIdx = table.header.findIndex((h) => bareColumnName(h) === 'excluded');
+  const runIdx = table.header.findIndex((h) => bareColumnName(h) === 'run');
+  const notes: string[] = [];
+
+  // Rows used: a response value present and not excluded.
+  const used: number[] = [];
+  let excluded = 0;
+  let missing = 0;
+  table.rows.forEach((row, r) => {
+    if (exIdx >= 0 && EXCLUDED_WORDS.has(row[exIdx].trim().toLowerCase())) return void excluded++;
+    if (row[yIdx].trim() === '') return void missing++;
+    used.push(r);
+  });
+  if (excluded > 0) notes.push(`${excluded} excluded run${excluded > 1 ? 's' : ''} skipped`);
+  if (missing > 0) notes.push(`${missing} run${missing > 1 ? 's' : ''} without a value for ${cols.response} skipped`);
+
+  const specs: FactorSpec[] = cols.factors.map((_name, j) => {
+    const c = fIdx[j];
+    const header = table.header[c];
+    const factorName = cols.factors[j].trim();
+    const given = cols.levels?.[factorName] ?? Object.entries(cols.levels ?? {}).find(([k]) => k.toLowerCase() === factorName.toLowerCase())?.[1];
+    const cells = used.map((r) => table.rows[r][c].trim());
+    cells.forEach((v, i) => {
+      if (v === '') throw new InputError(`Row ${used[i] + 2}, column "${header}": ${factorName} has no setting`);
+    });
+    const numeric = cells.every((v) => Number.isFinite(parseNumber(v)));
+    const unit = columnUnit(header);
+    if (given) {
+      const [lo, hi] = given;
+      const nlo = parseNumber(lo);
+      const nhi = parseNumber(hi);
+      if (Number.isFinite(nlo) && Number.isFinite(nhi)) {
+        return { kind: 'numeric', name: factorName, low: nlo, high: nhi, ...(unit ? { unit } : {}) };
+      }
+      return { kind: 'categorical', name: factorName, levels: [lo, hi] };
+    }
+    if (numeric) {
+      const values = cells.map(parseNumber);
+      return { kind: 'numeric', name: factorName, low: Math.min(...values), high: Math.max(...values), ...(unit ? { unit } : {}) };
+    }
+    const labels: string[] = [];
+    for (const v of cells) if (!labels.some((l) => l.toLowerCase() === v.toLowerCase())) labels.push(v);
+    if (labels.length !== 2) {
+      throw new InputError(
+        `${factorName} needs numbers or exactly two level labels, got ${labels.length} label${labels.length === 1 ? '' : 's'} (${labels.slice(0, 5).join(', ')})`,
+      );
+    }
+    return { kind: 'categorical', name: factorName, levels: [labels[0], labels[1]] };
+  });
+  const factors = defineFactors(specs);
+
+  const coded: number[][] = [];
+  const y: number[] = [];
+  const blocks: number[] = [];
+  const labels: string[] = [];
+  const blockIds = new Map<string, number>();
+  for (const r of used) {
+    const row = table.rows[r];
+    coded.push(
+      factors.map((f, j) => {
+        const cell = row[fIdx[j]].trim();
+        try {
+          return toCoded(f, cell);
+        } catch (err) {
+          throw new InputError(`Row ${r + 2}, column "${table.header[fIdx[j]]}": ${(err as Error).message}`);
+        }
+      }),
+    );
+    const v = parseNumber(row[yIdx]);
+    if (!Number.isFinite(v)) throw new InputError(`Row ${r + 2}, column "${table.header[yIdx]}": ${cols.response} needs a number, got "${row[yIdx]}"`);
+    y.push(v);
+    if (bIdx >= 0) {
+      const b = row[bIdx].trim();
+      if (b === '') throw new InputError(`Row ${r + 2}, column "${table.header[bIdx]}": the block is empty`);
+      if (!blockIds.has(b)) blockIds.set(b, Number.isFinite(parseNumber(b)) ? parseNumber(b) : blockIds.size + 1);
+      blocks.push(blockIds.get(b)!);
+    }
+    labels.push(runIdx >= 0 && row[runIdx].trim() !== '' ? row[runIdx].trim() : String(r + 1));
+  }
+  const unit = columnUnit(table.header[yIdx]);
+  return {
+    factors,
+    response: cols.response,
+    ...(unit ? { unit } : {}),
+    coded,
+    y,
+    blocks: bIdx >= 0 ? blocks : null,
+    labels,
+    notes,
+  };
+}

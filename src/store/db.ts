@@ -1,0 +1,86 @@
+/**
+ * The device's database: its tables, and its schema versions oldest first. Each version after
+ * the first states its tables and, when data must change shape, an upgrade() that does it; a
+ * fixture database of every earlier version lives in test/fixtures/ and a test opens it with the
+ * current code and checks that nothing is lost. This is the only file that declares the schema.
+ *
+ * Tables (version 1):
+ *   studies    id -> StudyRecord (title, purpose, factors, responses, design with planned runs and seed)
+ *   revisions  id -> RunRevision: the append-only history of every logged run (indexed by run and study)
+ *   runs       id -> LoggedRun: the current state of each logged run, decided from its revisions
+ *   drafts     runId -> Draft: what was typed in a run's form and not yet saved
+ *   meta       key -> value: device id, last exports, the answer to the persistent-storage request
+ */
+import { Dexie, type DexieOptions, type Table, type Transaction } from 'dexie';
+import type { LoggedRun, RunRevision, StudyRecord } from '../core/study/study.ts';
+import type { RunForm } from '../core/study/run-form.ts';
+
+/** A run form's unsaved typing, kept on every change until the run is saved. */
+export interface Draft {
+  /** The logged run's id, fixed when the form opened. */
+  readonly runId: string;
+  readonly studyId: string;
+  readonly plannedRun: number;
+  /** The id the saved revision will take, fixed when the form opened, so a retry saves once. */
+  readonly revisionId: string;
+  /** The revisions current when the form opened (empty for a new run). */
+  readonly parents: readonly string[];
+  /** The fields as typed. */
+  readonly form: RunForm;
+  /** Wall-clock time of the last change, ISO 8601 (shown only). */
+  readonly updatedAt: string;
+}
+
+export interface MetaRow {
+  readonly key: string;
+  readonly value: unknown;
+}
+
+export interface SchemaVersion {
+  readonly version: number;
+  readonly stores: Record<string, string | null>;
+  /** Data changes for this version, run inside the upgrade transaction. */
+  readonly upgrade?: (tx: Transaction) => Promise<void> | void;
+}
+
+/** Every schema version, oldest first. */
+export const SCHEMA: readonly SchemaVersion[] = [
+  {
+    version: 1,
+    stores: {
+      studies: 'id',
+      revisions: 'id, runId, studyId',
+      runs: 'id, studyId',
+      drafts: 'runId, studyId',
+      meta: 'key',
+    },
+  },
+];
+
+/** The schema version this code opens. */
+export const SCHEMA_VERSION = SCHEMA[SCHEMA.length - 1].version;
+
+/** The database's name in the browser. */
+export const DB_NAME = 'trialbook';
+
+/** Declares all schema versions on a Dexie instance (the harness adds test versions after them). */
+export function declareSchema(db: Dexie): void {
+  for (const v of SCHEMA) {
+    const version = db.version(v.version).stores(v.stores);
+    if (v.upgrade) version.upgrade(v.upgrade);
+  }
+}
+
+export class TrialbookDB extends Dexie {
+  declare studies: Table<StudyRecord, string>;
+  declare revisions: Table<RunRevision, string>;
+  declare runs: Table<LoggedRun, string>;
+  declare drafts: Table<Draft, string>;
+  declare meta: Table<MetaRow, string>;
+
+  /** Opens with strict durability: a write is reported done only once it is on disk. */
+  constructor(name: string = DB_NAME, options: DexieOptions = {}, declare: (db: Dexie) => void = declareSchema) {
+    super(name, { ...options, chromeTransactionDurability: 'strict', autoOpen: false });
+    declare(this);
+  }
+}

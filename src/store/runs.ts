@@ -1,0 +1,188 @@
+/**
+ * Logged runs and their history. A run's record id and the id of the revision its form will
+ * save are fixed when the form opens, so a double tap or a retry saves once. Every change (an
+ * edit, an exclusion, a restore) appends a revision; nothing is overwritten. A save that finds
+ * the run changed since its form opened (another tab, another window) still keeps both
+ * revisions and says so. Each write is one transaction across all the tables it touches, and
+ * resolves only once the transaction is on disk.
+ */
+import { InputError } from '../core/errors.ts';
+import { blankForm, formFromValues, type RunForm } from '../core/study/run-form.ts';
+import {
+  checkRunValues,
+  compareRevisions,
+  currentRun,
+  plannedRunOf,
+  type LoggedRun,
+  type RunRevision,
+  type RunValues,
+  type StudyRecord,
+} from '../core/study/study.ts';
+import { guarded } from './errors.ts';
+import { newId } from './ids.ts';
+import { askPersistenceOnce } from './status.ts';
+import type { Store } from './store.ts';
+
+/** What a run's form works on: fixed ids, the revisions it starts from, and what to show. */
+export interface RunFormState {
+  readonly study: StudyRecord;
+  readonly runId: string;
+  readonly plannedRun: number;
+  readonly revisionId: string;
+  readonly parents: readonly string[];
+  readonly form: RunForm;
+  /** The current saved state, or null for a new run. */
+  readonly current: LoggedRun | null;
+  /** True when the form comes back from a draft (typing not yet saved). */
+  readonly fromDraft: boolean;
+}
+
+export interface SaveInput {
+  readonly runId: string;
+  readonly revisionId: string;
+  readonly studyId: string;
+  readonly plannedRun: number;
+  /** The revisions current when the form opened (empty for a new run). */
+  readonly parents: readonly string[];
+  readonly values: RunValues;
+}
+
+export interface SaveResult {
+  readonly run: LoggedRun;
+  readonly revision: RunRevision;
+  /** True when this revision was already saved (a second tap or a retry): nothing new was written. */
+  readonly duplicate: boolean;
+  /** When the run changed after the form opened: the revision that was current at saving, kept
+   * in the history beside this one. Null otherwise. */
+  readonly changedSince: string | null;
+}
+
+async function studyIn(store: Store, studyId: string): Promise<StudyRecord> {
+  const study = await store.db.studies.get(studyId);
+  if (!study) throw new InputError(`There is no study with id "${studyId}" on this device`);
+  return study;
+}
+
+/** Opens the form of a new logged run of a planned run (or its draft, when one is waiting). */
+export async function openNewRun(store: Store, studyId: string, plannedRun: number): Promise<RunFormState> {
+  const study = await guarded(() => studyIn(store, studyId));
+  if (!plannedRunOf(study, plannedRun)) throw new InputError(`Run ${plannedRun} is not in the plan of "${study.title}"`);
+  return { study, runId: newId(), plannedRun, revisionId: newId(), parents: [], form: blankForm(study, plannedRun), current: null, fromDraft: false };
+}
+
+/** Opens the form of a logged run (a new or saved one) from its draft when there is one, else from its current state. */
+export async function openRun(store: Store, runId: string): Promise<RunFormState> {
+  return guarded(() =>
+    store.db.transaction('r', [store.db.runs, store.db.drafts, store.db.studies], async () => {
+      const [current, draft] = await Promise.all([store.db.runs.get(runId), store.db.drafts.get(runId)]);
+      const studyId = draft?.studyId ?? current?.studyId;
+      if (!studyId) throw new InputError(`There is no logged run with id "${runId}" on this device`);
+      const study = await studyIn(store, studyId);
+      if (draft) {
+        return { study, runId, plannedRun: draft.plannedRun, revisionId: draft.revisionId, parents: draft.parents, form: draft.form, current: current ?? null, fromDraft: true };
+      }
+      const run = current!;
+      return { study, runId, plannedRun: run.plannedRun, revisionId: newId(), parents: run.heads, form: formFromValues(run), current: run, fromDraft: false };
+    }),
+  );
+}
+
+const sameSet = (a: readonly string[], b: readonly string[]) => a.length === b.length && a.every((x) => b.includes(x));
+
+/** Appends a revision inside the caller's transaction; returns what saveRun returns. */
+async function appendRevision(store: Store, input: SaveInput, restoredFrom: string | null): Promise<SaveResult> {
+  const { db } = store;
+  const existing = await db.revisions.get(input.revisionId);
+  if (existing) {
+    if (existing.runId !== input.runId) throw new InputError(`Revision id ${input.revisionId} is already used by another run`);
+    const run = await db.runs.get(input.runId);
+    return { run: run!, revision: existing, duplicate: true, changedSince: null };
+  }
+  const study = await studyIn(store, input.studyId);
+  if (!plannedRunOf(study, input.plannedRun)) throw new InputError(`Run ${input.plannedRun} is not in the plan of "${study.title}"`);
+  const values = checkRunValues(study, input.values);
+  const history = await db.revisions.where('runId').equals(input.runId).toArray();
+  if (history.length > 0 && (history[0].studyId !== input.studyId || history[0].plannedRun !== input.plannedRun)) {
+    throw new InputError(`Logged run ${input.runId} belongs to run ${history[0].plannedRun}; it cannot be saved as run ${input.plannedRun}`);
+  }
+  const ids = new Set(history.map((r) => r.id));
+  const unknown = input.parents.find((p) => !ids.has(p));
+  if (unknown) throw new InputError(`The form started from revision ${unknown}, which this run does not have`);
+  const before = history.length > 0 ? currentRun(history) : null;
+  const changedSince = before && !sameSet(before.heads, input.parents) ? before.revisionId : null;
+  const rev = history.reduce((m, r) => Math.max(m, r.rev), 0) + 1;
+  const revision: RunRevision = {
+    id: input.revisionId,
+    runId: input.runId,
+    studyId: input.studyId,
+    plannedRun: input.plannedRun,
+    rev,
+    device: store.device,
+    parents: [...input.parents],
+    restoredFrom,
+    savedAt: store.now().toISOString(),
+    ...values,
+  };
+  const run = currentRun([...history, revision]);
+  await db.revisions.add(revision);
+  await db.runs.put(run);
+  await db.drafts.delete(input.runId);
+  return { run, revision, duplicate: false, changedSince };
+}
+
+async function writeRevision(store: Store, input: SaveInput, restoredFrom: string | null = null): Promise<SaveResult> {
+  const { db } = store;
+  const result = await guarded(() =>
+    db.transaction('rw', [db.studies, db.revisions, db.runs, db.drafts], () => appendRevision(store, input, restoredFrom)),
+  );
+  if (!result.duplicate) void askPersistenceOnce(store);
+  return result;
+}
+
+/** Saves a run's values as a new revision (and drops its draft); resolves once on disk. */
+export async function saveRun(store: Store, input: SaveInput): Promise<SaveResult> {
+  return writeRevision(store, input);
+}
+
+/** The current state of one logged run; throws when there is none. */
+export async function getRun(store: Store, runId: string): Promise<LoggedRun> {
+  const run = await guarded(() => store.db.runs.get(runId));
+  if (!run) throw new InputError(`There is no logged run with id "${runId}" on this device`);
+  return run;
+}
+
+/** The current state of every logged run of a study, by planned run. */
+export async function listRuns(store: Store, studyId: string): Promise<LoggedRun[]> {
+  const runs = await guarded(() => store.db.runs.where('studyId').equals(studyId).toArray());
+  return runs.sort((a, b) => a.plannedRun - b.plannedRun || (a.id < b.id ? -1 : 1));
+}
+
+/** Every revision of a logged run, oldest first (the last one is current). */
+export async function runHistory(store: Store, runId: string): Promise<RunRevision[]> {
+  const revs = await guarded(() => store.db.revisions.where('runId').equals(runId).toArray());
+  return revs.sort(compareRevisions);
+}
+
+async function changeCurrent(store: Store, runId: string, change: (run: LoggedRun) => RunValues, revisionId: string, restoredFrom: string | null = null): Promise<SaveResult> {
+  const run = await getRun(store, runId);
+  return writeRevision(store, { runId, revisionId, studyId: run.studyId, plannedRun: run.plannedRun, parents: run.heads, values: change(run) }, restoredFrom);
+}
+
+/** Excludes a run from the analysis, with a reason, as a new revision. */
+export async function excludeRun(store: Store, runId: string, reason: string, revisionId: string = newId()): Promise<SaveResult> {
+  if (reason.trim() === '') throw new InputError('Excluding a run needs a reason, got none');
+  return changeCurrent(store, runId, (r) => ({ ...r, excluded: true, reason }), revisionId);
+}
+
+/** Takes an excluded run back into the analysis, as a new revision. */
+export async function readmitRun(store: Store, runId: string, revisionId: string = newId()): Promise<SaveResult> {
+  return changeCurrent(store, runId, (r) => ({ ...r, excluded: false, reason: '' }), revisionId);
+}
+
+/** Brings back the values of an earlier revision as a new revision (the history keeps all). */
+export async function restoreRevision(store: Store, runId: string, fromRevisionId: string, revisionId: string = newId()): Promise<SaveResult> {
+  const old = await guarded(() => store.db.revisions.get(fromRevisionId));
+  if (!old || old.runId !== runId) throw new InputError(`Run ${runId} has no revision ${fromRevisionId}`);
+  const { actual, readings, loggedAt, operator, notes, excluded, reason } = old;
+  return changeCurrent(store, runId, () => ({ actual, readings, loggedAt, operator, notes, excluded, reason }), revisionId, fromRevisionId);
+}

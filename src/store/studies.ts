@@ -1,0 +1,38 @@
+/**
+ * Studies: made once with their plan, then read. A study's plan never changes after it is made
+ * (what was planned is the record against which the runs are read).
+ */
+import { InputError } from '../core/errors.ts';
+import type { StudyPlan, StudyRecord } from '../core/study/study.ts';
+import { checkStudy } from '../io/backup/validate.ts';
+import { guarded } from './errors.ts';
+import { newId } from './ids.ts';
+import type { Store } from './store.ts';
+
+/** Checks a plan as the backup reader would and gives it an id, this device and the time. */
+export function newStudyRecord(store: Store, plan: StudyPlan): StudyRecord {
+  const { factors: _inDesign, ...design } = plan.design as StudyPlan['design'] & { factors?: unknown };
+  const draft = { ...plan, design, id: newId(), device: store.device, createdAt: store.now().toISOString() };
+  // The same checks as an import, so that every stored study can be exported and read back.
+  return checkStudy(JSON.parse(JSON.stringify(draft)), 'study');
+}
+
+/** Makes a study from its plan and saves it; resolves once it is on disk. */
+export async function createStudy(store: Store, plan: StudyPlan): Promise<StudyRecord> {
+  const record = newStudyRecord(store, plan);
+  await guarded(() => store.db.transaction('rw', store.db.studies, () => store.db.studies.add(record)));
+  return record;
+}
+
+/** All studies, newest first. */
+export async function listStudies(store: Store): Promise<StudyRecord[]> {
+  const all = await guarded(() => store.db.studies.toArray());
+  return all.sort((a, b) => (a.createdAt < b.createdAt ? 1 : a.createdAt > b.createdAt ? -1 : a.id < b.id ? -1 : 1));
+}
+
+/** One study by id; throws InputError when there is none. */
+export async function getStudy(store: Store, studyId: string): Promise<StudyRecord> {
+  const s = await guarded(() => store.db.studies.get(studyId));
+  if (!s) throw new InputError(`There is no study with id "${studyId}" on this device`);
+  return s;
+}
