@@ -8,6 +8,11 @@ import type { Command } from './command.ts';
 
 const commands: Record<string, () => Promise<Command>> = {
   analyze: async () => (await import('./commands/analyze.ts')).analyze,
+  design: async () => (await import('./commands/design.ts')).design,
+  predict: async () => (await import('./commands/predict.ts')).predict,
+  solve: async () => (await import('./commands/solve.ts')).solve,
+  path: async () => (await import('./commands/path.ts')).path,
+  csv: async () => (await import('./commands/csv.ts')).csv,
 };
 
 function usage(): string {

@@ -26,7 +26,8 @@ export class StorageError extends Error {
   readonly offerExport: boolean;
   constructor(
     readonly problem: StorageProblem,
-    readonly cause?: unknown,
+    /** The browser's or Dexie's error, for reports. */
+    readonly underlying?: unknown,
   ) {
     super(MESSAGES[problem]);
     this.name = 'StorageError';

@@ -142,15 +142,17 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     return { coef, se, t, p: tTwoSidedP(t, dfRes), ci: [coef - tq * se, coef + tq * se] };
   };
 
+  // Names and letters of every column, computed once.
+  const labels = fit.columns.map((c) => columnLabel(c, data));
+
   // Which estimable column carries which inseparable terms.
   const carried = new Map<number, { letters: string; weight: number }[]>();
   const aliased: AliasedTerm[] = [];
   for (const a of fit.aliased) {
-    const c = fit.columns[a.column];
-    const label = columnLabel(c, data);
+    const label = labels[a.column];
     aliased.push({
       ...label,
-      combination: a.combination.map((w) => ({ ...columnLabel(fit.columns[w.column], data), weight: w.weight })),
+      combination: a.combination.map((w) => ({ ...labels[w.column], weight: w.weight })),
     });
     for (const w of a.combination) {
       const list = carried.get(w.column) ?? [];
@@ -170,7 +172,7 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
       blockSum += fit.coef[j];
     }
     if (c.kind !== 'term') continue;
-    const label = columnLabel(c, data);
+    const label = labels[fit.kept[j]];
     const extra = carried.get(fit.kept[j]);
     const est = estimate(j);
     termEstimates.push({
@@ -211,7 +213,7 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     } else if (c.kind === 'term') {
       ssModel += fit.seqSS[j];
       dfModel++;
-      const name = columnLabel(c, data).name;
+      const name = labels[fit.kept[j]].name;
       termRowsSeq.push(fRow(name, 1, fit.seqSS[j]));
       termRowsAdj.push(fRow(name, 1, (fit.coef[j] * fit.coef[j]) / fit.covUnscaled[j * m + j]));
     }
@@ -264,15 +266,16 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
   let lenthOut: Analysis['lenth'] = null;
   const factorialRows: number[] = [];
   kinds.forEach((kd, i) => kd === 'factorial' && factorialRows.push(i));
-  const distinct = new Set(factorialRows.map((i) => (blocks ? `${blocks[i]}|` : '') + coded[i].join(','))).size;
-  const distinctPoints = new Set(factorialRows.map((i) => coded[i].join(','))).size;
+  // Unreplicated: no two factorial runs share their settings (blocks aside).
+  const unblockedGroups = blocks ? pureError(coded, y, null).groupOf : pe.groupOf;
+  const distinctPoints = new Set(factorialRows.map((i) => unblockedGroups[i])).size;
   let effectsForChart: { name: string; letters: string; effect: number }[] = termEstimates.map((t) => ({
     name: t.name,
     letters: t.estimates ?? t.letters,
     effect: t.effect,
   }));
   let lenthResult: ReturnType<typeof lenth> | null = null;
-  if (factorialRows.length >= 2 && distinct === factorialRows.length && distinctPoints === factorialRows.length) {
+  if (factorialRows.length >= 2 && distinctPoints === factorialRows.length) {
     const sat = saturatedEffects(
       k,
       factorialRows.map((i) => coded[i]),

@@ -15,7 +15,11 @@ import type { AliasedColumn, LinearFit } from './linear-fit.ts';
 /** Weights below this are rounding noise in an alias combination (common practice). */
 const ALIAS_WEIGHT_TOLERANCE = 1e-8;
 
-export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<number>): LinearFit {
+/**
+ * With `lean`, only the coefficients, sums of squares, residuals and aliases are computed
+ * (leverage and (X'X)^-1 are left empty): what the saturated fit for Lenth's method needs.
+ */
+export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<number>, lean = false): LinearFit {
   const n = y.length;
   const p = columns.length;
   const f = householderQr(x, n, p, RANK_TOLERANCE);
@@ -36,13 +40,13 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
   const residuals = z;
   const fitted = new Float64Array(n);
   for (let i = 0; i < n; i++) fitted[i] = y[i] - residuals[i];
-  const rinv = invertUpper(f.r, m);
-  const covUnscaled = crossInverse(rinv, m);
+  const rinv = lean ? new Float64Array(0) : invertUpper(f.r, m);
+  const covUnscaled = lean ? new Float64Array(0) : crossInverse(rinv, m);
 
   // Leverage h_i = || R^-T x_i ||^2 over the kept columns (Seber and Lee section 10.2).
   const leverage = new Float64Array(n);
   const w = new Float64Array(m);
-  for (let i = 0; i < n; i++) {
+  for (let i = 0; i < n && !lean; i++) {
     for (let a = 0; a < m; a++) {
       // w = R^-T x_i: w_a = sum_{k<=a} Rinv[k,a] x_i[kept k]
       let s = 0;
@@ -64,7 +68,7 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
   }
 
   // Orthogonal when R is diagonal up to rounding: |R_ij| small beside the column norms.
-  let orthogonal = true;
+  let orthogonal = !lean;
   for (let j = 0; j < m && orthogonal; j++) {
     for (let i = 0; i < j; i++) {
       if (Math.abs(f.r[j * m + i]) > 1e-9 * Math.sqrt(Math.abs(f.r[i * m + i] * f.r[j * m + j]))) {

@@ -5,7 +5,8 @@
  * 10.7 (testing for lack of fit); Draper and Smith, Applied Regression Analysis, 3rd ed., ch. 2.1.
  * Settings count as the same when they agree within SETTING_TOLERANCE in coded units: the fit
  * uses the actual settings, so only runs the fit cannot tell apart form a group.
- * Cost O(n k).
+ * Groups are found by sorting the runs on their settings, so no text keys are built.
+ * Cost O(n log n k).
  */
 import { SETTING_TOLERANCE } from '../tolerance.ts';
 
@@ -14,27 +15,46 @@ export interface PureError {
   readonly df: number;
   /** Number of groups of repeated settings that have two or more runs. */
   readonly groups: number;
+  /** Group number of each run (runs with the same settings and block share one). */
+  readonly groupOf: Int32Array;
 }
 
 export function pureError(coded: readonly (readonly number[])[], y: ArrayLike<number>, blocks: readonly number[] | null | undefined): PureError {
-  const groups = new Map<string, number[]>();
-  for (let i = 0; i < coded.length; i++) {
-    const key = (blocks ? `${blocks[i]}|` : '') + coded[i].map((v) => Math.round(v / SETTING_TOLERANCE)).join(',');
-    const g = groups.get(key);
-    if (g) g.push(i);
-    else groups.set(key, [i]);
-  }
+  const n = coded.length;
+  const k = n > 0 ? coded[0].length : 0;
+  const tol = SETTING_TOLERANCE; // a local: module bindings are getters under some loaders
+  const compare = (a: number, b: number): number => {
+    if (blocks && blocks[a] !== blocks[b]) return blocks[a] - blocks[b];
+    const ra = coded[a];
+    const rb = coded[b];
+    for (let f = 0; f < k; f++) {
+      const d = ra[f] - rb[f];
+      if (d > tol || d < -tol) return d;
+    }
+    return 0;
+  };
+  const order = Array.from({ length: n }, (_, i) => i).sort(compare);
+  const groupOf = new Int32Array(n);
   let ss = 0;
   let df = 0;
   let repeated = 0;
-  for (const g of groups.values()) {
-    if (g.length < 2) continue;
-    repeated++;
+  let g = 0;
+  for (let start = 0; start < n; ) {
+    let end = start + 1;
+    while (end < n && compare(order[start], order[end]) === 0) end++;
     let mean = 0;
-    for (const i of g) mean += y[i];
-    mean /= g.length;
-    for (const i of g) ss += (y[i] - mean) ** 2;
-    df += g.length - 1;
+    for (let i = start; i < end; i++) {
+      mean += y[order[i]];
+      groupOf[order[i]] = g;
+    }
+    mean /= end - start;
+    if (end - start > 1) {
+      repeated++;
+      df += end - start - 1;
+      for (let i = start; i < end; i++) ss += (y[order[i]] - mean) ** 2;
+    }
+    g++;
+    start = end;
   }
-  return { ss, df, groups: repeated };
+  return { ss, df, groups: repeated, groupOf };
 }

@@ -6,7 +6,7 @@
  * factorial runs alone, adding terms order by order until the runs are used up.
  * Cost O(n r T) for n factorial runs, rank r and T terms tried.
  */
-import { termOrder, type Term } from '../model/term.ts';
+import { compareTerms, termOrder, type Term } from '../model/term.ts';
 import { blockLevels, modelColumns, modelMatrix } from './columns.ts';
 import { fitQr } from './fit-qr.ts';
 
@@ -25,12 +25,20 @@ export function saturatedEffects(
 ): SaturatedEffect[] {
   const levels = blockLevels(blocks);
   const target = coded.length; // the most columns the runs can separate
-  let terms: Term[] = [];
+  // Start from the lowest order whose terms could use up the runs; go higher only if aliases leave runs over.
+  let order = 1;
+  let count = k;
+  while (order < k && count + levels.length < target) {
+    order++;
+    count += binomial(k, order);
+  }
   let fit = null as ReturnType<typeof fitQr> | null;
-  for (let order = 1; order <= k; order++) {
-    for (let t = 1; t < 1 << k; t++) if (termOrder(t) === order) terms.push(t);
+  for (; order <= k; order++) {
+    const terms: Term[] = [];
+    for (let t = 1; t < 1 << k; t++) if (termOrder(t) <= order) terms.push(t);
+    terms.sort(compareTerms);
     const cols = modelColumns(levels, terms);
-    fit = fitQr(cols, modelMatrix(cols, coded, blocks), y);
+    fit = fitQr(cols, modelMatrix(cols, coded, blocks), y, true);
     if (fit.kept.length >= target) break;
   }
   if (!fit) return [];
@@ -49,4 +57,10 @@ export function saturatedEffects(
     out.push({ term: c.term, effect: 2 * fit.coef[j], aliases: byColumn.get(fit.kept[j]) ?? [] });
   }
   return out;
+}
+
+function binomial(n: number, r: number): number {
+  let c = 1;
+  for (let i = 1; i <= r; i++) c = (c * (n - r + i)) / i;
+  return Math.round(c);
 }

@@ -14,7 +14,7 @@
 import { InputError } from '../errors.ts';
 import type { Design } from '../design/design.ts';
 import type { Factor } from '../factor/factor.ts';
-import { toReal } from '../factor/coding.ts';
+import { plannedSetting } from '../design/planned-settings.ts';
 import type { Response } from './response.ts';
 
 /** A design as a study stores it: the factors live beside it, once. */
@@ -140,7 +140,7 @@ export function plannedRunOf(study: StudyPlan, plannedRun: number) {
  * fields as text. Returns the values with categorical labels spelled as declared and text
  * trimmed; throws InputError naming the field otherwise.
  */
-export function checkRunValues(study: StudyPlan, v: RunValues): RunValues {
+export function checkRunValues(study: Pick<StudyPlan, 'factors' | 'responses'>, v: RunValues): RunValues {
   const { factors, responses } = study;
   if (!Array.isArray(v.actual) || v.actual.length !== factors.length) {
     throw new InputError(`Actual settings: needs one per factor (${factors.length}), got ${Array.isArray(v.actual) ? v.actual.length : typeof v.actual}`);
@@ -184,7 +184,7 @@ export function checkRunValues(study: StudyPlan, v: RunValues): RunValues {
 export function plannedSettings(study: StudyPlan, plannedRun: number): Setting[] {
   const run = plannedRunOf(study, plannedRun);
   if (!run) throw new InputError(`Run ${plannedRun} is not in the plan of "${study.title}" (it has runs 1 to ${study.design.runs.length})`);
-  return study.factors.map((f, i) => toReal(f, run.coded[i]));
+  return study.factors.map((f, i) => plannedSetting(f, run.coded[i]));
 }
 
 /** Short description of a value for messages: numbers and text as they are, others by type. */

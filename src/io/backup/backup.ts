@@ -1,7 +1,7 @@
 /**
  * The Trialbook backup file: one JSON document holding one study or all of them, with every
  * revision of every logged run (the whole history). Its shape is written down in
- * trialbook-backup.schema.json beside this file and in docs/backup-format.md.
+ * trialbook-backup.schema.json and backup-format.md beside this file.
  *
  *   { "format": "trialbook-backup", "formatVersion": 1,
  *     "app": { "name": "Trialbook", "version": "0.1.0" },
@@ -19,6 +19,7 @@ import type { RunRevision, StudyRecord } from '../../core/study/study.ts';
 import { defaultDigest, portableDigest, sha256, toHex, utf8Encode, type Digest } from '../sha256.ts';
 import { APP_NAME, APP_VERSION } from '../app-version.ts';
 import { canonicalJson } from './canonical.ts';
+import { jsonErrorOffset } from './json-error.ts';
 import { checkHistories, checkRevision, checkStudy, checkUniqueIds, id, int, list, obj, only, text, time } from './validate.ts';
 
 export const BACKUP_FORMAT = 'trialbook-backup';
@@ -116,15 +117,14 @@ export function parseJsonText(textIn: string, what = 'The file'): unknown {
   if (body.trim() === '') throw new InputError(`${what} is empty; a Trialbook backup is a JSON document`);
   try {
     return JSON.parse(body);
-  } catch (err) {
-    const msg = err instanceof Error ? err.message : String(err);
-    const m = /position (\d+)/.exec(msg);
-    if (m) {
-      const { line, column } = lineColumn(body, Number(m[1]));
-      throw new InputError(`${what} is not valid JSON at line ${line}, column ${column} (${msg.replace(/\s*in JSON at position.*$/s, '')})`);
+  } catch {
+    const at = jsonErrorOffset(body);
+    const { line, column } = lineColumn(body, at < 0 ? body.length : at);
+    if (at >= body.length || at < 0) {
+      throw new InputError(`${what} is not valid JSON: it ends early at line ${line}, column ${column}; it may have been cut short`);
     }
-    const { line, column } = lineColumn(body, body.length);
-    throw new InputError(`${what} is not valid JSON: it ends early at line ${line}, column ${column}; it may have been cut short`);
+    const near = JSON.stringify(body.slice(at, at + 12));
+    throw new InputError(`${what} is not valid JSON at line ${line}, column ${column} (near ${near})`);
   }
 }
 

@@ -101,13 +101,14 @@ describe('analyze: random non-orthogonal runs against ml-regression-multivariate
         const n = (1 << k) + extra;
         return fc.record({
           k: fc.constant(k),
-          coded: fc.array(fc.array(fc.double({ min: -1.2, max: 1.2, noNaN: true }), { minLength: k, maxLength: k }), { minLength: n, maxLength: n }),
-          y: fc.array(fc.double({ min: -50, max: 50, noNaN: true }), { minLength: n, maxLength: n }),
+          coded: fc.array(fc.array(fc.integer({ min: -120, max: 120 }).map((v) => v / 100), { minLength: k, maxLength: k }), { minLength: n, maxLength: n }),
+          y: fc.array(fc.integer({ min: -5000, max: 5000 }).map((v) => v / 100), { minLength: n, maxLength: n }),
         });
       });
     fc.assert(
       fc.property(unbalanced, ({ k, coded, y }) => {
         const terms = termsUpToOrder(k, 2);
+        fc.pre(new Set(y).size > 1 && Array.from({ length: k }, (_, f) => new Set(coded.map((r) => r[f])).size > 1).every(Boolean));
         const a = analyze(data(k, coded, y), { terms });
         fc.pre(a.aliased.length === 0 && a.df.residual > 0);
         const x = coded.map((row) => terms.map((t) => termValue(t, row)));

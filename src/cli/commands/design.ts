@@ -1,0 +1,251 @@
+/**
+ * `design`: plans a two-level experiment and prints it as text (default), JSON (--json) or the
+ * CSV run sheet (--csv).
+ */
+import { defaultAliasOrder } from '../../core/design/alias-structure.ts';
+import { buildDesign, type DesignSpec } from '../../core/design/build-design.ts';
+import type { Design } from '../../core/design/design.ts';
+import { romanResolution } from '../../core/design/defining-relation.ts';
+import { plannedSetting } from '../../core/design/planned-settings.ts';
+import { InputError } from '../../core/errors.ts';
+import { parseNumber } from '../../core/factor/coding.ts';
+import type { FactorSpec } from '../../core/factor/factor.ts';
+import { plannedColumn, runSheetCsv } from '../../io/csv/run-sheet.ts';
+import { parseCommandArgs } from '../args.ts';
+import type { Command } from '../command.ts';
+
+const USAGE = `Usage: npm run --silent cli -- design --factor SPEC [--factor SPEC ...] [options]
+
+Plans a two-level factorial experiment: a full factorial, or a fraction from the built-in
+minimum aberration catalogue or from your generators; with center runs, replicates, blocks,
+a foldover, and a randomised run order.
+
+Factors (in the order given; they get the letters A, B, C, ... skipping I):
+  --factor "Temperature (degC)=160:200"   numeric: both levels are numbers; unit optional
+  --factor "Speed (rpm)=100:1000:log"     numeric, coded on a log scale
+  --factor "Powder=matte:gloss"           categorical: two named levels, the first coded -1
+
+Design:
+  --fraction 1/2 | 1/4 | ...              minimum aberration fraction from the catalogue (8 to 128 runs)
+  --generators "E=ABCD,F=-ABC"            your generators (letters, or names joined by ':')
+  --center-runs N                         center runs per replicate (numeric factors at mid-range)
+  --replicates N                          replicates of the whole design
+  --blocks 2|4|8                          blocks per replicate
+  --block-words "ABCD[,...]"              words confounded with blocks (default: standard table or search)
+  --foldover                              add the mirror image (every sign switched)
+  --foldover FACTOR                       add the fraction with one factor's signs switched
+
+Run order:
+  --seed N                                seed of the randomised order (drawn and shown when absent)
+  --standard-order                        keep standard (Yates) order instead of randomising
+  --sort-by FACTOR                        keep a hard-to-change factor sorted within blocks (repeatable)
+
+Output:
+  --json                                  the plan as JSON
+  --csv                                   the run sheet as CSV (planned settings in real units)`;
+
+const OPTIONS = {
+  factor: { type: 'string', multiple: true },
+  fraction: { type: 'string' },
+  generators: { type: 'string' },
+  'center-runs': { type: 'string' },
+  replicates: { type: 'string' },
+  blocks: { type: 'string' },
+  'block-words': { type: 'string' },
+  foldover: { type: 'string' },
+  'standard-order': { type: 'boolean' },
+  seed: { type: 'string' },
+  'sort-by': { type: 'string', multiple: true },
+  json: { type: 'boolean' },
+  csv: { type: 'boolean' },
+} as const;
+
+/** Marks a bare --foldover (no factor after it) as the full mirror image. */
+const FOLD_ALL = '\u0000all';
+
+function wholeNumber(text: string | undefined, option: string): number | undefined {
+  if (text === undefined) return undefined;
+  if (!/^\s*\d+\s*$/.test(text)) throw new InputError(`--${option} needs a whole number, got "${text}"`);
+  return Number(text);
+}
+
+/**
+ * Reads one --factor: NAME [(UNIT)] = LOW : HIGH [: log]. Both levels numbers -> numeric,
+ * otherwise categorical with two named levels.
+ * Example: parseFactorOption('Temperature (degC)=160:200') -> numeric, unit degC.
+ */
+export function parseFactorOption(text: string): FactorSpec {
+  const eq = text.indexOf('=');
+  if (eq <= 0) throw new InputError(`--factor "${text}": expected NAME=LOW:HIGH, such as "Temperature (degC)=160:200" or "Powder=matte:gloss"`);
+  let name = text.slice(0, eq).trim();
+  let unit: string | undefined;
+  const m = /^(.*?)\s*\(([^()]*)\)$/.exec(name);
+  if (m) {
+    name = m[1].trim();
+    unit = m[2].trim() || undefined;
+  }
+  if (name === '') throw new InputError(`--factor "${text}": the factor needs a name before "="`);
+  const parts = text.slice(eq + 1).split(':').map((p) => p.trim());
+  let log = false;
+  if (parts.length === 3 && parts[2].toLowerCase() === 'log') {
+    log = true;
+    parts.pop();
+  }
+  if (parts.length !== 2) {
+    throw new InputError(`--factor "${text}": expected two levels separated by ":", such as 160:200 or matte:gloss, got ${parts.length} part${parts.length === 1 ? '' : 's'}`);
+  }
+  const [lo, hi] = parts.map(parseNumber);
+  if (Number.isFinite(lo) && Number.isFinite(hi)) {
+    return { kind: 'numeric', name, low: lo, high: hi, ...(unit ? { unit } : {}), ...(log ? { scale: 'log' as const } : {}) };
+  }
+  if (log) throw new InputError(`--factor "${text}": a log scale needs numeric levels, got "${parts[0]}" and "${parts[1]}"`);
+  if (unit) throw new InputError(`--factor "${text}": a unit needs numeric levels; "${parts[0]}" and "${parts[1]}" are names`);
+  return { kind: 'categorical', name, levels: [parts[0], parts[1]] };
+}
+
+function splitList(text: string | undefined): string[] | undefined {
+  if (text === undefined) return undefined;
+  return text.split(',').map((s) => s.trim()).filter((s) => s !== '');
+}
+
+/** Reads the command line into a design spec and output format. */
+export function parseDesignArgs(argv: string[]): { spec: DesignSpec; format: 'text' | 'json' | 'csv' } {
+  const args = argv.map((a, i) => (a === '--foldover' && (i + 1 >= argv.length || argv[i + 1].startsWith('--')) ? `--foldover=${FOLD_ALL}` : a));
+  const { values, positionals } = parseCommandArgs(args, OPTIONS);
+  if (positionals.length > 0) throw new InputError(`design takes options only, got "${positionals.join(' ')}"`);
+  if (!values.factor || values.factor.length === 0) throw new InputError('design needs at least two --factor options, such as --factor "Temperature (degC)=160:200"; got none');
+  if (values.json && values.csv) throw new InputError('Choose one output: --json or --csv, not both');
+  if (values['block-words'] !== undefined && values.blocks === undefined) {
+    throw new InputError('--block-words needs --blocks (2, 4 or 8) to say how many blocks');
+  }
+  if (values['standard-order'] && values.seed !== undefined) {
+    throw new InputError(`--seed ${values.seed} only applies to a randomised order; drop --seed or --standard-order`);
+  }
+  const fold = values.foldover === undefined ? undefined : values.foldover === FOLD_ALL ? 'all' : values.foldover.trim();
+  if (fold === '') throw new InputError('--foldover takes a factor name or letter, or nothing for the mirror image');
+  const seed = values.seed === undefined ? undefined : wholeNumber(values.seed, 'seed');
+  const spec: DesignSpec = {
+    factors: values.factor.map(parseFactorOption),
+    ...(values.fraction !== undefined ? { fraction: values.fraction } : {}),
+    ...(values.generators !== undefined ? { generators: splitList(values.generators) } : {}),
+    ...(values['center-runs'] !== undefined ? { centerRuns: wholeNumber(values['center-runs'], 'center-runs') } : {}),
+    ...(values.replicates !== undefined ? { replicates: wholeNumber(values.replicates, 'replicates') } : {}),
+    ...(values.blocks !== undefined ? { blocks: wholeNumber(values.blocks, 'blocks') } : {}),
+    ...(values['block-words'] !== undefined ? { blockWords: splitList(values['block-words']) } : {}),
+    ...(fold !== undefined ? { foldover: fold } : {}),
+    randomise: !values['standard-order'],
+    ...(seed !== undefined ? { seed } : {}),
+    ...(values['sort-by'] ? { sortBy: values['sort-by'] } : {}),
+  };
+  return { spec, format: values.json ? 'json' : values.csv ? 'csv' : 'text' };
+}
+
+/** The plan as the JSON object the command prints. */
+export function designJson(d: Design): object {
+  return {
+    factors: d.factors.map((f) =>
+      f.kind === 'numeric'
+        ? { letter: f.letter, name: f.name, kind: f.kind, low: f.low, high: f.high, ...(f.unit ? { unit: f.unit } : {}), ...(f.scale === 'log' ? { scale: 'log' } : {}) }
+        : { letter: f.letter, name: f.name, kind: f.kind, low: f.levels[0], high: f.levels[1] },
+    ),
+    runs: d.runs.map((r) => ({
+      run: r.run,
+      yates: r.yates,
+      replicate: r.replicate,
+      block: r.block,
+      kind: r.kind,
+      coded: Object.fromEntries(d.factors.map((f, i) => [f.name, r.coded[i]])),
+      real: Object.fromEntries(d.factors.map((f, i) => [f.name, plannedSetting(f, r.coded[i])])),
+    })),
+    generators: d.generators,
+    definingRelation: d.definingRelation,
+    resolution: d.resolution,
+    wordLengths: d.wordLengths,
+    aliases: d.aliases,
+    blockWords: d.blockWords,
+    seed: d.seed,
+    summary: d.summary,
+    notes: d.notes,
+  };
+}
+
+function table(header: string[], rows: string[][], rightAlign: boolean[]): string[] {
+  const widths = header.map((h, j) => Math.max(h.length, ...rows.map((r) => r[j].length)));
+  const line = (cells: string[]) =>
+    '  ' + cells.map((c, j) => (rightAlign[j] ? c.padStart(widths[j]) : c.padEnd(widths[j]))).join('  ').trimEnd();
+  return [line(header), ...rows.map(line)];
+}
+
+/** The plan in our plain-words text layout. */
+export function designText(d: Design): string {
+  const k = d.factors.length;
+  const p = d.generators.length;
+  const folded = d.notes.some((n) => n.startsWith('Foldover:'));
+  const kind = p === 0 ? `2^${k} full factorial` : `2^(${k}-${p}) fractional factorial${folded ? ' with its foldover' : ''}`;
+  const out: string[] = [`Plan: ${kind}, ${d.runs.length} runs`, '', d.summary, '', 'Factors'];
+  out.push(
+    ...table(
+      ['', 'Name', 'Low (-1)', 'High (+1)'],
+      d.factors.map((f) => [
+        f.letter,
+        plannedColumn(f).replace(/ planned$/, '') + (f.kind === 'numeric' && f.scale === 'log' ? ', log scale' : ''),
+        String(f.kind === 'numeric' ? f.low : f.levels[0]),
+        String(f.kind === 'numeric' ? f.high : f.levels[1]),
+      ]),
+      [false, false, false, false],
+    ),
+  );
+  out.push('');
+  const facts: [string, string][] = [];
+  if (p > 0) {
+    facts.push(['Generators', d.generators.map((g) => g.replace('=', ' = ')).join(', ')]);
+    facts.push(['Defining relation', `I = ${d.definingRelation.join(' = ')}`]);
+    facts.push(['Resolution', d.resolution === null ? 'none' : romanResolution(d.resolution)]);
+    facts.push(['Word lengths', Object.entries(d.wordLengths).map(([len, n]) => `${n} of length ${len}`).join(', ')]);
+  } else {
+    facts.push(['Defining relation', 'none (full factorial)']);
+  }
+  const blocks = new Set(d.runs.map((r) => r.block)).size;
+  facts.push(['Blocks', blocks > 1 ? `${blocks}; confounded with blocks: ${d.blockWords.join(', ')}` : 'none']);
+  facts.push(['Run order', d.seed === null ? 'standard (Yates) order' : `randomised${blocks > 1 ? ' within blocks' : ''}, seed ${d.seed} (PCG32 and a Fisher-Yates shuffle)`]);
+  const w = Math.max(...facts.map(([a]) => a.length));
+  out.push(...facts.map(([a, b]) => `${a.padEnd(w)}  ${b}`));
+  out.push('');
+  const order = defaultAliasOrder(d.resolution, k);
+  out.push(p === 0 ? 'Effects (all estimable)' : `Alias chains (effects of up to ${order} factors shown)`);
+  if (p === 0) {
+    const mains = d.aliases.filter((c) => c[0].length === 1).map((c) => c[0]);
+    out.push(`  Main effects ${mains.join(', ')}; two-factor interactions ${d.aliases.filter((c) => c[0].length === 2).map((c) => c[0]).join(', ')}`);
+  } else {
+    out.push(...d.aliases.map((c) => `  ${c.join(' = ')}`));
+  }
+  out.push('');
+  out.push('Runs');
+  const header = ['Run', 'Std', 'Rep', 'Block', 'Kind', ...d.factors.map((f) => f.name)];
+  const rows = d.runs.map((r) => [
+    String(r.run),
+    r.yates === null ? '-' : String(r.yates),
+    String(r.replicate),
+    String(r.block),
+    r.kind,
+    ...d.factors.map((f, i) => String(plannedSetting(f, r.coded[i]))),
+  ]);
+  out.push(...table(header, rows, [true, true, true, true, false, ...d.factors.map((f) => f.kind === 'numeric')]));
+  if (d.notes.length > 0) {
+    out.push('', 'Notes');
+    for (const n of d.notes) out.push(`  - ${n}`);
+  }
+  return out.join('\n');
+}
+
+export const design: Command = {
+  summary: 'plan a two-level factorial or fractional factorial experiment',
+  usage: USAGE,
+  async run(argv: string[]): Promise<string> {
+    const { spec, format } = parseDesignArgs(argv);
+    const d = buildDesign(spec);
+    if (format === 'json') return JSON.stringify(designJson(d), null, 2);
+    if (format === 'csv') return runSheetCsv(d);
+    return designText(d);
+  },
+};

@@ -1,0 +1,21 @@
+/** The predict command's JSON: settings and coded values keyed by factor name, intervals as [lo, hi]. */
+import type { Prediction } from '../../core/predict/predict.ts';
+
+export function predictionJson(p: Prediction) {
+  return {
+    response: p.response,
+    settings: Object.fromEntries(p.settings.map((s) => [s.name, s.real])),
+    coded: Object.fromEntries(p.settings.map((s) => [s.name, s.coded])),
+    fit: p.fit,
+    se: p.se,
+    level: p.level,
+    ci: p.ci,
+    pi: p.pi,
+    baseline: p.baseline,
+    contributions: p.contributions.map((c) => ({ term: c.name, letters: c.letters, value: c.value })),
+    outside: p.outside,
+    outsideFactors: p.outsideFactors.map((o) => ({ factor: o.name, real: o.real, coded: o.coded, beyond: o.beyond, end: o.end })),
+    messages: p.messages,
+    caution: p.caution,
+  };
+}

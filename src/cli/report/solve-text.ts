@@ -1,0 +1,31 @@
+/** The solve command's readable report. */
+import { formatSetting } from '../../core/predict/parse-settings.ts';
+import type { Solution } from '../../core/predict/solve-for-target.ts';
+import { num } from './numbers.ts';
+import { interval, notesAndCaution, settingsTable, signedNum } from './prediction-text.ts';
+
+export function solveText(s: Solution): string {
+  const pct = `${Math.round(s.level * 100)}%`;
+  const unit = s.factor.unit ? ` ${s.factor.unit}` : '';
+  const out: string[] = [];
+  out.push(`Setting of ${s.factor.name} for ${s.response} = ${num(s.target)}`);
+  out.push('');
+  out.push(
+    s.reachable
+      ? `  ${s.factor.name} = ${num(s.setting)}${unit} (coded ${signedNum(s.coded)}) gives the target.`
+      : `  Not reachable inside the tested range; nearest setting ${s.factor.name} = ${num(s.setting)}${unit} (coded ${signedNum(s.coded)}).`,
+  );
+  if (s.needed) {
+    out.push(`  The model would need ${s.factor.name} = ${s.needed.real === null ? 'a setting far outside the range' : formatSetting(s.needed.real, s.factor.unit)} (coded ${signedNum(s.needed.coded)}), outside the tested range.`);
+  }
+  out.push(`  The tested range of ${s.factor.name} reaches ${num(Math.min(...s.reach))} to ${num(Math.max(...s.reach))} at these settings (slope ${num(s.slope)} per coded unit).`);
+  out.push('');
+  out.push(settingsTable(s.settings));
+  out.push('');
+  out.push(`  fitted value there           ${num(s.fit)}`);
+  out.push(`  standard error of the fit    ${num(s.se)}`);
+  out.push(`  ${pct} confidence interval      ${interval(s.ci)}   (for the mean response)`);
+  out.push(`  ${pct} prediction interval      ${interval(s.pi)}   (for one new run)`);
+  out.push(...notesAndCaution(s.messages, s.caution));
+  return out.join('\n');
+}

@@ -1,0 +1,70 @@
+/**
+ * The tested range: a numeric factor was run between its low and high settings (coded -1 and
+ * +1); a setting with |coded| > 1 asks the model to extrapolate.
+ */
+import { toReal } from '../factor/coding.ts';
+import type { Factor } from '../factor/factor.ts';
+import { SETTING_TOLERANCE } from '../tolerance.ts';
+import { formatSetting } from './parse-settings.ts';
+
+export interface OutsideSetting {
+  readonly name: string;
+  readonly letter: string;
+  readonly real: number;
+  readonly coded: number;
+  /** How far beyond the nearer end of the tested range, in real units (always positive). */
+  readonly beyond: number;
+  /** How far beyond, in coded units: |coded| - 1. */
+  readonly beyondCoded: number;
+  /** Which end of the tested range it passed: the setting coded -1 ('low') or +1 ('high'). */
+  readonly end: 'low' | 'high';
+  /** A plain sentence naming the factor and how far out it is. */
+  readonly message: string;
+}
+
+/** True when a coded setting lies outside [-1, +1], beyond rounding (SETTING_TOLERANCE). */
+export function isOutside(coded: number): boolean {
+  return Math.abs(coded) > 1 + SETTING_TOLERANCE;
+}
+
+/**
+ * The numeric factors whose coded setting lies outside the tested range [-1, +1], each with a
+ * plain message: how far out in real units and in coded units. The real distance is measured
+ * from the nearer tested setting (low or high), so it reads the same on a log scale. Categorical
+ * factors are never outside (their two levels are the range). Common practice; the range is the
+ * region where the runs were made (Montgomery, Design and Analysis of Experiments, 8th ed.,
+ * section 10.6, on extrapolation beyond the original data). Cost O(k).
+ * Throws InputError (from toReal) for a non-finite coded value.
+ * Example: Temperature 160..200 degC at coded 1.5 -> one entry, real 210, beyond 10, end 'high',
+ * message 'Temperature = 210 degC is outside the tested range (160 to 200 degC): 10 degC above
+ * the high setting (coded +1.5).'
+ */
+export function outsideRange(factors: readonly Factor[], coded: ArrayLike<number>): OutsideSetting[] {
+  const out: OutsideSetting[] = [];
+  for (let i = 0; i < factors.length; i++) {
+    const f = factors[i];
+    if (f.kind !== 'numeric' || !isOutside(coded[i])) continue;
+    const x = coded[i];
+    const real = toReal(f, x) as number;
+    const lowEnd = toReal(f, -1) as number;
+    const highEnd = toReal(f, 1) as number;
+    const end = x > 0 ? highEnd : lowEnd;
+    const beyond = Math.abs(real - end);
+    const which = x > 0 ? 'high' : 'low';
+    const dirWord = real > end ? 'above' : 'below';
+    const sign = x > 0 ? '+' : '-';
+    out.push({
+      name: f.name,
+      letter: f.letter,
+      real,
+      coded: x,
+      beyond,
+      beyondCoded: Math.abs(x) - 1,
+      end: which,
+      message:
+        `${f.name} = ${formatSetting(real, f.unit)} is outside the tested range (${formatSetting(f.low)} to ${formatSetting(f.high, f.unit)}): ` +
+        `${formatSetting(beyond, f.unit)} ${dirWord} the ${which} setting (coded ${sign}${formatSetting(Math.abs(x))}).`,
+    });
+  }
+  return out;
+}

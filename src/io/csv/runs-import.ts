@@ -1,0 +1,317 @@
+/**
+ * A CSV of runs made elsewhere (factor columns and response columns) becomes a new study, after
+ * a mapping step: inspectRunsCsv proposes which column is what, the person confirms or changes
+ * it, and mapRunsCsv checks every cell and builds the study's plan (one planned run per row, in
+ * file order, coded from the row's settings) and one logged run per row. Any cell that cannot
+ * be read stops the import with a message naming its row and column; nothing is half made.
+ * Example: "Temperature (degC),Gloss\n160,80\n200,91\n" maps to a study with the factor
+ * Temperature (160 to 200 degC) and the response Gloss, with two runs.
+ */
+import { InputError } from '../../core/errors.ts';
+import { parseNumber, toCoded } from '../../core/factor/coding.ts';
+import { defineFactors, type Factor, type FactorSpec } from '../../core/factor/factor.ts';
+import type { DesignRun } from '../../core/design/design.ts';
+import type { Response } from '../../core/study/response.ts';
+import { parseReadings } from '../../core/study/run-form.ts';
+import { checkRunValues, type RunValues, type StudyPlan } from '../../core/study/study.ts';
+import { SETTING_TOLERANCE } from '../../core/tolerance.ts';
+import { bareColumnName, columnUnit, readTable, type Table } from './read-table.ts';
+
+export type ColumnRole = 'factor' | 'response' | 'block' | 'notes' | 'excluded' | 'reason' | 'operator' | 'time' | 'ignore';
+
+export interface FactorColumn {
+  readonly column: string;
+  /** Name of the factor; the column name without its unit when not given. */
+  readonly name?: string;
+  readonly unit?: string;
+  /** Low and high settings; the column's minimum and maximum when not given. */
+  readonly low?: number;
+  readonly high?: number;
+  /** Two level labels for a categorical factor; the column's two labels in file order when not given. */
+  readonly levels?: readonly [string, string];
+  readonly scale?: 'linear' | 'log';
+}
+
+export interface ResponseColumn {
+  readonly column: string;
+  readonly name?: string;
+  readonly unit?: string;
+  readonly goal: Response['goal'];
+  readonly target?: number;
+}
+
+export interface CsvMapping {
+  readonly title: string;
+  readonly purpose?: string;
+  readonly factors: readonly FactorColumn[];
+  readonly responses: readonly ResponseColumn[];
+  readonly block?: string;
+  readonly notes?: string;
+  readonly excluded?: string;
+  readonly reason?: string;
+  readonly operator?: string;
+  readonly time?: string;
+}
+
+export interface ColumnInfo {
+  readonly header: string;
+  /** The column name without its unit. */
+  readonly name: string;
+  readonly unit?: string;
+  /** True when every non-empty cell is a number (a response cell may hold several readings). */
+  readonly numeric: boolean;
+  /** Distinct values, at most 5, for the mapping screen. */
+  readonly sample: readonly string[];
+  readonly distinct: number;
+  readonly empty: number;
+  /** What the column looks like it is. */
+  readonly role: ColumnRole;
+}
+
+export interface CsvInspection {
+  readonly rows: number;
+  readonly columns: readonly ColumnInfo[];
+  /** A mapping from the guessed roles, to show and let the person change. */
+  readonly suggestion: CsvMapping;
+}
+
+export interface CsvRunsImport {
+  readonly plan: StudyPlan;
+  readonly runs: readonly { readonly plannedRun: number; readonly values: RunValues }[];
+}
+
+const ROLE_WORDS: [RegExp, ColumnRole][] = [
+  [/^(run|run no\.?|run number|std order|standard order|order|#)$/, 'ignore'],
+  [/^block$/, 'block'],
+  [/^(notes?|comments?|remarks?)$/, 'notes'],
+  [/^excluded$/, 'excluded'],
+  [/^(reason|exclusion reason)$/, 'reason'],
+  [/^(operator|logged by|who)$/, 'operator'],
+  [/^(time|logged at|date|timestamp)$/, 'time'],
+];
+
+function isNumberCell(v: string): boolean {
+  return Number.isFinite(parseNumber(v));
+}
+
+/** Looks at a CSV of runs and guesses each column's role (last numeric columns are responses). */
+export function inspectRunsCsv(text: string, title = 'Imported runs'): CsvInspection {
+  const table = readTable(text);
+  if (table.rows.length === 0) throw new InputError('The CSV file has a header but no runs');
+  const columns: ColumnInfo[] = table.header.map((header, c) => {
+    const cells = table.rows.map((r) => r[c].trim());
+    const filled = cells.filter((v) => v !== '');
+    const distinctSet = [...new Set(filled)];
+    const numeric = filled.length > 0 && filled.every((v) => v.split(/[\s;]+/).every(isNumberCell));
+    const bare = bareColumnName(header);
+    const word = ROLE_WORDS.find(([re]) => re.test(bare));
+    const unit = columnUnit(header);
+    return {
+      header,
+      name: header.replace(/\s*\([^)]*\)\s*/g, ' ').trim() || header,
+      ...(unit ? { unit } : {}),
+      numeric,
+      sample: distinctSet.slice(0, 5),
+      distinct: distinctSet.length,
+      empty: cells.length - filled.length,
+      role: word ? word[1] : 'factor',
+    };
+  });
+  // A factor column has two levels (or a few settings) and no blanks; a numeric column with
+  // many distinct values, or with blanks, reads as a response.
+  const n = table.rows.length;
+  const guessed = columns.map((col) => {
+    if (col.role !== 'factor') return col;
+    if (!col.numeric) return { ...col, role: col.distinct === 2 && col.empty === 0 ? ('factor' as const) : ('ignore' as const) };
+    const looksLikeFactor = col.empty === 0 && col.distinct <= Math.max(3, Math.floor(n / 2));
+    return { ...col, role: looksLikeFactor ? ('factor' as const) : ('response' as const) };
+  });
+  if (!guessed.some((c) => c.role === 'response')) {
+    const last = [...guessed].reverse().find((c) => c.role === 'factor' && c.numeric);
+    if (last) guessed[guessed.indexOf(last)] = { ...last, role: 'response' };
+  }
+  const pick = (role: ColumnRole) => guessed.find((c) => c.role === role)?.header;
+  const suggestion: CsvMapping = {
+    title,
+    factors: guessed.filter((c) => c.role === 'factor').map((c) => ({ column: c.header })),
+    responses: guessed.filter((c) => c.role === 'response').map((c) => ({ column: c.header, goal: 'maximize' as const })),
+    ...(pick('block') ? { block: pick('block') } : {}),
+    ...(pick('notes') ? { notes: pick('notes') } : {}),
+    ...(pick('excluded') ? { excluded: pick('excluded') } : {}),
+    ...(pick('reason') ? { reason: pick('reason') } : {}),
+    ...(pick('operator') ? { operator: pick('operator') } : {}),
+    ...(pick('time') ? { time: pick('time') } : {}),
+  };
+  return { rows: n, columns: guessed, suggestion };
+}
+
+function columnIndex(table: Table, name: string, what: string): number {
+  const exact = table.header.findIndex((h) => h === name);
+  const c = exact >= 0 ? exact : table.header.findIndex((h) => h.toLowerCase() === name.trim().toLowerCase());
+  if (c < 0) throw new InputError(`The ${what} column "${name}" is not in the file (columns: ${table.header.join(', ')})`);
+  return c;
+}
+
+const cellAt = (row: number, table: Table, c: number) => `Row ${row + 2}, column ${c + 1} ("${table.header[c]}")`;
+
+const YES = new Set(['yes', 'y', 'true', '1', 'x', 'excluded']);
+const NO = new Set(['', 'no', 'n', 'false', '0']);
+
+/** Builds the study and its runs from a CSV and a confirmed mapping; throws naming row and column. */
+export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
+  const table = readTable(text);
+  if (table.rows.length === 0) throw new InputError('The CSV file has a header but no runs');
+  if (mapping.title.trim() === '') throw new InputError('The new study needs a title, got none');
+  if (mapping.factors.length === 0) throw new InputError('Map at least one column to a factor');
+  if (mapping.responses.length === 0) throw new InputError('Map at least one column to a response');
+  const used = new Map<number, string>();
+  const claim = (name: string, what: string) => {
+    const c = columnIndex(table, name, what);
+    if (used.has(c)) throw new InputError(`Column ${c + 1} ("${table.header[c]}") is mapped twice (as ${used.get(c)} and as ${what})`);
+    used.set(c, what);
+    return c;
+  };
+  const fIdx = mapping.factors.map((f) => claim(f.column, 'factor'));
+  const rIdx = mapping.responses.map((r) => claim(r.column, 'response'));
+  const opt = (name: string | undefined, what: string) => (name === undefined ? -1 : claim(name, what));
+  const bIdx = opt(mapping.block, 'block');
+  const nIdx = opt(mapping.notes, 'notes');
+  const xIdx = opt(mapping.excluded, 'excluded');
+  const reIdx = opt(mapping.reason, 'reason');
+  const oIdx = opt(mapping.operator, 'operator');
+  const tIdx = opt(mapping.time, 'time');
+
+  const specs: FactorSpec[] = mapping.factors.map((f, j) => {
+    const c = fIdx[j];
+    const header = table.header[c];
+    const name = (f.name ?? header.replace(/\s*\([^)]*\)\s*/g, ' ')).trim();
+    const unit = f.unit ?? columnUnit(header);
+    const cells = table.rows.map((r, i) => {
+      const v = r[c].trim();
+      if (v === '') throw new InputError(`${cellAt(i, table, c)}: ${name} has no setting`);
+      return v;
+    });
+    const numeric = f.levels === undefined && cells.every(isNumberCell);
+    if (numeric) {
+      const values = cells.map(parseNumber);
+      return {
+        kind: 'numeric',
+        name,
+        low: f.low ?? Math.min(...values),
+        high: f.high ?? Math.max(...values),
+        ...(unit ? { unit } : {}),
+        ...(f.scale ? { scale: f.scale } : {}),
+      };
+    }
+    if (f.levels) return { kind: 'categorical', name, levels: [f.levels[0], f.levels[1]] };
+    const labels: string[] = [];
+    for (const v of cells) if (!labels.some((l) => l.toLowerCase() === v.toLowerCase())) labels.push(v);
+    if (labels.length !== 2) {
+      const bad = cells.findIndex((v) => !isNumberCell(v));
+      throw new InputError(
+        `${cellAt(bad, table, c)}: ${name} needs numbers in every row, or exactly two level labels, got ${labels.length} labels (${labels.slice(0, 5).join(', ')})`,
+      );
+    }
+    return { kind: 'categorical', name, levels: [labels[0], labels[1]] };
+  });
+  let factors: Factor[];
+  try {
+    factors = defineFactors(specs);
+  } catch (err) {
+    throw err instanceof InputError ? new InputError(`Factor columns: ${err.message}`) : err;
+  }
+  const responses: Response[] = mapping.responses.map((r, j) => {
+    const header = table.header[rIdx[j]];
+    const unit = r.unit ?? columnUnit(header);
+    const name = (r.name ?? header.replace(/\s*\([^)]*\)\s*/g, ' ')).trim();
+    if (r.goal === 'target' && (r.target === undefined || !Number.isFinite(r.target))) throw new InputError(`${name}: the goal "target" needs a target value`);
+    return { name, goal: r.goal, ...(unit ? { unit } : {}), ...(r.goal === 'target' ? { target: r.target } : {}) };
+  });
+
+  const designRuns: DesignRun[] = [];
+  const runs: { plannedRun: number; values: RunValues }[] = [];
+  const seenPoints = new Map<string, number>();
+  const plan0 = { title: mapping.title.trim(), purpose: mapping.purpose ?? '', factors, responses };
+  table.rows.forEach((row, i) => {
+    const actual = factors.map((f, j) => {
+      const cell = row[fIdx[j]].trim();
+      if (f.kind === 'categorical') return cell;
+      const x = parseNumber(cell);
+      if (!Number.isFinite(x)) throw new InputError(`${cellAt(i, table, fIdx[j])}: ${f.name} needs a number, got "${cell}"`);
+      return x;
+    });
+    const coded = factors.map((f, j) => {
+      try {
+        return toCoded(f, actual[j]);
+      } catch (err) {
+        throw err instanceof InputError ? new InputError(`${cellAt(i, table, fIdx[j])}: ${err.message}`) : err;
+      }
+    });
+    const readings = responses.map((r, j) => {
+      try {
+        return parseReadings(row[rIdx[j]], r.name);
+      } catch (err) {
+        throw err instanceof InputError ? new InputError(`${cellAt(i, table, rIdx[j])}: ${err.message}`) : err;
+      }
+    });
+    let block = 1;
+    if (bIdx >= 0) {
+      const b = row[bIdx].trim();
+      const n = parseNumber(b);
+      if (!Number.isInteger(n) || n < 1) throw new InputError(`${cellAt(i, table, bIdx)}: the block needs a whole number from 1, got "${b}"`);
+      block = n;
+    }
+    let excluded = false;
+    if (xIdx >= 0) {
+      const x = row[xIdx].trim().toLowerCase();
+      if (YES.has(x)) excluded = true;
+      else if (!NO.has(x)) throw new InputError(`${cellAt(i, table, xIdx)}: Excluded needs yes or no, got "${row[xIdx]}"`);
+    }
+    const reason = reIdx >= 0 ? row[reIdx].trim() : '';
+    const time = tIdx >= 0 && row[tIdx].trim() !== '' ? row[tIdx].trim() : null;
+    if (time !== null && Number.isNaN(Date.parse(time))) throw new InputError(`${cellAt(i, table, tIdx)}: the time needs a date and time (ISO 8601, e.g. 2024-05-02T14:30), got "${time}"`);
+    const corner = coded.every((v) => Math.abs(Math.abs(v) - 1) <= SETTING_TOLERANCE);
+    const center = coded.every((v) => Math.abs(v) <= SETTING_TOLERANCE);
+    const key = coded.map((v) => v.toPrecision(12)).join(',');
+    const replicate = (seenPoints.get(key) ?? 0) + 1;
+    seenPoints.set(key, replicate);
+    designRuns.push({
+      run: i + 1,
+      yates: corner ? 1 + coded.reduce((s, v, j) => s + (v > 0 ? 2 ** j : 0), 0) : null,
+      replicate,
+      block,
+      kind: center ? 'center' : 'factorial',
+      coded,
+    });
+    const raw: RunValues = {
+      actual,
+      readings,
+      loggedAt: time,
+      operator: oIdx >= 0 && row[oIdx].trim() !== '' ? row[oIdx].trim() : null,
+      notes: nIdx >= 0 ? row[nIdx] : '',
+      excluded,
+      reason: excluded ? reason || 'excluded in the imported file' : '',
+    };
+    try {
+      runs.push({ plannedRun: i + 1, values: checkRunValues(plan0, raw) });
+    } catch (err) {
+      throw err instanceof InputError ? new InputError(`Row ${i + 2}: ${err.message}`) : err;
+    }
+  });
+  const plan: StudyPlan = {
+    ...plan0,
+    design: {
+      runs: designRuns,
+      generators: [],
+      definingRelation: [],
+      resolution: null,
+      wordLengths: {},
+      aliases: [],
+      blockWords: [],
+      seed: null,
+      summary: `Imported from a CSV file of ${table.rows.length} runs; the planned settings are the settings in the file.`,
+      notes: ['The runs were made elsewhere: their order and settings are as the file gives them, not a plan made here.'],
+    },
+  };
+  return { plan, runs };
+}

@@ -1,0 +1,143 @@
+/**
+ * Files in and out of the store: the JSON backup (one study or all, history included), and the
+ * import of a backup or of a CSV of runs made elsewhere. Every import is checked in full first
+ * and written in one transaction: with any error nothing changes. Importing a backup is a merge
+ * by id, so the same file twice changes nothing and two phones' files merge into their union.
+ */
+import { InputError } from '../core/errors.ts';
+import { currentRun, type RunRevision, type StudyRecord } from '../core/study/study.ts';
+import { readBackup, writeBackup, type Backup, type BackupPayload } from '../io/backup/backup.ts';
+import { planMerge, type MergeConflict } from '../io/backup/merge.ts';
+import type { Digest } from '../io/sha256.ts';
+import type { CsvRunsImport } from '../io/csv/runs-import.ts';
+import { studyCsv, type StudyCsvOptions } from '../io/csv/study-csv.ts';
+import { guarded } from './errors.ts';
+import { newId } from './ids.ts';
+import { markExported } from './status.ts';
+import { newStudyRecord } from './studies.ts';
+import type { Store } from './store.ts';
+
+/** Everything the store holds of these studies (all when none are named). */
+export async function payloadOf(store: Store, studyIds?: readonly string[]): Promise<BackupPayload> {
+  const { db } = store;
+  return guarded(() =>
+    db.transaction('r', [db.studies, db.revisions], async () => {
+      if (!studyIds) return { studies: await db.studies.toArray(), revisions: await db.revisions.toArray() };
+      const studies = (await db.studies.bulkGet([...studyIds])).map((s, i) => {
+        if (!s) throw new InputError(`There is no study with id "${studyIds[i]}" on this device`);
+        return s;
+      });
+      const revisions = await db.revisions.where('studyId').anyOf([...studyIds]).toArray();
+      return { studies, revisions };
+    }),
+  );
+}
+
+/** The backup file text of these studies (all when none are named), noting the export. */
+export async function exportBackup(store: Store, studyIds?: readonly string[], digest?: Digest): Promise<string> {
+  const payload = await payloadOf(store, studyIds);
+  const text = await writeBackup(payload, { device: store.device, exportedAt: store.now().toISOString(), scope: studyIds ? 'study' : 'all' }, digest);
+  await markExported(store, payload.studies.map((s) => s.id));
+  return text;
+}
+
+export interface ImportReport {
+  readonly studiesAdded: number;
+  readonly revisionsAdded: number;
+  /** Logged runs that were not on this device before. */
+  readonly runsAdded: number;
+  readonly studiesUnchanged: number;
+  readonly revisionsUnchanged: number;
+  /** Runs whose edits on two devices (or tabs) diverged: both revisions are kept, the later
+   * by the revision order is current, and the person may restore the other. */
+  readonly conflicts: readonly MergeConflict[];
+  /** One line for the screen or the command line. */
+  readonly summary: string;
+}
+
+function summarise(r: Omit<ImportReport, 'summary'>): string {
+  if (r.studiesAdded + r.revisionsAdded === 0) return 'Nothing new: everything in the file was already here.';
+  const parts = [`${r.studiesAdded} new ${r.studiesAdded === 1 ? 'study' : 'studies'}`, `${r.runsAdded} new logged ${r.runsAdded === 1 ? 'run' : 'runs'}`, `${r.revisionsAdded} new ${r.revisionsAdded === 1 ? 'revision' : 'revisions'}`];
+  const c = r.conflicts.length;
+  return `Imported ${parts.join(', ')}.` + (c > 0 ? ` ${c} ${c === 1 ? 'run was' : 'runs were'} changed on two devices; both versions are kept in ${c === 1 ? 'its' : 'their'} history.` : '');
+}
+
+/** Merges a checked backup into the store in one transaction. */
+export async function mergeBackup(store: Store, backup: Pick<Backup, 'payload'>): Promise<ImportReport> {
+  const { db } = store;
+  const incoming = backup.payload;
+  return guarded(() =>
+    db.transaction('rw', [db.studies, db.revisions, db.runs], async () => {
+      const studyIds = incoming.studies.map((s) => s.id);
+      const revIds = incoming.revisions.map((r) => r.id);
+      const [haveStudies, haveRevs] = await Promise.all([db.studies.bulkGet(studyIds), db.revisions.bulkGet(revIds)]);
+      const runIds = [...new Set(incoming.revisions.map((r) => r.runId))];
+      const history = await db.revisions.where('runId').anyOf(runIds).toArray();
+      const byRun = new Map<string, RunRevision[]>();
+      for (const r of history) byRun.set(r.runId, [...(byRun.get(r.runId) ?? []), r]);
+      const plan = planMerge(
+        {
+          studies: new Map(haveStudies.filter((s): s is StudyRecord => !!s).map((s) => [s.id, s])),
+          revisions: new Map(haveRevs.filter((r): r is RunRevision => !!r).map((r) => [r.id, r])),
+          historyOf: (id) => byRun.get(id) ?? [],
+        },
+        incoming,
+      );
+      // No catching inside the transaction: any failure aborts all of it.
+      if (plan.newStudies.length > 0) await db.studies.bulkAdd([...plan.newStudies]);
+      if (plan.newRevisions.length > 0) await db.revisions.bulkAdd([...plan.newRevisions]);
+      if (plan.runs.length > 0) await db.runs.bulkPut([...plan.runs]);
+      const runsAdded = plan.runs.filter((r) => !byRun.has(r.id)).length;
+      const report = {
+        studiesAdded: plan.newStudies.length,
+        revisionsAdded: plan.newRevisions.length,
+        runsAdded,
+        studiesUnchanged: plan.unchangedStudies,
+        revisionsUnchanged: plan.unchangedRevisions,
+        conflicts: plan.conflicts,
+      };
+      return { ...report, summary: summarise(report) };
+    }),
+  );
+}
+
+/** Reads a backup file (every check first) and merges it into the store; nothing changes on any error. */
+export async function importBackup(store: Store, text: string, digest?: Digest): Promise<ImportReport> {
+  const backup = await readBackup(text, digest);
+  return mergeBackup(store, backup);
+}
+
+/** Makes a new study from a mapped CSV of runs made elsewhere, with one logged run per row, in one transaction. */
+export async function importRunsCsv(store: Store, mapped: CsvRunsImport): Promise<{ study: StudyRecord; runs: number }> {
+  const study = newStudyRecord(store, mapped.plan);
+  const savedAt = store.now().toISOString();
+  const revisions: RunRevision[] = mapped.runs.map((r) => ({
+    id: newId(),
+    runId: newId(),
+    studyId: study.id,
+    plannedRun: r.plannedRun,
+    rev: 1,
+    device: store.device,
+    parents: [],
+    restoredFrom: null,
+    savedAt,
+    ...r.values,
+  }));
+  const { db } = store;
+  await guarded(() =>
+    db.transaction('rw', [db.studies, db.revisions, db.runs], async () => {
+      await db.studies.add(study);
+      await db.revisions.bulkAdd(revisions);
+      await db.runs.bulkPut(revisions.map((r) => currentRun([r])));
+    }),
+  );
+  return { study, runs: revisions.length };
+}
+
+/** The CSV export of a study's records (the same text the command line's csv command writes). */
+export async function exportStudyCsv(store: Store, studyId: string, options: StudyCsvOptions = {}): Promise<string> {
+  const { db } = store;
+  const [study, runs] = await guarded(() => db.transaction('r', [db.studies, db.runs], () => Promise.all([db.studies.get(studyId), db.runs.where('studyId').equals(studyId).toArray()])));
+  if (!study) throw new InputError(`There is no study with id "${studyId}" on this device`);
+  return studyCsv(study, runs, options);
+}

@@ -1,0 +1,76 @@
+/**
+ * npm run bench: medians of the analysis core beside a general-purpose regression library
+ * (ml-regression-multivariate-linear 2.0.4) fitting the same model, with the ratio. Prints
+ * figures only; it never fails on a time (the machines are shared and noisy).
+ */
+import MLR from 'ml-regression-multivariate-linear';
+import { analyze } from '../../src/core/fit/analyze.ts';
+import { termValue } from '../../src/core/model/term.ts';
+import { case1, case2 } from './cases.ts';
+import { fmtMs, medianMs } from './timing.ts';
+
+function reference(data: ReturnType<typeof case1>['data'], terms: number[]) {
+  const x = data.coded.map((row) => terms.map((t) => termValue(t, row)));
+  const y = data.y.map((v) => [v]);
+  return () => new MLR(x, y, { intercept: true, statistics: true });
+}
+
+const lines: string[] = [];
+function compare(title: string, c: ReturnType<typeof case1>, batch: number) {
+  const ours = medianMs(() => analyze(c.data, { terms: c.terms }), { batch });
+  const ref = medianMs(reference(c.data, c.terms), { batch: 1, rounds: 11, warmup: 2 });
+  const a = analyze(c.data, { terms: c.terms });
+  lines.push(`${title}\n  Trialbook analyze (${a.method}): ${fmtMs(ours)} median;  reference library fit: ${fmtMs(ref)} median;  ratio ${(ref / ours).toFixed(1)}x`);
+}
+
+compare('(1) 2^7, 2 replicates + 4 center runs, full 128-term model, full analysis', case1(), 50);
+compare('(2) 2^6 less 5 runs, off-target settings, main effects + two-factor interactions', case2(), 20);
+console.log(lines.join('\n'));
+
+// (3) 10,000 predictions with intervals for each of the two models: the compiled predictor (fit,
+// se, CI and PI into a reused object) beside the reference library's predict plus
+// x0' stdErrorMatrix x0 over its covariance as a plain array (the same numbers).
+{
+  const { compilePredictor } = await import('../../src/core/predict/compiled-predictor.ts');
+  const { predict } = await import('../../src/core/predict/predict.ts');
+  const out3: string[] = ['(3) 10,000 predictions with 95% CI and PI, per prediction'];
+  const N = 10_000;
+  for (const [name, c] of [['model (1), 128 terms', case1()], ['model (2), 22 columns', case2()]] as const) {
+    const model = analyze(c.data, { terms: c.terms }).model;
+    const p = compilePredictor(model);
+    const k = c.data.factors.length;
+    let s = 12345;
+    const rnd = () => ((s = (Math.imul(s, 1664525) + 1013904223) >>> 0) / 2 ** 32) * 2 - 1;
+    const pts = Array.from({ length: N }, () => Float64Array.from({ length: k }, rnd));
+    const buf = { fit: 0, se: null as number | null, ciLo: null as number | null, ciHi: null as number | null, piLo: null as number | null, piHi: null as number | null };
+    let sink = 0;
+    const ours = medianMs(() => {
+      for (let i = 0; i < N; i++) sink += p.interval(pts[i], buf).piHi!;
+    }, { batch: 1, rounds: 21, warmup: 3 }) / N;
+    const x = c.data.coded.map((row) => c.terms.map((t) => termValue(t, row)));
+    const reg = new MLR(x, c.data.y.map((v) => [v]), { intercept: true, statistics: true });
+    const cov = reg.stdErrorMatrix.to2DArray();
+    const refPts = pts.slice(0, 1000);
+    const ref = medianMs(() => {
+      for (const pt of refPts) {
+        const row = c.terms.map((t) => termValue(t, pt));
+        const fit = reg.predict(row)[0];
+        const v = [...row, 1];
+        let q = 0;
+        for (let a = 0; a < v.length; a++) {
+          let r = 0;
+          for (let b = 0; b < v.length; b++) r += cov[a][b] * v[b];
+          q += v[a] * r;
+        }
+        sink += fit + Math.sqrt(q);
+      }
+    }, { batch: 1, rounds: 11, warmup: 2 }) / refPts.length;
+    const settings = Object.fromEntries(c.data.factors.map((f) => [f.name, 150]));
+    const full = medianMs(() => predict(model, settings), { batch: 2000, rounds: 11, warmup: 5 });
+    out3.push(
+      `  ${name}${p.diagonal ? ' (diagonal covariance)' : ''}: compiled predictor ${fmtMs(ours)} median;  reference library ${fmtMs(ref)};  ratio ${(ref / ours).toFixed(1)}x;  full predict() with contributions and messages ${fmtMs(full)}` +
+        (sink === 0.5 ? ' ' : ''), // uses the results, so no loop can be optimised away
+    );
+  }
+  console.log(out3.join('\n'));
+}

@@ -1,0 +1,65 @@
+import { describe, expect, it } from 'vitest';
+import { spawnSync } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
+import { analyze } from '../../src/cli/commands/analyze.ts';
+import { fixturePath } from '../helpers/fixtures.ts';
+
+const root = fileURLToPath(new URL('../..', import.meta.url));
+const etch = fixturePath('montgomery-8e-ex6-1-plasma-etch-2x3.csv');
+const filtration = fixturePath('montgomery-8e-ex6-2-filtration-2x4.csv');
+
+describe('analyze command', () => {
+  it('prints every JSON field the README lists (Montgomery 8th ed., Example 6.1 data)', async () => {
+    const out = JSON.parse(await analyze.run([etch, '--factors', 'Gap,Flow,Power', '--response', 'Etch rate', '--terms', 'A*B*C', '--json']));
+    for (const key of ['coding', 'intercept', 'terms', 'df', 'sigma', 'r2', 'r2adj', 'r2pred', 'anova', 'runs', 'warnings']) expect(out).toHaveProperty(key);
+    expect(out.coding.Gap).toMatchObject({ letter: 'A', low: 0.8, high: 1.2 });
+    expect(out.anova.type).toBe('sequential');
+    const a = out.terms.find((t: { letters: string }) => t.letters === 'A');
+    expect(a.effect).toBeCloseTo(-101.625, 10); // Montgomery 8th ed., Table 6.5
+    expect(a.effect).toBeCloseTo(2 * a.coef, 12);
+    expect(out.df).toMatchObject({ residual: 8, pureError: 8, lackOfFit: 0 });
+    expect(out.runs[0]).toHaveProperty('studentized');
+    expect(out.lenth).toBeUndefined();
+  });
+
+  it('reports Lenth and lenthT when the residual df is 0 (Montgomery 8th ed., Example 6.2 data)', async () => {
+    const out = JSON.parse(
+      await analyze.run([filtration, '--factors', 'Temperature,Pressure,Concentration,Stirring', '--response', 'Filtration rate', '--order', '4', '--json']),
+    );
+    expect(out.lenth.pse).toBeCloseTo(2.625, 10); // recomputed by hand from the printed effects
+    expect(out.sigma).toBeNull();
+    expect(out.terms[0].lenthT).toBeCloseTo(21.625 / 2.625, 10);
+    expect(out.terms[0].se).toBeNull();
+  });
+
+  it('readable report in plain words', async () => {
+    const text = await analyze.run([etch, '--factors', 'Gap,Flow,Power', '--response', 'Etch rate']);
+    expect(text).toMatch(/noise \(residual SD\)/);
+    expect(text).toMatch(/explained \(R\^2\)/);
+    expect(text).toMatch(/cross-validated \(predicted R\^2\)/);
+    expect(text).toMatch(/Gap: 0.8 cm -> -1, 1.2 cm -> \+1/);
+    expect(text).toMatch(/ANOVA, sequential/);
+  });
+
+  it('categorical levels from --levels', async () => {
+    const out = JSON.parse(await analyze.run([etch, '--factors', 'Gap,Flow', '--response', 'Etch rate', '--levels', 'Gap=1.2:0.8', '--json']));
+    expect(out.coding.Gap).toMatchObject({ low: 1.2, high: 0.8 });
+  });
+
+  it('bad input: clear messages', async () => {
+    await expect(analyze.run([etch, '--factors', 'Gap,Pressure', '--response', 'Etch rate'])).rejects.toThrow(/"Pressure" is not in the file/);
+    await expect(analyze.run([etch, '--factors', 'Gap', '--response', 'Etch rate', '--terms', 'A', '--order', '2'])).rejects.toThrow(/either --terms or --order/);
+    await expect(analyze.run(['missing.csv', '--factors', 'A', '--response', 'y'])).rejects.toThrow(/does not exist/);
+    await expect(analyze.run([etch, '--factors', 'Gap', '--response', 'Etch rate', '--bogus'])).rejects.toThrow(/bogus/);
+  });
+
+  it('the real command line: exit 0 with a report, exit 2 with a message on stderr', () => {
+    const ok = spawnSync('npx', ['tsx', 'src/cli/main.ts', 'analyze', etch, '--factors', 'Gap,Flow,Power', '--response', 'Etch rate', '--json'], { cwd: root, encoding: 'utf8' });
+    expect(ok.status).toBe(0);
+    expect(JSON.parse(ok.stdout).n).toBe(16);
+    const bad = spawnSync('npx', ['tsx', 'src/cli/main.ts', 'analyze', etch, '--factors', 'Gap', '--response', 'Nope'], { cwd: root, encoding: 'utf8' });
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).toMatch(/trialbook analyze: The response column "Nope" is not in the file/);
+    expect(bad.stdout).toBe('');
+  }, 30_000);
+});

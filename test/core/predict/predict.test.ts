@@ -1,0 +1,164 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { InputError } from '../../../src/core/errors.ts';
+import { analyze } from '../../../src/core/fit/analyze.ts';
+import { termsUpToOrder } from '../../../src/core/model/formula.ts';
+import { CAUTION } from '../../../src/core/predict/caution.ts';
+import { centerNotes, modelNotes, predict, predictSettings } from '../../../src/core/predict/predict.ts';
+import { parseSettings } from '../../../src/core/predict/parse-settings.ts';
+import { fixtureData } from '../../helpers/fixtures.ts';
+import { fullFactorial, handModel, lcg, numeric, responseData } from './designs.ts';
+import { referenceModel } from './reference.ts';
+
+const yieldData = fixtureData('montgomery-8e-ex6-6-center-points.csv', { factors: ['Time', 'Temperature'], response: 'Yield' });
+const yieldModel = analyze(yieldData, { terms: [1, 2] }).model;
+
+/** Invented data (for tests only): Temperature 160..200 degC, Powder matte/gloss, Time 10..20 s, 2^3 twice. */
+function glossData() {
+  const r = lcg(3);
+  const coded = [...fullFactorial(3), ...fullFactorial(3)];
+  const y = coded.map((x) => 70 + 5 * x[0] + 3 * x[1] + 2 * x[0] * x[1] - 0.5 * x[2] + (r() - 0.5)); // invented
+  return responseData(
+    [numeric('Temperature', 160, 200, 'degC'), { kind: 'categorical', name: 'Powder', levels: ['matte', 'gloss'] }, numeric('Time', 10, 20, 's')],
+    coded,
+    y,
+  );
+}
+const gloss = glossData();
+const glossTerms = termsUpToOrder(3, 2);
+const glossModel = analyze(gloss, { terms: glossTerms }).model;
+
+describe('predict: Montgomery 8th ed., section 6.8 yield data (2^2 + 5 center runs), yhat = 40.44 + 0.775 x1 + 0.325 x2 (section 11.2)', () => {
+  const p = predict(yieldModel, { Time: 40, Temperature: 150 });
+
+  it('shows each factor coded: x1 = (time - 35) / 5, x2 = (temperature - 155) / 5', () => {
+    expect(p.settings.map((s) => s.coded)).toEqual([1, -1]);
+    expect(p.settings.map((s) => s.real)).toEqual([40, 150]);
+  });
+
+  it('fit, baseline and contributions as in the printed model', () => {
+    expect(p.baseline).toBeCloseTo(364 / 9, 12); // 40.44, the mean of the nine runs
+    expect(p.fit).toBeCloseTo(364 / 9 + 0.775 - 0.325, 12);
+    expect(p.contributions.map((c) => [c.letters, c.value])).toEqual([
+      ['A', expect.closeTo(0.775, 12)],
+      ['B', expect.closeTo(-0.325, 12)],
+    ]);
+  });
+
+  it('se, 95% CI and PI as the reference library gives them (ml-regression-multivariate-linear 2.0.4, jstat t)', () => {
+    const ref = referenceModel(yieldData, [1, 2]).at([1, -1]);
+    expect(p.se!).toBeCloseTo(ref.se, 9);
+    expect(p.ci![0]).toBeCloseTo(ref.ci[0], 8);
+    expect(p.ci![1]).toBeCloseTo(ref.ci[1], 8);
+    expect(p.pi![0]).toBeCloseTo(ref.pi[0], 8);
+    expect(p.pi![1]).toBeCloseTo(ref.pi[1], 8);
+    expect(p.level).toBe(0.95);
+  });
+
+  it('inside the range: no flag; the caution is carried as data', () => {
+    expect(p.outside).toBe(false);
+    expect(p.outsideFactors).toEqual([]);
+    expect(p.caution).toBe(CAUTION);
+  });
+
+  it('a numeric factor not given is held at its center, and the result says so', () => {
+    const q = predict(yieldModel, { A: 40 });
+    expect(q.settings[1]).toMatchObject({ real: 155, coded: 0, source: 'center' });
+    expect(q.messages).toContain('Temperature was not given: held at its center, 155 degF.');
+  });
+
+  it('outside the tested range: flagged, naming the factor and how far out', () => {
+    const q = predict(yieldModel, { Time: 50, Temperature: 155 });
+    expect(q.outside).toBe(true);
+    expect(q.outsideFactors[0]).toMatchObject({ name: 'Time', beyond: 10, coded: 3 }); // (50 - 35) / 5 = 3, by hand
+    expect(q.messages.join(' ')).toMatch(/Time = 50 min is outside the tested range \(30 to 40 min\): 10 min above the high setting/);
+    expect(q.messages.join(' ')).toMatch(/extrapolation/);
+  });
+});
+
+describe('predict with interactions and a categorical factor (invented data)', () => {
+  it('contributions sorted by size; baseline plus contributions equals the fit exactly', () => {
+    const p = predict(glossModel, { A: 185, B: 'gloss', Time: 12 });
+    const sizes = p.contributions.map((c) => Math.abs(c.value));
+    expect(sizes).toEqual([...sizes].sort((a, b) => b - a));
+    expect(p.contributions.map((c) => c.letters).sort()).toEqual(['A', 'AB', 'AC', 'B', 'BC', 'C']);
+    let sum = p.baseline;
+    for (const c of p.contributions) sum += c.value;
+    expect(sum).toBe(p.fit);
+    // each contribution is coef x product of coded values: AB at (0.25, +1) -> 0.25 coef_AB
+    const ab = p.contributions.find((c) => c.letters === 'AB')!;
+    expect(ab.product).toBeCloseTo(0.25, 15);
+    expect(ab.value).toBe(ab.coef * ab.product);
+  });
+
+  it('intervals against the reference library at off-corner settings', () => {
+    const p = predict(glossModel, { A: 172, B: 'matte', C: 19 });
+    const ref = referenceModel(gloss, glossTerms).at(p.settings.map((s) => s.coded));
+    expect(p.fit).toBeCloseTo(ref.fit, 9);
+    expect(p.se!).toBeCloseTo(ref.se, 9);
+    expect(p.pi![1]).toBeCloseTo(ref.pi[1], 8);
+  });
+
+  it('refuses a level the factor does not have, a value between its levels, and a missing categorical factor', () => {
+    expect(() => predict(glossModel, { A: 185, B: 'silk' })).toThrow(/Powder has the levels "matte" and "gloss", got "silk"/);
+    expect(() => predict(glossModel, { A: 185, B: 0.5 })).toThrow(/no setting between them/);
+    expect(() => predict(glossModel, { A: 185 })).toThrow(/Powder is categorical and has no center/);
+  });
+
+  it('property: baseline + contributions = fit exactly, and the fit matches the reference, on random non-orthogonal designs (fast-check)', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 2 ** 31 - 1 }), fc.integer({ min: 2, max: 4 }), (seed, k) => {
+        const r = lcg(seed);
+        const terms = termsUpToOrder(k, 2);
+        const n = terms.length + 5;
+        const coded = Array.from({ length: n }, () => Array.from({ length: k }, () => (r() - 0.5) * 2));
+        const y = coded.map((x) => 3 * x[0] - x[1] + 2 * x[0] * x[1] + r()); // invented
+        const data = responseData(Array.from({ length: k }, (_, i) => numeric(`F${i + 1}`, 0, 10)), coded, y);
+        const model = analyze(data, { terms }).model;
+        const at = Object.fromEntries(Array.from({ length: k }, (_, i) => [`F${i + 1}`, r() * 14 - 2]));
+        const p = predict(model, at);
+        let sum = p.baseline;
+        for (const c of p.contributions) sum += c.value;
+        expect(sum).toBe(p.fit);
+        const ref = referenceModel(data, terms).at(p.settings.map((s) => s.coded));
+        expect(Math.abs(p.fit - ref.fit)).toBeLessThan(1e-8 * Math.max(1, Math.abs(ref.fit)));
+        expect(Math.abs(p.se! - ref.se)).toBeLessThan(1e-8 * Math.max(1, ref.se));
+      }),
+      { numRuns: 60 },
+    );
+  });
+});
+
+describe('predict: residual df 0, blocks and curvature notes', () => {
+  it('with residual df 0 the intervals are null and the result says why (Montgomery 8th ed., Example 6.2 under the full model)', () => {
+    const data = fixtureData('montgomery-8e-ex6-2-filtration-2x4.csv', {
+      factors: ['Temperature', 'Pressure', 'Concentration', 'Stirring'],
+      response: 'Filtration rate',
+    });
+    const p = predict(analyze(data, { terms: termsUpToOrder(4, 4) }).model, { A: 1, B: 1, C: 1, D: 1 });
+    expect(p.se).toBeNull();
+    expect(p.ci).toBeNull();
+    expect(p.pi).toBeNull();
+    expect(p.messages.join(' ')).toMatch(/residual df 0/);
+    expect(JSON.stringify(p)).not.toContain('NaN');
+  });
+
+  it('notes a blocked model (an average block) and significant curvature', () => {
+    const m = handModel([numeric('A')], [1], [5, 1], { blockColumns: 0, curvatureP: 0.001 });
+    expect(modelNotes(m, 0.05).join(' ')).toMatch(/Curvature is significant \(p = 0.0010\)/);
+    expect(modelNotes({ ...m, curvatureP: 0.2 }, 0.05)).toEqual([]);
+    const blocked = { ...m, blockColumns: 1, coef: Float64Array.from([5, 9, 1]), covUnscaled: new Float64Array([0.1, 0, 0, 0, 0.1, 0, 0, 0, 0.1]) };
+    const p = predict(blocked, { A: 200 }); // coded +1
+    expect(p.fit).toBe(6); // 5 + 1 x 1: the block column is 0 for an average block
+    expect(p.messages).toContain('The prediction is for an average block.');
+  });
+
+  it('centerNotes: degenerate: nothing held gives no notes', () => {
+    expect(centerNotes(parseSettings(yieldModel.factors, { A: 30, B: 160 }))).toEqual([]);
+  });
+
+  it('degenerate: predictSettings refuses settings that do not match the model', () => {
+    expect(() => predictSettings(yieldModel, [])).toThrow(InputError);
+    expect(() => predictSettings(yieldModel, [])).toThrow(/one setting per factor \(2\), got 0/);
+  });
+});

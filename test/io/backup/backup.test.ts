@@ -1,0 +1,81 @@
+import { describe, expect, it } from 'vitest';
+import { BACKUP_VERSION, migrateBackup, parseJsonText, readBackupSync, writeBackup, readBackup } from '../../../src/io/backup/backup.ts';
+import { portableDigest } from '../../../src/io/sha256.ts';
+
+const empty = { studies: [], revisions: [] };
+const header = { device: 'dev-1', exportedAt: '2024-05-02T10:00:00.000Z', scope: 'all' as const };
+
+describe('reading a backup', () => {
+  it('the checksum of an empty payload is the SHA-256 of its canonical text', async () => {
+    const text = await writeBackup(empty, header, portableDigest);
+    const doc = JSON.parse(text);
+    // canonical JSON of the empty payload is '{"revisions":[],"studies":[]}' (members sorted).
+    const { createHash } = await import('node:crypto');
+    expect(doc.checksum.value).toBe(createHash('sha256').update('{"revisions":[],"studies":[]}').digest('hex'));
+    expect(doc.counts).toEqual({ studies: 0, runs: 0, revisions: 0 });
+    expect((await readBackup(text)).payload).toEqual(empty);
+    expect(readBackupSync('\ufeff' + text).payload).toEqual(empty);
+  });
+
+  it('names line and column of a syntax error, and says when a file was cut short', () => {
+    expect(() => parseJsonText('{\n  "format": "trialbook-backup",\n  "x": tru\n}')).toThrow(/line 3, column \d+/);
+    expect(() => parseJsonText('{"format": "trialbook-backup", "payload": {')).toThrow(/ends early at line 1|line 1, column/);
+    expect(() => parseJsonText('   ')).toThrow(/empty/);
+  });
+
+  it('refuses what is not a Trialbook backup, and a newer format version', async () => {
+    expect(() => readBackupSync('[1,2]')).toThrow(/not a Trialbook backup/);
+    expect(() => readBackupSync('{"format":"other"}')).toThrow(/format: needs "trialbook-backup"/);
+    const doc = JSON.parse(await writeBackup(empty, header));
+    expect(() => readBackupSync(JSON.stringify({ ...doc, formatVersion: BACKUP_VERSION + 1 }))).toThrow(
+      new RegExp(`format version ${BACKUP_VERSION + 1}, written by a newer Trialbook.*Update Trialbook`),
+    );
+    expect(() => readBackupSync(JSON.stringify({ ...doc, formatVersion: 0 }))).toThrow(/formatVersion: needs a whole number from 1/);
+    expect(() => readBackupSync(JSON.stringify({ ...doc, counts: { ...doc.counts, revisions: 3 } }))).toThrow(/counts.revisions: the file says 3, but its payload holds 0/);
+  });
+
+  it('migrates an older version step by step (with a stand-in step, since version 1 is the first)', () => {
+    const calls: number[] = [];
+    const older = { format: 'trialbook-backup', formatVersion: BACKUP_VERSION - 1, payload: { studies: [], runs: [] } };
+    const steps = {
+      [BACKUP_VERSION - 1]: (d: Record<string, unknown>) => {
+        calls.push(d.formatVersion as number);
+        const p = d.payload as { studies: unknown[]; runs: unknown[] };
+        return { ...d, payload: { studies: p.studies, revisions: p.runs } };
+      },
+    };
+    const migrated = migrateBackup(older, steps);
+    expect(calls).toEqual([BACKUP_VERSION - 1]);
+    expect(migrated).toEqual({ format: 'trialbook-backup', formatVersion: BACKUP_VERSION, payload: { studies: [], revisions: [] } });
+    expect(() => migrateBackup(older)).toThrow(/not one Trialbook ever wrote/);
+  });
+});
+
+describe('jsonErrorOffset', () => {
+  it('finds where a text first breaks the JSON grammar (RFC 8259)', async () => {
+    const { jsonErrorOffset } = await import('../../../src/io/backup/json-error.ts');
+    expect(jsonErrorOffset('{"a": tru}')).toBe(9);
+    expect(jsonErrorOffset('{"a": 1,,}')).toBe(8);
+    expect(jsonErrorOffset('[1, 2')).toBe(5);
+    expect(jsonErrorOffset('{"a": "x\\q"}')).toBe(9);
+    expect(jsonErrorOffset('01')).toBe(1);
+    expect(jsonErrorOffset('{"a": [1, {"b": null}]} ')).toBe(-1);
+  });
+  it('agrees with JSON.parse on which texts are JSON', async () => {
+    const { jsonErrorOffset } = await import('../../../src/io/backup/json-error.ts');
+    const fc = (await import('fast-check')).default;
+    fc.assert(
+      fc.property(fc.json(), fc.nat(), fc.string({ maxLength: 3 }), (json, cut, junk) => {
+        const broken = json.slice(0, cut % (json.length + 1)) + junk;
+        let ok = true;
+        try {
+          JSON.parse(broken);
+        } catch {
+          ok = false;
+        }
+        expect(jsonErrorOffset(broken) === -1).toBe(ok);
+      }),
+      { numRuns: 2000 },
+    );
+  });
+});

@@ -1,0 +1,38 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { canonicalJson } from '../../../src/io/backup/canonical.ts';
+
+describe('canonicalJson', () => {
+  // RFC 8785 (JSON Canonicalization Scheme), section 3.2.2, the example input and its output.
+  it('writes the RFC 8785 example as the RFC does', () => {
+    const input = String.raw`{
+      "numbers": [333333333.33333329, 1E30, 4.50, 2e-3, 0.000000000000000000000000001],
+      "string": "\u20ac$\u000F\u000aA'\u0042\u0022\u005c\\\"\/",
+      "literals": [null, true, false]
+    }`;
+    const expected = String.raw`{"literals":[null,true,false],"numbers":[333333333.3333333,1e+30,4.5,0.002,1e-27],"string":"€$\u000f\nA'B\"\\\\\"/"}`;
+    expect(canonicalJson(JSON.parse(input))).toBe(expected);
+  });
+  // RFC 8785, section 3.2.3: members are sorted by their names as UTF-16 code units.
+  it('sorts member names by UTF-16 code units, as RFC 8785 section 3.2.3 requires', () => {
+    const obj = { '\u20ac': 'Euro Sign', '\r': 'Carriage Return', '\ufb33': 'Hebrew Letter Dalet With Dagesh', '1': 'One', '\ud83d\ude00': 'Emoji: Grinning Face', '\u0080': 'Control', '\u00f6': 'Latin Small Letter O With Diaeresis' };
+    const order = Object.keys(JSON.parse(canonicalJson(obj)) as object);
+    // JSON.parse keeps insertion order for string keys except integer-like ones, so read the text instead.
+    const text = canonicalJson(obj);
+    const names = [...text.matchAll(/"([^"]*)":"/g)].map((m) => JSON.parse(`"${m[1]}"`));
+    expect(names.map((n: string) => n.codePointAt(0)!.toString(16))).toEqual(['d', '31', '80', 'f6', '20ac', '1f600', 'fb33']);
+    expect(order).toContain('1');
+  });
+  it('is the same for the same value whatever the member order, and reads back to the same value', () => {
+    fc.assert(
+      fc.property(fc.jsonValue(), (v) => {
+        const text = canonicalJson(v);
+        expect(canonicalJson(JSON.parse(text))).toBe(text);
+        expect(JSON.parse(text)).toEqual(JSON.parse(JSON.stringify(v)));
+      }),
+    );
+  });
+  it('refuses a number JSON cannot hold', () => {
+    expect(() => canonicalJson({ a: Number.POSITIVE_INFINITY })).toThrow(/no place for the number Infinity/);
+  });
+});

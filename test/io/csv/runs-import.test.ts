@@ -1,0 +1,59 @@
+import 'fake-indexeddb/auto';
+import { describe, expect, it } from 'vitest';
+import { inspectRunsCsv, mapRunsCsv } from '../../../src/io/csv/runs-import.ts';
+import { importRunsCsv } from '../../../src/store/files.ts';
+import { listRuns } from '../../../src/store/runs.ts';
+import { listStudies } from '../../../src/store/studies.ts';
+import { freshStore } from '../../store/helpers.ts';
+
+// Invented runs of a made-up moulding trial.
+const CSV = [
+  'Run,Melt temperature (°C),Mould,Hold time (s),Shrinkage (%),Notes',
+  '1,220,steel,4,1.82,',
+  '2,250,steel,4,1.61,"flash on edge, trimmed"',
+  '3,220,aluminium,8,1.75 1.77,',
+  '4,250,aluminium,8,1.50,',
+  '5,235,steel,6,1.69,center',
+].join('\r\n');
+
+describe('CSV of runs made elsewhere', () => {
+  it('proposes a mapping from the columns', () => {
+    const ins = inspectRunsCsv(CSV, 'Invented moulding trial');
+    expect(ins.rows).toBe(5);
+    expect(ins.suggestion.factors.map((f) => f.column)).toEqual(['Melt temperature (°C)', 'Mould', 'Hold time (s)']);
+    expect(ins.suggestion.responses.map((r) => r.column)).toEqual(['Shrinkage (%)']);
+    expect(ins.suggestion.notes).toBe('Notes');
+    expect(ins.columns.find((c) => c.header === 'Run')!.role).toBe('ignore');
+  });
+
+  it('becomes a study after the mapping, one planned and one logged run per row', async () => {
+    const mapped = mapRunsCsv(CSV, { ...inspectRunsCsv(CSV).suggestion, title: 'Invented moulding trial', responses: [{ column: 'Shrinkage (%)', goal: 'minimize' }] });
+    expect(mapped.plan.factors.map((f) => [f.letter, f.name, f.kind])).toEqual([
+      ['A', 'Melt temperature', 'numeric'],
+      ['B', 'Mould', 'categorical'],
+      ['C', 'Hold time', 'numeric'],
+    ]);
+    expect(mapped.plan.factors[0]).toMatchObject({ low: 220, high: 250, unit: '°C' });
+    expect(mapped.plan.responses).toEqual([{ name: 'Shrinkage', goal: 'minimize', unit: '%' }]);
+    expect(mapped.plan.design.runs.map((r) => r.coded)).toEqual([[-1, -1, -1], [1, -1, -1], [-1, 1, 1], [1, 1, 1], [0, -1, 0]]);
+    expect(mapped.runs[2].values.readings).toEqual([[1.75, 1.77]]);
+    expect(mapped.runs[1].values.notes).toBe('flash on edge, trimmed');
+    const store = await freshStore();
+    const { study, runs } = await importRunsCsv(store, mapped);
+    expect(runs).toBe(5);
+    expect((await listRuns(store, study.id)).map((r) => r.actual)).toEqual([[220, 'steel', 4], [250, 'steel', 4], [220, 'aluminium', 8], [250, 'aluminium', 8], [235, 'steel', 6]]);
+  });
+
+  it('names row and column of a bad cell, and makes nothing', async () => {
+    const bad = CSV.replace('1.50', '"1,50"');
+    const mapping = { ...inspectRunsCsv(CSV).suggestion, title: 'x' };
+    expect(() => mapRunsCsv(bad, mapping)).toThrow(/Row 5, column 5 \("Shrinkage \(%\)"\): Shrinkage: reading 1 needs a number, got "1,50"/);
+    expect(() => mapRunsCsv(CSV.replace('aluminium,8,1.50', 'brass,8,1.50'), mapping)).toThrow(/Row \d, column 3 \("Mould"\): Mould needs numbers in every row, or exactly two level labels, got 3 labels/);
+    expect(() => mapRunsCsv(CSV.replace('250,aluminium', 'hot,aluminium'), mapping)).toThrow(/Row 5, column 2 \("Melt temperature \(°C\)"\)/);
+    expect(() => mapRunsCsv(CSV, { ...mapping, factors: [...mapping.factors, { column: 'Notes' }] })).toThrow(/mapped twice/);
+    expect(() => mapRunsCsv(CSV, { ...mapping, factors: [{ column: 'Pressure' }] })).toThrow(/The factor column "Pressure" is not in the file/);
+    expect(() => mapRunsCsv('a,b\r\n1,2,3\r\n', mapping)).toThrow(/Row 2 of the CSV file has 3 cells but the header has 2 columns/);
+    const store = await freshStore();
+    expect(await listStudies(store)).toEqual([]);
+  });
+});

@@ -1,0 +1,77 @@
+/**
+ * Test helpers for the store: a fresh database per test (fake-indexeddb), and a small invented
+ * study (a made-up powder-coating trial, not real data) whose plan is a full factorial in
+ * standard order with center runs, built here by hand so that the store tests do not depend on
+ * the design builder.
+ */
+import { defineFactors, type FactorSpec } from '../../src/core/factor/factor.ts';
+import type { DesignRun } from '../../src/core/design/design.ts';
+import type { StudyPlan } from '../../src/core/study/study.ts';
+import { openStore, type Store, type StoreOptions } from '../../src/store/store.ts';
+
+let counter = 0;
+
+/** A store on a database of its own. */
+export async function freshStore(options: StoreOptions = {}): Promise<Store> {
+  counter += 1;
+  return openStore({ name: `test-${process.pid}-${counter}-${Math.random().toString(36).slice(2)}`, storage: null, ...options });
+}
+
+/** A 2^k full factorial in standard order (A fastest), `replicates` times, then `centers` center runs. */
+export function factorialRuns(k: number, replicates = 1, centers = 0): DesignRun[] {
+  const runs: DesignRun[] = [];
+  for (let rep = 1; rep <= replicates; rep++) {
+    for (let i = 0; i < 2 ** k; i++) {
+      runs.push({ run: runs.length + 1, yates: i + 1, replicate: rep, block: 1, kind: 'factorial', coded: Array.from({ length: k }, (_, j) => ((i >> j) & 1 ? 1 : -1)) });
+    }
+  }
+  for (let c = 0; c < centers; c++) runs.push({ run: runs.length + 1, yates: null, replicate: 1, block: 1, kind: 'center', coded: Array.from({ length: k }, () => 0) });
+  return runs;
+}
+
+const COATING: FactorSpec[] = [
+  { kind: 'numeric', name: 'Oven temperature', low: 160, high: 200, unit: '°C' },
+  { kind: 'numeric', name: 'Line speed', low: 2, high: 4, unit: 'm/min' },
+  { kind: 'numeric', name: 'Powder flow', low: 30, high: 50, unit: 'g/min' },
+];
+
+/** The invented powder-coating study: three numeric factors, two responses. */
+export function coatingPlan(title = 'Invented demo: coating line trial', replicates = 1, centers = 2): StudyPlan {
+  const factors = defineFactors(COATING);
+  return {
+    title,
+    purpose: 'INVENTED DEMO DATA. Find oven and line settings that give an even film on the test panels.',
+    factors,
+    responses: [
+      { name: 'Film thickness', unit: 'µm', goal: 'target', target: 70 },
+      { name: 'Gloss', unit: 'GU', goal: 'maximize' },
+    ],
+    design: {
+      runs: factorialRuns(3, replicates, centers),
+      generators: [],
+      definingRelation: [],
+      resolution: null,
+      wordLengths: {},
+      aliases: [],
+      blockWords: [],
+      seed: null,
+      summary: 'Full factorial in 3 factors, standard order, with center runs (test plan).',
+      notes: [],
+    },
+  };
+}
+
+/** A plan with a categorical factor (two powder brands) for the tests that need one. */
+export function brandPlan(): StudyPlan {
+  const factors = defineFactors([
+    { kind: 'numeric', name: 'Oven temperature', low: 160, high: 200, unit: '°C' },
+    { kind: 'categorical', name: 'Powder', levels: ['Brand North', 'Brand South'] },
+  ]);
+  return {
+    title: 'Invented demo: powder brands',
+    purpose: 'INVENTED DEMO DATA.',
+    factors,
+    responses: [{ name: 'Gloss', unit: 'GU', goal: 'maximize' }],
+    design: { ...coatingPlan().design, runs: factorialRuns(2, 2, 0), summary: 'Full factorial in 2 factors, 2 replicates (test plan).' },
+  };
+}

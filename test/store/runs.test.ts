@@ -1,0 +1,191 @@
+import 'fake-indexeddb/auto';
+import { describe, expect, it } from 'vitest';
+import { InputError } from '../../src/core/errors.ts';
+import { parseRunForm } from '../../src/core/study/run-form.ts';
+import { createStudy, getStudy, listStudies } from '../../src/store/studies.ts';
+import { excludeRun, getRun, listRuns, openNewRun, openRun, readmitRun, restoreRevision, runHistory, saveRun } from '../../src/store/runs.ts';
+import { discardDraft, getDraft, listDrafts, saveDraft } from '../../src/store/drafts.ts';
+import { closeStore, openStore } from '../../src/store/store.ts';
+import { SCHEMA_VERSION } from '../../src/store/db.ts';
+import { brandPlan, coatingPlan, freshStore } from './helpers.ts';
+
+async function logRun(store: Awaited<ReturnType<typeof freshStore>>, studyId: string, plannedRun: number, readings: string[]) {
+  const state = await openNewRun(store, studyId, plannedRun);
+  const values = parseRunForm(state.study, { ...state.form, readings });
+  return { state, result: await saveRun(store, { ...state, studyId, values }) };
+}
+
+describe('studies', () => {
+  it('are kept with their plan, a random id and this device', async () => {
+    const store = await freshStore();
+    const plan = coatingPlan();
+    const study = await createStudy(store, plan);
+    expect(study.id).toMatch(/^[0-9a-f-]{36}$/);
+    expect(study.device).toBe(store.device);
+    const back = await getStudy(store, study.id);
+    expect(back.factors).toEqual(plan.factors);
+    expect(back.design.runs).toEqual(plan.design.runs);
+    expect(await listStudies(store)).toHaveLength(1);
+  });
+
+  it('refuses a plan that does not hold together, and stores nothing', async () => {
+    const store = await freshStore();
+    const plan = coatingPlan();
+    const bad = { ...plan, design: { ...plan.design, runs: [{ ...plan.design.runs[0], coded: [1, 1] }] } };
+    await expect(createStudy(store, bad)).rejects.toThrow(/coded setting per factor/);
+    await expect(createStudy(store, { ...plan, title: '  ' })).rejects.toThrow(InputError);
+    expect(await listStudies(store)).toHaveLength(0);
+  });
+
+  it('keep the same device id across reopenings, a different one per database', async () => {
+    const store = await freshStore();
+    const name = store.db.name;
+    const device = store.device;
+    closeStore(store);
+    const again = await openStore({ name, storage: null });
+    expect(again.device).toBe(device);
+    const other = await freshStore();
+    expect(other.device).not.toBe(device);
+    expect(again.db.verno).toBe(SCHEMA_VERSION);
+  });
+});
+
+describe('logged runs', () => {
+  it('a saved run is there after reopening, with its readings and their mean left to the analysis', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, coatingPlan());
+    const { result } = await logRun(store, study.id, 3, ['68.5 70.1 69.0', '88']);
+    expect(result.duplicate).toBe(false);
+    expect(result.run.readings).toEqual([[68.5, 70.1, 69.0], [88]]);
+    closeStore(store);
+    const again = await openStore({ name: store.db.name, storage: null });
+    const runs = await listRuns(again, study.id);
+    expect(runs).toHaveLength(1);
+    expect(runs[0]).toEqual(result.run);
+    expect(runs[0].actual).toEqual([160, 4, 30]); // run 3 in standard order is "b": A low, B high, C low (Montgomery 8th ed., section 6.3)
+  });
+
+  it('one tap, one record: saving the same form twice, or at once, writes one revision', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, coatingPlan());
+    const state = await openNewRun(store, study.id, 1);
+    const values = parseRunForm(state.study, { ...state.form, readings: ['70', '90'] });
+    const input = { ...state, studyId: study.id, values };
+    const [a, b] = await Promise.all([saveRun(store, input), saveRun(store, input)]);
+    const c = await saveRun(store, input);
+    expect([a.duplicate, b.duplicate].sort()).toEqual([false, true]);
+    expect(c.duplicate).toBe(true);
+    expect(await listRuns(store, study.id)).toHaveLength(1);
+    expect(await runHistory(store, state.runId)).toHaveLength(1);
+  });
+
+  it('an edit appends a revision; the earlier values stay and can be restored', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, coatingPlan());
+    const { state, result: first } = await logRun(store, study.id, 2, ['70', '90']);
+    const edit = await openRun(store, state.runId);
+    expect(edit.parents).toEqual([first.revision.id]);
+    const second = await saveRun(store, { ...edit, studyId: study.id, values: parseRunForm(study, { ...edit.form, readings: ['72', '91'], notes: 'panel 2 re-measured' }) });
+    expect(second.changedSince).toBeNull();
+    expect(second.run.rev).toBe(2);
+    expect(second.run.readings).toEqual([[72], [91]]);
+    const restored = await restoreRevision(store, state.runId, first.revision.id);
+    expect(restored.run.readings).toEqual([[70], [90]]);
+    expect(restored.run.restoredFrom).toBe(first.revision.id);
+    const history = await runHistory(store, state.runId);
+    expect(history.map((r) => r.rev)).toEqual([1, 2, 3]);
+    expect(history[1].readings).toEqual([[72], [91]]);
+    expect((await getRun(store, state.runId)).heads).toEqual([restored.revision.id]);
+  });
+
+  it('exclusion needs a reason, is a revision, and can be taken back', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, coatingPlan());
+    const { state } = await logRun(store, study.id, 4, ['70', '90']);
+    await expect(excludeRun(store, state.runId, ' ')).rejects.toThrow(/reason/);
+    const ex = await excludeRun(store, state.runId, 'panel dropped before curing');
+    expect(ex.run.excluded).toBe(true);
+    expect(ex.run.reason).toBe('panel dropped before curing');
+    const back = await readmitRun(store, state.runId);
+    expect(back.run.excluded).toBe(false);
+    expect(back.run.reason).toBe('');
+    expect(await runHistory(store, state.runId)).toHaveLength(3);
+  });
+
+  it('two tabs on the same run: the second save sees the change and both revisions are kept', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, coatingPlan());
+    const { state } = await logRun(store, study.id, 5, ['70', '90']);
+    const tab1 = await openRun(store, state.runId);
+    const tab2 = await openRun(store, state.runId);
+    const s1 = await saveRun(store, { ...tab1, studyId: study.id, values: parseRunForm(study, { ...tab1.form, readings: ['71', '90'] }) });
+    const s2 = await saveRun(store, { ...tab2, studyId: study.id, values: parseRunForm(study, { ...tab2.form, readings: ['69', '90'] }) });
+    expect(s1.changedSince).toBeNull();
+    expect(s2.changedSince).toBe(s1.revision.id);
+    const run = await getRun(store, state.runId);
+    expect([...run.heads].sort()).toEqual([s1.revision.id, s2.revision.id].sort());
+    expect(run.revisionId).toBe(s2.revision.id);
+    const history = await runHistory(store, state.runId);
+    expect(history.map((r) => r.readings[0][0])).toEqual([70, 71, 69]);
+    // A later save from the current view joins the two again.
+    const tab3 = await openRun(store, state.runId);
+    const s3 = await saveRun(store, { ...tab3, studyId: study.id, values: parseRunForm(study, { ...tab3.form, readings: ['70.5', '90'] }) });
+    expect(s3.run.heads).toEqual([s3.revision.id]);
+  });
+
+  it('refuses bad values with a message naming the field, and writes nothing', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, brandPlan());
+    const state = await openNewRun(store, study.id, 1);
+    expect(() => parseRunForm(study, { ...state.form, readings: ['12,5'] })).toThrow(/Gloss: reading 1 needs a number, got "12,5" \(use a point/);
+    expect(() => parseRunForm(study, { ...state.form, actual: ['180', 'Brand East'] })).toThrow(/Powder: the actual setting needs "Brand North" or "Brand South"/);
+    const bad = { ...state, studyId: study.id, values: { ...parseRunForm(study, state.form), readings: [[Number.NaN]] } };
+    await expect(saveRun(store, bad)).rejects.toThrow(/Gloss: reading 1 needs a finite number/);
+    await expect(saveRun(store, { ...bad, plannedRun: 99 })).rejects.toThrow(/Run 99 is not in the plan/);
+    await expect(saveRun(store, { ...bad, values: { ...bad.values, readings: [[1]], excluded: true, reason: '' } })).rejects.toThrow(/needs a reason/);
+    expect(await listRuns(store, study.id)).toHaveLength(0);
+    expect(await store.db.revisions.count()).toBe(0);
+  });
+
+  it('categorical levels are stored as declared whatever the case typed', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, brandPlan());
+    const state = await openNewRun(store, study.id, 2);
+    const values = parseRunForm(study, { ...state.form, actual: ['181.5', 'brand south'], readings: ['84'] });
+    const saved = await saveRun(store, { ...state, studyId: study.id, values });
+    expect(saved.run.actual).toEqual([181.5, 'Brand South']);
+  });
+});
+
+describe('drafts', () => {
+  it('are kept on every change, come back when the form reopens, and go when the run is saved', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, coatingPlan());
+    const state = await openNewRun(store, study.id, 6);
+    await saveDraft(store, { ...state, studyId: study.id }, { ...state.form, readings: ['6', ''] });
+    await saveDraft(store, { ...state, studyId: study.id }, { ...state.form, readings: ['69', ''], notes: 'half typed' });
+    closeStore(store);
+    const again = await openStore({ name: store.db.name, storage: null });
+    expect((await listDrafts(again, study.id)).map((d) => d.runId)).toEqual([state.runId]);
+    const reopened = await openRun(again, state.runId);
+    expect(reopened.fromDraft).toBe(true);
+    expect(reopened.form.readings).toEqual(['69', '']);
+    expect(reopened.form.notes).toBe('half typed');
+    // The draft keeps the ids fixed at opening, so a save after the reload is the same record.
+    expect(reopened.revisionId).toBe(state.revisionId);
+    await saveRun(again, { ...reopened, studyId: study.id, values: parseRunForm(study, reopened.form) });
+    expect(await getDraft(again, state.runId)).toBeNull();
+  });
+
+  it('a failed save keeps the draft', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, coatingPlan());
+    const state = await openNewRun(store, study.id, 1);
+    const form = { ...state.form, readings: ['70', '90'] };
+    await saveDraft(store, { ...state, studyId: study.id }, form);
+    await expect(saveRun(store, { ...state, studyId: study.id, values: { ...parseRunForm(study, form), actual: [1, 2] } })).rejects.toThrow(InputError);
+    expect((await getDraft(store, state.runId))?.form).toEqual(form);
+    await discardDraft(store, state.runId);
+    expect(await getDraft(store, state.runId)).toBeNull();
+  });
+});
