@@ -68,5 +68,5 @@ describe('predict command (Montgomery 8th ed., section 6.8 yield data; yhat = 40
     const bad = spawnSync('npx', ['tsx', 'src/cli/main.ts', 'predict', yieldFile, ...model, '--at', 'Pressure=3'], { cwd: root, encoding: 'utf8' });
     expect(bad.status).toBe(2);
     expect(bad.stderr).toMatch(/trialbook predict: No factor is named or lettered "Pressure"/);
-  });
+  }, 60_000); // two child processes through npx and tsx: a generous allowance on a loaded machine, not a speed check
 });

@@ -1,6 +1,11 @@
 /** The path command's JSON: direction, real step and each step's settings keyed by factor name. */
 import type { SteepestPath } from '../../core/predict/steepest-path.ts';
 
+/**
+ * The path command's JSON object (keys direction, steps with real, coded, fit, outside; messages;
+ * caution; with sense, base, realStep, firstOutside and each step's pi besides), keyed by factor name.
+ * Example: pathJson(steepestPath(model, { base: 'Time', step: 5, steps: 1 })).direction.Time -> 1.
+ */
 export function pathJson(p: SteepestPath) {
   const keyed = <T>(values: readonly T[]) => Object.fromEntries(p.factors.map((f, i) => [f.name, values[i]]));
   return {

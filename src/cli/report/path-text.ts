@@ -3,6 +3,11 @@ import type { SteepestPath } from '../../core/predict/steepest-path.ts';
 import { num, table } from './numbers.ts';
 import { interval, notesAndCaution, signedNum } from './prediction-text.ts';
 
+/**
+ * The readable path report: each factor's coefficient and step (coded and real), then one row per
+ * step with the real settings, the prediction, its interval and the outside mark; notes, caution.
+ * Example: pathText(p) starts with 'Path of steepest ascent for Yield'.
+ */
 export function pathText(p: SteepestPath): string {
   const out: string[] = [];
   const unit = (i: number) => (p.factors[i].unit ? ` ${p.factors[i].unit}` : '');

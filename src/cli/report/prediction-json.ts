@@ -1,6 +1,11 @@
 /** The predict command's JSON: settings and coded values keyed by factor name, intervals as [lo, hi]. */
 import type { Prediction } from '../../core/predict/predict.ts';
 
+/**
+ * The predict command's JSON object (keys coded, fit, se, ci, pi, baseline, contributions,
+ * outside, messages, caution, with settings, level and outsideFactors besides). Plain data; nulls
+ * stay null. Example: predictionJson(predict(model, { A: 40, B: 150 })).coded -> { Time: 1, Temperature: -1 }.
+ */
 export function predictionJson(p: Prediction) {
   return {
     response: p.response,

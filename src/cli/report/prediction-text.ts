@@ -6,6 +6,11 @@ import type { Prediction } from '../../core/predict/predict.ts';
 import { num, table } from './numbers.ts';
 import type { FactorSetting } from '../../core/predict/parse-settings.ts';
 
+/**
+ * The readable prediction report: settings table, fit, se, CI and PI, then the make-up of the
+ * fit (baseline and contributions, largest first), notes and the caution. Nulls print as '-'.
+ * Example: predictionText(p) starts with 'Prediction of Yield'.
+ */
 export function predictionText(p: Prediction): string {
   const pct = `${Math.round(p.level * 100)}%`;
   const out: string[] = [];
@@ -35,10 +40,12 @@ export function predictionText(p: Prediction): string {
 }
 
 
+/** A number with its sign, 4 significant digits: signedNum(0.6) -> '+0.6', signedNum(-1) -> '-1', signedNum(0) -> '0'. */
 export function signedNum(x: number): string {
   return x > 0 ? `+${num(x)}` : num(x);
 }
 
+/** The settings table (factor, real setting with unit, coded value, how it was chosen), indented two spaces. */
 export function settingsTable(settings: readonly FactorSetting[]): string {
   return table(
     ['factor', 'setting', 'coded', 'how'],
@@ -54,6 +61,7 @@ export function settingsTable(settings: readonly FactorSetting[]): string {
     .join('\n');
 }
 
+/** The 'Notes' block (only when there are messages) and the 'Caution' block, as lines. */
 export function notesAndCaution(messages: readonly string[], caution: readonly string[]): string[] {
   const out: string[] = [];
   if (messages.length > 0) {
@@ -65,6 +73,7 @@ export function notesAndCaution(messages: readonly string[], caution: readonly s
   return out;
 }
 
+/** An interval as 'lo to hi', or '-' when null: interval([1, 2]) -> '1 to 2'. */
 export function interval(iv: readonly [number, number] | null): string {
   return iv ? `${num(iv[0])} to ${num(iv[1])}` : '-';
 }

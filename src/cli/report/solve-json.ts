@@ -1,6 +1,11 @@
 /** The solve command's JSON. */
 import type { Solution } from '../../core/predict/solve-for-target.ts';
 
+/**
+ * The solve command's JSON object (keys setting, reachable, fit, pi, messages, caution, with the
+ * factor, target, coded, se, ci, slope, reach, needed and settings besides).
+ * Example: solveJson(solveForTarget(model, { factor: 'A', target: 41 })).reachable -> true.
+ */
 export function solveJson(s: Solution) {
   return {
     response: s.response,

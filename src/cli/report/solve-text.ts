@@ -4,6 +4,11 @@ import type { Solution } from '../../core/predict/solve-for-target.ts';
 import { num } from './numbers.ts';
 import { interval, notesAndCaution, settingsTable, signedNum } from './prediction-text.ts';
 
+/**
+ * The readable solve report: the answer (or the nearest setting and what would be needed), the
+ * span the range reaches, the settings, the fit and its intervals, notes and the caution.
+ * Example: solveText(s) starts with 'Setting of Time for Yield = 41'.
+ */
 export function solveText(s: Solution): string {
   const pct = `${Math.round(s.level * 100)}%`;
   const unit = s.factor.unit ? ` ${s.factor.unit}` : '';

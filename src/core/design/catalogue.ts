@@ -85,7 +85,7 @@ const PRODUCTS: Readonly<Record<number, Readonly<Record<number, readonly string[
     12: ['ABC', 'ADEF', 'BDEG', 'CDFG', 'ABCEFG'],
     13: ['ABC', 'ABDE', 'ABDF', 'ACDG', 'AEFG', 'ABCDEFG'],
     14: ['ABC', 'ABDE', 'ABDF', 'ACEF', 'ACDG', 'ABEFG', 'BCDEFG'],
-    15: [],
+    15: ['ABC', 'ABDE', 'ABDF', 'ACEF', 'ACDG', 'ABEFG', 'BCDEFG', 'AEG'],
   },
 };
 
@@ -97,7 +97,7 @@ export const CATALOGUE_MAX_FACTORS = 15;
 
 function entryFor(runs: number, k: number): CatalogueEntry | undefined {
   const products = PRODUCTS[runs]?.[k];
-  if (!products || products.length === 0) return undefined;
+  if (!products) return undefined;
   const letters = factorLetters(k);
   const m = Math.log2(runs);
   return {

@@ -60,7 +60,8 @@ export function designSummary(s: SummaryInput): string {
   if (s.blocks > 1) detail.push(`${s.blocks * s.replicates} blocks`);
   let text = head[0] + (detail.length ? ` (${detail.join(', ')})` : '');
   if (s.resolution === null) {
-    text += ', a full factorial: every main effect and interaction is estimated on its own';
+    const blocked = s.blockWords.map((w) => formatWord(w, s.letters));
+    text += `, a full factorial: every main effect and interaction is estimated on its own${blocked.length ? ` except ${list(blocked)}, confounded with blocks` : ''}`;
   } else {
     const r = s.resolution;
     text += `, resolution ${romanResolution(r)}${s.folded ? ' (with its foldover)' : ''}: `;
@@ -75,7 +76,7 @@ export function designSummary(s: SummaryInput): string {
   text += '.';
   if (s.blockWords.length > 0) {
     const words = s.blockWords.map((w) => formatWord(w, s.letters));
-    text += ` Confounded with blocks: ${list(words)}${s.resolution === null ? '' : ' (with their aliases)'}.`;
+    if (s.resolution !== null) text += ` Confounded with blocks: ${list(words)} (with ${words.length === 1 ? 'its' : 'their'} aliases).`;
     const lowOrder = s.blockWords.filter((w) => termOrder(w) <= 2);
     if (lowOrder.length > 0) text += ` The two-factor interaction${lowOrder.length === 1 ? '' : 's'} ${list(lowOrder.map((w) => formatWord(w, s.letters)))} cannot be told from the block differences.`;
   }

@@ -214,7 +214,10 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
       ssModel += fit.seqSS[j];
       dfModel++;
       const name = labels[fit.kept[j]].name;
-      termRowsSeq.push(fRow(name, 1, fit.seqSS[j]));
+      if (fit.orthogonal && msRes !== null && msRes > 0) {
+        // Orthogonal columns: the one-df F is the square of the term's t, so its p is the t-test's.
+        termRowsSeq.push({ source: name, df: 1, ss: fit.seqSS[j], ms: fit.seqSS[j], f: fit.seqSS[j] / msRes, p: termEstimates[dfModel - 1].p });
+      } else termRowsSeq.push(fRow(name, 1, fit.seqSS[j]));
       termRowsAdj.push(fRow(name, 1, (fit.coef[j] * fit.coef[j]) / fit.covUnscaled[j * m + j]));
     }
   }

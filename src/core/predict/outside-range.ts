@@ -22,7 +22,11 @@ export interface OutsideSetting {
   readonly message: string;
 }
 
-/** True when a coded setting lies outside [-1, +1], beyond rounding (SETTING_TOLERANCE). */
+/**
+ * True when a coded setting lies outside the tested range [-1, +1], beyond rounding
+ * (SETTING_TOLERANCE, src/core/tolerance.ts). Cost O(1); NaN is not outside (callers check
+ * finiteness first). Example: isOutside(1.5) -> true; isOutside(-1) -> false.
+ */
 export function isOutside(coded: number): boolean {
   return Math.abs(coded) > 1 + SETTING_TOLERANCE;
 }

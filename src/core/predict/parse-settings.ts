@@ -37,7 +37,11 @@ export interface ParseSettingsOptions {
   readonly categoricalDefault?: (factor: CategoricalFactor, index: number) => -1 | 1 | undefined;
 }
 
-/** A real setting as text for messages: a number to 4 significant digits, or the label. */
+/**
+ * A real setting as text for messages: a number to 4 significant digits with its unit, or the
+ * label as it is (common practice for readable reports). Cost O(1).
+ * Example: formatSetting(157.0968, 'degF') -> '157.1 degF'; formatSetting('gloss') -> 'gloss'.
+ */
 export function formatSetting(value: number | string, unit?: string): string {
   if (typeof value === 'string') return value;
   const s = Number.isInteger(value) ? String(value) : String(Number(value.toPrecision(4)));

@@ -57,7 +57,12 @@ function fmtP(p: number): string {
   return p < 1e-4 ? '< 0.0001' : `= ${p.toFixed(4)}`;
 }
 
-/** The notes every model-based result shares: held factors, no residual df, blocks, curvature. */
+/**
+ * The notes a prediction from this model carries: no residual df (so no intervals), an average
+ * block, and significant curvature (p < alpha from the center runs; Montgomery, Design and
+ * Analysis of Experiments, 8th ed., section 6.8). Cost O(1).
+ * Example: modelNotes({ ...model, curvatureP: 0.2 }, 0.05) -> [] for an unblocked model with residual df.
+ */
 export function modelNotes(model: FittedModel, alpha: number): string[] {
   const out: string[] = [];
   if (model.dfResidual <= 0 || model.sigma === null) {
@@ -74,7 +79,11 @@ export function modelNotes(model: FittedModel, alpha: number): string[] {
   return out;
 }
 
-/** "Time was not given: held at its center, 35 min." for each numeric factor held at its center. */
+/**
+ * One note per numeric factor held at its center because it was not given. Cost O(k).
+ * Example: a setting { name: 'Time', real: 35, unit: 'min', source: 'center' } ->
+ * ['Time was not given: held at its center, 35 min.'].
+ */
 export function centerNotes(settings: readonly FactorSetting[]): string[] {
   return settings.filter((s) => s.source === 'center').map((s) => `${s.name} was not given: held at its center, ${formatSetting(s.real, s.unit)}.`);
 }
@@ -92,8 +101,11 @@ function termLabels(model: FittedModel): { name: string; letters: string }[] {
 }
 
 /**
- * Prediction at already resolved settings (see parseSettings). Same method as predict.
- * Throws InputError when the settings do not match the model's factors.
+ * Prediction at already resolved settings (see parseSettings), so that several responses can share
+ * one resolution. Same method, source and cost as predict.
+ * Throws InputError when the number of settings does not match the model's factors.
+ * Example: predictSettings(model, parseSettings(model.factors, { A: 40, B: 150 })).fit -> 40.89
+ * (Montgomery 8th ed., section 6.8 data).
  */
 export function predictSettings(model: FittedModel, settings: readonly FactorSetting[], options: PredictOptions = {}): Prediction {
   const level = options.level ?? 0.95;

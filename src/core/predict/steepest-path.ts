@@ -193,8 +193,8 @@ export function steepestPath(model: FittedModel, options: PathOptions): Steepest
   }
   const { halfRange: dBase } = centerAndHalfRange(base);
   const codedStep = (log ? Math.log(step) : step) / Math.abs(dBase);
-  const perUnit = codedStep / Math.abs(bBase);
-  const direction = factors.map((_, i) => (moving[i] ? sgn * mainCoef[i] * perUnit + 0 : 0));
+  // (b_i / |b_base|) first, so the base factor's step is exactly +-codedStep.
+  const direction = factors.map((_, i) => (moving[i] ? sgn * (mainCoef[i] / Math.abs(bBase)) * codedStep + 0 : 0));
   const realStep = factors.map((f, i) => {
     if (f.kind !== 'numeric' || !moving[i]) return 0;
     const { halfRange } = centerAndHalfRange(f);

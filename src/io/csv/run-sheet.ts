@@ -86,7 +86,7 @@ export function toCsv(table: Table): string {
     { fields: table.header.map((h) => String(neutraliseCell(h))), data: table.rows.map((r) => r.map(neutraliseCell)) },
     { newline: '\r\n', quotes: false, escapeFormulae: false },
   );
-  return text + '\r\n';
+  return text.endsWith('\r\n') ? text : text + '\r\n';
 }
 
 /** The run sheet of a design as CSV text. Example: runSheetCsv(design).split('\r\n')[0] -> "Run,Std order,Replicate,Block,Kind,...". */

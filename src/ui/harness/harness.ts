@@ -5,7 +5,6 @@
  * opens with a made-up next schema version whose upgrade throws. window.harness exposes the
  * store to the tests and the benchmark. All data here is invented.
  */
-import type { Dexie } from 'dexie';
 import { buildDesign } from '../../core/design/build-design.ts';
 import { parseRunForm, type RunForm } from '../../core/study/run-form.ts';
 import { studyPlan, type RunRevision, type StudyRecord } from '../../core/study/study.ts';
@@ -32,7 +31,7 @@ function problem(err: unknown) {
   if ((err as { offerExport?: boolean }).offerExport) $('export').hidden = false;
 }
 
-function throwingUpgrade(db: Dexie) {
+function throwingUpgrade(db: Parameters<typeof declareSchema>[0]) {
   declareSchema(db);
   db.version(SCHEMA_VERSION + 1)
     .stores({ runs: 'id, studyId, plannedRun' })
@@ -111,13 +110,17 @@ async function refreshCounts() {
   $('draft-count').textContent = String((await listDrafts(store, study.id)).length);
 }
 
+const taps = { saves: 0, duplicates: 0 };
+
 async function save(ev: Event) {
   ev.preventDefault();
   if (!form) return;
+  taps.saves++;
   $('save-state').textContent = 'Saving...';
   try {
     const values = parseRunForm(form.study, currentForm());
     const result = await saveRun(store, { ...form, studyId: form.study.id, values });
+    if (result.duplicate) taps.duplicates++;
     $('save-state').textContent = result.changedSince ? 'Saved (the run had changed since it was opened; both versions are kept)' : 'Saved';
     form = { ...form, current: result.run, parents: result.run.heads, revisionId: newId() };
     await refreshCounts();
@@ -207,6 +210,7 @@ $('export').addEventListener('click', async () => {
   },
   fill,
   timeSaves,
+  taps,
   counts: async () => ({ studies: await store.db.studies.count(), runs: await store.db.runs.count(), revisions: await store.db.revisions.count(), drafts: await store.db.drafts.count() }),
   persistence: () => persistenceAnswer(store),
   status: () => safetyStatus(store),

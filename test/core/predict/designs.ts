@@ -46,12 +46,14 @@ export function handModel(specs: FactorSpec[], terms: number[], coef: number[], 
 }
 
 /** Invented data (for tests only): a 2^2 in Temperature and Powder, twice. */
+let glossPath: string | null = null;
 export function glossFile(): string {
+  if (glossPath) return glossPath;
   const dir = mkdtempSync(join(tmpdir(), 'trialbook-predict-'));
   const file = join(dir, 'gloss-invented.csv');
   writeFileSync(
     file,
     ['Temperature (degC),Powder,Gloss', '160,matte,61', '200,matte,70', '160,gloss,66', '200,gloss,79', '160,matte,62', '200,matte,71', '160,gloss,65', '200,gloss,80'].join('\n'),
   );
-  return file;
+  return (glossPath = file);
 }

@@ -15,7 +15,7 @@ describe('steepestPath: the worked example of Montgomery 8th ed., section 11.2 (
   // yhat = 40.44 + 0.775 x1 + 0.325 x2, x1 = (time - 35) / 5, x2 = (temperature - 155) / 5; base time, 5 min per step
   const p = steepestPath(yieldModel, { base: 'Time', step: 5, steps: 12 });
 
-  it('Delta x1 = 1, Delta x2 = 0.325 / 0.775 = 0.42, i.e. about 2 degF per step (printed, rounded to 2)', () => {
+  it('Delta x1 = 1, Delta x2 = 0.325 / 0.775 = 0.42, i.e. about 2 degF per step (the printed path rounds to 2)', () => {
     expect(p.direction[0]).toBeCloseTo(1, 12);
     expect(p.direction[1]).toBeCloseTo(0.325 / 0.775, 12);
     expect(p.direction[1]).toBeCloseTo(0.42, 2);
@@ -28,7 +28,7 @@ describe('steepestPath: the worked example of Montgomery 8th ed., section 11.2 (
     expect(p.steps[0].real).toEqual([35, 155]);
     expect(p.steps[1].real[0]).toBeCloseTo(40, 12);
     expect(p.steps[1].real[1]).toBeCloseTo(155 + (5 * 0.325) / 0.775, 10);
-    expect(p.steps[12].real[0]).toBeCloseTo(95, 10); // the printed path's last time, 12 steps of 5 min
+    expect(p.steps[12].real[0]).toBeCloseTo(95, 10); // 35 + 12 x 5; the printed path ends at 95 min (from memory)
     expect(p.steps).toHaveLength(13);
   });
 

@@ -110,7 +110,7 @@ describe('trialbook-backup.schema.json', () => {
       ['a bad id', (d) => (d.payload.revisions[0].id = 'has space')],
       ['an unknown goal', (d) => (d.payload.studies[0].responses[0].goal = 'best')],
       ['a letter I', (d) => (d.payload.studies[0].factors[0].letter = 'I')],
-      ['a third level', (d) => (d.payload.studies[1].factors[1].levels.push('x'))],
+      ['a third level', (d) => d.payload.studies.flatMap((s: { factors: { levels?: string[] }[] }) => s.factors).find((f: { levels?: string[] }) => f.levels)!.levels!.push('x')],
     ];
     for (const [what, change] of broken) {
       const d = structuredClone(doc);

@@ -1,0 +1,128 @@
+import { describe, expect, it } from 'vitest';
+import { execFileSync, spawnSync } from 'node:child_process';
+import { design, parseFactorOption } from '../../src/cli/commands/design.ts';
+import { InputError } from '../../src/core/errors.ts';
+
+const SEVEN = ['Temperature (degC)=160:200', 'Powder=matte:gloss', 'Time (min)=10:20', 'Pressure (bar)=2:4', 'Speed (rpm)=100:400', 'Humidity (%)=30:60', 'Line=north:south'].flatMap((f) => [
+  '--factor',
+  f,
+]);
+
+async function json(args: string[]): Promise<any> {
+  return JSON.parse(await design.run([...args, '--json']));
+}
+
+describe('design command: JSON', () => {
+  it('plans the 2^(7-3) with the keys the issue names', async () => {
+    const d = await json([...SEVEN, '--fraction', '1/8', '--seed', '7']);
+    expect(Object.keys(d)).toEqual(expect.arrayContaining(['factors', 'runs', 'generators', 'definingRelation', 'resolution', 'wordLengths', 'aliases', 'blockWords', 'seed']));
+    expect(d.factors[0]).toEqual({ letter: 'A', name: 'Temperature', kind: 'numeric', low: 160, high: 200, unit: 'degC' });
+    expect(d.factors[1]).toEqual({ letter: 'B', name: 'Powder', kind: 'categorical', low: 'matte', high: 'gloss' });
+    expect(d.generators).toEqual(['E=ABC', 'F=ABD', 'G=ACD']);
+    expect(d.resolution).toBe(4);
+    expect(d.wordLengths).toEqual({ 4: 7 });
+    expect(d.aliases).toContainEqual(['AB', 'CE', 'DF']);
+    expect(d.seed).toBe(7);
+    expect(d.runs).toHaveLength(16);
+    const r = d.runs[0];
+    expect(Object.keys(r)).toEqual(['run', 'yates', 'replicate', 'block', 'kind', 'coded', 'real']);
+    expect(r.run).toBe(1);
+    expect(Object.keys(r.coded)).toEqual(['Temperature', 'Powder', 'Time', 'Pressure', 'Speed', 'Humidity', 'Line']);
+    expect(r.real.Powder === 'matte' || r.real.Powder === 'gloss').toBe(true);
+  });
+
+  it('gives the same order for the same seed, and a recorded seed when none is given', async () => {
+    const a = await json([...SEVEN, '--fraction', '1/8', '--seed', '123']);
+    const b = await json([...SEVEN, '--fraction', '1/8', '--seed', '123']);
+    expect(a.runs).toEqual(b.runs);
+    const c = await json([...SEVEN, '--fraction', '1/8']);
+    expect(Number.isInteger(c.seed)).toBe(true);
+  });
+
+  it('takes typed generators with signs, blocks with words, center runs, replicates, foldover, standard order', async () => {
+    const d = await json([
+      '--factor', 'A=1:2', '--factor', 'B=1:2', '--factor', 'C=1:2', '--factor', 'D=1:2', '--factor', 'E=1:2', '--factor', 'F=1:2',
+      '--generators', 'E=ABC,F=-BCD', '--blocks', '2', '--block-words', 'ABD', '--center-runs', '2', '--replicates', '2', '--standard-order',
+    ]);
+    expect(d.definingRelation).toEqual(['ABCE', '-ADEF', '-BCDF']);
+    expect(d.blockWords).toEqual(['ABD']);
+    expect(d.seed).toBeNull();
+    expect(d.runs).toHaveLength(2 * (16 + 2));
+    expect(d.runs.filter((r: any) => r.kind === 'center').every((r: any) => r.yates === null && r.real.A === 1.5)).toBe(true);
+    expect(new Set(d.runs.map((r: any) => r.block))).toEqual(new Set([1, 2, 3, 4]));
+    const f = await json(['--factor', 'A=1:2', '--factor', 'B=1:2', '--factor', 'C=1:2', '--fraction', '1/2', '--foldover', '--seed', '1']).catch((e) => e);
+    expect(f).toBeInstanceOf(InputError); // a 4-run fraction is outside the catalogue
+    const g = await json(['--factor', 'A=1:2', '--factor', 'B=1:2', '--factor', 'C=1:2', '--factor', 'D=1:2', '--factor', 'E=1:2', '--fraction', '1/4', '--foldover', 'A', '--seed', '1']);
+    expect(g.runs).toHaveLength(16);
+    expect(g.definingRelation.every((w: string) => !w.includes('A'))).toBe(true);
+  });
+});
+
+describe('design command: CSV and text', () => {
+  it('writes the run sheet with the planned-settings columns', async () => {
+    const csv = await design.run([...SEVEN, '--fraction', '1/8', '--seed', '7', '--csv']);
+    expect(csv.split('\r\n')[0]).toBe(
+      'Run,Std order,Replicate,Block,Kind,Temperature (degC) planned,Powder planned,Time (min) planned,Pressure (bar) planned,Speed (rpm) planned,Humidity (%) planned,Line planned',
+    );
+    expect(csv.split('\r\n')).toHaveLength(18);
+  });
+
+  it('prints the plan in plain words with the summary first', async () => {
+    const text = await design.run(['--factor', 'Temperature (degC)=160:200', '--factor', 'Time=10:20', '--factor', 'Speed=1:2', '--factor', 'Feed=3:4', '--blocks', '2', '--seed', '7']);
+    expect(text).toMatch(/^Plan: 2\^4 full factorial, 16 runs\n\n16 runs \(2 blocks\), a full factorial: every main effect and interaction is estimated on its own except ABCD, confounded with blocks\./);
+    expect(text).toMatch(/Blocks +2; confounded with blocks: ABCD/);
+    expect(text).toMatch(/seed 7 \(PCG32 and a Fisher-Yates shuffle\)/);
+  });
+
+  it('warns when a hard-to-change factor is kept sorted', async () => {
+    const text = await design.run(['--factor', 'Oven=160:200', '--factor', 'Time=10:20', '--factor', 'Speed=1:2', '--sort-by', 'Oven', '--seed', '2']);
+    expect(text).toMatch(/Oven is kept sorted .* split-plot/);
+  });
+});
+
+describe('design command: bad input', () => {
+  const bad = async (args: string[], message: RegExp) => {
+    await expect(design.run(args)).rejects.toThrow(message);
+    await expect(design.run(args)).rejects.toBeInstanceOf(InputError);
+  };
+  it('refuses with clear messages', async () => {
+    await bad([], /at least two --factor/);
+    await bad(['--factor', 'T=5:5', '--factor', 'U=1:2'], /T needs two different levels, got 5 and 5/);
+    await bad(['--factor', 'T=1:2', '--factor', 't=1:2'], /got "t" twice/);
+    await bad([...SEVEN, '--generators', 'D=AB,E=AC,F=BC,G=ABC,H=AB'], /unknown factor "H"|generators for 7 factors/);
+    await bad([...SEVEN, '--generators', 'E=ABC,F=ABC'], /dependent/);
+    await bad([...SEVEN, '--replicates', '100'], /over the limit of 1024 runs/);
+    await bad([...SEVEN, '--fraction', '1/8', '--generators', 'E=ABC'], /not both/);
+    await bad([...SEVEN, '--json', '--csv'], /--json or --csv/);
+    await bad([...SEVEN, '--seed', '1', '--standard-order'], /only applies to a randomised order/);
+    await bad([...SEVEN, '--block-words', 'ABC'], /--block-words needs --blocks/);
+    await bad([...SEVEN, '--seed', 'seven'], /--seed needs a whole number/);
+    await bad([...SEVEN, '--bogus'], /Unknown option/);
+    await bad([...SEVEN, 'extra'], /options only/);
+  });
+});
+
+describe('parseFactorOption', () => {
+  it('reads numeric factors with units and log scales, and categorical factors', () => {
+    expect(parseFactorOption('Temperature (degC)=160:200')).toEqual({ kind: 'numeric', name: 'Temperature', low: 160, high: 200, unit: 'degC' });
+    expect(parseFactorOption('Speed (rpm)=100:1000:log')).toEqual({ kind: 'numeric', name: 'Speed', low: 100, high: 1000, unit: 'rpm', scale: 'log' });
+    expect(parseFactorOption('Powder=matte:gloss')).toEqual({ kind: 'categorical', name: 'Powder', levels: ['matte', 'gloss'] });
+  });
+  it('refuses malformed factors (degenerate input)', () => {
+    expect(() => parseFactorOption('')).toThrow(/expected NAME=LOW:HIGH/);
+    expect(() => parseFactorOption('T=1')).toThrow(/two levels separated by ":"/);
+    expect(() => parseFactorOption('T (degC)=a:b')).toThrow(/a unit needs numeric levels/);
+    expect(() => parseFactorOption('T=a:b:log')).toThrow(/log scale needs numeric levels/);
+    expect(() => parseFactorOption(' (degC)=1:2')).toThrow(/needs a name/);
+  });
+});
+
+describe('the registered command', () => {
+  it('runs through the command line with exit code 0, and 2 with a message on stderr', () => {
+    const out = execFileSync('npx', ['tsx', 'src/cli/main.ts', 'design', '--factor', 'A=1:2', '--factor', 'B=1:2', '--seed', '1'], { encoding: 'utf8' });
+    expect(out).toMatch(/^Plan: 2\^2 full factorial, 4 runs/);
+    const bad = spawnSync('npx', ['tsx', 'src/cli/main.ts', 'design', '--factor', 'A=1:2'], { encoding: 'utf8' });
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).toMatch(/trialbook design: A factorial design needs at least 2 factors, got 1/);
+  }, 30_000);
+});
