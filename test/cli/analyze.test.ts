@@ -61,5 +61,5 @@ describe('analyze command', () => {
     expect(bad.status).toBe(2);
     expect(bad.stderr).toMatch(/trialbook analyze: The response column "Nope" is not in the file/);
     expect(bad.stdout).toBe('');
-  }, 30_000);
+  }, 60_000);
 });
