@@ -9,6 +9,8 @@ import type { Term } from '../core/model/term.ts';
 import type { ResponseData } from '../core/study/response-data.ts';
 import { readTable } from '../io/csv/read-table.ts';
 import { tableResponseData } from '../io/csv/table-response-data.ts';
+import { exportedCsvLayout, exportedCsvResponseData } from '../io/csv/exported-csv.ts';
+import { backupResponseData } from '../io/backup/select-study.ts';
 import { parseAssignments, type OptionSpec } from './args.ts';
 
 export const modelOptionSpec = {
@@ -31,6 +33,10 @@ export const modelOptionUsage = `  FILE                 a CSV with a header row 
   --terms "A*B*C"      model terms in Wilkinson-Rogers notation (A + B + A:B, A*B*C, (A+B+C)^2)
   --order N            or: all terms up to order N (default: main effects and two-factor interactions)
   --block COLUMN       a column holding each run's block, fitted as a fixed effect
+  --study ID-OR-NAME   with a Trialbook backup (.json): the study to analyse; its own factors,
+                       coding and blocks are used. A Trialbook CSV export needs no --factors:
+                       its actual settings and coding are read from its columns; excluded runs
+                       are skipped and the report says how many
   --json               one JSON object on stdout instead of the report`;
 
 type Values = { [K in keyof typeof modelOptionSpec]?: (typeof modelOptionSpec)[K]['type'] extends 'boolean' ? boolean : string };
@@ -53,20 +59,31 @@ export function loadModelInput(positionals: string[], values: Values): ModelInpu
   const [path] = positionals;
   if (!values.response) throw new InputError('Name the response with --response NAME');
   const text = readFile(path);
+  const factors = values.factors?.split(',').map((f) => f.trim()).filter((f) => f !== '');
+  let data: ResponseData;
   if (/\.json$/i.test(path) || /^\s*\{/.test(text)) {
-    throw new InputError('Reading backups is not available in this version; export the study as CSV');
-  }
-  if (!values.factors) throw new InputError('Name the factor columns with --factors A,B,C');
-  const levels: Record<string, [string, string]> = {};
-  if (values.levels) {
-    for (const [name, range] of parseAssignments(values.levels, '--levels')) {
-      const parts = range.split(':');
-      if (parts.length !== 2 || parts.some((p) => p.trim() === '')) throw new InputError(`--levels: expected ${name}=low:high, got "${name}=${range}"`);
-      levels[name] = [parts[0].trim(), parts[1].trim()];
+    // A Trialbook backup: the study's own factors and coding.
+    if (!values.study) throw new InputError('A backup can hold several studies: name one with --study ID-OR-NAME');
+    if (values.levels) throw new InputError('A backup carries its own coding: leave out --levels');
+    data = backupResponseData(text, values.study, values.response);
+  } else {
+    const table = readTable(text);
+    if (exportedCsvLayout(table) && !values.levels) {
+      // A Trialbook CSV export: actual settings, coding recovered from its coded columns.
+      data = exportedCsvResponseData(text, values.response, factors);
+    } else {
+      if (!factors || factors.length === 0) throw new InputError('Name the factor columns with --factors A,B,C');
+      const levels: Record<string, [string, string]> = {};
+      if (values.levels) {
+        for (const [name, range] of parseAssignments(values.levels, '--levels')) {
+          const parts = range.split(':');
+          if (parts.length !== 2 || parts.some((p) => p.trim() === '')) throw new InputError(`--levels: expected ${name}=low:high, got "${name}=${range}"`);
+          levels[name] = [parts[0].trim(), parts[1].trim()];
+        }
+      }
+      data = tableResponseData(table, { factors, response: values.response, levels, ...(values.block ? { block: values.block } : {}) });
     }
   }
-  const factors = values.factors.split(',').map((f) => f.trim()).filter((f) => f !== '');
-  const data = tableResponseData(readTable(text), { factors, response: values.response, levels, ...(values.block ? { block: values.block } : {}) });
   return { data, terms: modelTerms(data, values) };
 }
 

@@ -46,6 +46,25 @@ describe('analyze command', () => {
     expect(out.coding.Gap).toMatchObject({ low: 1.2, high: 0.8 });
   });
 
+  it('reads a Trialbook backup and the CSV the app exports, skipping excluded runs (invented demo data)', async () => {
+    const backup = fixturePath('trialbook-demo-backup.json');
+    const study = 'Invented demo: powder-coating cure trial';
+    const fromBackup = JSON.parse(await analyze.run([backup, '--study', study, '--response', 'Gloss', '--json']));
+    expect(fromBackup.warnings.join(' ')).toMatch(/1 excluded run skipped/);
+    const { csv } = await import('../../src/cli/commands/csv.ts');
+    const { writeFileSync, mkdtempSync } = await import('node:fs');
+    const { join } = await import('node:path');
+    const { tmpdir } = await import('node:os');
+    const file = join(mkdtempSync(join(tmpdir(), 'trialbook-')), 'export.csv');
+    writeFileSync(file, await csv.run([backup, '--study', study]));
+    const fromCsv = JSON.parse(await analyze.run([file, '--response', 'Gloss', '--json']));
+    // the same runs, the same coding, so the same fit
+    expect(fromCsv.n).toBe(fromBackup.n);
+    expect(fromCsv.coding).toEqual(fromBackup.coding);
+    fromCsv.terms.forEach((t: { coef: number }, i: number) => expect(t.coef).toBeCloseTo(fromBackup.terms[i].coef, 10));
+    await expect(analyze.run([backup, '--response', 'Gloss'])).rejects.toThrow(/--study/);
+  });
+
   it('bad input: clear messages', async () => {
     await expect(analyze.run([etch, '--factors', 'Gap,Pressure', '--response', 'Etch rate'])).rejects.toThrow(/"Pressure" is not in the file/);
     await expect(analyze.run([etch, '--factors', 'Gap', '--response', 'Etch rate', '--terms', 'A', '--order', '2'])).rejects.toThrow(/either --terms or --order/);

@@ -74,14 +74,15 @@ function known(factors: readonly Factor[]): string {
  * Throws InputError for an empty word, an unknown letter or name, or a factor named twice.
  * Example: parseWord('-ABC', factors) -> {mask:0b111, sign:-1}.
  */
-export function parseWord(text: string, factors: readonly Factor[], what = 'Word'): Word {
+export function parseWord(text: string, factors: readonly Factor[], label?: string): Word {
+  const what = label ?? `Word "${text}"`;
   let s = text.trim();
   let sign: 1 | -1 = 1;
   if (s.startsWith('-') || s.startsWith('+')) {
     if (s[0] === '-') sign = -1;
     s = s.slice(1).trim();
   }
-  if (s === '') throw new InputError(`${what} "${text}": a word of factor letters is needed, such as ABCD, got nothing`);
+  if (s === '') throw new InputError(`${what}: a word of factor letters is needed, such as ABCD, got nothing`);
   if (s === 'I' || s === 'i') {
     if (!factors.some((f) => f.letter === 'I')) return { mask: 0, sign };
   }
@@ -95,10 +96,10 @@ export function parseWord(text: string, factors: readonly Factor[], what = 'Word
   }
   let mask = 0;
   for (const part of parts) {
-    if (part === '') throw new InputError(`${what} "${text}": an empty factor name between ':'`);
+    if (part === '') throw new InputError(`${what}: an empty factor name between ':'`);
     const idx = lookupFactor(part, factors);
-    if (idx < 0) throw new InputError(`${what} "${text}": unknown factor "${part}" (factors: ${known(factors)})`);
-    if ((mask >> idx) & 1) throw new InputError(`${what} "${text}": ${factors[idx].letter} (${factors[idx].name}) appears twice`);
+    if (idx < 0) throw new InputError(`${what}: unknown factor "${part}" (factors: ${known(factors)})`);
+    if ((mask >> idx) & 1) throw new InputError(`${what}: ${factors[idx].letter} (${factors[idx].name}) appears twice`);
     mask |= 1 << idx;
   }
   return { mask, sign };

@@ -94,7 +94,10 @@ export function fUpperP(f: number, d1: number, d2: number): number {
  * in ln rho (incompleteBetaInverseOdds), started from Abramowitz & Stegun 26.5.22 or the
  * power-law tails; then f = (d2/d1) rho. Far tails (odds beyond e^600) come from the first term
  * of the tail series, which is exact to rounding there.
- * Accuracy: about 1e-14 relative for degrees of freedom from 0.5 to 1e7.
+ * Accuracy (measured against 50-digit references): within 5e-14 relative for degrees of freedom
+ * from 0.5 to 1e7 and p from 1e-30 to 1 - 1e-8; where both df are huge the F tail is steep and
+ * the limit is ~1e-14 times |d ln P / d ln f|. Tails so small that f leaves the normal doubles
+ * come back as 0 or Infinity (or with the few digits a subnormal number holds).
  * Cost: typically 3 to 6 incomplete beta evaluations; no allocation.
  * Throws InputError unless 0 < p < 1 and d1, d2 are finite numbers > 0.
  * Example: fQuantile(0.95, 1, 8) -> 5.31765507157871; fQuantile(0.99, 2, 20) -> 5.84893192461113; fQuantile(0.5, 2, 2) -> 1.

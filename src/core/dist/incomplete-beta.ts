@@ -229,11 +229,12 @@ function startingOdds(target: number, a: number, b: number, upper: boolean): num
   const tb = Math.exp(b * Math.log(b / n)) / b;
   const w = ta + tb;
   const lowerP = upper ? 1 - target : target;
+  const upperP = upper ? target : 1 - target;
   if (lowerP < ta / w) {
-    const x = Math.pow(a * w * (upper ? 1 - target : target), 1 / a);
+    const x = Math.pow(a * w * lowerP, 1 / a);
     return x / (1 - x);
   }
-  const y = Math.pow(b * w * (upper ? target : 1 - target), 1 / b);
+  const y = Math.pow(b * w * upperP, 1 / b);
   return (1 - y) / y;
 }
 

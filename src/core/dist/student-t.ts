@@ -47,7 +47,7 @@ function twoSided(at: number, df: number): number {
  * Method: I_x(df/2, 1/2) with x = df/(df + t^2) and 1 - x = t^2/(df + t^2) both formed as
  * ratios (Abramowitz & Stegun 26.7.1 with 26.5.27), by the incomplete beta continued fraction
  * (Numerical Recipes 3rd ed. section 6.4). No 1 - cdf anywhere, so p-values like 1e-15 or 1e-200
- * keep about 14 correct digits; beyond |t| ~ 1e125 sqrt(df) the first term of the tail series is
+ * keep about 14 correct digits; beyond |t| ~ 2e130 sqrt(df) the first term of the tail series is
  * used in logarithms.
  * Cost: one incomplete beta evaluation (a few microseconds at most); no allocation.
  * Throws InputError when t is NaN or df is not a finite number > 0. t = +-Infinity gives 0.
@@ -87,7 +87,9 @@ export function tCdf(t: number, df: number): number {
  * 1970, Algorithm 396), else the Cornish-Fisher expansion in the normal quantile
  * (Abramowitz & Stegun 26.7.5, terms to df^-3). Far tails (t^2/df > e^600) come from the
  * asymptote directly, where it is exact to rounding.
- * Accuracy: about 1e-14 relative for df from 0.5 to 1e7 and p down to 1e-300.
+ * Accuracy (measured against 50-digit references): within 7e-14 relative for df from 0.5 to 1e7
+ * and p from 1e-100 to 1 - 1e-10. With df < 1 and a tiny p the quantile, about p^(-1/df), can
+ * pass the largest double; it is then returned as -Infinity (or +Infinity).
  * Cost: typically 3 to 5 incomplete beta evaluations; no allocation.
  * Throws InputError unless 0 < p < 1 and df is a finite number > 0.
  * Example: tQuantile(0.975, 10) -> 2.22813885198627; tQuantile(0.75, 1) -> 1 (Cauchy quartile, to 1e-15).
