@@ -17,7 +17,7 @@ export function predictionJson(p: Prediction) {
     ci: p.ci,
     pi: p.pi,
     baseline: p.baseline,
-    contributions: p.contributions.map((c) => ({ term: c.name, letters: c.letters, value: c.value })),
+    contributions: p.contributions.map((c) => ({ term: c.name, letters: c.letters, ...(c.estimates ? { estimates: c.estimates } : {}), value: c.value })),
     outside: p.outside,
     outsideFactors: p.outsideFactors.map((o) => ({ factor: o.name, real: o.real, coded: o.coded, beyond: o.beyond, end: o.end })),
     messages: p.messages,

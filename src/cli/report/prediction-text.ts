@@ -26,7 +26,7 @@ export function predictionText(p: Prediction): string {
   out.push('How the fitted value is made up (coefficient x product of coded settings, largest first)');
   const rows = [
     ['baseline (fit at the center)', '', '', num(p.baseline)],
-    ...p.contributions.map((c) => [`${c.letters}  ${c.name}`, num(c.coef), signedNum(c.product), signedNum(c.value)]),
+    ...p.contributions.map((c) => [`${c.estimates ?? c.letters}  ${c.name}`, num(c.coef), signedNum(c.product), signedNum(c.value)]),
     ['fitted value', '', '', num(p.fit)],
   ];
   out.push(

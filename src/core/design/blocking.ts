@@ -235,6 +235,9 @@ export function defaultBlocking(k: number, relation: readonly Word[], basic: rea
     }
     for (let i = start; i < candidates.length; i++) {
       const c = candidates[i];
+      // Candidates come in increasing order of their own counts, and adding counts keeps the
+      // order of patterns; once a candidate's own counts overshoot, every later one does too.
+      if (best && comparePatterns(pattern.map((v, j) => v + classPattern[c][j]), best) > 0) break;
       const n = span.length;
       const added = [c, ...span.map((x) => x ^ c)];
       if (added.some((x) => hasMain[x])) continue;

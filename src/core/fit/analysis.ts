@@ -87,6 +87,8 @@ export interface FittedModel {
   readonly response: string;
   /** Estimable terms, in model order; the intercept is not among them. */
   readonly terms: readonly Term[];
+  /** Per term: the combination its estimate carries when the runs cannot separate it ("C + AB"), else null. */
+  readonly estimates: readonly (string | null)[];
   /** Coefficients: intercept, then one per block contrast, then one per term. */
   readonly coef: Float64Array;
   /** Number of block-contrast columns after the intercept (0 when unblocked). */

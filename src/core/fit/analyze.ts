@@ -348,6 +348,7 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     factors,
     response: data.response,
     terms: termEstimates.map((t) => t.term),
+    estimates: termEstimates.map((t) => t.estimates ?? null),
     coef: fit.coef,
     blockColumns: dfBlocks,
     covUnscaled: fit.covUnscaled,

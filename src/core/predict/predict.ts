@@ -16,6 +16,8 @@ export interface Contribution {
   readonly term: Term;
   readonly name: string;
   readonly letters: string;
+  /** When the runs cannot separate this term from others: the combination it stands for ("C + AB"). */
+  readonly estimates?: string;
   readonly coef: number;
   /** Product of the term's coded settings. */
   readonly product: number;
@@ -88,13 +90,18 @@ export function centerNotes(settings: readonly FactorSetting[]): string[] {
   return settings.filter((s) => s.source === 'center').map((s) => `${s.name} was not given: held at its center, ${formatSetting(s.real, s.unit)}.`);
 }
 
-const labelCache = new WeakMap<FittedModel, { name: string; letters: string }[]>();
+type TermLabel = { name: string; letters: string; estimates?: string };
+const labelCache = new WeakMap<FittedModel, TermLabel[]>();
 
 /** Term names and letters of a model, built once per model object. */
-function termLabels(model: FittedModel): { name: string; letters: string }[] {
+function termLabels(model: FittedModel): TermLabel[] {
   let labels = labelCache.get(model);
   if (!labels) {
-    labels = model.terms.map((t) => ({ name: termName(t, model.factors), letters: termLetters(t, model.factors) }));
+    labels = model.terms.map((t, j) => ({
+      name: termName(t, model.factors),
+      letters: termLetters(t, model.factors),
+      ...(model.estimates?.[j] ? { estimates: model.estimates[j]! } : {}),
+    }));
     labelCache.set(model, labels);
   }
   return labels;
@@ -120,7 +127,7 @@ export function predictSettings(model: FittedModel, settings: readonly FactorSet
   const contributions: Contribution[] = model.terms.map((t, j) => {
     const coef = model.coef[1 + nb + j];
     const product = termValue(t, x);
-    return { term: t, name: labels[j].name, letters: labels[j].letters, coef, product, value: coef * product + 0 };
+    return { term: t, name: labels[j].name, letters: labels[j].letters, ...(labels[j].estimates ? { estimates: labels[j].estimates } : {}), coef, product, value: coef * product + 0 };
   });
   contributions.sort((a, b) => Math.abs(b.value) - Math.abs(a.value));
   const baseline = model.coef[0];

@@ -1,3 +1,5 @@
+// Abramowitz & Stegun (A&S) and Numerical Recipes equation and section numbers are quoted from memory;
+// printed table values are marked where they could not be checked against a printed copy.
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import jStat from 'jstat';

@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { InputError } from '../../../src/core/errors.ts';
 import { analyze } from '../../../src/core/fit/analyze.ts';
-import { termsUpToOrder } from '../../../src/core/model/formula.ts';
+import { parseTerms, termsUpToOrder } from '../../../src/core/model/formula.ts';
+import { defineFactors } from '../../../src/core/factor/factor.ts';
 import { CAUTION } from '../../../src/core/predict/caution.ts';
 import { centerNotes, modelNotes, predict, predictSettings } from '../../../src/core/predict/predict.ts';
 import { parseSettings } from '../../../src/core/predict/parse-settings.ts';
@@ -160,5 +161,24 @@ describe('predict: residual df 0, blocks and curvature notes', () => {
   it('degenerate: predictSettings refuses settings that do not match the model', () => {
     expect(() => predictSettings(yieldModel, [])).toThrow(InputError);
     expect(() => predictSettings(yieldModel, [])).toThrow(/one setting per factor \(2\), got 0/);
+  });
+});
+
+describe('predict: a term the runs cannot separate is labelled with what it estimates', () => {
+  it('C carries C + AB in a half fraction with C = AB (defining relation I = ABC; Montgomery 8th ed., section 8.2)', () => {
+    const factors = defineFactors([
+      { kind: 'numeric', name: 'Speed', low: 10, high: 20 },
+      { kind: 'numeric', name: 'Feed', low: 1, high: 2 },
+      { kind: 'numeric', name: 'Depth', low: 0.5, high: 1 },
+    ]);
+    const coded = [[-1, -1, 1], [1, -1, -1], [-1, 1, -1], [1, 1, 1], [0, 0, 0]];
+    const a = analyze(
+      { factors, response: 'Finish', coded, y: [10, 14, 11, 19, 13], blocks: null, labels: ['1', '2', '3', '4', '5'], notes: [] },
+      { terms: parseTerms('A + B + C + A:B', factors) },
+    );
+    const p = predict(a.model, { Speed: 20, Feed: 2, Depth: 1 });
+    expect(p.contributions.find((c) => c.letters === 'C')!.estimates).toBe('C + AB');
+    // the fitted value at a run of the fraction is that run's fitted value from the analysis
+    expect(p.fit).toBeCloseTo(a.runs[3].fitted, 10);
   });
 });
