@@ -225,6 +225,13 @@ export function defaultBlocking(k: number, relation: readonly Word[], basic: rea
   const chosen: number[] = [];
   const span: number[] = [];
   const pattern = new Array<number>(k + 1).fill(0);
+  // Lower bound: every alias set still to come counts at least as much as the smallest one (mu),
+  // and sums keep the lexicographic order, so a partial choice whose bound reaches the best
+  // found cannot lead to a better one.
+  const mu = candidates.length > 0 ? classPattern[candidates[0]] : new Array<number>(k + 1).fill(0);
+  const total = 2 ** q - 1;
+  const bound = (extra: readonly number[] | null, classesLeft: number): number[] =>
+    pattern.map((v, j) => v + (extra ? extra[j] : 0) + classesLeft * mu[j]);
   const visit = (start: number): void => {
     if (chosen.length === q) {
       if (!best || comparePatterns(pattern, best) < 0) {
@@ -235,16 +242,16 @@ export function defaultBlocking(k: number, relation: readonly Word[], basic: rea
     }
     for (let i = start; i < candidates.length; i++) {
       const c = candidates[i];
-      // Candidates come in increasing order of their own counts, and adding counts keeps the
-      // order of patterns; once a candidate's own counts overshoot, every later one does too.
-      if (best && comparePatterns(pattern.map((v, j) => v + classPattern[c][j]), best) > 0) break;
+      // Candidates come in increasing order of their own counts: once the bound with this one
+      // reaches the best, it does for every later one too.
+      if (best && comparePatterns(bound(classPattern[c], total - span.length - 1), best) >= 0) break;
       const n = span.length;
       const added = [c, ...span.map((x) => x ^ c)];
       if (added.some((x) => hasMain[x])) continue;
       span.push(...added);
       for (const x of added) classPattern[x].forEach((v, j) => (pattern[j] += v));
       chosen.push(c);
-      if (!best || comparePatterns(pattern, best) <= 0) visit(i + 1);
+      if (!best || comparePatterns(bound(null, total - span.length), best) < 0) visit(i + 1);
       chosen.pop();
       for (const x of added) classPattern[x].forEach((v, j) => (pattern[j] -= v));
       span.length = n;
