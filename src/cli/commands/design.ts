@@ -2,7 +2,8 @@
  * `design`: plans a two-level experiment and prints it as text (default), JSON (--json) or the
  * CSV run sheet (--csv).
  */
-import { defaultAliasOrder } from '../../core/design/alias-structure.ts';
+import { aliasChain, defaultAliasOrder, definingWordsOf } from '../../core/design/alias-structure.ts';
+import { formatWord, parseLetterWord } from '../../core/design/word.ts';
 import { buildDesign, type DesignSpec } from '../../core/design/build-design.ts';
 import type { Design } from '../../core/design/design.ts';
 import { romanResolution } from '../../core/design/defining-relation.ts';
@@ -108,7 +109,13 @@ function splitList(text: string | undefined): string[] | undefined {
   return text.split(',').map((s) => s.trim()).filter((s) => s !== '');
 }
 
-/** Reads the command line into a design spec and output format. */
+/**
+ * Reads the command line into a design spec and output format. A bare --foldover means the
+ * mirror image. Throws InputError for unknown options, positional words, no --factor, both
+ * --json and --csv, --block-words without --blocks, --seed with --standard-order, or a count that
+ * is not a whole number.
+ * Example: parseDesignArgs(['--factor','A=1:2','--factor','B=1:2','--json']).format -> 'json'.
+ */
 export function parseDesignArgs(argv: string[]): { spec: DesignSpec; format: 'text' | 'json' | 'csv' } {
   const args = argv.map((a, i) => (a === '--foldover' && (i + 1 >= argv.length || argv[i + 1].startsWith('--')) ? `--foldover=${FOLD_ALL}` : a));
   const { values, positionals } = parseCommandArgs(args, OPTIONS);
@@ -140,7 +147,12 @@ export function parseDesignArgs(argv: string[]): { spec: DesignSpec; format: 'te
   return { spec, format: values.json ? 'json' : values.csv ? 'csv' : 'text' };
 }
 
-/** The plan as the JSON object the command prints. */
+/**
+ * The plan as the JSON object the command prints: factors (letter, name, kind, low, high, unit),
+ * runs in run order with coded and real settings keyed by factor name, and the design's
+ * generators, defining relation, resolution, word lengths, aliases, block words, seed, summary
+ * and notes. Example: designJson(d).runs[0].run -> 1.
+ */
 export function designJson(d: Design): object {
   return {
     factors: d.factors.map((f) =>
@@ -176,7 +188,12 @@ function table(header: string[], rows: string[][], rightAlign: boolean[]): strin
   return [line(header), ...rows.map(line)];
 }
 
-/** The plan in our plain-words text layout. */
+/**
+ * The plan in our plain-words text layout: a title, the summary, the factors, the design's
+ * facts (generators, defining relation, resolution, word lengths, blocks, run order), the alias
+ * chains, the runs with planned settings in real units, and the notes.
+ * Example: designText(d).split('\n')[0] -> "Plan: 2^(7-3) fractional factorial, 16 runs".
+ */
 export function designText(d: Design): string {
   const k = d.factors.length;
   const p = d.generators.length;
@@ -206,17 +223,23 @@ export function designText(d: Design): string {
     facts.push(['Defining relation', 'none (full factorial)']);
   }
   const blocks = new Set(d.runs.map((r) => r.block)).size;
-  facts.push(['Blocks', blocks > 1 ? `${blocks}; confounded with blocks: ${d.blockWords.join(', ')}` : 'none']);
+  const letters = d.factors.map((f) => f.letter);
+  const relation = definingWordsOf(d);
+  const order = defaultAliasOrder(d.resolution, k);
+  const blocked = d.blockWords.map((w) =>
+    aliasChain(parseLetterWord(w, letters).mask, relation, order)
+      .map((x) => formatWord(x.mask, letters))
+      .join(' = '),
+  );
+  facts.push(['Blocks', blocks > 1 ? `${blocks}; confounded with blocks: ${blocked.join('; ')}` : 'none']);
   facts.push(['Run order', d.seed === null ? 'standard (Yates) order' : `randomised${blocks > 1 ? ' within blocks' : ''}, seed ${d.seed} (PCG32 and a Fisher-Yates shuffle)`]);
   const w = Math.max(...facts.map(([a]) => a.length));
   out.push(...facts.map(([a, b]) => `${a.padEnd(w)}  ${b}`));
   out.push('');
-  const order = defaultAliasOrder(d.resolution, k);
-  out.push(p === 0 ? 'Effects (all estimable)' : `Alias chains (effects of up to ${order} factors shown)`);
   if (p === 0) {
-    const mains = d.aliases.filter((c) => c[0].length === 1).map((c) => c[0]);
-    out.push(`  Main effects ${mains.join(', ')}; two-factor interactions ${d.aliases.filter((c) => c[0].length === 2).map((c) => c[0]).join(', ')}`);
+    out.push('Alias chains: none, a full factorial estimates every effect on its own' + (d.blockWords.length ? ' (except those confounded with blocks)' : ''));
   } else {
+    out.push(`Alias chains (effects of up to ${order} factors shown)`);
     out.push(...d.aliases.map((c) => `  ${c.join(' = ')}`));
   }
   out.push('');

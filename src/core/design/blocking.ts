@@ -10,7 +10,9 @@
  * 2^(k-q) found by exhaustive search (the same criterion as minimum aberration, applied to the
  * block words); for a fraction, the block words found by an exhaustive search that confounds, in
  * order of importance, the fewest main effects (none allowed), then the fewest two-factor
- * interactions, then the fewest three-factor interactions, and so on, counting every alias.
+ * interactions, then the fewest three-factor interactions, and so on, counting every alias
+ * (branch and bound; for the largest typed fractions it stops after BLOCK_SEARCH_BUDGET
+ * candidates and says that the words are the best found, not proven best).
  */
 import { InputError } from '../errors.ts';
 import type { Factor } from '../factor/factor.ts';
@@ -19,7 +21,7 @@ import { termFactors, termOrder } from '../model/term.ts';
 import { minimumAberration } from './minimum-aberration.ts';
 import { compareWords, formatWord, lettersOf, parseWord, type Word } from './word.ts';
 
-/** Block counts a design may have. */
+/** Block counts a design may have: unblocked, or 2, 4 or 8 blocks (the plan's choices; more blocks of a small design confound low-order effects). */
 export const BLOCK_COUNTS = [1, 2, 4, 8] as const;
 
 /**
@@ -34,6 +36,13 @@ export const MONTGOMERY_TABLE_7_8: Readonly<Record<number, Readonly<Record<numbe
   6: { 2: ['ABCDEF'], 4: ['ABCF', 'CDEF'], 8: ['ABEF', 'ABCD', 'ACE'] },
   7: { 2: ['ABCDEFG'], 4: ['ABCFG', 'CDEFG'], 8: ['ABC', 'DEF', 'AFG'] },
 };
+
+/**
+ * Most candidate block words the search for a fraction looks at before it settles for the best
+ * found so far (a design choice: it keeps a plan of up to 1024 runs quick to make on a phone; the
+ * catalogue fractions, up to 128 runs, are searched exhaustively well within it).
+ */
+export const BLOCK_SEARCH_BUDGET = 200_000;
 
 /** Where the table's words come from, for the plan's notes. */
 export const MONTGOMERY_TABLE_SOURCE = 'Montgomery, Design and Analysis of Experiments, 8th ed., Table 7.8';
@@ -52,7 +61,11 @@ function log2Blocks(blocks: number): number {
   return Math.log2(blocks);
 }
 
-/** Every product of the block words (2^q - 1 masks, in the order of the binary counter). */
+/**
+ * Every product of q block words: the 2^q - 1 non-empty products, in the order of a binary
+ * counter over the words (the block defining contrast subgroup without I). Cost: 2^q products.
+ * Example: blockSpan([ABC, ACD]) -> [ABC, ACD, BD]; blockSpan([]) -> [].
+ */
 export function blockSpan(generators: readonly number[]): number[] {
   const out: number[] = [];
   for (let s = 1; s < 2 ** generators.length; s++) {
@@ -230,8 +243,15 @@ export function defaultBlocking(k: number, relation: readonly Word[], basic: rea
   // found cannot lead to a better one.
   const mu = candidates.length > 0 ? classPattern[candidates[0]] : new Array<number>(k + 1).fill(0);
   const total = 2 ** q - 1;
-  const bound = (extra: readonly number[] | null, classesLeft: number): number[] =>
-    pattern.map((v, j) => v + (extra ? extra[j] : 0) + classesLeft * mu[j]);
+  const compareBound = (extra: readonly number[] | null, classesLeft: number, target: readonly number[]): number => {
+    for (let j = 0; j <= k; j++) {
+      const v = pattern[j] + (extra ? extra[j] : 0) + classesLeft * mu[j];
+      if (v !== target[j]) return v - target[j];
+    }
+    return 0;
+  };
+  let visits = 0;
+  let stopped = false;
   const visit = (start: number): void => {
     if (chosen.length === q) {
       if (!best || comparePatterns(pattern, best) < 0) {
@@ -241,28 +261,38 @@ export function defaultBlocking(k: number, relation: readonly Word[], basic: rea
       return;
     }
     for (let i = start; i < candidates.length; i++) {
+      if (++visits > BLOCK_SEARCH_BUDGET && bestGens) {
+        stopped = true;
+        return;
+      }
       const c = candidates[i];
       // Candidates come in increasing order of their own counts: once the bound with this one
       // reaches the best, it does for every later one too.
-      if (best && comparePatterns(bound(classPattern[c], total - span.length - 1), best) >= 0) break;
+      if (best && compareBound(classPattern[c], total - span.length - 1, best) >= 0) break;
       const n = span.length;
-      const added = [c, ...span.map((x) => x ^ c)];
-      if (added.some((x) => hasMain[x])) continue;
-      span.push(...added);
-      for (const x of added) classPattern[x].forEach((v, j) => (pattern[j] += v));
+      let main = hasMain[c];
+      for (let j = 0; j < n && !main; j++) main = hasMain[span[j] ^ c];
+      if (main) continue;
+      span.push(c);
+      for (let j = 0; j < n; j++) span.push(span[j] ^ c);
+      for (let j = n; j < span.length; j++) classPattern[span[j]].forEach((v, jj) => (pattern[jj] += v));
       chosen.push(c);
-      if (!best || comparePatterns(bound(null, total - span.length), best) < 0) visit(i + 1);
+      if (!best || compareBound(null, total - span.length, best) < 0) visit(i + 1);
       chosen.pop();
-      for (const x of added) classPattern[x].forEach((v, j) => (pattern[j] -= v));
+      for (let j = n; j < span.length; j++) classPattern[span[j]].forEach((v, jj) => (pattern[jj] -= v));
       span.length = n;
+      if (stopped) return;
     }
   };
   visit(0);
   if (!bestGens) {
     throw new InputError(`${blocks} blocks of this ${2 ** basic.length}-run design would confound a main effect with blocks whatever words are chosen; use fewer blocks`);
   }
+  const criterion = 'fewest main effects (none), then fewest two-factor interactions, then fewest higher-order effects confounded with blocks';
   return {
     generators: bestGens,
-    source: 'exhaustive search: fewest main effects (none), then fewest two-factor interactions, then fewest higher-order effects confounded with blocks',
+    source: stopped
+      ? `a search for the block words with the ${criterion}, stopped after ${BLOCK_SEARCH_BUDGET} candidates (the best found, not proven best)`
+      : `exhaustive search: ${criterion}`,
   };
 }

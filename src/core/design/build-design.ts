@@ -62,7 +62,7 @@ function factorIndex(factors: readonly Factor[], nameOrLetter: string, what: str
   return factors.indexOf(f);
 }
 
-/** Most factors of a fraction. */
+/** Most factors of a fraction: the catalogue's range (up to 15 factors), kept for typed generators too. */
 export const MAX_FRACTION_FACTORS = 15;
 
 interface Point extends FactorialPoint {
@@ -185,7 +185,7 @@ export function buildDesign(spec: DesignSpec): Design {
     const what = fold === 'all' ? 'the mirror image of the first fraction (every sign switched)' : `the first fraction with the signs of ${letters[fold]} (${factors[fold].name}) switched`;
     const shown = pairs.slice(0, 12).map(([u, v]) => `${formatWord(u, letters)} from ${formatWord(v, letters)}`);
     notes.push(
-      `Foldover: runs ${perHalf + 1} to ${2 * perHalf} in standard order are ${what}, run as separate block${blocksPerReplicate > 2 ? 's' : ''}. ` +
+      `Foldover: runs ${perHalf + 1} to ${2 * perHalf} in standard order are ${what}, run as ${blocksPerReplicate > 2 ? 'separate blocks' : 'a separate block'}. ` +
         (pairs.length === 0
           ? 'It separates no pair of main effects and two-factor interactions'
           : `The combined design separates ${shown.join(', ')}${pairs.length > 12 ? ` and ${pairs.length - 12} more pairs` : ''}`) +

@@ -32,6 +32,7 @@ function list(items: readonly string[]): string {
   return `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
 }
 
+/** How many alias chains the summary names before it says how many more there are (a design choice: one line on a phone). */
 const SHOWN = 3;
 
 function aliasExamples(chains: readonly (readonly Word[])[], order: number, letters: readonly string[]): string {

@@ -5,7 +5,6 @@
  * 10.7 (testing for lack of fit); Draper and Smith, Applied Regression Analysis, 3rd ed., ch. 2.1.
  * Settings count as the same when they agree within SETTING_TOLERANCE in coded units: the fit
  * uses the actual settings, so only runs the fit cannot tell apart form a group.
- * Groups are found by sorting the runs on their settings, so no text keys are built.
  * Cost O(n log n k).
  */
 import { SETTING_TOLERANCE } from '../tolerance.ts';
@@ -20,6 +19,14 @@ export interface PureError {
 }
 
 export function pureError(coded: readonly (readonly number[])[], y: ArrayLike<number>, blocks: readonly number[] | null | undefined): PureError {
+  return pureErrorOfGroups(settingGroups(coded, blocks), y);
+}
+
+/**
+ * Group number of each run: runs with the same settings (within SETTING_TOLERANCE) and block
+ * share one. Found by sorting the runs on their settings. Cost O(n log n k).
+ */
+export function settingGroups(coded: readonly (readonly number[])[], blocks: readonly number[] | null | undefined): Int32Array {
   const n = coded.length;
   const k = n > 0 ? coded[0].length : 0;
   const tol = SETTING_TOLERANCE; // a local: module bindings are getters under some loaders
@@ -35,26 +42,36 @@ export function pureError(coded: readonly (readonly number[])[], y: ArrayLike<nu
   };
   const order = Array.from({ length: n }, (_, i) => i).sort(compare);
   const groupOf = new Int32Array(n);
+  let g = -1;
+  for (let i = 0; i < n; i++) {
+    if (i === 0 || compare(order[i - 1], order[i]) !== 0) g++;
+    groupOf[order[i]] = g;
+  }
+  return groupOf;
+}
+
+/** Pure error from given groups (group numbers 0 .. G-1, or any non-negative ids). Cost O(n + G). */
+export function pureErrorOfGroups(groupOf: Int32Array, y: ArrayLike<number>): PureError {
+  let size = 0;
+  for (let i = 0; i < groupOf.length; i++) if (groupOf[i] >= size) size = groupOf[i] + 1;
+  const count = new Float64Array(size);
+  const sum = new Float64Array(size);
+  for (let i = 0; i < groupOf.length; i++) {
+    count[groupOf[i]]++;
+    sum[groupOf[i]] += y[i];
+  }
   let ss = 0;
+  for (let i = 0; i < groupOf.length; i++) {
+    const g = groupOf[i];
+    if (count[g] > 1) ss += (y[i] - sum[g] / count[g]) ** 2;
+  }
   let df = 0;
   let repeated = 0;
-  let g = 0;
-  for (let start = 0; start < n; ) {
-    let end = start + 1;
-    while (end < n && compare(order[start], order[end]) === 0) end++;
-    let mean = 0;
-    for (let i = start; i < end; i++) {
-      mean += y[order[i]];
-      groupOf[order[i]] = g;
-    }
-    mean /= end - start;
-    if (end - start > 1) {
+  for (let g = 0; g < size; g++) {
+    if (count[g] > 1) {
+      df += count[g] - 1;
       repeated++;
-      df += end - start - 1;
-      for (let i = start; i < end; i++) ss += (y[order[i]] - mean) ** 2;
     }
-    g++;
-    start = end;
   }
   return { ss, df, groups: repeated, groupOf };
 }

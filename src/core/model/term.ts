@@ -26,13 +26,17 @@ export function termFactors(t: Term): number[] {
 /** Name: factor names joined with ':' in declared order; "Intercept" for 0. */
 export function termName(t: Term, factors: readonly Factor[]): string {
   if (t === 0) return 'Intercept';
-  return termFactors(t).map((i) => factors[i].name).join(':');
+  let s = '';
+  for (let i = 0; t >> i !== 0; i++) if ((t >> i) & 1) s = s === '' ? factors[i].name : `${s}:${factors[i].name}`;
+  return s;
 }
 
 /** Letters: the factors' letters run together in declared order ("ABD"); "I" for the intercept. */
 export function termLetters(t: Term, factors: readonly Factor[]): string {
   if (t === 0) return 'I';
-  return termFactors(t).map((i) => factors[i].letter).join('');
+  let s = '';
+  for (let i = 0; t >> i !== 0; i++) if ((t >> i) & 1) s += factors[i].letter;
+  return s;
 }
 
 /**
@@ -42,9 +46,16 @@ export function termLetters(t: Term, factors: readonly Factor[]): string {
 export function compareTerms(a: Term, b: Term): number {
   const d = termOrder(a) - termOrder(b);
   if (d !== 0) return d;
-  const fa = termFactors(a);
-  const fb = termFactors(b);
-  for (let i = 0; i < fa.length; i++) if (fa[i] !== fb[i]) return fa[i] - fb[i];
+  // Same order: compare the factor lists lowest index first, one set bit at a time (no allocation).
+  let x = a;
+  let y = b;
+  while (x !== 0 && y !== 0) {
+    const lx = x & -x;
+    const ly = y & -y;
+    if (lx !== ly) return lx - ly;
+    x ^= lx;
+    y ^= ly;
+  }
   return 0;
 }
 

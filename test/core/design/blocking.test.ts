@@ -81,6 +81,19 @@ describe('defaultBlocking for fractions', () => {
   });
 });
 
+describe('defaultBlocking search budget', () => {
+  it('settles for the best found, and says so, when a large typed fraction has too many candidates', () => {
+    const f = numericFactors(12);
+    const gens = parseGenerators(['L=ABCDEF', 'M=FGHJK'], f);
+    const rel = definingRelation(gens.map(generatorWord));
+    const b = defaultBlocking(12, rel, basicFactors(12, gens), 8);
+    expect(b.generators.length).toBe(3);
+    expect(b.source).toMatch(/stopped after 200000 candidates \(the best found, not proven best\)/);
+    const confounded = blockSpan(b.generators).flatMap((w) => [w, ...rel.map((r) => r.mask ^ w)]);
+    expect(confounded.every((m) => formatWord(m, L).length >= 3)).toBe(true);
+  });
+});
+
 describe('parseBlockWords', () => {
   const f4 = numericFactors(4);
   it('reads typed words (Montgomery, 8th ed., section 7.6: ABC and ACD for 4 blocks of the 2^4)', () => {
