@@ -55,3 +55,8 @@ export function when(iso: string | null | undefined): string {
   if (Number.isNaN(d.getTime())) return iso;
   return d.toLocaleString(undefined, { year: 'numeric', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
 }
+
+/** A term's name for reading: 'Oven temperature:Line speed' -> 'Oven temperature × Line speed'. */
+export function termLabel(name: string): string {
+  return name.split(':').join(' × ');
+}

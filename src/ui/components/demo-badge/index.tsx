@@ -1,0 +1,6 @@
+/** The mark on every screen that shows the invented demo study. */
+export type DemoBadgeProps = { readonly compact?: boolean };
+
+export function DemoBadge({ compact }: DemoBadgeProps) {
+  return <p class={compact ? 'demo-badge compact' : 'demo-badge'}>Invented demo data: not a real trial</p>;
+}

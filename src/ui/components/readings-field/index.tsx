@@ -1,0 +1,59 @@
+/**
+ * The readings of one response on the run form: one large box per reading (a number keypad has
+ * no space key, so each repeat reading gets its own box), a button to add another, and their
+ * mean when there are several.
+ */
+import type { Response } from '../../../core/study/response.ts';
+import { withUnit } from '../../lib/format.ts';
+
+export type ReadingsFieldProps = {
+  readonly response: Response;
+  readonly index: number;
+  readonly boxes: readonly string[];
+  readonly mean: number | null;
+  readonly error: string | null;
+  readonly disabled?: boolean;
+  readonly onReading: (j: number, text: string) => void;
+  readonly onAdd: () => void;
+  readonly onRemove: (j: number) => void;
+};
+
+export function ReadingsField({ response, index, boxes, mean, error, disabled, onReading, onAdd, onRemove }: ReadingsFieldProps) {
+  const name = response.unit ? `${response.name} (${response.unit})` : response.name;
+  return (
+    <fieldset class="readings" disabled={disabled}>
+      <legend>{name}</legend>
+      {boxes.map((b, j) => (
+        <div class="reading" key={j}>
+          <input
+            class="num"
+            type="text"
+            inputMode="decimal"
+            autocomplete="off"
+            aria-label={boxes.length === 1 ? `${response.name} reading` : `${response.name} reading ${j + 1}`}
+            id={`reading-${index}-${j}`}
+            value={b}
+            aria-invalid={error ? true : undefined}
+            onInput={(e) => onReading(j, (e.currentTarget as HTMLInputElement).value)}
+          />
+          {boxes.length > 1 && (
+            <button type="button" class="btn ghost square" aria-label={`Remove ${response.name} reading ${j + 1}`} onClick={() => onRemove(j)}>
+              ✕
+            </button>
+          )}
+        </div>
+      ))}
+      <div class="readings-foot">
+        <button type="button" class="btn ghost" onClick={onAdd}>
+          + Another reading
+        </button>
+        {boxes.filter((b) => b !== '').length > 1 && mean !== null && <span class="mean">Mean {withUnit(mean, response.unit)}</span>}
+      </div>
+      {error && (
+        <p class="field-error" role="alert">
+          {error}
+        </p>
+      )}
+    </fieldset>
+  );
+}

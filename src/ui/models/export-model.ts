@@ -1,0 +1,116 @@
+/**
+ * Files out and in: the JSON backup (one study or all) and a study's CSV, downloaded or handed
+ * to the share sheet, the import of a backup file (a merge: nothing is overwritten), and what
+ * the store says about keeping records safe (last export, persistent storage).
+ */
+import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
+import type { StudyRecord } from '../../core/study/study.ts';
+import { writeBackup } from '../../io/backup/backup.ts';
+import { StorageError } from '../../store/errors.ts';
+import { exportBackup, exportStudyCsv, importBackup, payloadOf } from '../../store/files.ts';
+import { safetyStatus, type SafetyStatus } from '../../store/status.ts';
+import { listStudies } from '../../store/studies.ts';
+import type { Store } from '../../store/store.ts';
+import { problemOf, type Problem } from '../lib/problem.ts';
+import { canShareFiles, downloadText, fileName, mimeOf, shareText } from '../lib/save-file.ts';
+
+/**
+ * The backup text of these studies (all when none). When the store cannot note the export
+ * (a full storage refuses even that small write), the file is still made from what is stored.
+ */
+export async function backupText(store: Store, studyIds?: readonly string[]): Promise<string> {
+  try {
+    return await exportBackup(store, studyIds);
+  } catch (err) {
+    if (!(err instanceof StorageError)) throw err;
+    const payload = await payloadOf(store, studyIds);
+    return writeBackup(payload, { device: store.device, exportedAt: new Date().toISOString(), scope: studyIds ? 'study' : 'all' });
+  }
+}
+
+export type FileKind = 'json' | 'csv';
+
+export const ExportModel = createModel((store: Store, studyId: string | null) => {
+  const studies = signal<StudyRecord[]>([]);
+  const status = signal<SafetyStatus | null>(null);
+  const problem = signal<Problem | null>(null);
+  const done = signal<string | null>(null);
+  const busy = signal(false);
+
+  async function refresh() {
+    const all = await listStudies(store);
+    studies.value = all;
+    try {
+      status.value = await safetyStatus(store);
+    } catch {
+      status.value = null;
+    }
+  }
+
+  async function fileOf(id: string | null, kind: FileKind): Promise<{ text: string; name: string; title: string }> {
+    const study = id ? studies.peek().find((s) => s.id === id) : undefined;
+    if (id && !study) throw new Error(`there is no study with id "${id}" on this device`);
+    const title = study ? study.title : 'all studies';
+    if (kind === 'csv') {
+      if (!id) throw new Error('a CSV holds one study; choose a study');
+      return { text: await exportStudyCsv(store, id, { bom: true }), name: fileName(title, 'csv'), title };
+    }
+    return { text: await backupText(store, id ? [id] : undefined), name: fileName(title, 'json'), title };
+  }
+
+  async function run(task: () => Promise<string | null>) {
+    if (busy.peek()) return;
+    busy.value = true;
+    problem.value = null;
+    done.value = null;
+    try {
+      done.value = await task();
+      await refresh();
+    } catch (err) {
+      problem.value = problemOf(err);
+    } finally {
+      busy.value = false;
+    }
+  }
+
+  return {
+    studies: studies as ReadonlySignal<StudyRecord[]>,
+    /** The study this screen was opened for, or null for all. */
+    focus: computed(() => (studyId ? studies.value.find((s) => s.id === studyId) ?? null : null)),
+    status: status as ReadonlySignal<SafetyStatus | null>,
+    problem: problem as ReadonlySignal<Problem | null>,
+    /** What the last action did, in a sentence. */
+    done: done as ReadonlySignal<string | null>,
+    busy: busy as ReadonlySignal<boolean>,
+    canShare: computed(() => canShareFiles()),
+
+    async load() {
+      try {
+        await refresh();
+      } catch (err) {
+        problem.value = problemOf(err);
+      }
+    },
+    download(id: string | null, kind: FileKind) {
+      return run(async () => {
+        const f = await fileOf(id, kind);
+        downloadText(f.text, f.name, mimeOf(kind));
+        return `${f.name} is downloading. Keep it somewhere other than this phone.`;
+      });
+    },
+    share(id: string | null, kind: FileKind) {
+      return run(async () => {
+        const f = await fileOf(id, kind);
+        const shared = await shareText(f.text, f.name, mimeOf(kind), `Trialbook: ${f.title}`);
+        return shared ? `${f.name} was handed to the share sheet.` : 'Sharing was cancelled; nothing was sent.';
+      });
+    },
+    importFile(file: File) {
+      return run(async () => {
+        const text = await file.text();
+        const report = await importBackup(store, text);
+        return `${file.name}: ${report.summary}`;
+      });
+    },
+  };
+});

@@ -1,0 +1,232 @@
+/**
+ * The form of one planned run: planned settings beside the actual ones (pre-filled from the
+ * plan), each response's readings, notes, operator, and exclusion with a reason. Every change is
+ * kept as a draft (saveDraft), so a reload or a crash brings the typing back; "Saved" is shown
+ * only once saveRun has resolved. A wrong entry gets a message and nothing is written; a storage
+ * failure shows the store's message and offers an export.
+ */
+import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
+import { parseNumber } from '../../core/factor/coding.ts';
+import { parseReadings, parseRunForm, type RunForm } from '../../core/study/run-form.ts';
+import { meanReading, plannedSettings, type Setting } from '../../core/study/study.ts';
+import { listDrafts, saveDraft } from '../../store/drafts.ts';
+import { listRuns, openNewRun, openRun, saveRun, type RunFormState, type SaveResult } from '../../store/runs.ts';
+import type { Store } from '../../store/store.ts';
+import { problemOf, type Problem } from '../lib/problem.ts';
+
+export type SaveState = 'loading' | 'editing' | 'saving' | 'saved';
+export type DraftState = 'none' | 'restored' | 'keeping' | 'kept' | 'failed';
+
+/** The boxes of one response's readings, as the form text holds them ("70.2;70.4" or "70.2 70.4"). */
+export function readingBoxes(text: string): string[] {
+  return text === '' ? [''] : text.split(/;|\s+/);
+}
+
+/** The form text of a response's reading boxes. */
+export function joinBoxes(boxes: readonly string[]): string {
+  return boxes.length === 1 && boxes[0] === '' ? '' : boxes.join(';');
+}
+
+export const RunFormModel = createModel((store: Store, studyId: string, plannedRun: number) => {
+  const state = signal<RunFormState | null>(null);
+  const form = signal<RunForm | null>(null);
+  const saveState = signal<SaveState>('loading');
+  const draftState = signal<DraftState>('none');
+  const problem = signal<Problem | null>(null);
+  const lastSave = signal<SaveResult | null>(null);
+  let drafts: Promise<unknown> = Promise.resolve();
+
+  const planned = computed<Setting[]>(() => (state.value ? plannedSettings(state.value.study, plannedRun) : []));
+
+  /** Per factor: a message when its actual setting cannot be read, else null. */
+  const actualErrors = computed<(string | null)[]>(() => {
+    const s = state.value;
+    const f = form.value;
+    if (!s || !f) return [];
+    return s.study.factors.map((factor, i) => {
+      if (factor.kind === 'categorical') return null;
+      const x = parseNumber(f.actual[i].trim());
+      if (!Number.isFinite(x)) return `${factor.name}: needs a number (use a point for decimals), got "${f.actual[i]}"`;
+      if (factor.scale === 'log' && x <= 0) return `${factor.name}: needs a positive number`;
+      return null;
+    });
+  });
+
+  /** Per response: a message when a reading cannot be read, else null. */
+  const readingErrors = computed<(string | null)[]>(() => {
+    const s = state.value;
+    const f = form.value;
+    if (!s || !f) return [];
+    return s.study.responses.map((r, i) => {
+      try {
+        parseReadings(f.readings[i], r.name);
+        return null;
+      } catch (err) {
+        return problemOf(err).message;
+      }
+    });
+  });
+
+  /** Per response: the mean of the readings typed so far, or null. */
+  const means = computed<(number | null)[]>(() => {
+    const s = state.value;
+    const f = form.value;
+    if (!s || !f) return [];
+    return s.study.responses.map((r, i) => {
+      try {
+        return meanReading(parseReadings(f.readings[i], r.name));
+      } catch {
+        return null;
+      }
+    });
+  });
+
+  function keepDraft() {
+    const s = state.peek();
+    const f = form.peek();
+    if (!s || !f) return;
+    draftState.value = 'keeping';
+    drafts = drafts.then(
+      () =>
+        saveDraft(store, { ...s, studyId: s.study.id }, f).then(
+          () => {
+            if (form.peek() === f) draftState.value = 'kept';
+          },
+          (err) => {
+            draftState.value = 'failed';
+            problem.value = problemOf(err);
+          },
+        ),
+    );
+  }
+
+  function change(patch: Partial<RunForm>) {
+    const f = form.peek();
+    if (!f || saveState.peek() === 'saving' || saveState.peek() === 'loading') return;
+    form.value = { ...f, ...patch };
+    saveState.value = 'editing';
+    if (problem.peek()?.kind === 'input') problem.value = null;
+    keepDraft();
+  }
+
+  function setBoxes(i: number, boxes: string[]) {
+    const f = form.peek();
+    if (!f) return;
+    const readings = [...f.readings];
+    readings[i] = joinBoxes(boxes);
+    change({ readings });
+  }
+
+  return {
+    state: state as ReadonlySignal<RunFormState | null>,
+    form: form as ReadonlySignal<RunForm | null>,
+    saveState: saveState as ReadonlySignal<SaveState>,
+    draftState: draftState as ReadonlySignal<DraftState>,
+    problem: problem as ReadonlySignal<Problem | null>,
+    lastSave: lastSave as ReadonlySignal<SaveResult | null>,
+    planned,
+    actualErrors,
+    readingErrors,
+    means,
+    /** True when there is something to save: a new run, typing waiting in a draft, or a change since the form opened. */
+    dirty: computed(() => {
+      const s = state.value;
+      const f = form.value;
+      if (!s || !f) return false;
+      if (!s.current || s.fromDraft) return true;
+      return JSON.stringify(f) !== JSON.stringify(s.form);
+    }),
+    /** True when the run has been saved before (this form adds a revision). */
+    isLogged: computed(() => state.value?.current != null),
+
+    /** Opens the form: the logged run of this planned run (or its draft), else a waiting draft of a new run, else a new run. */
+    async load() {
+      try {
+        const [runs, waiting] = await Promise.all([listRuns(store, studyId), listDrafts(store, studyId)]);
+        const logged = runs.find((r) => r.plannedRun === plannedRun);
+        const draft = waiting.find((d) => d.plannedRun === plannedRun && (!logged || d.runId === logged.id)) ?? null;
+        const opened = logged ? await openRun(store, logged.id) : draft ? await openRun(store, draft.runId) : await openNewRun(store, studyId, plannedRun);
+        state.value = opened;
+        form.value = opened.form;
+        draftState.value = opened.fromDraft ? 'restored' : 'none';
+        saveState.value = 'editing';
+      } catch (err) {
+        problem.value = problemOf(err);
+      }
+    },
+
+    setActual(i: number, text: string) {
+      const f = form.peek();
+      if (!f) return;
+      const actual = [...f.actual];
+      actual[i] = text;
+      change({ actual });
+    },
+    setReading(i: number, j: number, text: string) {
+      const f = form.peek();
+      if (!f) return;
+      const boxes = readingBoxes(f.readings[i]);
+      boxes[j] = text.trim();
+      setBoxes(i, boxes);
+    },
+    addReading(i: number) {
+      const f = form.peek();
+      if (!f) return;
+      setBoxes(i, [...readingBoxes(f.readings[i]), '']);
+    },
+    removeReading(i: number, j: number) {
+      const f = form.peek();
+      if (!f) return;
+      const boxes = readingBoxes(f.readings[i]);
+      boxes.splice(j, 1);
+      setBoxes(i, boxes.length === 0 ? [''] : boxes);
+    },
+    setNotes(notes: string) {
+      change({ notes });
+    },
+    setOperator(operator: string) {
+      change({ operator });
+    },
+    setExcluded(excluded: boolean) {
+      change({ excluded });
+    },
+    setReason(reason: string) {
+      change({ reason });
+    },
+    setTimeNow() {
+      change({ loggedAt: new Date().toISOString() });
+    },
+
+    /** Checks the form and saves it as a new revision; a wrong entry changes nothing. */
+    async save() {
+      const s = state.peek();
+      const typed = form.peek();
+      if (!s || !typed || saveState.peek() === 'saving') return;
+      // A run without a time gets the time of its first saving.
+      const f = typed.loggedAt.trim() === '' && !s.current ? { ...typed, loggedAt: new Date().toISOString() } : typed;
+      let values;
+      try {
+        values = parseRunForm(s.study, f);
+      } catch (err) {
+        problem.value = problemOf(err);
+        return;
+      }
+      problem.value = null;
+      saveState.value = 'saving';
+      try {
+        await drafts; // the last draft write lands before the save drops the draft
+        const result = await saveRun(store, { runId: s.runId, revisionId: s.revisionId, studyId: s.study.id, plannedRun: s.plannedRun, parents: s.parents, values });
+        // A fresh form state: the next change will be a new revision on top of this one.
+        const reopened = await openRun(store, s.runId);
+        state.value = reopened;
+        form.value = reopened.form;
+        lastSave.value = result;
+        draftState.value = 'none';
+        saveState.value = 'saved';
+      } catch (err) {
+        problem.value = problemOf(err);
+        saveState.value = 'editing';
+      }
+    },
+  };
+});

@@ -1,0 +1,45 @@
+/** The studies on this device with how many of their planned runs are logged. */
+import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
+import type { StudyRecord } from '../../core/study/study.ts';
+import { listRuns } from '../../store/runs.ts';
+import { listStudies } from '../../store/studies.ts';
+import type { Store } from '../../store/store.ts';
+import { problemOf, type Problem } from '../lib/problem.ts';
+import { isDemo } from '../seed/demo-seed.ts';
+
+export interface StudySummary {
+  readonly study: StudyRecord;
+  readonly planned: number;
+  /** Planned runs with at least one logged run. */
+  readonly logged: number;
+  readonly demo: boolean;
+}
+
+export const StudiesModel = createModel((store: Store) => {
+  const studies = signal<StudyRecord[] | null>(null);
+  const loggedCounts = signal<Record<string, number>>({});
+  const problem = signal<Problem | null>(null);
+  return {
+    problem: problem as ReadonlySignal<Problem | null>,
+    loading: computed(() => studies.value === null && problem.value === null),
+    summaries: computed<StudySummary[]>(() =>
+      (studies.value ?? []).map((study) => ({
+        study,
+        planned: study.design.runs.length,
+        logged: loggedCounts.value[study.id] ?? 0,
+        demo: isDemo(study),
+      })),
+    ),
+    async load() {
+      try {
+        const all = await listStudies(store);
+        const counts: Record<string, number> = {};
+        for (const s of all) counts[s.id] = new Set((await listRuns(store, s.id)).map((r) => r.plannedRun)).size;
+        loggedCounts.value = counts;
+        studies.value = all;
+      } catch (err) {
+        problem.value = problemOf(err);
+      }
+    },
+  };
+});

@@ -1,0 +1,154 @@
+/**
+ * The analysis of one response in plain words: the effects ranked by size with a bar each, how
+ * much of the variation the model accounts for, the curvature check from the center runs, and
+ * the analysis's warnings.
+ */
+import { useModel } from '@preact/signals';
+import { useEffect } from 'preact/hooks';
+import type { Analysis, TermEstimate } from '../../../core/fit/analysis.ts';
+import type { Factor } from '../../../core/factor/factor.ts';
+import { termFactors } from '../../../core/model/term.ts';
+import type { Response } from '../../../core/study/response.ts';
+import type { Store } from '../../../store/store.ts';
+import { BarList, type BarRow } from '../../components/bar-list/index.tsx';
+import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
+import { HalfNormalChart } from '../../components/half-normal-chart/index.tsx';
+import { ProblemBox } from '../../components/problem-box/index.tsx';
+import { StudyHeader } from '../../components/study-header/index.tsx';
+import { num, percent, pValue, setting, signed, termLabel, withUnit } from '../../lib/format.ts';
+import { AnalysisModel, MODEL_CHOICES } from '../../models/analysis-model.ts';
+import { href } from '../../models/router-model.ts';
+
+export type AnalysisScreenProps = { readonly store: Store; readonly studyId: string };
+
+/** How clearly a term stands out from the run-to-run noise, in words. */
+export function strength(t: TermEstimate): { words: string; faint: boolean } {
+  if (t.p === null) return { words: 'No noise estimate from these runs, so no test', faint: false };
+  if (t.p < 0.05) return { words: `Stands out from the noise (${pValue(t.p)})`, faint: false };
+  if (t.p < 0.1) return { words: `Borderline (${pValue(t.p)})`, faint: false };
+  return { words: `Within the run-to-run noise (${pValue(t.p)})`, faint: true };
+}
+
+function levelText(f: Factor, end: 0 | 1): string {
+  if (f.kind === 'categorical') return f.levels[end];
+  return setting(end === 0 ? f.low : f.high, f.unit);
+}
+
+/** What an effect means, in a sentence. */
+export function meaning(t: TermEstimate, factors: readonly Factor[], response: Response): string {
+  const fs = termFactors(t.term).map((i) => factors[i]);
+  if (fs.length === 1) {
+    const f = fs[0];
+    const size = withUnit(Math.abs(t.effect), response.unit, 3);
+    return `From ${levelText(f, 0)} to ${levelText(f, 1)}, ${response.name} ${t.effect >= 0 ? 'rises' : 'falls'} by ${size}.`;
+  }
+  if (fs.length === 2) {
+    // With y = ... + b_AB x_A x_B, A's effect at B high minus at B low is 4 b_AB = 2 x the AB effect.
+    const change = withUnit(2 * Math.abs(t.effect), response.unit, 3);
+    return `The effect of ${fs[0].name} is ${change} ${t.effect >= 0 ? 'larger' : 'smaller'} with ${fs[1].name} high than with it low.`;
+  }
+  return `The effect of ${fs[0].name} depends on ${fs.slice(1).map((f) => f.name).join(' and ')} together.`;
+}
+
+function effectRows(ranked: readonly TermEstimate[], a: Analysis, factors: readonly Factor[], response: Response): BarRow[] {
+  return ranked.map((t) => {
+    const s = strength(t);
+    const carries = t.estimates ? ` Carries ${t.estimates}: these runs cannot tell them apart.` : '';
+    return {
+      key: String(t.term),
+      label: `${termLabel(t.name)} (${t.letters})`,
+      value: t.effect,
+      shown: `${signed(t.effect)}${response.unit ? ' ' + response.unit : ''}`,
+      detail: `${meaning(t, factors, response)} ${s.words}.${carries}`,
+      faint: s.faint,
+    };
+  });
+}
+
+export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
+  const model = useModel(() => new AnalysisModel(store, studyId));
+  useEffect(() => void model.load(), []);
+  const d = model.data.value;
+  const problem = model.problem.value;
+  if (problem) return <ProblemBox problem={problem} />;
+  if (!d) return <p class="quiet">Reading the runs…</p>;
+  const { study } = d;
+  const response = study.responses[model.responseIndex.value];
+  const result = model.result.value;
+  return (
+    <section>
+      <StudyHeader study={study} current="analysis" />
+      <h2>Effects</h2>
+      <ChoiceButtons
+        label="Response"
+        options={study.responses.map((r, i) => ({ value: i, label: r.name }))}
+        value={model.responseIndex.value}
+        onChoose={(i) => model.chooseResponse(i)}
+      />
+      <ChoiceButtons label="Model" options={MODEL_CHOICES} value={model.choice.value} onChoose={(c) => model.chooseModel(c)} />
+      {result && !result.ok && (
+        <div class="problem input" role="alert">
+          <p>{result.message}</p>
+          <a class="btn" href={href.sheet(study.id)}>
+            Go to the run sheet
+          </a>
+        </div>
+      )}
+      {result && result.ok && (
+        <>
+          <p class="lead-figure">
+            {result.analysis.n} runs used · average at the center {withUnit(result.analysis.intercept.coef, response.unit)}
+          </p>
+          <h3>Effects, largest first</h3>
+          <p class="quiet">Each bar is the change in {response.name} from a factor's low to its high setting, the others held at their centers.</p>
+          <BarList label={`Effects on ${response.name}`} rows={effectRows(model.ranked.value, result.analysis, study.factors, response)} />
+          {result.analysis.halfNormal.length >= 3 && (
+            <>
+              <h3>Half-normal plot</h3>
+              <HalfNormalChart points={result.analysis.halfNormal} axisLabel={`Size of effect${response.unit ? ` (${response.unit})` : ''}`} />
+            </>
+          )}
+          <h3>How well the model fits</h3>
+          <ul class="facts">
+            <li>
+              <strong>R² {percent(result.analysis.r2)}</strong>: the share of the variation in these runs the model accounts for.
+            </li>
+            <li>
+              <strong>Adjusted R² {percent(result.analysis.r2adj)}</strong>: the same, allowing for the number of terms.
+            </li>
+            <li>
+              <strong>Predicted R² {percent(result.analysis.r2pred)}</strong>: how well it would predict a run it had not seen.
+            </li>
+            <li>
+              <strong>Run-to-run noise {withUnit(result.analysis.sigma, response.unit)}</strong> (residual standard deviation, {result.analysis.df.residual} df).
+            </li>
+            {result.analysis.curvature && (
+              <li>
+                {result.analysis.curvature.p !== null && result.analysis.curvature.p < 0.05 ? (
+                  <strong>The center runs differ from the corners ({pValue(result.analysis.curvature.p)}): the response curves, so a straight-line model is off between the corners.</strong>
+                ) : (
+                  <>
+                    <strong>No clear curvature</strong>: the {result.analysis.curvature.nCenter} center runs agree with the corners (difference {num(result.analysis.curvature.estimate, 3)}, {pValue(result.analysis.curvature.p)}).
+                  </>
+                )}
+              </li>
+            )}
+          </ul>
+          {result.analysis.warnings.length > 0 && (
+            <>
+              <h3>Notes on these runs</h3>
+              <ul class="warnings">
+                {result.analysis.warnings.map((w) => (
+                  <li key={w}>{w}</li>
+                ))}
+              </ul>
+            </>
+          )}
+          <a class="btn primary block" href={href.predict(study.id)}>
+            Check a prediction
+          </a>
+        </>
+      )}
+    </section>
+  );
+}

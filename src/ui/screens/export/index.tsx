@@ -1,0 +1,85 @@
+/**
+ * Files out and in: the JSON backup (with the whole history) and the CSV of a study, downloaded
+ * or shared; a backup from another device merged in (nothing here is overwritten).
+ */
+import { useModel } from '@preact/signals';
+import { useEffect } from 'preact/hooks';
+import type { StudyRecord } from '../../../core/study/study.ts';
+import type { Store } from '../../../store/store.ts';
+import { DemoBadge } from '../../components/demo-badge/index.tsx';
+import { ProblemBox } from '../../components/problem-box/index.tsx';
+import { StudyHeader } from '../../components/study-header/index.tsx';
+import { when } from '../../lib/format.ts';
+import { ExportModel } from '../../models/export-model.ts';
+import { href } from '../../models/router-model.ts';
+import { isDemo } from '../../seed/demo-seed.ts';
+
+export type ExportScreenProps = { readonly store: Store; readonly studyId: string | null };
+
+export function ExportScreen({ store, studyId }: ExportScreenProps) {
+  const model = useModel(() => new ExportModel(store, studyId));
+  useEffect(() => void model.load(), []);
+  const focus = model.focus.value;
+  const studies: readonly StudyRecord[] = focus ? [focus] : model.studies.value;
+  const status = model.status.value;
+  const busy = model.busy.value;
+  const problem = model.problem.value;
+  const share = model.canShare.value;
+  return (
+    <section>
+      {focus ? <StudyHeader study={focus} current="export" /> : <a class="back" href={href.studies()}>‹ All studies</a>}
+      <h2>Export</h2>
+      <p>The backup (JSON) keeps everything, history included, and can be imported on another device. The CSV is for a spreadsheet or the desktop analysis.</p>
+      {problem && <ProblemBox problem={problem} />}
+      {model.done.value && (
+        <p class="notice" role="status">
+          {model.done.value}
+        </p>
+      )}
+      {status && status.persistence.asked && status.persistence.granted === false && (
+        <p class="warning">This browser keeps Trialbook's records only as long as it has room. Export a backup often.</p>
+      )}
+      <ul class="cards">
+        {studies.map((s) => (
+          <li class="card" key={s.id}>
+            <h3 class="card-title">{s.title}</h3>
+            {isDemo(s) && <DemoBadge compact />}
+            <p class="card-line quiet">Last exported: {status?.lastExports[s.id] ? when(status.lastExports[s.id]) : 'never'}</p>
+            {status?.backupDue.some((b) => b.studyId === s.id) && <p class="card-line due">A backup is due: this study has runs not exported in the last week.</p>}
+            <button type="button" class="btn primary block" disabled={busy} onClick={() => void model.download(s.id, 'json')}>
+              Download backup (JSON)
+            </button>
+            <button type="button" class="btn block" disabled={busy} onClick={() => void model.download(s.id, 'csv')}>
+              Download CSV
+            </button>
+            {share && (
+              <button type="button" class="btn block" disabled={busy} onClick={() => void model.share(s.id, 'json')}>
+                Share backup…
+              </button>
+            )}
+          </li>
+        ))}
+      </ul>
+      {!focus && model.studies.value.length > 1 && (
+        <button type="button" class="btn block" disabled={busy} onClick={() => void model.download(null, 'json')}>
+          Download one backup of all studies
+        </button>
+      )}
+      <h3>Import a backup</h3>
+      <p class="quiet">A backup file from another phone or tab is merged in: new runs and versions are added, and nothing here is overwritten.</p>
+      <label class="btn block file-pick">
+        Choose a backup file
+        <input
+          type="file"
+          accept=".json,application/json"
+          disabled={busy}
+          onChange={(e) => {
+            const input = e.currentTarget as HTMLInputElement;
+            const file = input.files?.[0];
+            if (file) void model.importFile(file).then(() => (input.value = ''));
+          }}
+        />
+      </label>
+    </section>
+  );
+}

@@ -1,0 +1,137 @@
+/**
+ * The quick card: what the fitted model predicts at the settings on the sliders, before anyone
+ * changes a setting on the machine. The predicted value with its 95% intervals stays at the top
+ * while the sliders move; the caution is always shown with it.
+ */
+import { useModel } from '@preact/signals';
+import { useEffect } from 'preact/hooks';
+import type { Prediction } from '../../../core/predict/predict.ts';
+import type { Response } from '../../../core/study/response.ts';
+import type { Store } from '../../../store/store.ts';
+import { BarList } from '../../components/bar-list/index.tsx';
+import { CautionBox } from '../../components/caution-box/index.tsx';
+import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
+import { FactorControl } from '../../components/factor-control/index.tsx';
+import { ProblemBox } from '../../components/problem-box/index.tsx';
+import { StudyHeader } from '../../components/study-header/index.tsx';
+import { num, signed, termLabel, withUnit } from '../../lib/format.ts';
+import { QuickCardModel, SLIDER_REACH } from '../../models/quick-card-model.ts';
+
+export type QuickCardScreenProps = { readonly store: Store; readonly studyId: string };
+
+function interval(i: readonly [number, number] | null, unit: string | undefined): string {
+  return i ? `${num(i[0])} – ${withUnit(i[1], unit)}` : 'not available';
+}
+
+function PredictionPanel({ p, response }: { p: Prediction; response: Response }) {
+  const pct = Math.round(p.level * 100);
+  return (
+    <div class={p.outside ? 'predicted outside' : 'predicted'} aria-live="polite">
+      <div class="predicted-head">
+        <span class="predicted-label">Predicted {response.name}</span>
+        <span class="predicted-value" data-testid="predicted-value">
+          {withUnit(p.fit, response.unit)}
+        </span>
+      </div>
+      <dl class="intervals">
+        <div>
+          <dt>{pct}% CI (average)</dt>
+          <dd data-testid="ci">{interval(p.ci, response.unit)}</dd>
+        </div>
+        <div>
+          <dt>{pct}% PI (one run)</dt>
+          <dd data-testid="pi">{interval(p.pi, response.unit)}</dd>
+        </div>
+      </dl>
+      {p.outside && (
+        <p class="outside-warning" role="alert">
+          ⚠ Outside the tested range
+        </p>
+      )}
+    </div>
+  );
+}
+
+export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
+  const model = useModel(() => new QuickCardModel(store, studyId));
+  useEffect(() => void model.load(), []);
+  const d = model.data.value;
+  const problem = model.problem.value;
+  if (problem) return <ProblemBox problem={problem} />;
+  if (!d) return <p class="quiet">Reading the runs…</p>;
+  const { study } = d;
+  const response = study.responses[model.responseIndex.value];
+  const result = model.prediction.value;
+  const p = result && result.ok ? result.prediction : null;
+  const analysis = model.analysis.value;
+  return (
+    <section class="quick">
+      <StudyHeader study={study} current="predict" />
+      <h2>Quick card</h2>
+      <ChoiceButtons
+        label="Response"
+        options={study.responses.map((r, i) => ({ value: i, label: r.name }))}
+        value={model.responseIndex.value}
+        onChoose={(i) => model.chooseResponse(i)}
+      />
+      {result && !result.ok && (
+        <p class="problem input" role="alert">
+          {result.message}
+        </p>
+      )}
+      {/* The prediction and the caution stay on screen together while the sliders move. */}
+      <div class="sticky-top">
+        {p && <PredictionPanel p={p} response={response} />}
+        <CautionBox lines={model.caution.value} compact />
+      </div>
+      <h3>Settings</h3>
+      {study.factors.map((f, i) => (
+        <FactorControl
+          key={f.name}
+          factor={f}
+          index={i}
+          value={model.settings.value[i]}
+          text={model.texts.value[i]}
+          coded={model.coded.value[i]}
+          error={model.fieldErrors.value[i]}
+          reach={SLIDER_REACH}
+          onCoded={(x) => model.setCoded(i, x)}
+          onText={(t) => model.setText(i, t)}
+          onLevel={(l) => model.setLevel(i, l)}
+        />
+      ))}
+      {p && p.messages.length > 0 && (
+        <ul class="warnings" aria-label="About this prediction">
+          {p.messages.map((m) => (
+            <li key={m}>{m}</li>
+          ))}
+        </ul>
+      )}
+      <button type="button" class="btn block" onClick={() => model.reset()}>
+        Back to the center
+      </button>
+      {p && (
+        <>
+          <h3>Where the prediction comes from</h3>
+          <p class="baseline">
+            Baseline (the center): <strong>{withUnit(p.baseline, response.unit)}</strong>, plus each term's contribution:
+          </p>
+          <BarList
+            label={`Contributions to ${response.name}`}
+            rows={p.contributions.map((c) => ({
+              key: String(c.term),
+              label: `${termLabel(c.name)} (${c.letters})`,
+              value: c.value,
+              shown: `${signed(c.value)}${response.unit ? ' ' + response.unit : ''}`,
+              ...(c.estimates ? { detail: `Carries ${c.estimates}.` } : {}),
+            }))}
+          />
+          <p class="quiet">
+            Baseline plus these {p.contributions.length} contributions gives {withUnit(p.fit, response.unit)}.
+            {analysis && analysis.ok ? ` Model fitted to ${analysis.analysis.n} logged runs.` : ''}
+          </p>
+        </>
+      )}
+    </section>
+  );
+}

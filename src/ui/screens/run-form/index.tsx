@@ -1,0 +1,225 @@
+/**
+ * The form of one run, made for a phone beside the machine: the planned setting beside each
+ * actual one, large boxes for the readings, notes, and exclusion with a reason. The typing is
+ * kept as a draft on every change; "Saved" appears only once the save is on disk.
+ */
+import { useModel, useSignal } from '@preact/signals';
+import { useEffect } from 'preact/hooks';
+import { parseNumber } from '../../../core/factor/coding.ts';
+import type { Store } from '../../../store/store.ts';
+import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
+import { ProblemBox } from '../../components/problem-box/index.tsx';
+import { ReadingsField } from '../../components/readings-field/index.tsx';
+import { StudyHeader } from '../../components/study-header/index.tsx';
+import { setting, when } from '../../lib/format.ts';
+import { fileName, downloadText, mimeOf } from '../../lib/save-file.ts';
+import { problemOf } from '../../lib/problem.ts';
+import { backupText } from '../../models/export-model.ts';
+import { readingBoxes, RunFormModel } from '../../models/run-form-model.ts';
+import { href } from '../../models/router-model.ts';
+
+export type RunFormScreenProps = { readonly store: Store; readonly studyId: string; readonly plannedRun: number };
+
+export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps) {
+  const model = useModel(() => new RunFormModel(store, studyId, plannedRun));
+  const exporting = useSignal(false);
+  const exportNote = useSignal<string | null>(null);
+  useEffect(() => void model.load(), []);
+
+  const state = model.state.value;
+  const form = model.form.value;
+  const problem = model.problem.value;
+  const saveState = model.saveState.value;
+  const draftState = model.draftState.value;
+
+  async function exportNow() {
+    if (!state) return;
+    exporting.value = true;
+    try {
+      const text = await backupText(store, [state.study.id]);
+      downloadText(text, fileName(state.study.title, 'json'), mimeOf('json'));
+      exportNote.value = 'The backup file is downloading. Keep it until the storage problem is solved.';
+    } catch (err) {
+      exportNote.value = `The backup could not be made: ${problemOf(err).message}`;
+    } finally {
+      exporting.value = false;
+    }
+  }
+
+  if (!state || !form) {
+    return problem ? <ProblemBox problem={problem} /> : <p class="quiet">Opening run {plannedRun}…</p>;
+  }
+  const { study } = state;
+  const planned = model.planned.value;
+  const runCount = study.design.runs.length;
+  const kind = study.design.runs.find((r) => r.run === plannedRun)?.kind;
+  const busy = saveState === 'saving';
+  const nextRun = study.design.runs.some((r) => r.run === plannedRun + 1) ? plannedRun + 1 : null;
+
+  return (
+    <section class="run-form">
+      <StudyHeader study={study} current={null} back={{ href: href.sheet(study.id), label: 'Run sheet' }} />
+      <h2 class="run-title">
+        Run {plannedRun} <span class="quiet">of {runCount}</span>
+        {kind === 'center' && <span class="run-kind"> center point</span>}
+      </h2>
+      {state.current && (
+        <p class="quiet">
+          Logged {when(state.current.savedAt)} · {state.current.revisions} {state.current.revisions === 1 ? 'version' : 'versions'} kept. Saving adds a new version; nothing is overwritten.
+        </p>
+      )}
+      {draftState === 'restored' && <p class="notice">Your earlier typing was kept and is back. It is not saved yet.</p>}
+
+      <form
+        onSubmit={(e) => {
+          e.preventDefault();
+          void model.save().then(() => {
+            // A refused entry: take the person to the first field that needs them.
+            if (model.problem.peek()?.kind === 'input') document.querySelector<HTMLElement>('.run-form [aria-invalid="true"]')?.focus();
+          });
+        }}
+      >
+        <fieldset class="group" disabled={busy}>
+          <legend>Settings</legend>
+          {study.factors.map((f, i) => {
+            const plannedText = setting(planned[i], f.kind === 'numeric' ? f.unit : undefined);
+            const typed = form.actual[i];
+            const differs = f.kind === 'numeric' ? parseNumber(typed.trim()) !== planned[i] : typed.trim().toLowerCase() !== String(planned[i]).toLowerCase();
+            const error = model.actualErrors.value[i];
+            return (
+              <div class="field" key={f.name}>
+                <div class="field-head">
+                  <label for={`actual-${i}`} class="field-name">
+                    {f.name}
+                  </label>
+                  <span class="planned">Planned {plannedText}</span>
+                </div>
+                {f.kind === 'numeric' ? (
+                  <div class="factor-entry">
+                    <input
+                      id={`actual-${i}`}
+                      class="num"
+                      type="text"
+                      inputMode="decimal"
+                      autocomplete="off"
+                      value={typed}
+                      aria-invalid={error ? true : undefined}
+                      onInput={(e) => model.setActual(i, (e.currentTarget as HTMLInputElement).value)}
+                    />
+                    {f.unit && <span class="unit">{f.unit}</span>}
+                  </div>
+                ) : (
+                  <ChoiceButtons label={`${f.name} actual`} hideLabel options={f.levels.map((l) => ({ value: l, label: l }))} value={typed} onChoose={(v) => model.setActual(i, v)} />
+                )}
+                {differs && !error && <p class="differs">Actual differs from the plan: the analysis uses the actual setting.</p>}
+                {error && (
+                  <p class="field-error" role="alert">
+                    {error}
+                  </p>
+                )}
+              </div>
+            );
+          })}
+        </fieldset>
+
+        <div class="group">
+          <h3 class="group-title">Readings</h3>
+          {study.responses.map((r, i) => (
+            <ReadingsField
+              key={r.name}
+              response={r}
+              index={i}
+              boxes={readingBoxes(form.readings[i])}
+              mean={model.means.value[i]}
+              error={model.readingErrors.value[i]}
+              disabled={busy}
+              onReading={(j, t) => model.setReading(i, j, t)}
+              onAdd={() => model.addReading(i)}
+              onRemove={(j) => model.removeReading(i, j)}
+            />
+          ))}
+        </div>
+
+        <fieldset class="group" disabled={busy}>
+          <legend>About the run</legend>
+          <div class="field">
+            <div class="field-head">
+              <span class="field-name">Time of run</span>
+              <span class="planned">{form.loggedAt ? when(form.loggedAt) : state.current ? 'not given' : 'the time of saving'}</span>
+            </div>
+            <button type="button" class="btn" onClick={() => model.setTimeNow()}>
+              Set to now
+            </button>
+          </div>
+          <label class="field">
+            <span class="field-name">Operator (optional)</span>
+            <input class="text" type="text" autocomplete="name" value={form.operator} onInput={(e) => model.setOperator((e.currentTarget as HTMLInputElement).value)} />
+          </label>
+          <label class="field">
+            <span class="field-name">Notes</span>
+            <textarea class="text" rows={3} value={form.notes} onInput={(e) => model.setNotes((e.currentTarget as HTMLTextAreaElement).value)} />
+          </label>
+          <div class="field">
+            <ChoiceButtons
+              label="Use this run in the analysis?"
+              options={[
+                { value: 'use', label: 'Use it' },
+                { value: 'exclude', label: 'Exclude it' },
+              ]}
+              value={form.excluded ? 'exclude' : 'use'}
+              onChoose={(v) => model.setExcluded(v === 'exclude')}
+            />
+          </div>
+          {form.excluded && (
+            <label class="field">
+              <span class="field-name">Reason for excluding (needed)</span>
+              <textarea class="text" rows={2} value={form.reason} onInput={(e) => model.setReason((e.currentTarget as HTMLTextAreaElement).value)} />
+            </label>
+          )}
+        </fieldset>
+
+        {problem && <ProblemBox problem={problem} onExport={() => void exportNow()} exportBusy={exporting.value} />}
+        {exportNote.value && <p class="notice">{exportNote.value}</p>}
+
+        <div class={saveState === 'saved' ? 'save-bar saved' : 'save-bar'}>
+          <p class="save-state" role="status" aria-live="polite">
+            {saveState === 'saving'
+              ? 'Saving…'
+              : saveState === 'saved'
+                ? `Saved ✓ run ${plannedRun}${model.lastSave.value?.duplicate ? ' (already saved)' : ''}`
+                : draftState === 'failed'
+                  ? 'Typing not kept: see the message above'
+                  : draftState === 'kept' || draftState === 'keeping' || draftState === 'restored'
+                    ? 'Not saved yet (typing kept as a draft)'
+                    : state.current
+                      ? 'No changes'
+                      : 'Not saved yet'}
+          </p>
+          {saveState === 'saved' ? (
+            nextRun !== null ? (
+              <a class="btn primary big" href={href.run(study.id, nextRun)}>
+                Next: run {nextRun}
+              </a>
+            ) : (
+              <a class="btn primary big" href={href.sheet(study.id)}>
+                Run sheet
+              </a>
+            )
+          ) : (
+            <button type="submit" class="btn primary big" disabled={busy || !model.dirty.value}>
+              {busy ? 'Saving…' : `Save run ${plannedRun}`}
+            </button>
+          )}
+        </div>
+      </form>
+      {saveState === 'saved' && model.lastSave.value?.changedSince && (
+        <p class="notice">This run was changed elsewhere after the form opened. Both versions are kept in its history.</p>
+      )}
+      {saveState === 'saved' && (
+        <a class="btn block" href={href.sheet(study.id)}>
+          Back to the run sheet
+        </a>
+      )}
+    </section>
+  );
+}

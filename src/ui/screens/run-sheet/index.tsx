@@ -1,0 +1,69 @@
+/**
+ * A study's run sheet: the planned runs in run order, each with its planned settings in real
+ * units, whether it is logged, and one big button to log it (or to review what was logged).
+ */
+import { useModel } from '@preact/signals';
+import { useEffect } from 'preact/hooks';
+import type { Store } from '../../../store/store.ts';
+import { ProblemBox } from '../../components/problem-box/index.tsx';
+import { StudyHeader } from '../../components/study-header/index.tsx';
+import { setting, withUnit } from '../../lib/format.ts';
+import { href } from '../../models/router-model.ts';
+import { RunSheetModel } from '../../models/run-sheet-model.ts';
+
+export type RunSheetScreenProps = { readonly store: Store; readonly studyId: string };
+
+export function RunSheetScreen({ store, studyId }: RunSheetScreenProps) {
+  const model = useModel(() => new RunSheetModel(store, studyId));
+  useEffect(() => void model.load(), []);
+  const study = model.study.value;
+  const problem = model.problem.value;
+  if (problem) return <ProblemBox problem={problem} />;
+  if (!study) return <p class="quiet">Reading the study…</p>;
+  const rows = model.rows.value;
+  const next = model.nextRun.value;
+  return (
+    <section>
+      <StudyHeader study={study} current="sheet" />
+      {study.purpose && <p class="purpose">{study.purpose}</p>}
+      <p class="progress">
+        <strong>
+          {model.loggedCount.value} of {rows.length}
+        </strong>{' '}
+        planned runs logged{next !== null ? ` · next: run ${next}` : ' · all logged'}
+      </p>
+      <ol class="runs">
+        {rows.map((row) => {
+          const logged = row.logged.length > 0;
+          return (
+            <li key={row.run} class={logged ? (row.excluded ? 'run-card excluded' : 'run-card logged') : 'run-card'} data-run={row.run}>
+              <div class="run-head">
+                <span class="run-no">Run {row.run}</span>
+                <span class="run-kind">{row.kind === 'center' ? 'center point' : row.kind === 'factorial' ? 'corner' : row.kind}</span>
+                <span class={logged ? 'run-state done' : 'run-state'}>{logged ? (row.excluded ? 'Excluded' : 'Logged ✓') : 'Not logged'}</span>
+              </div>
+              <dl class="settings">
+                {study.factors.map((f, i) => (
+                  <div class="setting" key={f.name}>
+                    <dt>{f.name}</dt>
+                    <dd>{setting(row.planned[i], f.kind === 'numeric' ? f.unit : undefined)}</dd>
+                  </div>
+                ))}
+              </dl>
+              {logged && !row.excluded && (
+                <p class="run-result">
+                  {study.responses.map((r, i) => `${r.name} ${withUnit(row.means[i], r.unit)}`).join(' · ')}
+                </p>
+              )}
+              {row.excluded && <p class="run-result">Reason: {row.logged[0].reason}</p>}
+              {row.hasDraft && <p class="draft-note">Typing not saved yet is waiting in this run's form.</p>}
+              <a class={logged ? 'btn block' : 'btn primary block'} href={href.run(study.id, row.run)}>
+                {logged ? `Review run ${row.run}` : `Log run ${row.run}`}
+              </a>
+            </li>
+          );
+        })}
+      </ol>
+    </section>
+  );
+}
