@@ -26,7 +26,7 @@ const runtimePackagesAllowed: Record<string, RegExp> = {
   io: /^(papaparse)$/,
   store: /^(dexie)$/,
   cli: /^(node:.*)$/,
-  ui: /^(preact|preact\/.*|@preact\/signals|uplot|workbox-window)$/,
+  ui: /^(preact|preact\/.*|@preact\/signals|uplot|uplot\/dist\/uPlot\.min\.css|workbox-window)$/,
 };
 
 describe('layers', () => {

@@ -33,11 +33,15 @@ export async function payloadOf(store: Store, studyIds?: readonly string[]): Pro
   );
 }
 
-/** The backup file text of these studies (all when none are named), noting the export. */
+/**
+ * The backup file text of these studies (all when none are named), noting the export. When the
+ * note cannot be written (storage full: the very moment an export is most needed) the file is
+ * still returned; the backup reminder then simply stays due.
+ */
 export async function exportBackup(store: Store, studyIds?: readonly string[], digest?: Digest): Promise<string> {
   const payload = await payloadOf(store, studyIds);
   const text = await writeBackup(payload, { device: store.device, exportedAt: store.now().toISOString(), scope: studyIds ? 'study' : 'all' }, digest);
-  await markExported(store, payload.studies.map((s) => s.id));
+  await markExported(store, payload.studies.map((s) => s.id)).catch(() => undefined);
   return text;
 }
 
