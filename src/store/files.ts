@@ -11,6 +11,7 @@ import { planMerge, type MergeConflict } from '../io/backup/merge.ts';
 import type { Digest } from '../io/sha256.ts';
 import type { CsvRunsImport } from '../io/csv/runs-import.ts';
 import { studyCsv, type StudyCsvOptions } from '../io/csv/study-csv.ts';
+import { checkRevision } from '../io/backup/validate.ts';
 import { guarded } from './errors.ts';
 import { newId } from './ids.ts';
 import { markExported } from './status.ts';
@@ -115,18 +116,28 @@ export async function importBackup(store: Store, text: string, digest?: Digest):
 export async function importRunsCsv(store: Store, mapped: CsvRunsImport): Promise<{ study: StudyRecord; runs: number }> {
   const study = newStudyRecord(store, mapped.plan);
   const savedAt = store.now().toISOString();
-  const revisions: RunRevision[] = mapped.runs.map((r) => ({
-    id: newId(),
-    runId: newId(),
-    studyId: study.id,
-    plannedRun: r.plannedRun,
-    rev: 1,
-    device: store.device,
-    parents: [],
-    restoredFrom: null,
-    savedAt,
-    ...r.values,
-  }));
+  const studies = new Map([[study.id, study]]);
+  // The same checks as reading a backup, so that the new study can be exported and read back.
+  const revisions: RunRevision[] = mapped.runs.map((r, i) =>
+    checkRevision(
+      JSON.parse(
+        JSON.stringify({
+          id: newId(),
+          runId: newId(),
+          studyId: study.id,
+          plannedRun: r.plannedRun,
+          rev: 1,
+          device: store.device,
+          parents: [],
+          restoredFrom: null,
+          savedAt,
+          ...r.values,
+        }),
+      ),
+      `runs[${i}]`,
+      studies,
+    ),
+  );
   const { db } = store;
   await guarded(() =>
     db.transaction('rw', [db.studies, db.revisions, db.runs], async () => {

@@ -7,7 +7,7 @@
  * resolves only once the transaction is on disk.
  */
 import { InputError } from '../core/errors.ts';
-import { blankForm, formFromValues, type RunForm } from '../core/study/run-form.ts';
+import { blankForm, formFromValues, parseRunForm, type RunForm } from '../core/study/run-form.ts';
 import {
   checkRunValues,
   compareRevisions,
@@ -18,8 +18,11 @@ import {
   type RunValues,
   type StudyRecord,
 } from '../core/study/study.ts';
+import { canonicalJson } from '../io/backup/canonical.ts';
+import { checkRevision } from '../io/backup/validate.ts';
+import { sha256, utf8Encode } from '../io/sha256.ts';
 import { guarded } from './errors.ts';
-import { newId } from './ids.ts';
+import { newId, uuidFromBytes } from './ids.ts';
 import { askPersistenceOnce } from './status.ts';
 import type { Store } from './store.ts';
 
@@ -89,18 +92,50 @@ export async function openRun(store: Store, runId: string): Promise<RunFormState
 
 const sameSet = (a: readonly string[], b: readonly string[]) => a.length === b.length && a.every((x) => b.includes(x));
 
+const valuesKey = (v: RunValues) =>
+  canonicalJson({ actual: v.actual, readings: v.readings, loggedAt: v.loggedAt, operator: v.operator, notes: v.notes, excluded: v.excluded, reason: v.reason });
+
+function sameTyping(study: StudyRecord, form: RunForm, values: RunValues): boolean {
+  try {
+    return valuesKey(checkRunValues(study, parseRunForm(study, form))) === valuesKey(values);
+  } catch {
+    return false; // typing that does not read as values is not what was saved: the draft stays
+  }
+}
+
+/**
+ * The id a save takes when its form's revision id was already saved with other values (two
+ * tabs that reopened one draft share its revision id): derived from that id and the values, so
+ * a retry of the same save finds it and writes nothing new.
+ */
+function derivedRevisionId(revisionId: string, values: RunValues): string {
+  return uuidFromBytes(sha256(utf8Encode(`${revisionId}\n${valuesKey(values)}`)));
+}
+
 /** Appends a revision inside the caller's transaction; returns what saveRun returns. */
 async function appendRevision(store: Store, input: SaveInput, restoredFrom: string | null): Promise<SaveResult> {
   const { db } = store;
-  const existing = await db.revisions.get(input.revisionId);
-  if (existing) {
-    if (existing.runId !== input.runId) throw new InputError(`Revision id ${input.revisionId} is already used by another run`);
-    const run = await db.runs.get(input.runId);
-    return { run: run!, revision: existing, duplicate: true, changedSince: null };
-  }
   const study = await studyIn(store, input.studyId);
   if (!plannedRunOf(study, input.plannedRun)) throw new InputError(`Run ${input.plannedRun} is not in the plan of "${study.title}"`);
   const values = checkRunValues(study, input.values);
+  let revisionId = input.revisionId;
+  for (;;) {
+    const existing = await db.revisions.get(revisionId);
+    if (!existing) break;
+    if (existing.runId !== input.runId) throw new InputError(`Revision id ${revisionId} is already used by another run`);
+    if (valuesKey(existing) === valuesKey(values)) {
+      // A second tap or a retry: nothing new. A draft still waiting on this revision id whose
+      // typing is exactly what is saved goes (else the form would reopen from it again and again);
+      // a draft with other typing stays.
+      const draft = await db.drafts.get(input.runId);
+      if (draft && draft.revisionId === input.revisionId && sameTyping(study, draft.form, values)) await db.drafts.delete(input.runId);
+      const run = await db.runs.get(input.runId);
+      return { run: run!, revision: existing, duplicate: true, changedSince: null };
+    }
+    // The same form id saved with other values (another tab on the same draft): this save is
+    // another edit, kept beside that one.
+    revisionId = derivedRevisionId(revisionId, values);
+  }
   const history = await db.revisions.where('runId').equals(input.runId).toArray();
   if (history.length > 0 && (history[0].studyId !== input.studyId || history[0].plannedRun !== input.plannedRun)) {
     throw new InputError(`Logged run ${input.runId} belongs to run ${history[0].plannedRun}; it cannot be saved as run ${input.plannedRun}`);
@@ -111,18 +146,25 @@ async function appendRevision(store: Store, input: SaveInput, restoredFrom: stri
   const before = history.length > 0 ? currentRun(history) : null;
   const changedSince = before && !sameSet(before.heads, input.parents) ? before.revisionId : null;
   const rev = history.reduce((m, r) => Math.max(m, r.rev), 0) + 1;
-  const revision: RunRevision = {
-    id: input.revisionId,
-    runId: input.runId,
-    studyId: input.studyId,
-    plannedRun: input.plannedRun,
-    rev,
-    device: store.device,
-    parents: [...input.parents],
-    restoredFrom,
-    savedAt: store.now().toISOString(),
-    ...values,
-  };
+  // The same checks as reading a backup, so that every stored revision can be exported and read back.
+  const revision: RunRevision = checkRevision(
+    JSON.parse(
+      JSON.stringify({
+        id: revisionId,
+        runId: input.runId,
+        studyId: input.studyId,
+        plannedRun: input.plannedRun,
+        rev,
+        device: store.device,
+        parents: [...input.parents],
+        restoredFrom,
+        savedAt: store.now().toISOString(),
+        ...values,
+      }),
+    ),
+    `Run ${input.plannedRun}`,
+    new Map([[study.id, study]]),
+  );
   const run = currentRun([...history, revision]);
   await db.revisions.add(revision);
   await db.runs.put(run);

@@ -133,6 +133,62 @@ describe('logged runs', () => {
     expect(s3.run.heads).toEqual([s3.revision.id]);
   });
 
+  it('two tabs that reopened one draft share its revision id: both saves are kept, and a retry writes nothing new', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, coatingPlan());
+    const opened = await openNewRun(store, study.id, 1);
+    await saveDraft(store, { ...opened, studyId: study.id }, { ...opened.form, readings: ['70', '90'] });
+    const tab1 = await openRun(store, opened.runId);
+    const tab2 = await openRun(store, opened.runId);
+    expect(tab2.revisionId).toBe(tab1.revisionId); // both come from the draft's fixed ids
+    const s1 = await saveRun(store, { ...tab1, studyId: study.id, values: parseRunForm(study, { ...tab1.form, readings: ['70', '90'] }) });
+    // Tab 2 goes on typing (its draft comes back under the same ids) and saves other values.
+    await saveDraft(store, { ...tab2, studyId: study.id }, { ...tab2.form, readings: ['55', '90'] });
+    const input2 = { ...tab2, studyId: study.id, values: parseRunForm(study, { ...tab2.form, readings: ['55', '90'] }) };
+    const s2 = await saveRun(store, input2);
+    expect(s2.duplicate).toBe(false);
+    expect(s2.revision.id).not.toBe(s1.revision.id);
+    expect(s2.changedSince).toBe(s1.revision.id);
+    expect((await runHistory(store, opened.runId)).map((r) => r.readings[0][0]).sort()).toEqual([55, 70]);
+    expect([...(await getRun(store, opened.runId)).heads].sort()).toEqual([s1.revision.id, s2.revision.id].sort());
+    expect(await getDraft(store, opened.runId)).toBeNull();
+    // The same save again (a second tap of tab 2) finds its revision.
+    const again = await saveRun(store, input2);
+    expect(again.duplicate).toBe(true);
+    expect(again.revision.id).toBe(s2.revision.id);
+    expect(await runHistory(store, opened.runId)).toHaveLength(2);
+  });
+
+  it('a draft left on a revision id that is already saved goes when the same values are saved again, and only then', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, coatingPlan());
+    const opened = await openNewRun(store, study.id, 2);
+    const input = { ...opened, studyId: study.id, values: parseRunForm(study, { ...opened.form, readings: ['70', '90'] }) };
+    await saveRun(store, input);
+    // Other typing on that id (another tab) is kept when the first save is tapped again...
+    await saveDraft(store, { ...opened, studyId: study.id }, { ...opened.form, readings: ['55', '90'] });
+    expect((await saveRun(store, input)).duplicate).toBe(true);
+    expect((await getDraft(store, opened.runId))?.form.readings).toEqual(['55', '90']);
+    // ...typing equal to what is saved is not waiting any more, and goes.
+    await saveDraft(store, { ...opened, studyId: study.id }, { ...opened.form, readings: ['70', '90'] });
+    expect((await saveRun(store, input)).duplicate).toBe(true);
+    expect(await getDraft(store, opened.runId)).toBeNull();
+  });
+
+  it('refuses a time that the backup file could not carry, and writes nothing', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, coatingPlan());
+    const opened = await openNewRun(store, study.id, 3);
+    // What Date.prototype.toString gives (ECMA-262, "Date.prototype.toString"): Date.parse reads
+    // it, but it is longer than the 40 characters of a time in trialbook-backup.schema.json.
+    const loggedAt = new Date(Date.UTC(2024, 4, 2, 12)).toString();
+    expect(Number.isNaN(Date.parse(loggedAt))).toBe(false);
+    expect(loggedAt.length).toBeGreaterThan(40);
+    const values = { ...parseRunForm(study, { ...opened.form, readings: ['70', '90'] }), loggedAt };
+    await expect(saveRun(store, { ...opened, studyId: study.id, values })).rejects.toThrow(/Run 3\.loggedAt: needs a date and time/);
+    expect(await store.db.revisions.count()).toBe(0);
+  });
+
   it('refuses bad values with a message naming the field, and writes nothing', async () => {
     const store = await freshStore();
     const study = await createStudy(store, brandPlan());

@@ -46,8 +46,11 @@ export function id(v: unknown, path: string): string {
   return v;
 }
 
+/** Longest date and time text accepted (an ISO 8601 time with fractions and offset is under 40). */
+export const MAX_TIME = 40;
+
 export function time(v: unknown, path: string): string {
-  if (typeof v !== 'string' || v.length > 40 || Number.isNaN(Date.parse(v))) fail(path, 'a date and time (ISO 8601)', v);
+  if (typeof v !== 'string' || v.length > MAX_TIME || Number.isNaN(Date.parse(v))) fail(path, 'a date and time (ISO 8601)', v);
   return v;
 }
 

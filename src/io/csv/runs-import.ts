@@ -15,6 +15,7 @@ import type { Response } from '../../core/study/response.ts';
 import { parseReadings } from '../../core/study/run-form.ts';
 import { checkRunValues, type RunValues, type StudyPlan } from '../../core/study/study.ts';
 import { SETTING_TOLERANCE } from '../../core/tolerance.ts';
+import { MAX_TEXT, MAX_TIME } from '../backup/validate.ts';
 import { bareColumnName, columnUnit, readTable, type Table } from './read-table.ts';
 
 export type ColumnRole = 'factor' | 'response' | 'block' | 'notes' | 'excluded' | 'reason' | 'operator' | 'time' | 'ignore';
@@ -269,7 +270,12 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
     }
     const reason = reIdx >= 0 ? row[reIdx].trim() : '';
     const time = tIdx >= 0 && row[tIdx].trim() !== '' ? row[tIdx].trim() : null;
-    if (time !== null && Number.isNaN(Date.parse(time))) throw new InputError(`${cellAt(i, table, tIdx)}: the time needs a date and time (ISO 8601, e.g. 2024-05-02T14:30), got "${time}"`);
+    if (time !== null && (Number.isNaN(Date.parse(time)) || time.length > MAX_TIME)) {
+      throw new InputError(`${cellAt(i, table, tIdx)}: the time needs a date and time (ISO 8601, e.g. 2024-05-02T14:30), got "${time.length > 60 ? time.slice(0, 60) + '...' : time}"`);
+    }
+    for (const [c, what] of [[nIdx, 'the notes'], [reIdx, 'the reason'], [oIdx, 'the operator']] as const) {
+      if (c >= 0 && row[c].length > MAX_TEXT) throw new InputError(`${cellAt(i, table, c)}: ${what} can hold at most ${MAX_TEXT} characters, got ${row[c].length}`);
+    }
     const corner = coded.every((v) => Math.abs(Math.abs(v) - 1) <= SETTING_TOLERANCE);
     const center = coded.every((v) => Math.abs(v) <= SETTING_TOLERANCE);
     const key = coded.map((v) => v.toPrecision(12)).join(',');

@@ -56,4 +56,23 @@ describe('CSV of runs made elsewhere', () => {
     const store = await freshStore();
     expect(await listStudies(store)).toEqual([]);
   });
+
+  it('refuses a time that the backup file could not carry, naming its row and column', async () => {
+    // Date.parse reads what Date.prototype.toString writes (ECMA-262), but a backup's times hold at
+    // most 40 characters (trialbook-backup.schema.json), so the study could not be read back.
+    const long = new Date(Date.UTC(2024, 4, 2, 12)).toString();
+    const csv = ['Temperature (°C),Gloss,Time', `160,80,${long}`, '200,91,2024-05-02T14:30'].join('\r\n');
+    expect(() => mapRunsCsv(csv, { title: 'Invented trial', factors: [{ column: 'Temperature (°C)' }], responses: [{ column: 'Gloss', goal: 'maximize' }], time: 'Time' })).toThrow(
+      /^Row 2, column 3 \("Time"\): the time needs a date and time/,
+    );
+  });
+  it('the store refuses a mapped import whose runs the backup file could not carry, and writes nothing', async () => {
+    const mapped = mapRunsCsv(CSV, { ...inspectRunsCsv(CSV).suggestion, title: 'Invented moulding trial' });
+    const long = new Date(Date.UTC(2024, 4, 2, 12)).toString(); // over the 40 characters of a backup time
+    const bad = { ...mapped, runs: mapped.runs.map((r, i) => (i === 3 ? { ...r, values: { ...r.values, loggedAt: long } } : r)) };
+    const store = await freshStore();
+    await expect(importRunsCsv(store, bad)).rejects.toThrow(/^runs\[3\]\.loggedAt: needs a date and time/);
+    expect(await listStudies(store)).toEqual([]);
+    expect(await store.db.revisions.count()).toBe(0);
+  });
 });
