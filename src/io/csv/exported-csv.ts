@@ -11,7 +11,7 @@ import { InputError } from '../../core/errors.ts';
 import { parseNumber, toCoded } from '../../core/factor/coding.ts';
 import { defineFactors, type FactorSpec } from '../../core/factor/factor.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
-import { bareColumnName, columnUnit, readTable, type Table } from './read-table.ts';
+import { bareColumnName, columnUnit, readTable, rowNumber, type Table } from './read-table.ts';
 
 /** Relative agreement needed between a coded value and the one the recovered coding gives. */
 const CODING_TOLERANCE = 1e-6;
@@ -54,7 +54,7 @@ function cell(table: Table, r: number, c: number): string {
 }
 
 function where(table: Table, r: number, c: number): string {
-  return `Row ${r + 2}, column ${c + 1} ("${table.header[c]}")`;
+  return `Row ${rowNumber(table, r)}, column ${c + 1} ("${table.header[c]}")`;
 }
 
 /** Recovers one factor's coding from the rows' actual settings and coded values. */

@@ -16,7 +16,7 @@ import { parseReadings } from '../../core/study/run-form.ts';
 import { checkRunValues, type RunValues, type StudyPlan } from '../../core/study/study.ts';
 import { SETTING_TOLERANCE } from '../../core/tolerance.ts';
 import { MAX_TEXT, MAX_TIME } from '../backup/validate.ts';
-import { bareColumnName, columnUnit, readTable, type Table } from './read-table.ts';
+import { bareColumnName, columnUnit, readTable, rowNumber, type Table } from './read-table.ts';
 
 export type ColumnRole = 'factor' | 'response' | 'block' | 'notes' | 'excluded' | 'reason' | 'operator' | 'time' | 'ignore';
 
@@ -153,7 +153,7 @@ function columnIndex(table: Table, name: string, what: string): number {
   return c;
 }
 
-const cellAt = (row: number, table: Table, c: number) => `Row ${row + 2}, column ${c + 1} ("${table.header[c]}")`;
+const cellAt = (row: number, table: Table, c: number) => `Row ${rowNumber(table, row)}, column ${c + 1} ("${table.header[c]}")`;
 
 const YES = new Set(['yes', 'y', 'true', '1', 'x', 'excluded']);
 const NO = new Set(['', 'no', 'n', 'false', '0']);
@@ -301,7 +301,7 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
     try {
       runs.push({ plannedRun: i + 1, values: checkRunValues(plan0, raw) });
     } catch (err) {
-      throw err instanceof InputError ? new InputError(`Row ${i + 2}: ${err.message}`) : err;
+      throw err instanceof InputError ? new InputError(`Row ${rowNumber(table, i)}: ${err.message}`) : err;
     }
   });
   const plan: StudyPlan = {

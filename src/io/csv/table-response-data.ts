@@ -11,7 +11,7 @@ import { InputError } from '../../core/errors.ts';
 import { parseNumber, toCoded } from '../../core/factor/coding.ts';
 import { defineFactors, type FactorSpec } from '../../core/factor/factor.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
-import { bareColumnName, columnUnit, type Table } from './read-table.ts';
+import { bareColumnName, columnUnit, rowNumber, type Table } from './read-table.ts';
 
 export interface TableColumns {
   /** Factor column names, in the order that gives their letters. */
@@ -65,7 +65,7 @@ export function tableResponseData(table: Table, cols: TableColumns): ResponseDat
     const given = cols.levels?.[factorName] ?? Object.entries(cols.levels ?? {}).find(([k]) => k.toLowerCase() === factorName.toLowerCase())?.[1];
     const cells = used.map((r) => table.rows[r][c].trim());
     cells.forEach((v, i) => {
-      if (v === '') throw new InputError(`Row ${used[i] + 2}, column "${header}": ${factorName} has no setting`);
+      if (v === '') throw new InputError(`Row ${rowNumber(table, used[i])}, column "${header}": ${factorName} has no setting`);
     });
     const numeric = cells.every((v) => Number.isFinite(parseNumber(v)));
     const unit = columnUnit(header);
@@ -106,16 +106,16 @@ export function tableResponseData(table: Table, cols: TableColumns): ResponseDat
         try {
           return toCoded(f, cell);
         } catch (err) {
-          throw new InputError(`Row ${r + 2}, column "${table.header[fIdx[j]]}": ${(err as Error).message}`);
+          throw new InputError(`Row ${rowNumber(table, r)}, column "${table.header[fIdx[j]]}": ${(err as Error).message}`);
         }
       }),
     );
     const v = parseNumber(row[yIdx]);
-    if (!Number.isFinite(v)) throw new InputError(`Row ${r + 2}, column "${table.header[yIdx]}": ${cols.response} needs a number, got "${row[yIdx]}"`);
+    if (!Number.isFinite(v)) throw new InputError(`Row ${rowNumber(table, r)}, column "${table.header[yIdx]}": ${cols.response} needs a number, got "${row[yIdx]}"`);
     y.push(v);
     if (bIdx >= 0) {
       const b = row[bIdx].trim();
-      if (b === '') throw new InputError(`Row ${r + 2}, column "${table.header[bIdx]}": the block is empty`);
+      if (b === '') throw new InputError(`Row ${rowNumber(table, r)}, column "${table.header[bIdx]}": the block is empty`);
       if (!blockIds.has(b)) blockIds.set(b, Number.isFinite(parseNumber(b)) ? parseNumber(b) : blockIds.size + 1);
       blocks.push(blockIds.get(b)!);
     }
