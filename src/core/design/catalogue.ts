@@ -13,8 +13,9 @@
  * we recall the tables (from memory: a published design may be written with other columns that
  * give an isomorphic design, i.e. the same design after relabelling factors). What the tests pin
  * down instead is the property the sources tabulate: each entry's word-length pattern is the
- * smallest of all regular fractions of its size, confirmed by an exhaustive search for 16 and
- * 32 runs (and for the smaller 64- and 128-run entries).
+ * smallest of all regular fractions of its size, confirmed for every entry by the exhaustive
+ * search of minimum-aberration.ts (in the regular tests for 8 to 32 runs and most 64- and
+ * 128-run entries; the three largest, about ten minutes, with TRIALBOOK_SLOW_TESTS=1).
  */
 import { InputError } from '../errors.ts';
 import { factorLetters } from '../factor/letters.ts';
