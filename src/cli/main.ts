@@ -15,26 +15,27 @@ const commands: Record<string, () => Promise<Command>> = {
   csv: async () => (await import('./commands/csv.ts')).csv,
 };
 
-function usage(): string {
+async function usage(): Promise<string> {
+  const rows = await Promise.all(Object.entries(commands).map(async ([name, load]) => `  ${name.padEnd(9)}${(await load()).summary}`));
   return [
-    'Trialbook command line: analyse and plan two-level experiments from exported files.',
+    'Trialbook command line: plan and analyse two-level experiments, and read exported files.',
     '',
     'Usage: npm run --silent cli -- COMMAND [options]   (COMMAND --help for its options)',
     '',
     'Commands:',
-    ...Object.keys(commands).map((name) => `  ${name}`),
+    ...rows,
   ].join('\n');
 }
 
 async function main(argv: string[]): Promise<number> {
   const [name, ...rest] = argv;
   if (!name || name === '--help' || name === '-h' || name === 'help') {
-    process.stdout.write(usage() + '\n');
+    process.stdout.write((await usage()) + '\n');
     return name ? 0 : 2;
   }
   const load = commands[name];
   if (!load) {
-    process.stderr.write(`Unknown command "${name}".\n\n${usage()}\n`);
+    process.stderr.write(`Unknown command "${name}".\n\n${await usage()}\n`);
     return 2;
   }
   const command = await load();
