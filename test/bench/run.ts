@@ -18,7 +18,7 @@ function reference(data: ReturnType<typeof case1>['data'], terms: number[]) {
 const lines: string[] = [];
 function compare(title: string, c: ReturnType<typeof case1>, batch: number) {
   const ours = medianMs(() => analyze(c.data, { terms: c.terms }), { batch });
-  const ref = medianMs(reference(c.data, c.terms), { batch: 1, rounds: 11, warmup: 2 });
+  const ref = medianMs(reference(c.data, c.terms), { batch: 1, rounds: 21, warmup: 10 });
   const a = analyze(c.data, { terms: c.terms });
   lines.push(`${title}\n  Trialbook analyze (${a.method}): ${fmtMs(ours)} median;  reference library fit: ${fmtMs(ref)} median;  ratio ${(ref / ours).toFixed(1)}x`);
 }
