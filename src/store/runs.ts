@@ -21,6 +21,7 @@ import {
 import { canonicalJson } from '../io/backup/canonical.ts';
 import { checkRevision } from '../io/backup/validate.ts';
 import { sha256, utf8Encode } from '../io/sha256.ts';
+import { listDrafts } from './drafts.ts';
 import { guarded } from './errors.ts';
 import { newId, uuidFromBytes } from './ids.ts';
 import { askPersistenceOnce } from './status.ts';
@@ -66,7 +67,20 @@ async function studyIn(store: Store, studyId: string): Promise<StudyRecord> {
   return study;
 }
 
-/** Opens the form of a new logged run of a planned run (or its draft, when one is waiting). */
+/**
+ * Opens the form for a planned run: its logged run (its draft first, when one is waiting), else a
+ * waiting draft of a new run of it, else a new run. Deciding this in one place means reopening
+ * a form never starts a second record beside a draft.
+ */
+export async function openPlannedRun(store: Store, studyId: string, plannedRun: number): Promise<RunFormState> {
+  const [runs, waiting] = await Promise.all([listRuns(store, studyId), listDrafts(store, studyId)]);
+  const logged = runs.find((r) => r.plannedRun === plannedRun);
+  if (logged) return openRun(store, logged.id);
+  const draft = waiting.find((d) => d.plannedRun === plannedRun);
+  return draft ? openRun(store, draft.runId) : openNewRun(store, studyId, plannedRun);
+}
+
+/** Opens the form of a new logged run of a planned run, with a fresh record id (see openPlannedRun). */
 export async function openNewRun(store: Store, studyId: string, plannedRun: number): Promise<RunFormState> {
   const study = await guarded(() => studyIn(store, studyId));
   if (!plannedRunOf(study, plannedRun)) throw new InputError(`Run ${plannedRun} is not in the plan of "${study.title}"`);

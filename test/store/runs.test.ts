@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/core/errors.ts';
 import { parseRunForm } from '../../src/core/study/run-form.ts';
 import { createStudy, getStudy, listStudies } from '../../src/store/studies.ts';
-import { excludeRun, getRun, listRuns, openNewRun, openRun, readmitRun, restoreRevision, runHistory, saveRun } from '../../src/store/runs.ts';
+import { excludeRun, getRun, listRuns, openNewRun, openPlannedRun, openRun, readmitRun, restoreRevision, runHistory, saveRun } from '../../src/store/runs.ts';
 import { discardDraft, getDraft, listDrafts, saveDraft } from '../../src/store/drafts.ts';
 import { closeStore, openStore } from '../../src/store/store.ts';
 import { SCHEMA_VERSION } from '../../src/store/db.ts';
@@ -243,5 +243,26 @@ describe('drafts', () => {
     expect((await getDraft(store, state.runId))?.form).toEqual(form);
     await discardDraft(store, state.runId);
     expect(await getDraft(store, state.runId)).toBeNull();
+  });
+});
+
+describe('openPlannedRun', () => {
+  it('reopens the waiting draft, then the logged run, so a planned run never gets a second record by reopening its form', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, coatingPlan());
+    const first = await openPlannedRun(store, study.id, 2);
+    expect(first.current).toBeNull();
+    await saveDraft(store, { ...first, studyId: study.id }, { ...first.form, notes: 'typed, not saved' });
+    const again = await openPlannedRun(store, study.id, 2);
+    expect(again.runId).toBe(first.runId);
+    expect(again.fromDraft).toBe(true);
+    expect(again.form.notes).toBe('typed, not saved');
+    const values = parseRunForm(again.study, { ...again.form, readings: again.form.readings.map(() => '70') });
+    await saveRun(store, { ...again, studyId: study.id, values });
+    const logged = await openPlannedRun(store, study.id, 2);
+    expect(logged.runId).toBe(first.runId);
+    expect(logged.current).not.toBeNull();
+    expect(await listRuns(store, study.id)).toHaveLength(1);
+    await expect(openPlannedRun(store, study.id, 999)).rejects.toThrow(/not in the plan/);
   });
 });

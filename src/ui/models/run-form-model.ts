@@ -9,8 +9,8 @@ import { computed, createModel, signal, type ReadonlySignal } from '@preact/sign
 import { parseNumber } from '../../core/factor/coding.ts';
 import { parseReadings, parseRunForm, type RunForm } from '../../core/study/run-form.ts';
 import { meanReading, plannedSettings, type Setting } from '../../core/study/study.ts';
-import { listDrafts, saveDraft } from '../../store/drafts.ts';
-import { listRuns, openNewRun, openRun, saveRun, type RunFormState, type SaveResult } from '../../store/runs.ts';
+import { saveDraft } from '../../store/drafts.ts';
+import { openPlannedRun, openRun, saveRun, type RunFormState, type SaveResult } from '../../store/runs.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
 
@@ -142,10 +142,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     /** Opens the form: the logged run of this planned run (or its draft), else a waiting draft of a new run, else a new run. */
     async load() {
       try {
-        const [runs, waiting] = await Promise.all([listRuns(store, studyId), listDrafts(store, studyId)]);
-        const logged = runs.find((r) => r.plannedRun === plannedRun);
-        const draft = waiting.find((d) => d.plannedRun === plannedRun && (!logged || d.runId === logged.id)) ?? null;
-        const opened = logged ? await openRun(store, logged.id) : draft ? await openRun(store, draft.runId) : await openNewRun(store, studyId, plannedRun);
+        const opened = await openPlannedRun(store, studyId, plannedRun);
         state.value = opened;
         form.value = opened.form;
         draftState.value = opened.fromDraft ? 'restored' : 'none';
