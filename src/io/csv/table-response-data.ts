@@ -3,7 +3,8 @@
  * (numbers) or level labels, coded with the given levels or, without them, with a numeric
  * column's minimum and maximum as low and high and a categorical column's first label in file
  * order as -1. Columns are matched by name with any unit in parentheses ignored; where an
- * "<name> actual" column exists (a Trialbook export), the actual settings are used. Runs whose
+ * "<name> actual" column exists (a Trialbook export), the actual settings are used, and a
+ * "<name> planned" column (a filled-in run sheet) is used when nothing else matches. Runs whose
  * response cell is empty are skipped, and so are runs marked excluded; the notes say how many.
  * Throws InputError naming row and column for a value that cannot be read.
  */
@@ -34,6 +35,9 @@ function findColumn(table: Table, name: string, what: string): number {
   if (exact >= 0) return exact;
   const loose = bare.indexOf(key);
   if (loose >= 0) return loose;
+  // A filled-in run sheet from the design command has only planned settings.
+  const planned = bare.indexOf(`${key} planned`);
+  if (planned >= 0) return planned;
   throw new InputError(`The ${what} column "${name}" is not in the file (columns: ${table.header.join(', ')})`);
 }
 
