@@ -5,7 +5,7 @@
  * only once saveRun has resolved. A wrong entry gets a message and nothing is written; a storage
  * failure shows the store's message and offers an export.
  */
-import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
+import { computed, createModel, effect, signal, type ReadonlySignal } from '@preact/signals';
 import { parseNumber } from '../../core/factor/coding.ts';
 import { parseReadings, parseRunForm, type RunForm } from '../../core/study/run-form.ts';
 import { meanReading, plannedSettings, type Setting } from '../../core/study/study.ts';
@@ -13,6 +13,7 @@ import { saveDraft } from '../../store/drafts.ts';
 import { openPlannedRun, openRun, saveRun, type RunFormState, type SaveResult } from '../../store/runs.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
+import { markUnsaved } from '../lib/unsaved-forms.ts';
 
 export type SaveState = 'loading' | 'editing' | 'saving' | 'saved';
 export type DraftState = 'none' | 'restored' | 'keeping' | 'kept' | 'failed';
@@ -117,6 +118,21 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     change({ readings });
   }
 
+  /** True when there is something to save: a new run, typing waiting in a draft, or a change since the form opened. */
+  const dirty = computed(() => {
+    const s = state.value;
+    const f = form.value;
+    if (!s || !f) return false;
+    if (!s.current || s.fromDraft) return true;
+    return JSON.stringify(f) !== JSON.stringify(s.form);
+  });
+  // An app update waits while this form holds unsaved typing (components/update-banner).
+  const formKey = `run-form:${studyId}:${plannedRun}`;
+  effect(() => {
+    markUnsaved(formKey, dirty.value && saveState.value !== 'saved');
+    return () => markUnsaved(formKey, false);
+  });
+
   return {
     state: state as ReadonlySignal<RunFormState | null>,
     form: form as ReadonlySignal<RunForm | null>,
@@ -128,14 +144,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     actualErrors,
     readingErrors,
     means,
-    /** True when there is something to save: a new run, typing waiting in a draft, or a change since the form opened. */
-    dirty: computed(() => {
-      const s = state.value;
-      const f = form.value;
-      if (!s || !f) return false;
-      if (!s.current || s.fromDraft) return true;
-      return JSON.stringify(f) !== JSON.stringify(s.form);
-    }),
+    dirty,
     /** True when the run has been saved before (this form adds a revision). */
     isLogged: computed(() => state.value?.current != null),
 
