@@ -1,22 +1,26 @@
 /**
- * The analysis of one response in plain words: the effects ranked by size with a bar each, how
- * much of the variation the model accounts for, the curvature check from the center runs, and
- * the analysis's warnings.
+ * The analysis of one response in plain words: the effects ranked by size with a bar each, the
+ * interaction chart of a two-factor term the person picks, how much of the variation the model
+ * accounts for, the curvature check from the center runs, the residual charts, and the
+ * analysis's warnings.
  */
 import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
-import type { Analysis, TermEstimate } from '../../../core/fit/analysis.ts';
+import type { Analysis, RunDiagnostics, TermEstimate } from '../../../core/fit/analysis.ts';
 import type { Factor } from '../../../core/factor/factor.ts';
-import { termFactors } from '../../../core/model/term.ts';
+import { termFactors, type Term } from '../../../core/model/term.ts';
 import type { Response } from '../../../core/study/response.ts';
 import type { Store } from '../../../store/store.ts';
 import { BarList, type BarRow } from '../../components/bar-list/index.tsx';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { HalfNormalChart } from '../../components/half-normal-chart/index.tsx';
+import { InteractionChart } from '../../components/interaction-chart/index.tsx';
+import { ResidualChart } from '../../components/residual-chart/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { num, percent, pValue, setting, signed, termLabel, withUnit } from '../../lib/format.ts';
-import { AnalysisModel, MODEL_CHOICES } from '../../models/analysis-model.ts';
+import { AnalysisModel, MODEL_CHOICES, twoFactorTerms } from '../../models/analysis-model.ts';
+import { interactionLines } from './interaction-lines.ts';
 import { href } from '../../models/router-model.ts';
 
 export type AnalysisScreenProps = { readonly store: Store; readonly studyId: string };
@@ -65,6 +69,84 @@ function effectRows(ranked: readonly TermEstimate[], a: Analysis, factors: reado
   });
 }
 
+/** |studentized residual| above this marks a run that stands out (common practice). */
+const STANDS_OUT = 3;
+
+function standsOut(r: RunDiagnostics): boolean {
+  return r.studentized !== null && Math.abs(r.studentized) > STANDS_OUT;
+}
+
+function InteractionSection({ a, term, response, onChoose }: { a: Analysis; term: Term | null; response: Response; onChoose: (t: Term) => void }) {
+  const two = twoFactorTerms(a);
+  if (term === null || two.length === 0) {
+    return <p class="quiet">This model has no two-factor interactions; choose “With interactions” above to see how one factor's effect depends on another.</p>;
+  }
+  const view = interactionLines(a, term);
+  const unit = response.unit ? ` (${response.unit})` : '';
+  return (
+    <>
+      {two.length > 1 && (
+        <ChoiceButtons label="Interaction" options={two.map((t) => ({ value: t.term, label: `${termLabel(t.name)} (${t.letters})` }))} value={term} onChoose={onChoose} />
+      )}
+      <p class="quiet">
+        {response.name} as the model predicts it: {view.across.name} across, one line for {view.held.name} low and one for it high.
+      </p>
+      <InteractionChart
+        acrossName={view.across.name}
+        acrossLabels={view.acrossLabels}
+        heldName={view.held.name}
+        lines={view.lines}
+        responseLabel={`${response.name}${unit}`}
+        othersNote={view.others.length > 0 ? `Held: ${view.others.join('; ')}.` : ''}
+      />
+    </>
+  );
+}
+
+function ResidualSection({ a, response }: { a: Analysis; response: Response }) {
+  const unit = response.unit ? ` (${response.unit})` : '';
+  if (a.df.residual === 0) {
+    return <p class="quiet">No runs are left over after fitting this model, so every residual is zero and there is nothing to plot; fit fewer terms to see them.</p>;
+  }
+  const marked = a.runs.filter(standsOut);
+  const common = (r: RunDiagnostics) => ({ label: r.label, residual: r.residual, residualShown: signed(r.residual), marked: standsOut(r) });
+  return (
+    <>
+      <p class="quiet">A residual is a run's value minus the model's fitted value for it.</p>
+      <ResidualChart
+        title="Residual against fitted value"
+        points={a.runs.map((r) => ({ ...common(r), x: r.fitted, xShown: num(r.fitted) }))}
+        xLabel={`Fitted value${unit}`}
+        yLabel={`Residual${unit}`}
+        xColumn="Fitted value"
+        caption="Look for a funnel or a curve; points scattered evenly about zero are what you want."
+      />
+      <ResidualChart
+        title="Residual against run order"
+        points={a.runs.map((r, i) => ({ ...common(r), x: i + 1, xShown: String(i + 1) }))}
+        xLabel="Run (run-sheet order)"
+        yLabel={`Residual${unit}`}
+        xColumn="Place"
+        caption="Runs in run-sheet order (by planned run number, not the time logged); look for a drift or a step."
+        order
+      />
+      <div class="residual-verdict" aria-live="polite">
+        {a.sigma === null ? (
+          <p>Studentized residuals need an estimate of the noise, which these runs do not give.</p>
+        ) : marked.length === 0 ? (
+          <p>No run stands out: every studentized residual is between −{STANDS_OUT} and +{STANDS_OUT}.</p>
+        ) : (
+          marked.map((r) => (
+            <p key={r.label} class="warning">
+              <strong>Run {r.label} stands out</strong>: studentized residual {signed(r.studentized!, 2)} (beyond ±{STANDS_OUT}). Check its log for a slip or an upset before trusting the fit.
+            </p>
+          ))
+        )}
+      </div>
+    </>
+  );
+}
+
 export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
   const model = useModel(() => new AnalysisModel(store, studyId));
   useEffect(() => void model.load(), []);
@@ -108,6 +190,8 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
               <HalfNormalChart points={result.analysis.halfNormal} axisLabel={`Size of effect${response.unit ? ` (${response.unit})` : ''}`} />
             </>
           )}
+          <h3>Interaction chart</h3>
+          <InteractionSection a={result.analysis} term={model.interactionTerm.value} response={response} onChoose={(t) => model.chooseInteraction(t)} />
           <h3>How well the model fits</h3>
           <ul class="facts">
             <li>
@@ -134,6 +218,8 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
               </li>
             )}
           </ul>
+          <h3>Residuals</h3>
+          <ResidualSection a={result.analysis} response={response} />
           {result.analysis.warnings.length > 0 && (
             <>
               <h3>Notes on these runs</h3>
