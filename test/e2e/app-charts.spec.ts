@@ -98,8 +98,8 @@ test('the residual charts hold one point per run used, with the zero line and th
   for (const [i, r] of a.runs.entries()) {
     await expectShownAs(fitted.locator('tbody tr').nth(i).locator('td').nth(0), r.fitted);
   }
-  const out = a.runs.filter((r) => r.studentized !== null && Math.abs(r.studentized) > 3);
-  if (out.length === 0) await expect(page.getByText('No run stands out: every studentized residual is between −3 and +3.')).toBeVisible();
+  const out = a.runs.filter((r) => r.deleted !== null && Math.abs(r.deleted) > 3);
+  if (out.length === 0) await expect(page.getByText(/No run stands out: every residual, measured against the noise of the other runs, is between −3 and \+3/)).toBeVisible();
   for (const r of out) await expect(page.getByText(`Run ${r.label} stands out`)).toBeVisible();
   await expect(page.getByText('Runs in run-sheet order (by planned run number, not the time logged)')).toBeVisible();
 });

@@ -32,7 +32,7 @@ export function analysisJson(a: Analysis): Record<string, unknown> {
     ...(a.lenth ? { lenth: { pse: a.lenth.pse, me: a.lenth.me, sme: a.lenth.sme, m: a.lenth.m, df: a.lenth.df, effects: a.lenth.effects } } : {}),
     ...(a.curvature ? { curvature: a.curvature } : {}),
     ...(a.aliased.length > 0 ? { aliased: a.aliased } : {}),
-    runs: a.runs.map((r) => ({ run: r.label, y: r.y, fitted: r.fitted, residual: r.residual, leverage: r.leverage, studentized: r.studentized, kind: r.kind })),
+    runs: a.runs.map((r) => ({ run: r.label, y: r.y, fitted: r.fitted, residual: r.residual, leverage: r.leverage, studentized: r.studentized, deleted: r.deleted, kind: r.kind })),
     halfNormal: a.halfNormal,
     warnings: a.warnings,
   };

@@ -61,6 +61,12 @@ export interface RunDiagnostics {
   readonly leverage: number;
   /** Internally studentized residual e / (sigma sqrt(1 - h)); null when sigma is unknown or h = 1. */
   readonly studentized: number | null;
+  /**
+   * Externally studentized (deleted) residual r sqrt((df - 1) / (df - r^2)): the residual over
+   * the noise estimated without this run, so one wild run cannot hide itself; null when the
+   * residual df is below 2 or the internal one is null.
+   */
+  readonly deleted: number | null;
   readonly kind: 'factorial' | 'center' | 'other';
 }
 

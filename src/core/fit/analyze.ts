@@ -327,13 +327,17 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     const e = fit.residuals[i];
     if (h >= LEVERAGE_ONE) pressOk = false;
     else press += (e / (1 - h)) ** 2;
+    const r = sigma !== null && sigma > 0 && h < LEVERAGE_ONE ? e / (sigma * Math.sqrt(1 - h)) : null;
     runs.push({
       label: data.labels[i] ?? String(i + 1),
       y: y[i],
       fitted: fit.fitted[i],
       residual: e,
       leverage: h,
-      studentized: sigma !== null && sigma > 0 && h < LEVERAGE_ONE ? e / (sigma * Math.sqrt(1 - h)) : null,
+      studentized: r,
+      // Belsley, Kuh and Welsch, Regression Diagnostics (1980), Eq. 2.26; Montgomery, Peck and Vining,
+      // Introduction to Linear Regression Analysis, 5th ed., section 4.2.3 (R-student).
+      deleted: r !== null && dfRes > 1 && dfRes - r * r > 0 ? r * Math.sqrt((dfRes - 1) / (dfRes - r * r)) : null,
       kind: kinds[i],
     });
   }

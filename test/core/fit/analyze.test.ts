@@ -252,3 +252,27 @@ describe('analyze: bad input gets a clear message', () => {
     expect(() => analyze({ ...base, coded: coded.slice(0, 2), y: [1, 2], labels: ['1', '2'] })).toThrow(/at least 3 runs/);
   });
 });
+
+describe('analyze: externally studentized residuals equal a leave-one-out refit', () => {
+  it('r_(i) = e_i / (sigma_(i) sqrt(1 - h_i)) with sigma_(i) from the fit without run i (Belsley, Kuh and Welsch 1980, Eq. 2.26)', () => {
+    const data = fixtureData('montgomery-8e-ex6-6-center-points.csv', { factors: ['Time', 'Temperature'], response: 'Yield' });
+    const a = analyze(data, { terms: parseTerms('A + B', data.factors) });
+    for (let i = 0; i < data.y.length; i++) {
+      const keep = data.y.map((_, j) => j).filter((j) => j !== i);
+      const without = analyze(
+        { ...data, coded: keep.map((j) => data.coded[j]), y: keep.map((j) => data.y[j]), labels: keep.map((j) => data.labels[j]) },
+        { terms: parseTerms('A + B', data.factors), forceQr: true },
+      );
+      const run = a.runs[i];
+      expect(run.deleted!).toBeCloseTo(run.residual / (without.sigma! * Math.sqrt(1 - run.leverage)), 10);
+    }
+  });
+  it('is null when the residual df is below 2', () => {
+    const data = fixtureData('montgomery-8e-ex6-2-filtration-2x4.csv', {
+      factors: ['Temperature', 'Pressure', 'Concentration', 'Stirring'],
+      response: 'Filtration rate',
+    });
+    const a = analyze(data, { terms: termsUpToOrder(4, 4) });
+    expect(a.runs.every((r) => r.deleted === null)).toBe(true);
+  });
+});

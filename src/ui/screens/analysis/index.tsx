@@ -69,11 +69,11 @@ function effectRows(ranked: readonly TermEstimate[], a: Analysis, factors: reado
   });
 }
 
-/** |studentized residual| above this marks a run that stands out (common practice). */
+/** |deleted (externally studentized) residual| above this marks a run that stands out (common practice). */
 const STANDS_OUT = 3;
 
 function standsOut(r: RunDiagnostics): boolean {
-  return r.studentized !== null && Math.abs(r.studentized) > STANDS_OUT;
+  return r.deleted !== null && Math.abs(r.deleted) > STANDS_OUT;
 }
 
 function InteractionSection({ a, term, response, onChoose }: { a: Analysis; term: Term | null; response: Response; onChoose: (t: Term) => void }) {
@@ -134,11 +134,11 @@ function ResidualSection({ a, response }: { a: Analysis; response: Response }) {
         {a.sigma === null ? (
           <p>Studentized residuals need an estimate of the noise, which these runs do not give.</p>
         ) : marked.length === 0 ? (
-          <p>No run stands out: every studentized residual is between −{STANDS_OUT} and +{STANDS_OUT}.</p>
+          <p>No run stands out: every residual, measured against the noise of the other runs, is between −{STANDS_OUT} and +{STANDS_OUT} standard errors.</p>
         ) : (
           marked.map((r) => (
             <p key={r.label} class="warning">
-              <strong>Run {r.label} stands out</strong>: studentized residual {signed(r.studentized!, 2)} (beyond ±{STANDS_OUT}). Check its log for a slip or an upset before trusting the fit.
+              <strong>Run {r.label} stands out</strong>: {signed(r.deleted!, 2)} standard errors from its fitted value, against the noise of the other runs (beyond ±{STANDS_OUT}). Check its log for a slip or an upset before trusting the fit.
             </p>
           ))
         )}
