@@ -10,6 +10,7 @@ import { AppModel } from '../models/app-model.ts';
 import { href, RouterModel, type Route } from '../models/router-model.ts';
 import { AnalysisScreen } from '../screens/analysis/index.tsx';
 import { ExportScreen } from '../screens/export/index.tsx';
+import { NewStudyScreen } from '../screens/new-study/index.tsx';
 import { QuickCardScreen } from '../screens/quick-card/index.tsx';
 import { RunFormScreen } from '../screens/run-form/index.tsx';
 import { RunSheetScreen } from '../screens/run-sheet/index.tsx';
@@ -31,6 +32,8 @@ function Screen({ route, store }: { route: Route; store: Store }) {
       return <QuickCardScreen store={store} studyId={route.studyId} />;
     case 'export':
       return <ExportScreen store={store} studyId={route.studyId} />;
+    case 'new':
+      return <NewStudyScreen store={store} />;
     case 'missing':
       return (
         <section>

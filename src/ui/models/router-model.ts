@@ -1,6 +1,7 @@
 /**
  * In-app navigation by the address's hash: #/, #/study/ID, #/study/ID/run/N,
- * #/study/ID/analysis, #/study/ID/predict, #/export (all studies) and #/study/ID/export.
+ * #/study/ID/analysis, #/study/ID/predict, #/export (all studies), #/study/ID/export and #/new
+ * (plan a new study).
  */
 import { computed, createModel, effect, signal } from '@preact/signals';
 
@@ -11,6 +12,7 @@ export type Route =
   | { readonly name: 'analysis'; readonly studyId: string }
   | { readonly name: 'predict'; readonly studyId: string }
   | { readonly name: 'export'; readonly studyId: string | null }
+  | { readonly name: 'new' }
   | { readonly name: 'missing'; readonly path: string };
 
 /** The route of a hash ('#/study/abc/run/3' -> run 3 of study abc). */
@@ -19,6 +21,7 @@ export function parseRoute(hash: string): Route {
   const parts = path.split('/').filter((p) => p !== '').map((p) => decodeURIComponent(p));
   if (parts.length === 0) return { name: 'studies' };
   if (parts[0] === 'export' && parts.length === 1) return { name: 'export', studyId: null };
+  if (parts[0] === 'new' && parts.length === 1) return { name: 'new' };
   if (parts[0] === 'study' && parts.length >= 2) {
     const studyId = parts[1];
     if (parts.length === 2) return { name: 'sheet', studyId };
@@ -38,6 +41,7 @@ export const href = {
   analysis: (id: string) => `#/study/${encodeURIComponent(id)}/analysis`,
   predict: (id: string) => `#/study/${encodeURIComponent(id)}/predict`,
   export: (id?: string | null) => (id ? `#/study/${encodeURIComponent(id)}/export` : '#/export'),
+  newStudy: () => '#/new',
 };
 
 export const RouterModel = createModel(() => {

@@ -17,6 +17,9 @@ export function StudiesScreen({ store }: StudiesScreenProps) {
   return (
     <section>
       <h2>Studies</h2>
+      <a class="btn primary block" href={href.newStudy()}>
+        Plan a new study
+      </a>
       {problem && <ProblemBox problem={problem} />}
       {model.loading.value && <p class="quiet">Reading the studies on this device…</p>}
       {!model.loading.value && !problem && model.summaries.value.length === 0 && <p>There are no studies on this device yet.</p>}

@@ -1,0 +1,279 @@
+/**
+ * Plan a new study: title and purpose, factors, responses and the design, with a live preview of
+ * the plan (run count, summary, defining relation, resolution, notes) before "Create study"
+ * stores it and opens its run sheet. A wrong entry is explained beside the form; nothing is made.
+ */
+import { useModel } from '@preact/signals';
+import { useRef } from 'preact/hooks';
+import { romanResolution } from '../../../core/design/defining-relation.ts';
+import { factorLetters } from '../../../core/factor/letters.ts';
+import type { Store } from '../../../store/store.ts';
+import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
+import { CountStepper } from '../../components/count-stepper/index.tsx';
+import { ProblemBox } from '../../components/problem-box/index.tsx';
+import { href } from '../../models/router-model.ts';
+import { BLOCK_CHOICES, MAX_FORM_FACTORS, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
+
+export type NewStudyScreenProps = { readonly store: Store };
+
+const KIND_CHOICES = [
+  { value: 'numeric' as const, label: 'Numbers' },
+  { value: 'categorical' as const, label: 'Named levels' },
+];
+const GOAL_CHOICES = [
+  { value: 'maximize' as const, label: 'Maximize' },
+  { value: 'minimize' as const, label: 'Minimize' },
+  { value: 'target' as const, label: 'Hit a target' },
+];
+const ORDER_CHOICES = [
+  { value: 'random' as const, label: 'Randomised' },
+  { value: 'standard' as const, label: 'Standard order' },
+];
+
+function valueOf(e: Event): string {
+  return (e.currentTarget as HTMLInputElement | HTMLTextAreaElement).value;
+}
+
+type TextFieldProps = {
+  readonly id: string;
+  readonly label: string;
+  readonly value: string;
+  readonly onInput: (v: string) => void;
+  readonly numeric?: boolean;
+  readonly invalid?: boolean;
+  readonly placeholder?: string;
+};
+
+function TextField({ id, label, value, onInput, numeric, invalid, placeholder }: TextFieldProps) {
+  return (
+    <div class="field">
+      <label for={id} class="field-name">
+        {label}
+      </label>
+      <input
+        id={id}
+        class={numeric ? 'num' : 'text'}
+        type="text"
+        inputMode={numeric ? 'decimal' : undefined}
+        autocomplete="off"
+        value={value}
+        placeholder={placeholder}
+        aria-invalid={invalid ? true : undefined}
+        onInput={(e) => onInput(valueOf(e))}
+      />
+    </div>
+  );
+}
+
+/** True once a factor row has both its settings typed, so a message about them is worth showing. */
+function filledIn(f: FactorDraft): boolean {
+  return f.kind === 'numeric' ? f.low.trim() !== '' && f.high.trim() !== '' : f.levelA.trim() !== '' && f.levelB.trim() !== '';
+}
+
+export function NewStudyScreen({ store }: NewStudyScreenProps) {
+  const model = useModel(() => new NewStudyModel(store));
+  const problemRef = useRef<HTMLDivElement>(null);
+  const factors = model.factors.value;
+  const letters = factorLetters(factors.length);
+  const preview = model.preview.value;
+  const design = preview.design;
+  const problem = model.problem.value;
+
+  async function create() {
+    const made = await model.create();
+    if (made) location.hash = href.sheet(made.id);
+    else problemRef.current?.scrollIntoView({ block: 'center' });
+  }
+
+  return (
+    <section class="new-study">
+      <a class="back" href={href.studies()}>
+        ‹ All studies
+      </a>
+      <h2>Plan a new study</h2>
+
+      <div class="group">
+        <TextField id="ns-title" label="Title" value={model.title.value} onInput={(v) => model.setTitle(v)} invalid={model.tried.value && model.title.value.trim() === ''} />
+        <div class="field">
+          <label for="ns-purpose" class="field-name">
+            Purpose
+          </label>
+          <textarea id="ns-purpose" class="text" rows={2} value={model.purpose.value} onInput={(e) => model.setPurpose(valueOf(e))} />
+        </div>
+      </div>
+
+      <fieldset class="group">
+        <legend>Factors</legend>
+        <p class="quiet">What you change on purpose, each at two levels.</p>
+        {factors.map((f, i) => {
+          const letter = letters[i];
+          const message = model.factorMessages.value[i];
+          const show = message !== null && (model.tried.value || filledIn(f));
+          return (
+            <div class="plan-card" key={f.key} data-factor={letter}>
+              <div class="plan-card-head">
+                <span class="plan-card-title">Factor {letter}</span>
+                <button type="button" class="btn ghost" aria-label={`Remove factor ${letter}`} onClick={() => model.removeFactor(i)}>
+                  Remove
+                </button>
+              </div>
+              <TextField id={`ns-f${f.key}-name`} label={`Factor ${letter} name`} value={f.name} onInput={(v) => model.setFactor(i, { name: v })} />
+              <ChoiceButtons label={`Factor ${letter} levels are`} options={KIND_CHOICES} value={f.kind} onChoose={(kind) => model.setFactor(i, { kind })} />
+              {f.kind === 'numeric' ? (
+                <>
+                  <div class="pair">
+                    <TextField id={`ns-f${f.key}-low`} label={`Factor ${letter} low`} numeric value={f.low} onInput={(v) => model.setFactor(i, { low: v })} invalid={show} />
+                    <TextField id={`ns-f${f.key}-high`} label={`Factor ${letter} high`} numeric value={f.high} onInput={(v) => model.setFactor(i, { high: v })} invalid={show} />
+                  </div>
+                  <TextField id={`ns-f${f.key}-unit`} label={`Factor ${letter} unit`} value={f.unit} placeholder="e.g. °C" onInput={(v) => model.setFactor(i, { unit: v })} />
+                </>
+              ) : (
+                <div class="pair">
+                  <TextField id={`ns-f${f.key}-a`} label={`Factor ${letter} level 1`} value={f.levelA} onInput={(v) => model.setFactor(i, { levelA: v })} invalid={show} />
+                  <TextField id={`ns-f${f.key}-b`} label={`Factor ${letter} level 2`} value={f.levelB} onInput={(v) => model.setFactor(i, { levelB: v })} invalid={show} />
+                </div>
+              )}
+              {show && (
+                <p class="field-error" role="alert">
+                  {message}
+                </p>
+              )}
+            </div>
+          );
+        })}
+        <button type="button" class="btn block" disabled={factors.length >= MAX_FORM_FACTORS} onClick={() => model.addFactor()}>
+          + Add a factor
+        </button>
+      </fieldset>
+
+      <fieldset class="group">
+        <legend>Responses</legend>
+        <p class="quiet">What you will measure at each run.</p>
+        {model.responses.value.map((r: ResponseDraft, i) => (
+          <div class="plan-card" key={r.key}>
+            <div class="plan-card-head">
+              <span class="plan-card-title">Response {i + 1}</span>
+              <button type="button" class="btn ghost" aria-label={`Remove response ${i + 1}`} onClick={() => model.removeResponse(i)}>
+                Remove
+              </button>
+            </div>
+            <TextField id={`ns-r${r.key}-name`} label={`Response ${i + 1} name`} value={r.name} onInput={(v) => model.setResponse(i, { name: v })} />
+            <TextField id={`ns-r${r.key}-unit`} label={`Response ${i + 1} unit`} value={r.unit} onInput={(v) => model.setResponse(i, { unit: v })} />
+            <ChoiceButtons label={`Response ${i + 1} goal`} options={GOAL_CHOICES} value={r.goal} onChoose={(goal) => model.setResponse(i, { goal })} />
+            {r.goal === 'target' && <TextField id={`ns-r${r.key}-target`} label={`Response ${i + 1} target`} numeric value={r.target} onInput={(v) => model.setResponse(i, { target: v })} />}
+          </div>
+        ))}
+        <button type="button" class="btn block" onClick={() => model.addResponse()}>
+          + Add a response
+        </button>
+        {model.tried.value && model.responseProblem.value && (
+          <p class="field-error" role="alert">
+            {model.responseProblem.value}
+          </p>
+        )}
+      </fieldset>
+
+      <fieldset class="group">
+        <legend>Design</legend>
+        <ChoiceButtons label="Runs of the factorial" options={model.options.value.map((o) => ({ value: o.value, label: o.label }))} value={model.fraction.value} onChoose={(v) => model.chooseFraction(v)} />
+        {model.options.value.length === 1 && factors.length >= 2 && <p class="quiet field-hint">Fractions from the catalogue start at 8 runs, so they need 4 factors or more.</p>}
+        {!model.fractionOffered.value && <p class="field-error">The {model.fraction.value} fraction is not offered for {factors.length} factors; choose one of the above.</p>}
+        <CountStepper id="ns-center" label="Center runs" hint="Per replicate; numeric factors at the middle of their ranges." value={model.centerRuns.value} min={0} onChange={(v) => model.setCenterRuns(v)} />
+        <CountStepper id="ns-replicates" label="Replicates" hint="Times the whole design is run." value={model.replicates.value} min={1} onChange={(v) => model.setReplicates(v)} />
+        <div class="choice-compact">
+          <ChoiceButtons label="Blocks per replicate" options={BLOCK_CHOICES.map((n) => ({ value: n, label: String(n) }))} value={model.blocks.value} onChoose={(n) => model.chooseBlocks(n)} />
+        </div>
+        <ChoiceButtons label="Run order" options={ORDER_CHOICES} value={model.randomise.value ? 'random' : 'standard'} onChoose={(v) => model.setRandomise(v === 'random')} />
+        {model.randomise.value && (
+          <div class="field">
+            <label for="ns-seed" class="field-name">
+              Seed of the run order
+            </label>
+            <p class="quiet field-hint">
+              {model.seedDrawn.value ? `Blank: seed ${model.seed.value} was drawn and will be recorded.` : 'The same seed gives the same run order on any device.'}
+            </p>
+            <div class="stepper">
+              <input
+                id="ns-seed"
+                class="num"
+                type="text"
+                inputMode="numeric"
+                autocomplete="off"
+                placeholder={String(model.seed.value)}
+                value={model.seedText.value}
+                onInput={(e) => model.setSeedText(valueOf(e))}
+              />
+              <button type="button" class="btn" onClick={() => model.redrawSeed()}>
+                New seed
+              </button>
+            </div>
+          </div>
+        )}
+      </fieldset>
+
+      <section class="plan-preview" aria-label="Preview of the plan" aria-live="polite">
+        <h3>Preview</h3>
+        {design ? (
+          <>
+            <p class="plan-runs">{design.runs.length} runs</p>
+            <p class="plan-summary">{design.summary}</p>
+            <dl class="plan-facts">
+              <div>
+                <dt>Resolution</dt>
+                <dd class="plan-resolution">{design.resolution === null ? 'Full factorial (no aliases)' : romanResolution(design.resolution)}</dd>
+              </div>
+              {design.definingRelation.length > 0 && (
+                <div>
+                  <dt>Defining relation</dt>
+                  <dd class="plan-relation">I = {design.definingRelation.join(' = ')}</dd>
+                </div>
+              )}
+              {design.generators.length > 0 && (
+                <div>
+                  <dt>Generators</dt>
+                  <dd>{design.generators.join(', ')}</dd>
+                </div>
+              )}
+              {design.blockWords.length > 0 && (
+                <div>
+                  <dt>Confounded with blocks</dt>
+                  <dd>{design.blockWords.join(', ')}</dd>
+                </div>
+              )}
+              <div>
+                <dt>Run order</dt>
+                <dd>{design.seed === null ? 'Standard order' : `Randomised, seed ${design.seed}`}</dd>
+              </div>
+            </dl>
+            {design.notes.length > 0 && (
+              <ul class="warnings plan-notes">
+                {design.notes.map((n) => (
+                  <li key={n}>{n}</li>
+                ))}
+              </ul>
+            )}
+          </>
+        ) : (
+          <p class="plan-not-ready">Not ready yet: {preview.error}</p>
+        )}
+      </section>
+
+      <div ref={problemRef}>{problem && <ProblemBox problem={problem} />}</div>
+      <div class="plan-bar">
+        <p class="plan-bar-state" aria-hidden="true">
+          {design ? (
+            <>
+              <span class="plan-bar-runs">{design.runs.length} runs</span>
+              <span class="plan-bar-res">{design.resolution === null ? 'full factorial' : `resolution ${romanResolution(design.resolution)}`}</span>
+            </>
+          ) : (
+            'Not ready yet'
+          )}
+        </p>
+        <button type="button" class="btn primary big" disabled={model.creating.value} onClick={() => void create()}>
+          {model.creating.value ? 'Creating…' : 'Create study'}
+        </button>
+      </div>
+    </section>
+  );
+}
