@@ -6,8 +6,7 @@
  * colour, and the table below the chart carries the same four values for a screen reader. Drawn
  * with uPlot, loaded only when the chart is first shown.
  */
-import { useSignal } from '@preact/signals';
-import { useEffect, useRef } from 'preact/hooks';
+import { useUplot } from '../../lib/use-uplot.ts';
 import { num } from '../../lib/format.ts';
 import './style.css';
 
@@ -33,61 +32,43 @@ const STYLES = [
 ];
 
 export function InteractionChart({ acrossName, acrossLabels, heldName, lines, responseLabel, othersNote }: InteractionChartProps) {
-  const box = useRef<HTMLDivElement>(null);
-  const state = useSignal<'loading' | 'ready' | 'failed'>('loading');
   const key = JSON.stringify([acrossName, acrossLabels, heldName, lines, responseLabel]);
-  useEffect(() => {
-    let chart: { destroy(): void } | null = null;
-    let cancelled = false;
-    import('uplot').then(
-      ({ default: UPlot }) => {
-        const el = box.current;
-        if (cancelled || !el) return;
-        const font = '16px system-ui, sans-serif';
-        const all = lines.flatMap((l) => l.values);
-        const lo = Math.min(...all);
-        const hi = Math.max(...all);
-        const pad = (hi - lo) * 0.15 || Math.abs(hi) * 0.05 || 1;
-        chart = new UPlot(
+  const { box, state } = useUplot((UPlot, el) => {
+    const font = '16px system-ui, sans-serif';
+    const all = lines.flatMap((l) => l.values);
+    const lo = Math.min(...all);
+    const hi = Math.max(...all);
+    const pad = (hi - lo) * 0.15 || Math.abs(hi) * 0.05 || 1;
+    return new UPlot(
+      {
+        width: Math.max(260, el.clientWidth),
+        height: 280,
+        legend: { show: false },
+        cursor: { show: false },
+        scales: { x: { time: false, range: () => [-0.22, 1.22] }, y: { range: () => [lo - pad, hi + pad] } },
+        axes: [
           {
-            width: Math.max(260, el.clientWidth),
-            height: 280,
-            legend: { show: false },
-            cursor: { show: false },
-            scales: { x: { time: false, range: () => [-0.22, 1.22] }, y: { range: () => [lo - pad, hi + pad] } },
-            axes: [
-              {
-                label: acrossName,
-                font,
-                labelFont: font,
-                stroke: INK,
-                grid: { show: false },
-                splits: () => [0, 1],
-                values: () => [...acrossLabels],
-              },
-              { label: responseLabel, font, labelFont: font, stroke: INK, grid: { stroke: '#dfe3e8' }, size: 56 },
-            ],
-            series: [
-              {},
-              ...lines.map((_l, i) => {
-                const s = STYLES[i % STYLES.length];
-                return { stroke: s.stroke, width: 3, dash: s.dash, points: { show: true, size: 14, width: 3, fill: s.fill, stroke: s.stroke } };
-              }),
-            ],
+            label: acrossName,
+            font,
+            labelFont: font,
+            stroke: INK,
+            grid: { show: false },
+            splits: () => [0, 1],
+            values: () => [...acrossLabels],
           },
-          [[0, 1], ...lines.map((l) => [...l.values])],
-          el,
-        );
-        state.value = 'ready';
+          { label: responseLabel, font, labelFont: font, stroke: INK, grid: { stroke: '#dfe3e8' }, size: 56 },
+        ],
+        series: [
+          {},
+          ...lines.map((_l, i) => {
+            const s = STYLES[i % STYLES.length];
+            return { stroke: s.stroke, width: 3, dash: s.dash, points: { show: true, size: 14, width: 3, fill: s.fill, stroke: s.stroke } };
+          }),
+        ],
       },
-      () => {
-        if (!cancelled) state.value = 'failed';
-      },
+      [[0, 1], ...lines.map((l) => [...l.values])],
+      el,
     );
-    return () => {
-      cancelled = true;
-      chart?.destroy();
-    };
   }, [key]);
   const label = `Interaction chart of ${acrossName} and ${heldName}: ${responseLabel} predicted at ${acrossName} ${acrossLabels[0]} and ${acrossLabels[1]}, one line for each setting of ${heldName}`;
   return (
