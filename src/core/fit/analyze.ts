@@ -38,7 +38,7 @@ import { fitYates, yatesCells } from './fit-yates.ts';
 import { halfNormalQuantiles } from './half-normal.ts';
 import { lenth, LENTH_MIN_CONTRASTS } from './lenth.ts';
 import type { LinearFit } from './linear-fit.ts';
-import { pureError, pureErrorOfGroups, settingGroups } from './pure-error.ts';
+import { labelGroups, pureErrorOfGroups, settingGroups } from './pure-error.ts';
 import { saturatedEffects } from './saturated-effects.ts';
 
 export interface AnalyzeOptions {
@@ -218,8 +218,30 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
       termRowsAdj.push(fRow(name, 1, (fit.coef[j] * fit.coef[j]) / fit.covUnscaled[j * m + j]));
     }
   }
-  // Yates path: the runs sharing a cell (or all center runs) are the repeated settings.
-  const pe = cells ? pureErrorOfGroups(Int32Array.from(cells, (c) => (c < 0 ? 1 << k : c)), y) : pureError(coded, y, blocks);
+  // Repeats: runs of one planned point when the plan is known, else runs at identical settings
+  // (on the Yates path, the runs sharing a cell, or all center runs).
+  const groups = data.points
+    ? labelGroups(data.points, blocks)
+    : cells
+      ? Int32Array.from(cells, (c) => (c < 0 ? 1 << k : c))
+      : settingGroups(coded, blocks);
+  const pe = pureErrorOfGroups(groups, y);
+  if (data.points && pe.df > 0) {
+    // Repeats of a planned point run at slightly different actual settings: near replicates.
+    const exact = settingGroups(coded, blocks);
+    const near = new Set<number>();
+    const firstExact = new Map<number, number>();
+    for (let i = 0; i < n; i++) {
+      const f = firstExact.get(groups[i]);
+      if (f === undefined) firstExact.set(groups[i], exact[i]);
+      else if (f !== exact[i]) near.add(groups[i]);
+    }
+    if (near.size > 0) {
+      warnings.push(
+        `Pure error comes from repeats of the same planned point; in ${near.size} of them the actual settings differ slightly, so pure error and lack of fit are approximate (each group is treated as runs at one point).`,
+      );
+    }
+  }
   const dfLof = dfRes - pe.df;
   const tail: AnovaRow[] = [{ source: 'Residual', df: dfRes, ss: fit.rss, ms: msRes, f: null, p: null }];
   let lofP: number | null = null;
@@ -267,8 +289,8 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
   let lenthOut: Analysis['lenth'] = null;
   const factorialRows: number[] = [];
   kinds.forEach((kd, i) => kd === 'factorial' && factorialRows.push(i));
-  // Unreplicated: no two factorial runs share their settings (blocks aside).
-  const unblockedGroups = blocks ? settingGroups(coded, null) : pe.groupOf;
+  // Unreplicated: no two factorial runs share their planned point or settings (blocks aside).
+  const unblockedGroups = !blocks ? groups : data.points ? labelGroups(data.points, null) : settingGroups(coded, null);
   const distinctPoints = new Set(factorialRows.map((i) => unblockedGroups[i])).size;
   let effectsForChart: { name: string; letters: string; effect: number }[] = termEstimates.map((t) => ({
     name: t.name,

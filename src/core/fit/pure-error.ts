@@ -3,9 +3,9 @@
  * of each group about its own mean, with sum(n_g - 1) degrees of freedom. Lack of fit is the rest
  * of the residual. Source: Montgomery, Design and Analysis of Experiments, 8th ed., section
  * 10.7 (testing for lack of fit); Draper and Smith, Applied Regression Analysis, 3rd ed., ch. 2.1.
- * Settings count as the same when they agree within SETTING_TOLERANCE in coded units: the fit
- * uses the actual settings, so only runs the fit cannot tell apart form a group.
- * Cost O(n log n k).
+ * When the runs come from a plan, repeats of one planned point form a group even if their actual
+ * settings differ slightly (near replicates); the sum is then an approximation, and the analysis
+ * says so (common practice: the runs were meant as replicates).
  */
 import { SETTING_TOLERANCE } from '../tolerance.ts';
 
@@ -50,7 +50,23 @@ export function settingGroups(coded: readonly (readonly number[])[], blocks: rea
   return groupOf;
 }
 
-/** Pure error from given groups (group numbers 0 .. G-1, or any non-negative ids). Cost O(n + G). */
+/** Group number of each run from labels (runs with the same label and block share one). Cost O(n). */
+export function labelGroups(labels: readonly string[], blocks: readonly number[] | null | undefined): Int32Array {
+  const ids = new Map<string, number>();
+  const groupOf = new Int32Array(labels.length);
+  for (let i = 0; i < labels.length; i++) {
+    const key = blocks ? `${blocks[i]}|${labels[i]}` : labels[i];
+    let g = ids.get(key);
+    if (g === undefined) ids.set(key, (g = ids.size));
+    groupOf[i] = g;
+  }
+  return groupOf;
+}
+
+/**
+ * Sum of squares of `values` about their group means (group numbers 0 .. G-1, or any
+ * non-negative ids), with sum(n_g - 1) degrees of freedom. Cost O(n + G).
+ */
 export function pureErrorOfGroups(groupOf: Int32Array, y: ArrayLike<number>): PureError {
   let size = 0;
   for (let i = 0; i < groupOf.length; i++) if (groupOf[i] >= size) size = groupOf[i] + 1;

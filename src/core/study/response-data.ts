@@ -16,6 +16,12 @@ export interface ResponseData {
   readonly y: readonly number[];
   /** Block of each run, or null when the runs carry no block. */
   readonly blocks: readonly number[] | null;
+  /**
+   * The planned point of each run, when the runs come from a plan: runs planned at the same
+   * settings share one, so their spread is pure error even when the actual settings they were
+   * run at differ slightly. Absent: runs count as repeats only at identical actual settings.
+   */
+  readonly points?: readonly string[] | null;
   /** Run labels for reports (run numbers), aligned with the rows. */
   readonly labels: readonly string[];
   /** What was skipped and why ("2 excluded runs skipped"), for the report. */

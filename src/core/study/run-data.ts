@@ -35,6 +35,7 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
   const y: number[] = [];
   const blocks: number[] = [];
   const labels: string[] = [];
+  const points: string[] = [];
   const seen = new Map<number, number>();
   let excluded = 0;
   let missing = 0;
@@ -53,7 +54,10 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     if (readings.length > 1) repeated++;
     coded.push(study.factors.map((f, i) => toCoded(f, run.actual[i])));
     y.push(mean);
-    blocks.push(plannedRunOf(study, run.plannedRun)?.block ?? 1);
+    const planned = plannedRunOf(study, run.plannedRun);
+    blocks.push(planned?.block ?? 1);
+    // Runs planned at the same coded settings are repeats of one point, whatever their actuals.
+    points.push(planned ? planned.coded.join(',') : `run ${run.plannedRun}`);
     const k = (seen.get(run.plannedRun) ?? 0) + 1;
     seen.set(run.plannedRun, k);
     labels.push(k === 1 ? String(run.plannedRun) : `${run.plannedRun}#${k}`);
@@ -72,6 +76,7 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     coded,
     y,
     blocks: blocked ? blocks : null,
+    points,
     labels,
     notes,
   };

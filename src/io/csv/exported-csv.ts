@@ -18,7 +18,7 @@ const CODING_TOLERANCE = 1e-6;
 
 export interface ExportedCsvLayout {
   /** Factor names in declared order, with their actual-settings and coded column indices. */
-  readonly factors: readonly { readonly name: string; readonly actual: number; readonly coded: number }[];
+  readonly factors: readonly { readonly name: string; readonly actual: number; readonly coded: number; readonly planned: number }[];
   /** Response names, with the value (mean) column index. */
   readonly responses: readonly { readonly name: string; readonly value: number }[];
   readonly excluded: number;
@@ -34,7 +34,7 @@ export function exportedCsvLayout(table: Table): ExportedCsvLayout | null {
     const m = /^(.*) coded$/.exec(bare[c]);
     if (!m) return [];
     const actual = at(`${m[1]} actual`);
-    return actual >= 0 ? [{ name: h.replace(/ coded$/, '').trim(), actual, coded: c }] : [];
+    return actual >= 0 ? [{ name: h.replace(/ coded$/, '').trim(), actual, coded: c, planned: at(`${m[1]} planned`) }] : [];
   });
   const responses = table.header.flatMap((h, c) => {
     const m = /^(.*) readings$/.exec(bare[c]);
@@ -161,6 +161,8 @@ export function exportedCsvResponseData(csvText: string, responseName: string, f
     coded,
     y,
     blocks: blocks && blocks.some((b) => b !== 1) ? blocks : null,
+    // Runs planned at the same settings are repeats of one point (pure error), whatever their actuals.
+    points: chosen.every((f) => f.planned >= 0) ? used.map((r) => chosen.map((f) => cell(table, r, f.planned)).join('|')) : null,
     labels: used.map((r) => cell(table, r, layout.run)),
     notes,
   };

@@ -276,3 +276,30 @@ describe('analyze: externally studentized residuals equal a leave-one-out refit'
     expect(a.runs.every((r) => r.deleted === null)).toBe(true);
   });
 });
+
+describe('analyze: pure error from repeats of a planned point (near replicates)', () => {
+  const data = fixtureData('montgomery-8e-ex6-1-plasma-etch-2x3.csv', { factors: ['Gap', 'Flow', 'Power'], response: 'Etch rate' });
+  const terms = termsUpToOrder(3, 3);
+  const points = data.coded.map((row) => row.join(','));
+
+  it('with exact repeats, the planned points give the printed pure error (Montgomery 8th ed., Table 6.6: SS_E = 18,020.50 on 8 df)', () => {
+    const a = analyze({ ...data, points }, { terms });
+    expect(a.df.pureError).toBe(8);
+    expect(a.anova.rows.find((r) => r.source === 'Pure error')!.ss).toBeCloseTo(18020.5, 6);
+    expect(a.warnings.join(' ')).not.toMatch(/near replicates/);
+  });
+
+  it('with slightly off-target actual settings, only the planned points still find the repeats, and the report says it is approximate', () => {
+    // Invented setting errors of up to 2% of the half-range on every run.
+    const off = data.coded.map((row, i) => row.map((v, f) => v + 0.02 * Math.sin(3 * i + f)));
+    const byActual = analyze({ ...data, coded: off }, { terms });
+    expect(byActual.df.pureError).toBeNull(); // no two actual settings are identical
+    const byPoint = analyze({ ...data, coded: off, points }, { terms: termsUpToOrder(3, 2) });
+    expect(byPoint.df.pureError).toBe(8);
+    // the same responses in the same groups: the printed pure error
+    expect(byPoint.anova.rows.find((r) => r.source === 'Pure error')!.ss).toBeCloseTo(18020.5, 6);
+    expect(byPoint.df.lackOfFit).toBe(1);
+    expect(byPoint.anova.rows.find((r) => r.source === 'Lack of fit')!.ss).toBeGreaterThanOrEqual(0);
+    expect(byPoint.warnings.join(' ')).toMatch(/in 8 of them the actual settings differ slightly, so pure error and lack of fit are approximate/);
+  });
+});
