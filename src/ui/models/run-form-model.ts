@@ -9,7 +9,7 @@ import { computed, createModel, effect, signal, type ReadonlySignal } from '@pre
 import { parseNumber } from '../../core/factor/coding.ts';
 import { parseReadings, parseRunForm, type RunForm } from '../../core/study/run-form.ts';
 import { meanReading, plannedSettings, type Setting } from '../../core/study/study.ts';
-import { saveDraft } from '../../store/drafts.ts';
+import { discardDraft, saveDraft } from '../../store/drafts.ts';
 import { openPlannedRun, openRun, saveRun, type RunFormState, type SaveResult } from '../../store/runs.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
@@ -133,6 +133,22 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     return () => markUnsaved(formKey, false);
   });
 
+  /** Reopens the form from the stored run (after a restore wrote a new current version). */
+  async function reload() {
+    await drafts;
+    const s = state.peek();
+    try {
+      const opened = s ? await openRun(store, s.runId) : await openPlannedRun(store, studyId, plannedRun);
+      state.value = opened;
+      form.value = opened.form;
+      draftState.value = opened.fromDraft ? 'restored' : 'none';
+      saveState.value = 'editing';
+      problem.value = null;
+    } catch (err) {
+      problem.value = problemOf(err);
+    }
+  }
+
   return {
     state: state as ReadonlySignal<RunFormState | null>,
     form: form as ReadonlySignal<RunForm | null>,
@@ -159,6 +175,22 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
       } catch (err) {
         problem.value = problemOf(err);
       }
+    },
+
+    reload,
+
+    /** Throws away the typing not yet saved (its draft too) and shows the saved run again. */
+    async discardTyping() {
+      const s = state.peek();
+      if (!s || saveState.peek() === 'saving') return;
+      await drafts;
+      try {
+        await discardDraft(store, s.runId);
+      } catch (err) {
+        problem.value = problemOf(err);
+        return;
+      }
+      await reload();
     },
 
     setActual(i: number, text: string) {

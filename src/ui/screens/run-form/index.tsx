@@ -10,6 +10,7 @@ import type { Store } from '../../../store/store.ts';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { ReadingsField } from '../../components/readings-field/index.tsx';
+import { RunHistory } from '../../components/run-history/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { setting, when } from '../../lib/format.ts';
 import { fileName, downloadText, mimeOf } from '../../lib/save-file.ts';
@@ -24,6 +25,7 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
   const model = useModel(() => new RunFormModel(store, studyId, plannedRun));
   const exporting = useSignal(false);
   const exportNote = useSignal<string | null>(null);
+  const showHistory = useSignal(false);
   useEffect(() => void model.load(), []);
 
   const state = model.state.value;
@@ -68,9 +70,30 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
           Logged {when(state.current.savedAt)} · {state.current.revisions} {state.current.revisions === 1 ? 'version' : 'versions'} kept. Saving adds a new version; nothing is overwritten.
         </p>
       )}
+      {state.current && !showHistory.value && (
+        <button type="button" class="btn block history-open" disabled={busy} onClick={() => (showHistory.value = true)}>
+          History ({state.current.revisions} {state.current.revisions === 1 ? 'version' : 'versions'})
+        </button>
+      )}
+      {state.current && showHistory.value && (
+        <RunHistory
+          store={store}
+          study={study}
+          runId={state.runId}
+          unsaved={model.dirty.value && saveState !== 'saved'}
+          onRestored={() => void model.reload()}
+          onSaveFirst={() => {
+            showHistory.value = false;
+            requestAnimationFrame(() => document.querySelector<HTMLElement>('.run-form .save-bar button[type="submit"]')?.focus());
+          }}
+          onDiscard={() => void model.discardTyping()}
+          onClose={() => (showHistory.value = false)}
+        />
+      )}
       {draftState === 'restored' && <p class="notice">Your earlier typing was kept and is back. It is not saved yet.</p>}
 
       <form
+        hidden={showHistory.value}
         onSubmit={(e) => {
           e.preventDefault();
           void model.save().then(() => {
@@ -212,10 +235,10 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
           )}
         </div>
       </form>
-      {saveState === 'saved' && model.lastSave.value?.changedSince && (
+      {!showHistory.value && saveState === 'saved' && model.lastSave.value?.changedSince && (
         <p class="notice">This run was changed elsewhere after the form opened. Both versions are kept in its history.</p>
       )}
-      {saveState === 'saved' && (
+      {!showHistory.value && saveState === 'saved' && (
         <a class="btn block" href={href.sheet(study.id)}>
           Back to the run sheet
         </a>
