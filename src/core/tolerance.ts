@@ -14,3 +14,7 @@ export const SETTING_TOLERANCE = 1e-9;
 
 /** A response whose spread is below this fraction of its magnitude is constant. Common practice. */
 export const CONSTANT_TOLERANCE = 1e-12;
+
+/** Off-diagonal entries of R below this fraction of sqrt(|R_ii R_jj|) count as zero when deciding
+ * whether the model columns are orthogonal (sequential = adjusted sums of squares). Common practice. */
+export const ORTHOGONALITY_TOLERANCE = 1e-9;

@@ -1,5 +1,6 @@
 /** The analyze command's readable report, in Trialbook's own plain-words layout. */
 import type { Analysis, AnovaTable } from '../../core/fit/analysis.ts';
+import { combinationLabel } from '../../core/fit/combination-label.ts';
 import { num, pval, table } from './numbers.ts';
 
 function anovaText(t: AnovaTable): string {
@@ -77,7 +78,7 @@ export function analysisText(a: Analysis): string {
     out.push('');
     out.push('Terms these runs cannot separate');
     for (const t of a.aliased) {
-      out.push(`  ${t.letters} = ${t.combination.map((c, i) => `${i === 0 ? (c.weight < 0 ? '-' : '') : c.weight < 0 ? ' - ' : ' + '}${Math.abs(Math.abs(c.weight) - 1) < 1e-9 ? '' : num(Math.abs(c.weight)) + ' '}${c.letters}`).join('')}`);
+      out.push(`  ${t.letters} = ${combinationLabel(t.combination)}`);
     }
   }
   if (a.warnings.length > 0) {

@@ -32,6 +32,7 @@ import type {
   TermEstimate,
 } from './analysis.ts';
 import { blockLevels, modelColumns, modelMatrix, type Column } from './columns.ts';
+import { combinationLabel } from './combination-label.ts';
 import { curvature as curvatureTest, runKinds } from './curvature.ts';
 import { fitQr } from './fit-qr.ts';
 import { fitYates, yatesCells } from './fit-yates.ts';
@@ -104,13 +105,6 @@ function columnLabel(c: Column, data: ResponseData): { name: string; letters: st
   return { name: termName(c.term, data.factors), letters: termLetters(c.term, data.factors) };
 }
 
-function signed(weight: number, letters: string, first: boolean): string {
-  const w = Math.abs(weight);
-  const coef = Math.abs(w - 1) < 1e-9 ? '' : `${fmt(w)} `;
-  if (first) return `${weight < 0 ? '-' : ''}${coef}${letters}`;
-  return ` ${weight < 0 ? '-' : '+'} ${coef}${letters}`;
-}
-
 export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analysis {
   validate(data);
   const { factors, coded, y } = data;
@@ -178,7 +172,7 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     const est = estimate(j);
     // Built field by field: object spreads are slow on this hot path (see test/bench).
     const base = { term: c.term, name: label.name, letters: label.letters, coef: est.coef, se: est.se, t: est.t, p: est.p, ci: est.ci, effect: 2 * est.coef };
-    termEstimates.push(extra ? { ...base, estimates: label.letters + extra.map((e) => signed(e.weight, e.letters, false)).join('') } : base);
+    termEstimates.push(extra ? { ...base, estimates: combinationLabel([{ letters: label.letters, weight: 1 }, ...extra]) } : base);
   }
   if (blocks) blockEffects.push({ block: levels[levels.length - 1], effect: -blockSum });
 
@@ -309,7 +303,7 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
       lenthResult = lenth(sat.map((s) => s.effect));
       effectsForChart = sat.map((s) => ({
         name: termName(s.term, factors),
-        letters: termLetters(s.term, factors) + s.aliases.map((a) => signed(a.weight, termLetters(a.term, factors), false)).join(''),
+        letters: combinationLabel([{ letters: termLetters(s.term, factors), weight: 1 }, ...s.aliases.map((a) => ({ letters: termLetters(a.term, factors), weight: a.weight }))]),
         effect: s.effect,
       }));
       if (lenthResult.m < LENTH_MIN_CONTRASTS) {

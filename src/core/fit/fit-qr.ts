@@ -6,7 +6,7 @@
  * Seber and Lee, Linear Regression Analysis, 2nd ed., section 11.3 (QR for regression, sequential SS).
  * Cost O(n p^2).
  */
-import { RANK_TOLERANCE } from '../tolerance.ts';
+import { ORTHOGONALITY_TOLERANCE, RANK_TOLERANCE } from '../tolerance.ts';
 import { applyQ, applyQt, householderQr } from '../linalg/householder-qr.ts';
 import { crossInverse, invertUpper, solveUpper } from '../linalg/triangular.ts';
 import type { Column } from './columns.ts';
@@ -71,7 +71,7 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
   let orthogonal = !lean;
   for (let j = 0; j < m && orthogonal; j++) {
     for (let i = 0; i < j; i++) {
-      if (Math.abs(f.r[j * m + i]) > 1e-9 * Math.sqrt(Math.abs(f.r[i * m + i] * f.r[j * m + j]))) {
+      if (Math.abs(f.r[j * m + i]) > ORTHOGONALITY_TOLERANCE * Math.sqrt(Math.abs(f.r[i * m + i] * f.r[j * m + j]))) {
         orthogonal = false;
         break;
       }
