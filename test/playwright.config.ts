@@ -11,7 +11,8 @@ function chromiumPath(): string {
   }
 }
 
-const PORT = 4317;
+// TRIALBOOK_TEST_PORT lets two checkouts run their browser tests side by side.
+const PORT = Number(process.env.TRIALBOOK_TEST_PORT ?? 4317);
 
 export default defineConfig({
   testDir: './e2e',
