@@ -17,6 +17,15 @@ export const RUN_KINDS = ['factorial', 'center', 'axial', 'path', 'confirmation'
 /** The kind of a planned run: one of RUN_KINDS. */
 export type RunKind = (typeof RUN_KINDS)[number];
 
+/** The words a screen or report uses for each run kind (a factorial run is a corner of the cube). */
+export const RUN_KIND_NAMES: Readonly<Record<RunKind, string>> = {
+  factorial: 'corner',
+  center: 'center point',
+  axial: 'axial point',
+  path: 'path run',
+  confirmation: 'confirmation run',
+};
+
 /** True when the value is one of RUN_KINDS. Example: isRunKind('axial') -> true; isRunKind('star') -> false. */
 export function isRunKind(v: unknown): v is RunKind {
   return typeof v === 'string' && (RUN_KINDS as readonly string[]).includes(v);
