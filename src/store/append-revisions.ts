@@ -37,15 +37,19 @@ export interface Appended {
   readonly runs: readonly LoggedRun[];
 }
 
-/** A record as a file would hold it (members left undefined dropped), so every stored record can be exported and read back. */
-const plain = (v: unknown): unknown => JSON.parse(JSON.stringify(v));
+/**
+ * A checked record as a file would hold it (members left undefined dropped), so every stored
+ * record can be exported and read back. Taken after the checks, never before: JSON would turn a
+ * NaN into null, which the checks would then take for "nothing" instead of refusing it.
+ */
+const plain = <T>(v: T): T => JSON.parse(JSON.stringify(v)) as T;
 
 /** Checks and appends new studies and revisions, and updates the touched runs, in one transaction. Throws InputError (nothing written) at the first record that fails its checks. */
 export async function appendRevisions(store: Store, records: NewRecords): Promise<Appended> {
   const { db } = store;
   return db.transaction('rw', [db.studies, db.revisions, db.runs], async () => {
     const savedAt = store.now().toISOString();
-    const studies = (records.studies ?? []).map((s, i) => checkStudy(plain(s), records.studies!.length === 1 ? 'study' : `studies[${i}]`));
+    const studies = (records.studies ?? []).map((s, i) => plain(checkStudy(s, records.studies!.length === 1 ? 'study' : `studies[${i}]`)));
     checkUniqueIds(studies, 'studies', 'study');
     const known = new Map(studies.map((s) => [s.id, s]));
     const made = (records.made ?? []).map((r) => ({ ...r, device: store.device, savedAt }));
@@ -53,8 +57,8 @@ export async function appendRevisions(store: Store, records: NewRecords): Promis
     const wanted = [...new Set([...made, ...imported].map((r) => r.studyId))].filter((id) => !known.has(id));
     if (wanted.length > 0) for (const s of await db.studies.bulkGet(wanted)) if (s) known.set(s.id, s);
     const revisions = [
-      ...made.map((r, i) => checkRevision(plain(r), records.pathOf ? records.pathOf(i, r) : `Run ${r.plannedRun}`, known)),
-      ...imported.map((r, i) => checkRevision(plain(r), `revisions[${i}]`, known)),
+      ...made.map((r, i) => plain(checkRevision(r, records.pathOf ? records.pathOf(i, r) : `Run ${r.plannedRun}`, known))),
+      ...imported.map((r, i) => plain(checkRevision(r, `revisions[${i}]`, known))),
     ];
     const runIds = [...new Set(revisions.map((r) => r.runId))];
     const history = runIds.length > 0 ? await db.revisions.where('runId').anyOf(runIds).toArray() : [];

@@ -18,8 +18,9 @@ export function newStudyRecord(store: Store, plan: StudyPlan): StudyRecord {
   const { factors: _inDesign, ...design } = plan.design as StudyPlan['design'] & { factors?: unknown };
   const responses = Array.isArray(plan.responses) ? plan.responses.map((r) => (typeof r === 'object' && r !== null ? { ...r, lowerBound: r.lowerBound ?? null } : r)) : plan.responses;
   const draft = { ...plan, responses, design, id: newId(), device: store.device, createdAt: store.now().toISOString() };
-  // The same checks as an import, so that every stored study can be exported and read back.
-  return checkStudy(JSON.parse(JSON.stringify(draft)), 'study');
+  // The same checks as an import, so that every stored study can be exported and read back
+  // (checked before the JSON copy: JSON would turn a NaN into null instead of refusing it).
+  return JSON.parse(JSON.stringify(checkStudy(draft, 'study'))) as StudyRecord;
 }
 
 /** Makes a study from its plan and saves it; resolves once it is on disk. */
