@@ -5,7 +5,7 @@
  * by id, so the same file twice changes nothing and two phones' files merge into their union.
  */
 import { InputError } from '../core/errors.ts';
-import { currentRun, type RunRevision, type StudyRecord } from '../core/study/study.ts';
+import type { RunRevision, StudyRecord } from '../core/study/study.ts';
 import { readBackup, writeBackup, type Backup, type BackupPayload } from '../io/backup/backup.ts';
 import { planMerge, type MergeConflict } from '../io/backup/merge.ts';
 import type { Digest } from '../io/digest.ts';
