@@ -170,7 +170,7 @@ export function buildDesign(spec: DesignSpec): Design {
   }
   const seed = randomise ? spec.seed ?? drawSeed() : null;
   const ordered = orderRuns(drafts, { seed, sortBy });
-  const runs: DesignRun[] = ordered.map((d, i) => ({ run: i + 1, yates: d.yates, replicate: d.replicate, block: d.block, kind: d.kind, coded: [...d.coded] }));
+  const runs: DesignRun[] = ordered.map((d, i) => ({ run: i + 1, yates: d.yates, replicate: d.replicate, block: d.block, originBlock: d.block, kind: d.kind, coded: [...d.coded] }));
 
   // What the design can and cannot separate.
   const res = resolutionOf(relation);
