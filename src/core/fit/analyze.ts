@@ -271,7 +271,7 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
   // Curvature from center points.
   const kinds = runKinds(factors, coded);
   const curv = curvatureTest(kinds, y, pe);
-  if (curv && curv.p !== null && curv.p < alpha) {
+  if (curv && curv.p !== null && curv.p < alpha && !terms.some(isSquare)) {
     warnings.push(
       `Curvature is significant (p = ${fmt(curv.p)}): the center runs differ from the factorial average, so this first-order model is biased near the center. Add axial runs for a second-order design before relying on predictions inside the range.`,
     );

@@ -7,7 +7,7 @@
 import { InputError } from '../errors.ts';
 import type { FittedModel } from '../fit/analysis.ts';
 import { tIntervals } from '../fit/t-intervals.ts';
-import { termLetters, termName, termValue, type Term } from '../model/term.ts';
+import { isSquare, termLetters, termName, termValue, type Term } from '../model/term.ts';
 import { CAUTION } from './caution.ts';
 import { cachedPredictor } from './compiled-predictor.ts';
 import { outsideRange, type OutsideSetting } from './outside-range.ts';
@@ -63,7 +63,8 @@ function fmtP(p: number): string {
 /**
  * The notes a prediction from this model carries: no residual df (so no intervals), an average
  * block, and significant curvature (p < alpha from the center runs; Montgomery, Design and
- * Analysis of Experiments, 8th ed., section 6.8). Cost O(1).
+ * Analysis of Experiments, 8th ed., section 6.8), which biases a model without squares and is
+ * allowed for by one with them. Cost O(terms).
  * Example: modelNotes({ ...model, curvatureP: 0.2 }, 0.05) -> [] for an unblocked model with residual df.
  */
 export function modelNotes(model: FittedModel, alpha: number): string[] {
@@ -75,8 +76,11 @@ export function modelNotes(model: FittedModel, alpha: number): string[] {
   }
   if (model.blockColumns > 0) out.push('The prediction is for an average block.');
   if (model.curvatureP !== null && model.curvatureP < alpha) {
+    const squares = model.terms.filter(isSquare);
     out.push(
-      `Curvature is significant (p ${fmtP(model.curvatureP)}): the center runs differ from the corners, so this first-order model is biased between the corners as well.`,
+      squares.length > 0
+        ? `Curvature is significant (p ${fmtP(model.curvatureP)}): the center runs differ from the corners; the model's square terms (${squares.map((t) => termLetters(t, model.factors)).join(', ')}) allow for it.`
+        : `Curvature is significant (p ${fmtP(model.curvatureP)}): the center runs differ from the corners, so this first-order model is biased between the corners as well.`,
     );
   }
   return out;

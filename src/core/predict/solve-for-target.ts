@@ -64,6 +64,8 @@ export interface Solution {
   readonly stationary: { readonly real: number | null; readonly coded: number; readonly fit: number } | null;
   /** Fit with the factor at its -1 and +1 settings (with a square the fit between may go beyond them). */
   readonly reach: readonly [number, number];
+  /** The lowest and highest fit over the tested range of the factor, the others held: what it can reach. */
+  readonly span: readonly [number, number];
   /** The setting the model would need outside the tested range (an extrapolation); null otherwise. */
   readonly needed: { readonly real: number | null; readonly coded: number } | null;
   /** Every factor's setting, the solved one included. */
@@ -172,6 +174,7 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
   let needed: Solution['needed'] = null;
   let solutions: { setting: number; coded: number }[] = [];
   let stationary: Solution['stationary'] = null;
+  let spanLoHi: [number, number];
   const inRange = (c: number) => Math.abs(c) <= 1 + SETTING_TOLERANCE;
   const clamp = (c: number) => Math.max(-1, Math.min(1, c));
   const realOf = (c: number) => toReal(f, c) as number;
@@ -180,6 +183,7 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
     const lo = Math.min(reach[0], reach[1]);
     const hi = Math.max(reach[0], reach[1]);
     const span = `${fmt(lo)} to ${fmt(hi)}`;
+    spanLoHi = [lo, hi];
     if (Math.abs(s) <= ZERO_SLOPE_TOLERANCE * scale) {
       coded = 0;
       reachable = Math.abs(target - a) <= ZERO_SLOPE_TOLERANCE * scale;
@@ -220,7 +224,8 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
       if (fitAt(c) < fitAt(cLo)) cLo = c;
       if (fitAt(c) > fitAt(cHi)) cHi = c;
     }
-    const span = `${fmt(fitAt(cLo))} to ${fmt(fitAt(cHi))}`;
+    spanLoHi = [fitAt(cLo), fitAt(cHi)];
+    const span = `${fmt(spanLoHi[0])} to ${fmt(spanLoHi[1])}`;
     const roots = quadraticRoots(q, s, a - target);
     const inside = roots.filter(inRange).map(clamp);
     messages.push(
@@ -289,6 +294,7 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
     quadratic: q,
     stationary,
     reach,
+    span: spanLoHi,
     needed,
     settings,
     outside: outsideFactors.length > 0,

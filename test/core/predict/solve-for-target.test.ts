@@ -133,6 +133,10 @@ describe('solveForTarget with a square: the model is quadratic in the factor sol
     expect(s.slope).toBe(1);
     expect(s.stationary!.coded).toBeCloseTo(0.125, 15);
     expect(s.stationary!.fit).toBeCloseTo(10.0625, 14);
+    // the span over the range: from the low end (10 - 1 - 4 = 5) up to the turning point, by hand
+    expect(s.span[0]).toBe(5);
+    expect(s.span[1]).toBeCloseTo(10.0625, 14);
+    expect(s.reach).toEqual([5, 7]);
     expect(s.messages.join(' ')).toMatch(/Two settings of A inside the tested range give 9\.5: 3\.75 \(coded -0\.25\) and 7\.5 \(coded \+0\.5\)/);
     expect(s.messages.join(' ')).toMatch(/The model is quadratic in A/);
   });
