@@ -19,21 +19,23 @@ function num(x: number): string {
 
 /**
  * A probability as "n times in m": the fraction n/m (m = 2, 3, 4, 5 or 10) nearest to p,
- * smallest m on a tie; "almost always (more than 99 times in 100)" above 0.99 and "hardly ever (less than 1 time
- * in 100)" below 0.01. Throws InputError for p outside 0 to 1.
+ * smallest m on a tie; "more than 9 times in 10" or "less than 1 time in 10" where no such
+ * fraction is nearer; "almost always, more than 99 times in 100" above 0.99 and "hardly ever,
+ * less than 1 time in 100" below 0.01. Throws InputError for p outside 0 to 1.
  * Example: chanceInWords(0.67) -> "about 2 times in 3"; chanceInWords(0.5) -> "about 1 time in 2".
  */
 export function chanceInWords(p: number): string {
   if (!(p >= 0 && p <= 1)) throw new InputError(`A chance is a probability from 0 to 1, got ${p}`);
-  if (p > 0.99) return 'almost always (more than 99 times in 100)';
-  if (p < 0.01) return 'hardly ever (less than 1 time in 100)';
+  if (p > 0.99) return 'almost always, more than 99 times in 100';
+  if (p < 0.01) return 'hardly ever, less than 1 time in 100';
   let best = { n: 0, m: 1, err: Infinity };
   for (const m of DENOMINATORS) {
     const n = Math.round(p * m);
     const err = Math.abs(p - n / m);
     if (n >= 1 && n < m && err < best.err - 1e-12) best = { n, m, err };
   }
-  if (best.n === 0) return p < 0.5 ? 'about 1 time in 10 or less' : 'about 9 times in 10 or more';
+  // Only past 0.95 or below 0.05 does no n/m with 0 < n < m come nearer than 1/10 or 9/10.
+  if (best.n === 0) return p < 0.5 ? 'less than 1 time in 10' : 'more than 9 times in 10';
   return `about ${best.n} time${best.n === 1 ? '' : 's'} in ${best.m}`;
 }
 

@@ -65,8 +65,10 @@ export interface PlanPower {
   readonly replicatesNeeded: number | null;
   /** Standard error of that main effect (twice the coefficient's), in the response's units. */
   readonly standardError: number;
-  /** The main effect with the largest standard error (every main effect when they are equal). */
+  /** The main effect with the largest standard error (the first when they are equal). */
   readonly mainEffect: Term;
+  /** True when every main effect in the model has the same standard error (an orthogonal plan). */
+  readonly mainEffectsAlike: boolean;
   /** The model terms used, in model order. */
   readonly terms: readonly Term[];
   /** Runs in the plan and replicates planned. */
@@ -223,6 +225,7 @@ export function planPower(design: Pick<Design, 'factors' | 'runs' | 'screening'>
       mainEffect = t;
     }
   }
+  const mainEffectsAlike = mains.every((t) => model.inverseDiagonal[terms.indexOf(t)] >= cjj * (1 - 1e-9));
   const planned = atCopies(model, copies, cjj);
   let power: number | null = null;
   let smallestEffect: number | null = null;
@@ -261,6 +264,7 @@ export function planPower(design: Pick<Design, 'factors' | 'runs' | 'screening'>
     replicatesNeeded,
     standardError: 2 * sigma * planned.se,
     mainEffect,
+    mainEffectsAlike,
     terms,
     runs: design.runs.length,
     replicates: copies,

@@ -16,9 +16,10 @@ describe('chanceInWords', () => {
     expect(chanceInWords(0.8)).toBe('about 4 times in 5');
     expect(chanceInWords(0.42)).toBe('about 2 times in 5');
     expect(chanceInWords(0.93)).toBe('about 9 times in 10');
-    expect(chanceInWords(0.995)).toBe('almost always (more than 99 times in 100)');
-    expect(chanceInWords(0.004)).toBe('hardly ever (less than 1 time in 100)');
-    expect(chanceInWords(0.03)).toBe('about 1 time in 10 or less');
+    expect(chanceInWords(0.995)).toBe('almost always, more than 99 times in 100');
+    expect(chanceInWords(0.004)).toBe('hardly ever, less than 1 time in 100');
+    expect(chanceInWords(0.03)).toBe('less than 1 time in 10');
+    expect(chanceInWords(0.966)).toBe('more than 9 times in 10');
   });
 
   it('refuses a number that is not a probability', () => {
