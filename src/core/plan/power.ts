@@ -26,8 +26,7 @@ import { tQuantile } from '../dist/student-t.ts';
 import { blockLevels, modelColumns, modelMatrix } from '../fit/columns.ts';
 import { householderQr } from '../linalg/householder-qr.ts';
 import { invertUpper } from '../linalg/triangular.ts';
-import { termsUpToOrder } from '../model/formula.ts';
-import { termLetters, termOrder, type Term } from '../model/term.ts';
+import { compareTerms, termLetters, termOrder, type Term } from '../model/term.ts';
 
 /** Default significance level of the test (common practice). */
 export const DEFAULT_SIGNIFICANCE = 0.05;
@@ -144,9 +143,12 @@ function copyModel(coded: readonly (readonly number[])[], blocks: readonly numbe
  */
 export function defaultPowerTerms(design: Pick<Design, 'factors' | 'runs' | 'screening'>): Term[] {
   const k = design.factors.length;
-  const mains = termsUpToOrder(k, 1);
+  // Built directly: termsUpToOrder walks all 2^k masks, a third of a second for 23 factors.
+  const mains = Array.from({ length: k }, (_, i) => 1 << i);
   if (design.screening !== undefined) return mains;
-  const all = termsUpToOrder(k, Math.min(2, k));
+  const all = [...mains];
+  for (let i = 0; i < k; i++) for (let j = i + 1; j < k; j++) all.push((1 << i) | (1 << j));
+  all.sort(compareTerms);
   const { coded, blocks } = firstCopy(design);
   const model = copyModel(coded, blocks, all);
   const dropped = new Set(model.aliased);
