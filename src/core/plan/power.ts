@@ -190,7 +190,7 @@ function powerAt(effect: number, sigma: number, seFactor: number, df: number, si
  * effects, a term on an unknown factor, or a term the plan cannot separate from the others
  * (named with its letters).
  * Example: a 2^3 full factorial with 4 center runs (12 runs), main effects only, effect 2,
- * sigma 1 -> standard error 1/sqrt(8) * 2 = 0.707, residual df 8, power 0.70.
+ * sigma 1 -> standard error 2/sqrt(8) = 0.707, residual df 8, power 0.698.
  */
 export function planPower(design: Pick<Design, 'factors' | 'runs' | 'screening'>, request: PowerRequest): PlanPower {
   const { effect, sigma } = request;
