@@ -215,7 +215,7 @@ export function planPower(design: Pick<Design, 'factors' | 'runs' | 'screening'>
   if (model.aliased.length > 0) {
     const names = model.aliased.map((t) => termLetters(t, design.factors));
     throw new InputError(
-      `This plan cannot separate ${names.join(', ')} from the other terms of the model (${names.length === 1 ? 'its column is a combination' : 'their columns are combinations'} of earlier columns); leave ${names.length === 1 ? 'it' : 'them'} out of the model`,
+      `This plan cannot separate ${names.join(', ')} from the blocks or the other terms of the model (${names.length === 1 ? 'its column is a combination' : 'their columns are combinations'} of earlier columns); leave ${names.length === 1 ? 'it' : 'them'} out of the model`,
     );
   }
   let mainEffect = mains[0];

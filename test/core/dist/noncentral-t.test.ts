@@ -66,10 +66,12 @@ describe('noncentralTCdf', () => {
   it('agrees with jstat 1.9.6 noncentralt.cdf to 1e-6 over df 1 to 100 and noncentrality -10 to 10', () => {
     // jstat's delta = 0 branch is its central t, which is off by 2.6e-8 at t = 0, df = 96 (it
     // should be exactly 0.5); delta = 0 is checked against our Student's t below instead.
-    const dfs = [1, 1.5, 2, 3, 4, 5, 7.3, 10, 15, 20, 30, 45, 60, 80, 100];
+    // A grid, not every point: jstat sums at least 200 terms per call (about 0.15 ms each).
+    const dfs = [1, 1.5, 3, 5, 7.3, 12, 25, 45, 70, 100];
     const deltas: number[] = [];
-    for (let d = -10; d <= 10; d += 0.5) if (d !== 0) deltas.push(d);
-    const ts = [-40, -12, -5, -2.5, -1, -0.3, 0, 0.4, 1, 1.7, 2.3, 3, 5, 8, 12, 20, 40];
+    for (let d = -10; d <= 10; d += 1) if (d !== 0) deltas.push(d);
+    deltas.push(-0.5, 0.5, 2.5, -7.5);
+    const ts = [-40, -5, -2.5, -1, -0.3, 0, 0.4, 1, 2.3, 5, 12, 40];
     let worst = 0;
     for (const df of dfs) for (const d of deltas) for (const t of ts) {
       worst = Math.max(worst, Math.abs(noncentralTCdf(t, df, d) - jStat.noncentralt.cdf(t, df, d)));
@@ -77,7 +79,7 @@ describe('noncentralTCdf', () => {
     // Measured: the worst difference is 9e-9, at df = 1, t = 1, delta = -0.5, where jstat's
     // incomplete beta is the one off (the direct integration below agrees with ours there).
     expect(worst).toBeLessThan(1e-6);
-  });
+  }, 60_000);
 
   it('is Student t at noncentrality 0 and Phi(-delta) at t = 0', () => {
     for (const df of [1, 3, 12.5, 100]) for (const t of [-3, -0.5, 0.7, 4]) {
@@ -102,7 +104,7 @@ describe('noncentralTCdf', () => {
       const numeric = cdfByIntegration(t, df, d);
       expect(Math.abs(noncentralTCdf(t, df, d) - numeric)).toBeLessThan(1e-10); // measured: within 7e-13
     }
-  });
+  }, 60_000);
 
   it('tends to the normal N(delta, 1) as df grows (T -> Z + delta)', () => {
     // With df = 1e6, sqrt(V/df) has standard deviation 7e-4, so P(T <= t) is within 1e-3 of Phi(t - delta).
