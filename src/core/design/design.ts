@@ -74,4 +74,10 @@ export interface Design {
   readonly summary: string;
   /** Warnings and notes about the plan (split-plot warning, center runs with categorical factors ...). */
   readonly notes: readonly string[];
+  /**
+   * Present only for a screening design that is not a regular fraction: a Plackett-Burman design
+   * of `runs` factorial runs per replicate, which has no defining relation (generators,
+   * definingRelation and aliases are empty; see plackett-burman.ts for its partial aliasing).
+   */
+  readonly screening?: { readonly kind: 'plackett-burman'; readonly runs: number; readonly source: string };
 }
