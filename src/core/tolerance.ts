@@ -18,3 +18,7 @@ export const CONSTANT_TOLERANCE = 1e-12;
 /** Off-diagonal entries of R below this fraction of sqrt(|R_ii R_jj|) count as zero when deciding
  * whether the model columns are orthogonal (sequential = adjusted sums of squares). Common practice. */
 export const ORTHOGONALITY_TOLERANCE = 1e-9;
+
+/** A run whose leverage is within this of 1 alone determines its fitted value: its studentized
+ * residuals and the PRESS statistic are not available (common practice). */
+export const LEVERAGE_TOLERANCE = 1e-9;
