@@ -14,6 +14,8 @@ import { CAUTION } from './caution.ts';
 import { cachedPredictor, type PointInterval } from './compiled-predictor.ts';
 import { isOutside } from './outside-range.ts';
 import { formatSetting, parseSettings, type SettingsInput } from './parse-settings.ts';
+import { pPhrase } from '../text/p-value.ts';
+import { curvatureNote } from '../text/verdict-text.ts';
 
 /** The longest path computed in one call (common practice: a few to a few dozen steps are run). */
 export const MAX_PATH_STEPS = 1000;
@@ -100,10 +102,6 @@ export function pathSenseForGoal(response: Response): PathSense {
 
 function fmt(x: number): string {
   return formatSetting(x);
-}
-
-function fmtP(p: number): string {
-  return p < 1e-4 ? '< 0.0001' : `= ${p.toFixed(4)}`;
 }
 
 /**
@@ -246,13 +244,11 @@ export function steepestPath(model: FittedModel, options: PathOptions): Steepest
     .filter((e): e is { t: number; p: number } => e.p !== null && e.p < alpha);
   if (significant.length > 0) {
     messages.push(
-      `Interactions are significant (${significant.map((e) => `${termLetters(e.t, factors)} p ${fmtP(e.p)}`).join(', ')}): the response surface twists, so the path from the main effects points less reliably.`,
+      `Interactions are significant (${significant.map((e) => `${termLetters(e.t, factors)} ${pPhrase(e.p)}`).join(', ')}): the response surface twists, so the path from the main effects points less reliably.`,
     );
   }
   if (model.curvatureP !== null && model.curvatureP < alpha) {
-    messages.push(
-      `Curvature is significant (p ${fmtP(model.curvatureP)}): the region may already be near an optimum, so the first-order path points less reliably; a second-order design may serve better.`,
-    );
+    messages.push(curvatureNote(model.curvatureP, 'path'));
   }
   if (nb > 0) messages.push('Predictions are for an average block.');
   return {
