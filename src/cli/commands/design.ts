@@ -197,7 +197,7 @@ function table(header: string[], rows: string[][], rightAlign: boolean[]): strin
 export function designText(d: Design): string {
   const k = d.factors.length;
   const p = d.generators.length;
-  const folded = d.notes.some((n) => n.startsWith('Foldover:'));
+  const folded = d.foldover !== null;
   const kind = p === 0 ? `2^${k} full factorial` : `2^(${k}-${p}) fractional factorial${folded ? ' with its foldover' : ''}`;
   const out: string[] = [`Plan: ${kind}, ${d.runs.length} runs`, '', d.summary, '', 'Factors'];
   out.push(

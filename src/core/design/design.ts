@@ -4,6 +4,7 @@
  * in the factors' declared order.
  */
 import type { Factor } from '../factor/factor.ts';
+import type { DesignNote } from './design-note.ts';
 
 export interface DesignRun {
   /** Position in the run order, from 1. */
@@ -38,6 +39,10 @@ export interface Design {
   readonly seed: number | null;
   /** Plain-words summary shown before the person commits. */
   readonly summary: string;
-  /** Warnings and notes about the plan (split-plot warning, center runs with categorical factors ...). */
+  /** Warnings and notes about the plan (split-plot warning, center runs with categorical factors ...), in words. */
   readonly notes: readonly string[];
+  /** The same notes as typed data, in the same order (core/text/design-text.ts writes `notes` from them). */
+  readonly noteFacts: readonly DesignNote[];
+  /** The foldover the plan includes: 'all' (the mirror image), the letter of the factor whose signs were switched, or null. */
+  readonly foldover: 'all' | string | null;
 }

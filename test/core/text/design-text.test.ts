@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { designAliasChains } from '../../../src/core/design/alias-structure.ts';
 import { definingRelation } from '../../../src/core/design/defining-relation.ts';
-import { designSummary, type SummaryInput } from '../../../src/core/design/summary.ts';
+import type { SummaryInput } from '../../../src/core/design/design-note.ts';
+import { designSummary } from '../../../src/core/text/design-text.ts';
 import { InputError } from '../../../src/core/errors.ts';
-import { mask } from './helpers.ts';
+import { mask } from '../design/helpers.ts';
 
 const letters = 'ABCDEFGHJK'.split('');
 const w = (s: string) => ({ mask: mask(s), sign: 1 as const });
