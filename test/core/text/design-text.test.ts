@@ -2,7 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { designAliasChains } from '../../../src/core/design/alias-structure.ts';
 import { definingRelation } from '../../../src/core/design/defining-relation.ts';
 import type { SummaryInput } from '../../../src/core/design/design-note.ts';
-import { designSummary } from '../../../src/core/text/design-text.ts';
+import { blockOriginText, designNoteText, designSummary } from '../../../src/core/text/design-text.ts';
+import { MONTGOMERY_TABLE_SOURCE } from '../../../src/core/design/blocking.ts';
+import { buildDesign } from '../../../src/core/design/build-design.ts';
 import { InputError } from '../../../src/core/errors.ts';
 import { mask } from '../design/helpers.ts';
 
@@ -44,5 +46,45 @@ describe('designSummary', () => {
   });
   it('refuses a plan without runs (degenerate input)', () => {
     expect(() => designSummary(base({ totalRuns: 0 }))).toThrow(InputError);
+  });
+});
+
+describe('designNoteText and blockOriginText', () => {
+  it('writes each note from its facts', () => {
+    expect(designNoteText({ kind: 'seed-drawn', seed: 7 })).toBe('Seed 7 was drawn for this plan and is recorded with it: the same seed gives the same run order on any device.');
+    expect(designNoteText({ kind: 'center-uneven', centerRuns: 3, blocks: 2 })).toBe('Center runs: 3 do not divide evenly over 2 blocks; the first blocks get one more.');
+    expect(designNoteText({ kind: 'blocked-two-factor', words: ['AB', 'CD'] })).toBe('Warning: the two-factor interactions AB, CD are confounded with blocks.');
+    expect(designNoteText({ kind: 'center-categorical', factors: ['Powder'], centerRuns: 1, perReplicate: 2 })).toMatch(/Powder has no middle, .* its levels \(1 center run becomes 2 per replicate\)\.$/);
+    expect(designNoteText({ kind: 'split-plot', factors: ['Oven', 'Line'] })).toMatch(/^Warning: Oven, Line are kept sorted .* their effects look more certain than they are\.$/);
+    expect(designNoteText({ kind: 'block-words', words: ['ABC'], origin: { kind: 'given' } })).toBe('Block words: ABC, from the block words given.');
+  });
+
+  it('a foldover note names at most 12 separated pairs, and says when it separates none (degenerate input)', () => {
+    const pairs = Array.from({ length: 14 }, (_, i) => [`X${i}`, `Y${i}`] as const);
+    const base = { kind: 'foldover', fold: 'all', from: 9, to: 16, severalBlocks: false, droppedWord: 'ABD' } as const;
+    const text = designNoteText({ ...base, separated: pairs });
+    expect(text).toMatch(/^Foldover: runs 9 to 16 in standard order are the mirror image/);
+    expect(text).toContain('X11 from Y11 and 2 more pairs');
+    expect(text).not.toContain('X12 from');
+    expect(designNoteText({ ...base, fold: { letter: 'D', name: 'Time' }, separated: [] })).toMatch(/signs of D \(Time\) switched.*It separates no pair/);
+  });
+
+  it('says where block words came from', () => {
+    expect(blockOriginText({ kind: 'table' })).toBe(MONTGOMERY_TABLE_SOURCE);
+    expect(blockOriginText({ kind: 'highest-order', k: 9 })).toMatch(/^the 9-factor interaction/);
+    expect(blockOriginText({ kind: 'minimum-aberration', k: 10, q: 3 })).toMatch(/2\^\(10-3\) fraction/);
+    expect(blockOriginText({ kind: 'search', stopped: false, budget: 5 })).toMatch(/^exhaustive search/);
+    expect(blockOriginText({ kind: 'search', stopped: true, budget: 5 })).toMatch(/stopped after 5 candidates/);
+  });
+
+  it("buildDesign's notes are its typed notes in words, and a foldover is a fact of the plan", () => {
+    const factors = Array.from({ length: 7 }, (_, i) => ({ kind: 'numeric' as const, name: `X${i + 1}`, low: 0, high: 1 }));
+    const d = buildDesign({ factors, fraction: '1/16', foldover: 'all', seed: 2 });
+    expect(d.notes).toEqual(d.noteFacts.map(designNoteText));
+    expect(d.foldover).toBe('all');
+    expect(d.noteFacts.map((n) => n.kind)).toContain('foldover');
+    const one = buildDesign({ factors, fraction: '1/16', foldover: 'X4', seed: 2 });
+    expect(one.foldover).toBe('D');
+    expect(buildDesign({ factors, fraction: '1/16', seed: 2 }).foldover).toBeNull();
   });
 });
