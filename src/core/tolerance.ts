@@ -18,3 +18,80 @@ export const CONSTANT_TOLERANCE = 1e-12;
 /** Off-diagonal entries of R below this fraction of sqrt(|R_ii R_jj|) count as zero when deciding
  * whether the model columns are orthogonal (sequential = adjusted sums of squares). Common practice. */
 export const ORTHOGONALITY_TOLERANCE = 1e-9;
+
+/** A run whose leverage is within this of 1 alone determines its fitted value: its studentized
+ * residuals and the PRESS statistic are not available (common practice). */
+export const LEVERAGE_TOLERANCE = 1e-9;
+
+/** Weights of an alias combination below this are rounding noise from the QR solve, not part
+ * of the combination (common practice: far above double rounding of a +-1 column, far below
+ * any real partial alias). */
+export const ALIAS_WEIGHT_TOLERANCE = 1e-8;
+
+/** Alias weights this close to +-1 are written without a number ("C + AB", not "C + 1 AB");
+ * rounding from the QR solve (common practice). */
+export const UNIT_WEIGHT_TOLERANCE = 1e-9;
+
+/** Coded distance within which an actual setting still counts as at its planned level, for
+ * telling center runs and factorial runs apart: 5% of the range on either side (our own choice,
+ * so that small setting errors do not hide center runs). */
+export const CENTER_TOLERANCE = 0.1;
+
+/** Off-diagonal entries of (X'X)^-1 below this fraction of sqrt(C_ii C_jj) are rounding, so the
+ * covariance is treated as diagonal (an orthogonal design). Common practice; far below any real
+ * correlation between two estimates. */
+export const DIAGONAL_TOLERANCE = 1e-12;
+
+/** A slope below this fraction of the size of the model's terms at the held settings is
+ * rounding: the factor has no effect there. Common practice (far above double rounding, far
+ * below any effect a gauge could see). */
+export const ZERO_SLOPE_TOLERANCE = 1e-9;
+
+// Distributions (src/core/dist): convergence and switch points of the series and iterations.
+
+/** Lentz's continued fraction stops when the last convergent changed the value by less than
+ * this fraction (Numerical Recipes 3rd ed. section 5.2: about the double precision epsilon). */
+export const CONTINUED_FRACTION_TOLERANCE = 1e-16;
+
+/** Lentz: stand-in for a zero denominator (Numerical Recipes 3rd ed. section 5.2). */
+export const CONTINUED_FRACTION_TINY = 1e-300;
+
+/** How far x + y may stray from 1 in the incomplete beta's XY forms (several rounding errors of a ratio). */
+export const SUM_TO_ONE_TOLERANCE = 1e-12;
+
+/** Newton on ln(odds) for the incomplete beta inverse stops once a step is below this (the next
+ * error is about its square; common practice). */
+export const NEWTON_STEP_TOLERANCE = 1e-11;
+
+/** ...or once ln(P / target) is below this (common practice: a few roundings of a double). */
+export const NEWTON_VALUE_TOLERANCE = 1e-14;
+
+/** ...or once the bracket is narrower than this fraction of its upper end (two roundings of a double; common practice). */
+export const BRACKET_TOLERANCE = 4e-16;
+
+/** The erf power series stops when a term falls below this fraction of the sum (below the
+ * double precision epsilon, so the sum no longer changes). */
+export const SERIES_TOLERANCE = 1e-17;
+
+/** Odds below this switch the t and F tails to their leading series term in logs, so nothing
+ * underflows (the O(x) correction is then far below rounding). */
+export const TAIL_SERIES_ODDS = 1e-250;
+
+/** The noncentral t's Poisson-weighted series stops in each direction once what is left is below
+ * this fraction of the sum (below the double precision epsilon; Benton and Krishnamoorthy 2003). */
+export const NONCENTRAL_SERIES_TOLERANCE = 1e-17;
+
+/** A noncentrality below this is taken as 0 (Student's t): its terms are then exact to rounding; our own choice. */
+export const CENTRAL_NONCENTRALITY = 1e-300;
+
+/** The smallest detectable effect is found to this relative precision (far finer than any gauge; our own choice). */
+export const EFFECT_PRECISION = 1e-10;
+
+/** Two ratios or fractions this close (relative) are the same number up to rounding: ties
+ * between fractions in words, the largest variance among main effects, a correlation read as a
+ * simple fraction (common practice: a few roundings of a double). */
+export const RATIO_TOLERANCE = 1e-12;
+
+/** Main effects whose variance is within this fraction of the largest count as equally well
+ * estimated (a balanced design's columns, up to rounding; common practice). */
+export const EQUAL_VARIANCE_TOLERANCE = 1e-9;

@@ -235,3 +235,12 @@ describe('the registered command', () => {
     expect(bad.stderr).toMatch(/trialbook design: A factorial design needs at least 2 factors, got 1/);
   }, 30_000);
 });
+
+describe('design command: the plan title reads the foldover from the plan, not from its notes', () => {
+  it('says "with its foldover" for a folded fraction only', async () => {
+    const folded = await design.run([...SEVEN, '--fraction', '1/16', '--foldover', '--seed', '2']);
+    expect(folded.split('\n')[0]).toBe('Plan: 2^(7-4) fractional factorial with its foldover, 16 runs');
+    const plain = await design.run([...SEVEN, '--fraction', '1/16', '--seed', '2']);
+    expect(plain.split('\n')[0]).toBe('Plan: 2^(7-4) fractional factorial, 8 runs');
+  });
+});

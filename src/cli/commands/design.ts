@@ -4,7 +4,7 @@
  */
 import { aliasChain, defaultAliasOrder, definingWordsOf } from '../../core/design/alias-structure.ts';
 import { plackettBurmanAliasing, type PartialAlias } from '../../core/design/plackett-burman.ts';
-import { correlationText } from '../../core/design/plackett-burman-summary.ts';
+import { correlationText } from '../../core/text/screening-text.ts';
 import { formatWord, parseLetterWord } from '../../core/design/word.ts';
 import { buildDesign, type DesignSpec } from '../../core/design/build-design.ts';
 import type { Design } from '../../core/design/design.ts';
@@ -372,7 +372,7 @@ export function powerText(p: PlanPower, factors: readonly Factor[]): string[] {
 export function designText(d: Design): string {
   const k = d.factors.length;
   const p = d.generators.length;
-  const folded = d.notes.some((n) => n.startsWith('Foldover:'));
+  const folded = d.foldover !== null;
   const kind = d.screening
     ? `${d.screening.runs}-run Plackett-Burman screening design for ${k} factors`
     : p === 0

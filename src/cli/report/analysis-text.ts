@@ -1,12 +1,14 @@
 /** The analyze command's readable report, in Trialbook's own plain-words layout. */
 import type { Analysis, AnovaTable } from '../../core/fit/analysis.ts';
 import { combinationLabel } from '../../core/fit/combination-label.ts';
-import { num, pval, table } from './numbers.ts';
+import { pValue } from '../../core/text/p-value.ts';
+import { curvatureStatement, lenthStatement, verdictText } from '../../core/text/verdict-text.ts';
+import { num, table } from './numbers.ts';
 
 function anovaText(t: AnovaTable): string {
   return table(
     ['source', 'df', 'sum of squares', 'mean square', 'F', 'p'],
-    t.rows.map((r) => [r.source, String(r.df), num(r.ss, 6), num(r.ms, 6), num(r.f), pval(r.p)]),
+    t.rows.map((r) => [r.source, String(r.df), num(r.ss, 6), num(r.ms, 6), num(r.f), pValue(r.p)]),
   );
 }
 
@@ -27,7 +29,7 @@ export function analysisText(a: Analysis): string {
   const head = ['term', 'letters', 'effect', 'coefficient', 'std error', 't', 'p', '95% CI of coefficient'];
   if (lenthCol) head.push('Lenth t');
   const rows = [
-    ['Intercept (fit at center)', 'I', '-', num(a.intercept.coef), num(a.intercept.se), num(a.intercept.t), pval(a.intercept.p), '-', ...(lenthCol ? ['-'] : [])],
+    ['Intercept (fit at center)', 'I', '-', num(a.intercept.coef), num(a.intercept.se), num(a.intercept.t), pValue(a.intercept.p), '-', ...(lenthCol ? ['-'] : [])],
     ...[...a.terms]
       .sort((x, y) => Math.abs(y.effect) - Math.abs(x.effect))
       .map((t) => [
@@ -37,7 +39,7 @@ export function analysisText(a: Analysis): string {
         num(t.coef),
         num(t.se),
         num(t.t),
-        pval(t.p),
+        pValue(t.p),
         t.ci ? `${num(t.ci[0])} to ${num(t.ci[1])}` : '-',
         ...(lenthCol ? [num(t.lenthT)] : []),
       ]),
@@ -61,18 +63,21 @@ export function analysisText(a: Analysis): string {
   if (a.curvature) {
     const c = a.curvature;
     out.push('');
-    out.push(`Curvature from ${c.nCenter} center runs: factorial mean - center mean = ${num(c.estimate)}, std error ${num(c.se)}, t ${num(c.t)}, p ${pval(c.p)}`);
+    out.push(`Curvature from ${c.nCenter} center runs: factorial mean - center mean = ${num(c.estimate)}, std error ${num(c.se)}, t ${num(c.t)}, p ${pValue(c.p)}`);
+    const v = a.verdicts.find((x) => x.kind === 'curvature');
+    if (v && v.kind === 'curvature') out.push(`  ${curvatureStatement(v)}`);
+  }
+  // A significant lack of fit is among the notes below; the plain statement is given here.
+  const lof = a.verdicts.find((x) => x.kind === 'lack-of-fit' && x.outcome === 'not-significant');
+  if (lof) {
+    out.push('');
+    out.push(verdictText(lof));
   }
   if (a.lenth) {
-    const l = a.lenth;
+    const [figures, marked] = lenthStatement(a.lenth, a.lenth.effects);
     out.push('');
-    out.push(`Lenth's method over ${l.m} effects (d = ${num(l.df)} df): pseudo standard error ${num(l.pse)}, margin of error ${num(l.me)}, simultaneous margin ${num(l.sme)}`);
-    const marked = [...l.effects].reverse().filter((e) => e.mark);
-    out.push(
-      marked.length > 0
-        ? `  beyond the margins: ${marked.map((e) => `${e.letters} ${num(e.effect)} (${e.mark === 'active' ? 'beyond the simultaneous margin' : 'beyond the margin of error'})`).join('; ')}`
-        : '  no effect is beyond the margin of error',
-    );
+    out.push(figures);
+    out.push(`  ${marked}`);
   }
   if (a.aliased.length > 0) {
     out.push('');

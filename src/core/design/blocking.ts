@@ -18,6 +18,7 @@ import { InputError } from '../errors.ts';
 import type { Factor } from '../factor/factor.ts';
 import { factorLetters } from '../factor/letters.ts';
 import { termFactors, termOrder } from '../model/term.ts';
+import type { BlockOrigin } from './design-note.ts';
 import { minimumAberration } from './minimum-aberration.ts';
 import { compareWords, formatWord, lettersOf, parseWord, type Word } from './word.ts';
 
@@ -44,14 +45,14 @@ export const MONTGOMERY_TABLE_7_8: Readonly<Record<number, Readonly<Record<numbe
  */
 export const BLOCK_SEARCH_BUDGET = 200_000;
 
-/** Where the table's words come from, for the plan's notes. */
+/** Where the table's words come from, for the plan's notes (core/text/design-text.ts writes it). */
 export const MONTGOMERY_TABLE_SOURCE = 'Montgomery, Design and Analysis of Experiments, 8th ed., Table 7.8';
 
 export interface Blocking {
   /** Independent block words (masks over the factors), q of them for 2^q blocks. */
   readonly generators: readonly number[];
-  /** Where the words came from, in plain words. */
-  readonly source: string;
+  /** Where the words came from (core/text/design-text.ts blockOriginText puts it in words). */
+  readonly origin: BlockOrigin;
 }
 
 function log2Blocks(blocks: number): number {
@@ -190,17 +191,17 @@ function comparePatterns(a: readonly number[], b: readonly number[]): number {
  */
 export function defaultBlocking(k: number, relation: readonly Word[], basic: readonly number[], blocks: number): Blocking {
   const q = log2Blocks(blocks);
-  if (q === 0) return { generators: [], source: 'unblocked' };
+  if (q === 0) return { generators: [], origin: { kind: 'unblocked' } };
   checkBlockSize(blocks, 2 ** basic.length);
   const full = relation.length === 0;
   const table = MONTGOMERY_TABLE_7_8[k]?.[blocks];
   if (full && table) {
     const lettersK = factorLetters(k);
     const masks = table.map((w) => [...w].reduce((mask, ch) => mask | (1 << lettersK.indexOf(ch)), 0));
-    return { generators: masks, source: MONTGOMERY_TABLE_SOURCE };
+    return { generators: masks, origin: { kind: 'table' } };
   }
   if (full && q === 1) {
-    return { generators: [2 ** k - 1], source: `the ${k}-factor interaction, the highest-order effect (Montgomery, 8th ed., section 7.4)` };
+    return { generators: [2 ** k - 1], origin: { kind: 'highest-order', k } };
   }
   if (full && k - q >= 2 && k <= 2 ** (k - q) - 1) {
     const r = minimumAberration(k, q);
@@ -208,7 +209,7 @@ export function defaultBlocking(k: number, relation: readonly Word[], basic: rea
     if (r.columns) {
       return {
         generators: r.columns.map((c, g) => c | (1 << (m + g))),
-        source: `the defining words of the minimum aberration 2^(${k}-${q}) fraction, found by exhaustive search`,
+        origin: { kind: 'minimum-aberration', k, q },
       };
     }
   }
@@ -288,11 +289,5 @@ export function defaultBlocking(k: number, relation: readonly Word[], basic: rea
   if (!bestGens) {
     throw new InputError(`${blocks} blocks of this ${2 ** basic.length}-run design would confound a main effect with blocks whatever words are chosen; use fewer blocks`);
   }
-  const criterion = 'fewest main effects (none), then fewest two-factor interactions, then fewest higher-order effects confounded with blocks';
-  return {
-    generators: bestGens,
-    source: stopped
-      ? `a search for the block words with the ${criterion}, stopped after ${BLOCK_SEARCH_BUDGET} candidates (the best found, not proven best)`
-      : `exhaustive search: ${criterion}`,
-  };
+  return { generators: bestGens, origin: { kind: 'search', stopped, budget: BLOCK_SEARCH_BUDGET } };
 }

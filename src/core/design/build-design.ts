@@ -20,11 +20,12 @@ import { MAX_FULL_FACTORIAL_FACTORS } from './full-factorial.ts';
 import { generatorWord, parseGenerators, type Generator } from './generators.ts';
 import { drawSeed, MAX_SEED } from './random.ts';
 import { plackettBurmanAliasing, plackettBurmanPoints, PLACKETT_BURMAN_SOURCE } from './plackett-burman.ts';
-import { PARTIAL_ALIASING_NOTE, plackettBurmanSummary } from './plackett-burman-summary.ts';
+import { plackettBurmanSummary } from '../text/screening-text.ts';
 import { orderRuns } from './run-order.ts';
 import { checkRunLimit } from './run-limit.ts';
-import { designSummary } from './summary.ts';
 import { formatWord, lettersOf, type Word } from './word.ts';
+import type { DesignNote } from './design-note.ts';
+import { designNoteText, designSummary } from '../text/design-text.ts';
 
 export interface DesignSpec {
   readonly factors: readonly FactorSpec[];
@@ -114,7 +115,7 @@ export function buildDesign(spec: DesignSpec): Design {
   const pbPoints = pb === undefined ? null : plackettBurmanPoints(pb, k);
 
   // Generators: typed, from the catalogue, or none (full factorial).
-  const notes: string[] = [];
+  const notes: DesignNote[] = [];
   let generators: Generator[] = [];
   if (spec.generators !== undefined) {
     generators = parseGenerators(spec.generators, factors);
@@ -122,7 +123,7 @@ export function buildDesign(spec: DesignSpec): Design {
     const p = parseFraction(spec.fraction);
     const entry = catalogueFraction(k, p);
     generators = parseGenerators(entry.generators, factors);
-    notes.push(`Generators from the minimum aberration catalogue (${entry.source}).`);
+    notes.push({ kind: 'catalogue-generators', source: entry.source });
   } else if (pbPoints === null && k > MAX_FULL_FACTORIAL_FACTORS) {
     checkRunLimit(2 ** k, `A full factorial of ${k} factors: 2^${k} factorial runs`);
   }
@@ -150,7 +151,7 @@ export function buildDesign(spec: DesignSpec): Design {
   }
   const blocking =
     spec.blockWords && spec.blockWords.length > 0
-      ? { generators: parseBlockWords(spec.blockWords, blocks, factors, firstRelation, perHalf), source: 'the block words given' }
+      ? { generators: parseBlockWords(spec.blockWords, blocks, factors, firstRelation, perHalf), origin: { kind: 'given' } as const }
       : defaultBlocking(k, firstRelation, basic, blocks);
   const blockGenerators = [...blocking.generators, ...(foldWord === null ? [] : [foldWord])];
   const blocksPerReplicate = 2 ** blockGenerators.length;
@@ -189,52 +190,32 @@ export function buildDesign(spec: DesignSpec): Design {
   const chains = pbPoints ? [] : designAliasChains(relation, k, aliasOrder);
 
   // Notes.
-  if (blocking.generators.length > 0) notes.push(`Block words: ${blocking.generators.map((w) => formatWord(w, letters)).join(', ')}, from ${blocking.source}.`);
+  if (blocking.generators.length > 0) notes.push({ kind: 'block-words', words: blocking.generators.map((w) => formatWord(w, letters)), origin: blocking.origin });
   if (fold !== null) {
-    const pairs = separatedPairs(firstRelation, relation, k);
-    const what = fold === 'all' ? 'the mirror image of the first fraction (every sign switched)' : `the first fraction with the signs of ${letters[fold]} (${factors[fold].name}) switched`;
-    const shown = pairs.slice(0, 12).map(([u, v]) => `${formatWord(u, letters)} from ${formatWord(v, letters)}`);
-    notes.push(
-      `Foldover: runs ${perHalf + 1} to ${2 * perHalf} in standard order are ${what}, run as ${blocksPerReplicate > 2 ? 'separate blocks' : 'a separate block'}. ` +
-        (pairs.length === 0
-          ? 'It separates no pair of main effects and two-factor interactions'
-          : `The combined design separates ${shown.join(', ')}${pairs.length > 12 ? ` and ${pairs.length - 12} more pairs` : ''}`) +
-        `; the dropped defining words (${formatWord(foldWord!, letters)} and its aliases) are confounded with the halves.`,
-    );
+    notes.push({
+      kind: 'foldover',
+      fold: fold === 'all' ? 'all' : { letter: letters[fold], name: factors[fold].name },
+      from: perHalf + 1,
+      to: 2 * perHalf,
+      severalBlocks: blocksPerReplicate > 2,
+      separated: separatedPairs(firstRelation, relation, k).map(([u, v]) => [formatWord(u, letters), formatWord(v, letters)] as const),
+      droppedWord: formatWord(foldWord!, letters),
+    });
   }
   if (centerRuns > 0) {
     const cats = factors.filter((f) => f.kind === 'categorical');
-    if (cats.length > 0) {
-      notes.push(
-        `Center runs: numeric factors at the middle of their ranges; ${cats.map((f) => f.name).join(', ')} ${cats.length === 1 ? 'has' : 'have'} no middle, so each center run is repeated at every combination of ${cats.length === 1 ? 'its levels' : 'their levels'} (${centerRuns} center run${centerRuns === 1 ? '' : 's'} become${centerRuns === 1 ? 's' : ''} ${centerRuns * centerSetSize} per replicate).`,
-      );
-    }
-    if (blocksPerReplicate > 1 && centerRuns % blocksPerReplicate !== 0) {
-      notes.push(`Center runs: ${centerRuns} do not divide evenly over ${blocksPerReplicate} blocks; the first blocks get one more.`);
-    }
+    if (cats.length > 0) notes.push({ kind: 'center-categorical', factors: cats.map((f) => f.name), centerRuns, perReplicate: centerRuns * centerSetSize });
+    if (blocksPerReplicate > 1 && centerRuns % blocksPerReplicate !== 0) notes.push({ kind: 'center-uneven', centerRuns, blocks: blocksPerReplicate });
   }
   const blocked2fi = blockWords.filter((w) => termOrder(w) <= 2);
-  if (blocked2fi.length > 0) {
-    notes.push(`Warning: the two-factor interaction${blocked2fi.length === 1 ? '' : 's'} ${blocked2fi.map((w) => formatWord(w, letters)).join(', ')} ${blocked2fi.length === 1 ? 'is' : 'are'} confounded with blocks.`);
-  }
-  if (seed === null) {
-    notes.push(
-      'Standard order kept. Randomising the run order protects the effects from drifts during the experiment (tool wear, room temperature, a new batch of material): in standard order a drift is mistaken for the effect of the factors that change least often.',
-    );
-  } else if (spec.seed === undefined) {
-    notes.push(`Seed ${seed} was drawn for this plan and is recorded with it: the same seed gives the same run order on any device.`);
-  }
-  if (sortBy.length > 0) {
-    const names = sortBy.map((i) => factors[i].name);
-    notes.push(
-      `Warning: ${names.join(', ')} ${names.length === 1 ? 'is' : 'are'} kept sorted (hard to change), so the runs are not fully randomised and the design has become a split-plot. ` +
-        `An analysis that treats it as completely randomised understates the error for ${names.join(', ')} (and ${names.length === 1 ? 'its' : 'their'} interactions), so ${names.length === 1 ? 'its effect looks' : 'their effects look'} more certain than ${names.length === 1 ? 'it is' : 'they are'}.`,
-    );
-  }
+  if (blocked2fi.length > 0) notes.push({ kind: 'blocked-two-factor', words: blocked2fi.map((w) => formatWord(w, letters)) });
+  if (seed === null) notes.push({ kind: 'standard-order' });
+  else if (spec.seed === undefined) notes.push({ kind: 'seed-drawn', seed });
+  if (sortBy.length > 0) notes.push({ kind: 'split-plot', factors: sortBy.map((i) => factors[i].name) });
 
   if (pb !== undefined) {
-    notes.push(`Generating row from ${PLACKETT_BURMAN_SOURCE}; the factors take the first ${k} of its ${pb - 1} columns.`);
-    if (k >= 3) notes.push(PARTIAL_ALIASING_NOTE);
+    notes.push({ kind: 'screening-generator', source: PLACKETT_BURMAN_SOURCE, factors: k, columns: pb - 1 });
+    if (k >= 3) notes.push({ kind: 'partial-aliasing' });
   }
   const summary =
     pb !== undefined
@@ -272,7 +253,9 @@ export function buildDesign(spec: DesignSpec): Design {
     blockWords: blockWords.map((w) => formatWord(w, letters)),
     seed,
     summary,
-    notes,
+    notes: notes.map(designNoteText),
+    noteFacts: notes,
+    foldover: fold === null ? null : fold === 'all' ? 'all' : letters[fold],
     ...(pb !== undefined ? { screening: { kind: 'plackett-burman' as const, runs: pb, source: PLACKETT_BURMAN_SOURCE } } : {}),
   };
 }

@@ -4,6 +4,7 @@
  * in the factors' declared order.
  */
 import type { Factor } from '../factor/factor.ts';
+import type { DesignNote } from './design-note.ts';
 
 /**
  * Every kind a planned run can be, the one list that the record checks, the backup schema and
@@ -72,7 +73,7 @@ export interface Design {
   readonly seed: number | null;
   /** Plain-words summary shown before the person commits. */
   readonly summary: string;
-  /** Warnings and notes about the plan (split-plot warning, center runs with categorical factors ...). */
+  /** Warnings and notes about the plan (split-plot warning, center runs with categorical factors ...), in words. */
   readonly notes: readonly string[];
   /**
    * Present only for a screening design that is not a regular fraction: a Plackett-Burman design
@@ -80,4 +81,8 @@ export interface Design {
    * definingRelation and aliases are empty; see plackett-burman.ts for its partial aliasing).
    */
   readonly screening?: { readonly kind: 'plackett-burman'; readonly runs: number; readonly source: string };
+  /** The same notes as typed data, in the same order (core/text/design-text.ts writes `notes` from them). */
+  readonly noteFacts: readonly DesignNote[];
+  /** The foldover the plan includes: 'all' (the mirror image), the letter of the factor whose signs were switched, or null. */
+  readonly foldover: 'all' | string | null;
 }

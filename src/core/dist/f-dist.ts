@@ -9,6 +9,7 @@
 import { InputError } from '../errors.ts';
 import { incompleteBetaInverseOdds, incompleteBetaXY } from './incomplete-beta.ts';
 import { lnBeta } from './log-gamma.ts';
+import { TAIL_SERIES_ODDS } from '../tolerance.ts';
 
 /** Below x (or y) = e^-600 a tail is the first term of its series, x^a / (a B(a, b)), to rounding. */
 const LN_ASYMPTOTE = -600;
@@ -28,7 +29,7 @@ function tail(f: number, d1: number, d2: number, upper: boolean): number {
   const b = 0.5 * d2;
   if (f <= d2 / d1) {
     const r = (d1 * f) / d2; // odds x / y, at most 1
-    if (r < 1e-250 && !upper) {
+    if (r < TAIL_SERIES_ODDS && !upper) {
       const lnR = Math.log(d1 / d2) + Math.log(f);
       if (lnR < LN_ASYMPTOTE) return Math.exp(a * lnR - Math.log(a) - lnBeta(a, b));
     }
@@ -37,7 +38,7 @@ function tail(f: number, d1: number, d2: number, upper: boolean): number {
     return upper ? incompleteBetaXY(y, x, b, a) : incompleteBetaXY(x, y, a, b);
   }
   const w = d2 / d1 / f; // odds y / x, below 1
-  if (w < 1e-250 && upper) {
+  if (w < TAIL_SERIES_ODDS && upper) {
     const lnW = Math.log(d2 / d1) - Math.log(f);
     if (lnW < LN_ASYMPTOTE) return Math.exp(b * lnW - Math.log(b) - lnBeta(a, b));
   }

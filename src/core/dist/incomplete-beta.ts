@@ -23,14 +23,13 @@
 import { InputError } from '../errors.ts';
 import { lnBeta, stirlingError } from './log-gamma.ts';
 import { normalQuantile } from './normal.ts';
+import { BRACKET_TOLERANCE, CONTINUED_FRACTION_TINY, CONTINUED_FRACTION_TOLERANCE, NEWTON_STEP_TOLERANCE, NEWTON_VALUE_TOLERANCE, SUM_TO_ONE_TOLERANCE } from '../tolerance.ts';
 
 const TWO_PI = 6.283185307179586;
-/** Lentz: stop when the last convergent changed the value by less than this fraction. */
-const CF_EPS = 1e-16;
-/** Lentz: stand-in for a zero denominator (Numerical Recipes 3rd ed. section 5.2). */
-const CF_TINY = 1e-300;
-/** How far x + y may stray from 1 in the XY forms (several rounding errors of a ratio). */
-const SUM_TOLERANCE = 1e-12;
+// Lentz's stop and zero stand-in, the XY forms' sum check (see tolerance.ts).
+const CF_EPS = CONTINUED_FRACTION_TOLERANCE;
+const CF_TINY = CONTINUED_FRACTION_TINY;
+const SUM_TOLERANCE = SUM_TO_ONE_TOLERANCE;
 
 /**
  * Deviance term D(k, m) = k ln(k/m) + m - k >= 0 for k > 0, m >= 0 (Loader 2000, "bd0"), given
@@ -204,10 +203,9 @@ export function incompleteBeta(x: number, a: number, b: number): number {
 /** Odds beyond e^600 (or below e^-600) are taken from the tail asymptote: its O(x) correction is
  * then far below rounding. */
 const LN_ODDS_ASYMPTOTE = 600;
-/** Newton on ln(odds) stops once a step is below this (the next error is about its square). */
-const STEP_TOLERANCE = 1e-11;
-/** ...or once ln(P / target) is below this. */
-const VALUE_TOLERANCE = 1e-14;
+// Newton on ln(odds) stops on a small step or a small ln(P / target) (see tolerance.ts).
+const STEP_TOLERANCE = NEWTON_STEP_TOLERANCE;
+const VALUE_TOLERANCE = NEWTON_VALUE_TOLERANCE;
 const MAX_NEWTON = 100;
 
 /**
@@ -311,7 +309,7 @@ export function incompleteBetaInverseOdds(target: number, a: number, b: number, 
       if (lo > 0 && hi < Infinity) next = Math.sqrt(lo) * Math.sqrt(hi);
       else next = lo > 0 ? lo * 54.598150033144236 : hi / 54.598150033144236;
     }
-    if (lo > 0 && hi < Infinity && hi - lo <= 4e-16 * hi) return next;
+    if (lo > 0 && hi < Infinity && hi - lo <= BRACKET_TOLERANCE * hi) return next;
     rho = next;
   }
   return rho;

@@ -28,17 +28,14 @@ import { InputError } from '../errors.ts';
 import { incompleteBetaFactor, incompleteBetaXY } from './incomplete-beta.ts';
 import { lnBeta, stirlingError } from './log-gamma.ts';
 import { normalCdf } from './normal.ts';
+import { CENTRAL_NONCENTRALITY, NONCENTRAL_SERIES_TOLERANCE } from '../tolerance.ts';
 
-/** A direction of the series stops once what is left is below this fraction of the sum (well below rounding). */
-const SERIES_EPS = 1e-17;
 /** Terms beyond the largest weight in either direction: 12 standard deviations sqrt(lambda) of the Poisson weights, plus room for small lambda. */
 const termBudget = (lambda: number): number => 200 + Math.ceil(12 * Math.sqrt(lambda));
 const SQRT_HALF = 0.7071067811865476;
 const TWO_PI = 6.283185307179586;
 /** ln sqrt(pi) = ln Gamma(1/2). */
 const LN_SQRT_PI = 0.5723649429247001;
-/** Below this the noncentrality is taken as 0 (Student's t): its P and Q terms are then exact to rounding. */
-const CENTRAL_DELTA = 1e-300;
 
 function check(value: number, df: number, delta: number, what: string, valueName: string): void {
   if (Number.isNaN(value)) throw new InputError(`${what} needs a ${valueName}, got NaN`);
@@ -67,7 +64,7 @@ function cdfNonNegative(t: number, df: number, delta: number): number {
   const x = t2 / (t2 + df);
   const y = df / (t2 + df);
   const b = 0.5 * df;
-  if (Math.abs(delta) < CENTRAL_DELTA) return base + 0.5 * incompleteBetaXY(x, y, 0.5, b);
+  if (Math.abs(delta) < CENTRAL_NONCENTRALITY) return base + 0.5 * incompleteBetaXY(x, y, 0.5, b);
   const lambda = 0.5 * delta * delta;
   const k = Math.floor(lambda);
   const lnP = lnPoissonAt(k, lambda);
@@ -105,7 +102,7 @@ function cdfNonNegative(t: number, df: number, delta: number): number {
     const rq = lambda / (i + 1.5);
     if (rp < 1) {
       const left = (p * ip * rp) / (1 - rp) + (Math.abs(q) * iq * rq) / (1 - rq);
-      if (left <= SERIES_EPS * Math.abs(base + 0.5 * sum)) break;
+      if (left <= NONCENTRAL_SERIES_TOLERANCE * Math.abs(base + 0.5 * sum)) break;
     }
   }
 
@@ -136,7 +133,7 @@ function cdfNonNegative(t: number, df: number, delta: number): number {
     q *= (i + 1.5) / lambda;
     sum += p * ip + q * iq;
     const r = (i + 0.5) / lambda;
-    if (r < 1 && ((p + Math.abs(q)) * r) / (1 - r) <= SERIES_EPS * Math.abs(base + 0.5 * sum)) break;
+    if (r < 1 && ((p + Math.abs(q)) * r) / (1 - r) <= NONCENTRAL_SERIES_TOLERANCE * Math.abs(base + 0.5 * sum)) break;
   }
   const cdf = base + 0.5 * sum;
   return cdf < 0 ? 0 : cdf > 1 ? 1 : cdf;
@@ -195,7 +192,7 @@ export function noncentralTTwoSided(c: number, df: number, delta: number): numbe
   const y = df / (c2 + df);
   const b = 0.5 * df;
   // J(a) = I_y(b, a) = 1 - I_x(a, b); J(a + 1) = J(a) + g(a) with g as in the file header.
-  if (Math.abs(delta) < CENTRAL_DELTA) return incompleteBetaXY(y, x, b, 0.5);
+  if (Math.abs(delta) < CENTRAL_NONCENTRALITY) return incompleteBetaXY(y, x, b, 0.5);
   const lambda = 0.5 * delta * delta;
   const k = Math.floor(lambda);
   const pk = Math.exp(lnPoissonAt(k, lambda));
@@ -217,7 +214,7 @@ export function noncentralTTwoSided(c: number, df: number, delta: number): numbe
     p *= lambda / i;
     sum += p * j;
     const r = lambda / (i + 1);
-    if (r < 1 && (p * r) / (1 - r) <= SERIES_EPS * sum) break;
+    if (r < 1 && (p * r) / (1 - r) <= NONCENTRAL_SERIES_TOLERANCE * sum) break;
   }
   // Downward: J falls, J(a) = J(a + 1) - g(a).
   p = pk;
@@ -236,7 +233,7 @@ export function noncentralTTwoSided(c: number, df: number, delta: number): numbe
     p *= (i + 1) / lambda;
     sum += p * j;
     const r = i / lambda;
-    if ((p * j * r) / (1 - r) <= SERIES_EPS * sum) break;
+    if ((p * j * r) / (1 - r) <= NONCENTRAL_SERIES_TOLERANCE * sum) break;
   }
   return sum > 1 ? 1 : sum;
 }

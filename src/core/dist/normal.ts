@@ -2,6 +2,7 @@
  * The standard normal distribution: cumulative probability and quantile.
  */
 import { InputError } from '../errors.ts';
+import { SERIES_TOLERANCE } from '../tolerance.ts';
 
 const INV_SQRT_TWO_PI = 0.3989422804014327; // 1 / sqrt(2 pi)
 const TWO_OVER_SQRT_PI = 1.1283791670955126; // 2 / sqrt(pi)
@@ -48,7 +49,7 @@ export function normalCdf(z: number): number {
     for (let n = 1; n < 100; n++) {
       term *= (2 * x2) / (2 * n + 1);
       sum += term;
-      if (term <= 1e-17 * sum) break;
+      if (term <= SERIES_TOLERANCE * sum) break;
     }
     const erf = TWO_OVER_SQRT_PI * Math.exp(-x2) * sum;
     return z < 0 ? 0.5 - 0.5 * erf : 0.5 + 0.5 * erf;

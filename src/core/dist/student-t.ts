@@ -11,6 +11,7 @@ import { InputError } from '../errors.ts';
 import { incompleteBetaInverseOdds, incompleteBetaXY } from './incomplete-beta.ts';
 import { lnBeta } from './log-gamma.ts';
 import { normalQuantile } from './normal.ts';
+import { TAIL_SERIES_ODDS } from '../tolerance.ts';
 
 /** Below x = e^-600 the tail I_x(a, 1/2) is its first series term x^a / (a B(a, 1/2)) to rounding. */
 const LN_X_ASYMPTOTE = -600;
@@ -32,7 +33,7 @@ function twoSided(at: number, df: number): number {
     return incompleteBetaXY(1 / (1 + r), r / (1 + r), a, 0.5);
   }
   const w = df / at / at;
-  if (w < 1e-250) {
+  if (w < TAIL_SERIES_ODDS) {
     // x ~ w: the tail series I_x(a, 1/2) = x^a / (a B) (1 + O(x)) in logs, so nothing underflows.
     const lnW = Math.log(df) - 2 * Math.log(at);
     if (lnW < LN_X_ASYMPTOTE) return Math.exp(a * lnW - Math.log(a) - lnBeta(a, 0.5));

@@ -6,6 +6,7 @@
 import type { Factor } from '../factor/factor.ts';
 import type { Term } from '../model/term.ts';
 import type { LenthResult } from './lenth.ts';
+import type { Verdict } from './verdicts.ts';
 
 export interface CodingRow {
   readonly name: string;
@@ -142,6 +143,9 @@ export interface Analysis {
   readonly aliased: readonly AliasedTerm[];
   readonly runs: readonly RunDiagnostics[];
   readonly halfNormal: readonly EffectPoint[];
+  /** What the analysis concludes, as typed data (kind and figures), warnings and plain statements alike. */
+  readonly verdicts: readonly Verdict[];
+  /** The notes that came with the runs, then the verdicts that are warnings, in words (core/text/verdict-text.ts). */
   readonly warnings: readonly string[];
   readonly model: FittedModel;
 }

@@ -3,9 +3,7 @@
  * not written). One wording for the analysis, the reports and the screens.
  * Example: combinationLabel([{ letters: 'C', weight: 1 }, { letters: 'AB', weight: -1 }]) -> "C - AB".
  */
-
-/** Weights this close to +-1 are written without a number (rounding from the QR solve). */
-const UNIT_WEIGHT_TOLERANCE = 1e-9;
+import { UNIT_WEIGHT_TOLERANCE } from '../tolerance.ts';
 
 function weightText(w: number): string {
   return Math.abs(w - 1) < UNIT_WEIGHT_TOLERANCE ? '' : `${Number(w.toPrecision(4))} `;

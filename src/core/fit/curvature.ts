@@ -10,10 +10,7 @@
  */
 import { tTwoSidedP } from '../dist/student-t.ts';
 import type { Factor } from '../factor/factor.ts';
-
-/** Coded distance within which an actual setting still counts as at its planned level: 5% of
- * the range on either side (our own choice, so that small setting errors do not hide center runs). */
-export const CENTER_TOLERANCE = 0.1;
+import { CENTER_TOLERANCE } from '../tolerance.ts';
 
 export interface Curvature {
   readonly estimate: number;

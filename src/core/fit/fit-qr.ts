@@ -6,14 +6,11 @@
  * Seber and Lee, Linear Regression Analysis, 2nd ed., section 11.3 (QR for regression, sequential SS).
  * Cost O(n p^2).
  */
-import { ORTHOGONALITY_TOLERANCE, RANK_TOLERANCE } from '../tolerance.ts';
+import { ALIAS_WEIGHT_TOLERANCE, ORTHOGONALITY_TOLERANCE, RANK_TOLERANCE } from '../tolerance.ts';
 import { applyQ, applyQt, householderQr } from '../linalg/householder-qr.ts';
 import { crossInverse, invertUpper, solveUpper } from '../linalg/triangular.ts';
 import type { Column } from './columns.ts';
 import type { AliasedColumn, LinearFit } from './linear-fit.ts';
-
-/** Weights below this are rounding noise in an alias combination (common practice). */
-const ALIAS_WEIGHT_TOLERANCE = 1e-8;
 
 /**
  * With `lean`, only the coefficients, sums of squares, residuals and aliases are computed

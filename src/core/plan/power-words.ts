@@ -6,6 +6,7 @@
  * nearest simple "n times in m" (common practice for speaking of chances to non-statisticians).
  */
 import { InputError } from '../errors.ts';
+import { RATIO_TOLERANCE } from '../tolerance.ts';
 import { MAX_RUNS } from '../design/run-limit.ts';
 import type { PlanPower } from './power.ts';
 
@@ -32,7 +33,7 @@ export function chanceInWords(p: number): string {
   for (const m of DENOMINATORS) {
     const n = Math.round(p * m);
     const err = Math.abs(p - n / m);
-    if (n >= 1 && n < m && err < best.err - 1e-12) best = { n, m, err };
+    if (n >= 1 && n < m && err < best.err - RATIO_TOLERANCE) best = { n, m, err };
   }
   // Only past 0.95 or below 0.05 does no n/m with 0 < n < m come nearer than 1/10 or 9/10.
   if (best.n === 0) return p < 0.5 ? 'less than 1 time in 10' : 'more than 9 times in 10';

@@ -19,6 +19,7 @@
  * (n1 runs and p model terms per copy). One QR factorisation of one copy serves every r.
  */
 import { InputError } from '../errors.ts';
+import { EFFECT_PRECISION, EQUAL_VARIANCE_TOLERANCE, RATIO_TOLERANCE } from '../tolerance.ts';
 import type { Design } from '../design/design.ts';
 import { MAX_RUNS } from '../design/run-limit.ts';
 import { noncentralTTwoSided } from '../dist/noncentral-t.ts';
@@ -32,8 +33,6 @@ import { compareTerms, termLetters, termOrder, type Term } from '../model/term.t
 export const DEFAULT_SIGNIFICANCE = 0.05;
 /** Default target power (common practice: Cohen 1988, section 2.4, "a power of .80"). */
 export const DEFAULT_POWER = 0.8;
-/** The smallest effect is found to this relative precision (far finer than any gauge). */
-const EFFECT_PRECISION = 1e-10;
 
 export interface PowerRequest {
   /** The effect that matters, delta, in the response's units (the change from low to high). */
@@ -222,12 +221,12 @@ export function planPower(design: Pick<Design, 'factors' | 'runs' | 'screening'>
   let cjj = -1;
   for (const t of mains) {
     const c = model.inverseDiagonal[terms.indexOf(t)];
-    if (c > cjj * (1 + 1e-12)) {
+    if (c > cjj * (1 + RATIO_TOLERANCE)) {
       cjj = c;
       mainEffect = t;
     }
   }
-  const mainEffectsAlike = mains.every((t) => model.inverseDiagonal[terms.indexOf(t)] >= cjj * (1 - 1e-9));
+  const mainEffectsAlike = mains.every((t) => model.inverseDiagonal[terms.indexOf(t)] >= cjj * (1 - EQUAL_VARIANCE_TOLERANCE));
   const planned = atCopies(model, copies, cjj);
   let power: number | null = null;
   let smallestEffect: number | null = null;

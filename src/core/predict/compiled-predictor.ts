@@ -11,13 +11,7 @@ import type { Factor } from '../factor/factor.ts';
 import type { FittedModel } from '../fit/analysis.ts';
 import { tIntervals } from '../fit/t-intervals.ts';
 import { checkTerms, isSquare, termColumnFactors, termMask, termOrder } from '../model/term.ts';
-
-/**
- * Off-diagonal entries of (X'X)^-1 below this fraction of sqrt(C_ii C_jj) are rounding, so the
- * covariance is treated as diagonal (an orthogonal design). Common practice; far below any
- * real correlation between two estimates.
- */
-export const DIAGONAL_TOLERANCE = 1e-12;
+import { DIAGONAL_TOLERANCE } from '../tolerance.ts';
 
 /** Fit, standard error and the two intervals at one point; null where the runs cannot give it. */
 export interface PointInterval {

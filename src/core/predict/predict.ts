@@ -12,6 +12,7 @@ import { CAUTION } from './caution.ts';
 import { cachedPredictor } from './compiled-predictor.ts';
 import { outsideRange, type OutsideSetting } from './outside-range.ts';
 import { formatSetting, parseSettings, type FactorSetting, type SettingsInput } from './parse-settings.ts';
+import { curvatureNote } from '../text/verdict-text.ts';
 
 export interface Contribution {
   readonly term: Term;
@@ -56,10 +57,6 @@ export interface PredictOptions {
   readonly alpha?: number;
 }
 
-function fmtP(p: number): string {
-  return p < 1e-4 ? '< 0.0001' : `= ${p.toFixed(4)}`;
-}
-
 /**
  * The notes a prediction from this model carries: no residual df (so no intervals), an average
  * block, and significant curvature (p < alpha from the center runs; Montgomery, Design and
@@ -76,12 +73,7 @@ export function modelNotes(model: FittedModel, alpha: number): string[] {
   }
   if (model.blockColumns > 0) out.push('The prediction is for an average block.');
   if (model.curvatureP !== null && model.curvatureP < alpha) {
-    const squares = model.terms.filter(isSquare);
-    out.push(
-      squares.length > 0
-        ? `Curvature is significant (p ${fmtP(model.curvatureP)}): the center runs differ from the corners; the model's square terms (${squares.map((t) => termLetters(t, model.factors)).join(', ')}) allow for it.`
-        : `Curvature is significant (p ${fmtP(model.curvatureP)}): the center runs differ from the corners, so this first-order model is biased between the corners as well.`,
-    );
+    out.push(curvatureNote(model.curvatureP, 'prediction', model.terms.filter(isSquare).map((t) => termLetters(t, model.factors))));
   }
   return out;
 }

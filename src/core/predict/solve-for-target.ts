@@ -15,13 +15,7 @@ import { cachedPredictor } from './compiled-predictor.ts';
 import { outsideRange, type OutsideSetting } from './outside-range.ts';
 import { formatSetting, parseSettings, type FactorSetting, type SettingsInput } from './parse-settings.ts';
 import { centerNotes, modelNotes } from './predict.ts';
-
-/**
- * A slope below this fraction of the size of the model's terms at the held settings is rounding:
- * the factor has no effect there. Common practice (far above double rounding, far below any
- * effect a gauge could see).
- */
-export const ZERO_SLOPE_TOLERANCE = 1e-9;
+import { ZERO_SLOPE_TOLERANCE } from '../tolerance.ts';
 
 export interface SolveOptions {
   /** The numeric factor to solve for, by name or letter. */

@@ -14,6 +14,8 @@ import { CAUTION } from './caution.ts';
 import { cachedPredictor, type PointInterval } from './compiled-predictor.ts';
 import { isOutside } from './outside-range.ts';
 import { formatSetting, parseSettings, type SettingsInput } from './parse-settings.ts';
+import { pPhrase } from '../text/p-value.ts';
+import { curvatureNote } from '../text/verdict-text.ts';
 
 /** The longest path computed in one call (common practice: a few to a few dozen steps are run). */
 export const MAX_PATH_STEPS = 1000;
@@ -100,10 +102,6 @@ export function pathSenseForGoal(response: Response): PathSense {
 
 function fmt(x: number): string {
   return formatSetting(x);
-}
-
-function fmtP(p: number): string {
-  return p < 1e-4 ? '< 0.0001' : `= ${p.toFixed(4)}`;
 }
 
 /**
@@ -251,7 +249,7 @@ export function steepestPath(model: FittedModel, options: PathOptions): Steepest
   const significant = significantOf(isInteraction);
   if (significant.length > 0) {
     messages.push(
-      `Interactions are significant (${significant.map((e) => `${termLetters(e.t, factors)} p ${fmtP(e.p)}`).join(', ')}): the response surface twists, so the path from the main effects points less reliably.`,
+      `Interactions are significant (${significant.map((e) => `${termLetters(e.t, factors)} ${pPhrase(e.p)}`).join(', ')}): the response surface twists, so the path from the main effects points less reliably.`,
     );
   }
   const squares = model.terms.filter(isSquare);
@@ -259,14 +257,12 @@ export function steepestPath(model: FittedModel, options: PathOptions): Steepest
     const sig = significantOf(isSquare);
     messages.push(
       `The model holds squares (${squares.map((t) => termLetters(t, factors)).join(', ')}): the path still starts in the direction of steepest ${sense} at the center (the gradient there is the main-effect coefficients), but the fitted surface curves, so a straight path may pass a peak or a valley; the predictions along it use every term` +
-        (sig.length > 0 ? `, and the squares ${sig.map((e) => `${termLetters(e.t, factors)} p ${fmtP(e.p)}`).join(', ')} are significant` : '') +
+        (sig.length > 0 ? `, and the squares ${sig.map((e) => `${termLetters(e.t, factors)} ${pPhrase(e.p)}`).join(', ')} are significant` : '') +
         '. With a second-order model, its stationary point and canonical analysis describe the surface better than a straight path.',
     );
   }
   if (model.curvatureP !== null && model.curvatureP < alpha) {
-    messages.push(
-      `Curvature is significant (p ${fmtP(model.curvatureP)}): the region may already be near an optimum, so the first-order path points less reliably; a second-order design may serve better.`,
-    );
+    messages.push(curvatureNote(model.curvatureP, 'path'));
   }
   if (nb > 0) messages.push('Predictions are for an average block.');
   return {

@@ -17,8 +17,9 @@ import type { Factor } from '../factor/factor.ts';
 import { plannedSetting } from '../design/planned-settings.ts';
 import type { Response } from './response.ts';
 
-/** A design as a study stores it: the factors live beside it, once. */
-export type StoredDesign = Omit<Design, 'factors'>;
+/** A design as a study stores it: the factors live beside it, once; the typed notes and the
+ * foldover fact stay with the fresh plan (the stored format keeps the notes in words). */
+export type StoredDesign = Omit<Design, 'factors' | 'noteFacts' | 'foldover'>;
 
 /** What a person makes when starting a study (ids and devices are added by the store). */
 export interface StudyPlan {
@@ -31,7 +32,7 @@ export interface StudyPlan {
 
 /** A study's plan from a design made by the design builder (its factors move beside it). */
 export function studyPlan(title: string, purpose: string, responses: readonly Response[], design: Design): StudyPlan {
-  const { factors, ...stored } = design;
+  const { factors, noteFacts: _facts, foldover: _foldover, ...stored } = design;
   return { title, purpose, factors, responses, design: stored };
 }
 

@@ -35,13 +35,6 @@ export function coded(x: number): string {
   return (r > 0 ? '+' : '−') + String(Math.abs(r));
 }
 
-/** A p-value in words a reader can act on. */
-export function pValue(p: number | null): string {
-  if (p === null) return 'p not available';
-  if (p < 0.001) return 'p < 0.001';
-  return `p = ${p.toFixed(3)}`;
-}
-
 /** A fraction as a percentage: 0.9993 -> '99.9%'. */
 export function percent(x: number | null): string {
   if (x === null || !Number.isFinite(x)) return '–';

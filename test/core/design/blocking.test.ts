@@ -10,6 +10,7 @@ import {
   parseBlockWords,
 } from '../../../src/core/design/blocking.ts';
 import { catalogueFraction } from '../../../src/core/design/catalogue.ts';
+import { blockOriginText } from '../../../src/core/text/design-text.ts';
 import { definingRelation } from '../../../src/core/design/defining-relation.ts';
 import { basicFactors } from '../../../src/core/design/fractional.ts';
 import { fullFactorial } from '../../../src/core/design/full-factorial.ts';
@@ -39,7 +40,7 @@ describe('defaultBlocking for full factorials', () => {
       if (!TABLE_CONFOUNDED[k][b]) continue;
       it(`2^${k} in ${b} blocks confounds ${TABLE_CONFOUNDED[k][b].join(', ')} (Montgomery, 8th ed., Table 7.8, from memory)`, () => {
         const blocking = defaultBlocking(k, [], Array.from({ length: k }, (_, i) => i), b);
-        expect(blocking.source).toBe(MONTGOMERY_TABLE_SOURCE);
+        expect(blockOriginText(blocking.origin)).toBe(MONTGOMERY_TABLE_SOURCE);
         expect(words(blocking.generators)).toEqual(MONTGOMERY_TABLE_7_8[k][b]);
         expect(words(blockConfounded(blocking.generators, []))).toEqual(TABLE_CONFOUNDED[k][b]);
       });
@@ -88,7 +89,7 @@ describe('defaultBlocking search budget', () => {
     const rel = definingRelation(gens.map(generatorWord));
     const b = defaultBlocking(12, rel, basicFactors(12, gens), 8);
     expect(b.generators.length).toBe(3);
-    expect(b.source).toMatch(/stopped after 200000 candidates \(the best found, not proven best\)/);
+    expect(blockOriginText(b.origin)).toMatch(/stopped after 200000 candidates \(the best found, not proven best\)/);
     const confounded = blockSpan(b.generators).flatMap((w) => [w, ...rel.map((r) => r.mask ^ w)]);
     expect(confounded.every((m) => formatWord(m, L).length >= 3)).toBe(true);
   });

@@ -203,7 +203,7 @@ describe('predict with squares: Montgomery 8th ed., Example 11.2 (central compos
 
   it('significant curvature: the note says the squares allow for it, not that a first-order model is biased', () => {
     const notes = modelNotes({ ...model, curvatureP: 0.001 }, 0.05).join(' ');
-    expect(notes).toMatch(/the model's square terms \(A\^2, B\^2\) allow for it/);
+    expect(notes).toMatch(/the model's square terms \(A\^2, B\^2\) allow for it/i);
     expect(notes).not.toMatch(/first-order/);
     expect(modelNotes({ ...model, terms: [1, 2, 3], curvatureP: 0.001 }, 0.05).join(' ')).toMatch(/first-order model is biased/);
   });

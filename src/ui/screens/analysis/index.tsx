@@ -18,7 +18,9 @@ import { InteractionChart } from '../../components/interaction-chart/index.tsx';
 import { ResidualChart } from '../../components/residual-chart/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
-import { num, percent, pValue, setting, signed, termLabel, withUnit } from '../../lib/format.ts';
+import { pPhrase } from '../../../core/text/p-value.ts';
+import { curvatureStatement } from '../../../core/text/verdict-text.ts';
+import { num, percent, setting, signed, termLabel, withUnit } from '../../lib/format.ts';
 import { AnalysisModel, MODEL_CHOICES, twoFactorTerms } from '../../models/analysis-model.ts';
 import { interactionLines } from './interaction-lines.ts';
 import { href } from '../../models/router-model.ts';
@@ -28,9 +30,9 @@ export type AnalysisScreenProps = { readonly store: Store; readonly studyId: str
 /** How clearly a term stands out from the run-to-run noise, in words. */
 export function strength(t: TermEstimate): { words: string; faint: boolean } {
   if (t.p === null) return { words: 'No noise estimate from these runs, so no test', faint: false };
-  if (t.p < 0.05) return { words: `Stands out from the noise (${pValue(t.p)})`, faint: false };
-  if (t.p < 0.1) return { words: `Borderline (${pValue(t.p)})`, faint: false };
-  return { words: `Within the run-to-run noise (${pValue(t.p)})`, faint: true };
+  if (t.p < 0.05) return { words: `Stands out from the noise (${pPhrase(t.p)})`, faint: false };
+  if (t.p < 0.1) return { words: `Borderline (${pPhrase(t.p)})`, faint: false };
+  return { words: `Within the run-to-run noise (${pPhrase(t.p)})`, faint: true };
 }
 
 function levelText(f: Factor, end: 0 | 1): string {
@@ -206,16 +208,10 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
             <li>
               <strong>Run-to-run noise {withUnit(result.analysis.sigma, response.unit)}</strong> (residual standard deviation, {result.analysis.df.residual} df).
             </li>
-            {result.analysis.curvature && (
-              <li>
-                {result.analysis.curvature.p !== null && result.analysis.curvature.p < 0.05 ? (
-                  <strong>The center runs differ from the corners ({pValue(result.analysis.curvature.p)}): the response curves, so a straight-line model is off between the corners.</strong>
-                ) : (
-                  <>
-                    <strong>No clear curvature</strong>: the {result.analysis.curvature.nCenter} center runs agree with the corners (difference {num(result.analysis.curvature.estimate, 3)}, {pValue(result.analysis.curvature.p)}).
-                  </>
-                )}
-              </li>
+            {result.analysis.verdicts.map((v) =>
+              v.kind === 'curvature' ? (
+                <li key="curvature">{v.outcome === 'curved' ? <strong>{curvatureStatement(v)}</strong> : curvatureStatement(v)}</li>
+              ) : null,
             )}
           </ul>
           <h3>Residuals</h3>

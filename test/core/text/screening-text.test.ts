@@ -1,7 +1,7 @@
 // Reference: the 12-run design's largest partial-aliasing correlation, 1/3 (Lin and Draper 1992,
 // Technometrics 34, 423-428, from memory; recomputed from the columns in plackett-burman.test.ts).
 import { describe, expect, it } from 'vitest';
-import { correlationText, plackettBurmanSummary } from '../../../src/core/design/plackett-burman-summary.ts';
+import { correlationText, plackettBurmanSummary } from '../../../src/core/text/screening-text.ts';
 
 describe('plackettBurmanSummary', () => {
   it('says main effects are clear of each other but partly mixed with interactions', () => {

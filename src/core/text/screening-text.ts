@@ -5,6 +5,7 @@
  * screening), how many columns are left unused, and how the runs are ordered.
  */
 import { InputError } from '../errors.ts';
+import { RATIO_TOLERANCE } from '../tolerance.ts';
 
 export interface ScreeningSummaryInput {
   /** Factorial runs of one replicate (12, 20 or 24). */
@@ -33,7 +34,7 @@ export function correlationText(r: number): string {
   const a = Math.abs(r);
   for (let den = 1; den <= 12; den++) {
     const num = Math.round(a * den);
-    if (num > 0 && Math.abs(a - num / den) < 1e-12) return `${r < 0 ? '-' : ''}${den === 1 ? num : `${num}/${den}`}`;
+    if (num > 0 && Math.abs(a - num / den) < RATIO_TOLERANCE) return `${r < 0 ? '-' : ''}${den === 1 ? num : `${num}/${den}`}`;
   }
   return r.toFixed(2);
 }

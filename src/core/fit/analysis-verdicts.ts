@@ -1,0 +1,58 @@
+/**
+ * The verdicts step of the analysis, written last: from the other steps' figures, what the
+ * analysis concludes, as typed verdicts (verdicts.ts), in the order the warnings are read:
+ * near replicates, non-orthogonal runs, curvature, lack of fit, a weak Lenth's method, no
+ * residual df, terms the runs cannot separate. Significance is p < alpha (common practice:
+ * 0.05); Lenth's method is weak below LENTH_MIN_CONTRASTS effects (Lenth 1989, section 4).
+ * Cost O(p).
+ * Example: the 2^2 with five center points (Montgomery 8th ed., section 6.8) -> one verdict,
+ * curvature 'flat' with p 0.8137.
+ */
+import type { AliasedTerm, TermEstimate } from './analysis.ts';
+import type { Curvature } from './curvature.ts';
+import { LENTH_MIN_CONTRASTS, type LenthResult } from './lenth.ts';
+import type { Verdict } from './verdicts.ts';
+
+export interface VerdictInput {
+  readonly alpha: number;
+  readonly nearReplicates: number;
+  readonly orthogonal: boolean;
+  readonly curvature: Curvature | null;
+  /** Letters of the model's square terms, if any. */
+  readonly squares?: readonly string[];
+  /** Pure-error df (0 when none). */
+  readonly pureErrorDf: number;
+  readonly lackOfFitP: number | null;
+  readonly lenth: LenthResult | null;
+  readonly dfResidual: number;
+  readonly aliased: readonly AliasedTerm[];
+  /** Whether an inseparable term is confounded with the intercept or blocks (estimate-terms.ts). */
+  readonly aliasedWithInterceptOrBlocks: boolean;
+  readonly terms: readonly TermEstimate[];
+}
+
+export function analysisVerdicts(v: VerdictInput): Verdict[] {
+  const out: Verdict[] = [];
+  if (v.nearReplicates > 0) out.push({ kind: 'near-replicates', groups: v.nearReplicates });
+  if (!v.orthogonal) out.push({ kind: 'not-orthogonal' });
+  const c = v.curvature;
+  if (c) {
+    const base = { kind: 'curvature', p: c.p, alpha: v.alpha, estimate: c.estimate, nCenter: c.nCenter, nFactorial: c.nFactorial, squares: v.squares ?? [] } as const;
+    if (c.p === null) out.push({ ...base, outcome: 'untestable', reason: v.pureErrorDf > 0 ? 'no-spread' : 'no-repeats' });
+    else out.push({ ...base, outcome: c.p < v.alpha ? 'curved' : 'flat', reason: null });
+  }
+  if (v.lackOfFitP !== null) {
+    out.push({ kind: 'lack-of-fit', outcome: v.lackOfFitP < v.alpha ? 'significant' : 'not-significant', p: v.lackOfFitP, alpha: v.alpha });
+  }
+  if (v.lenth && v.lenth.m < LENTH_MIN_CONTRASTS) out.push({ kind: 'lenth-weak', m: v.lenth.m, advised: LENTH_MIN_CONTRASTS });
+  if (v.dfResidual === 0) out.push({ kind: 'no-residual-df' });
+  if (v.aliased.length > 0) {
+    out.push({
+      kind: 'aliased',
+      count: v.aliased.length,
+      carried: v.terms.flatMap((t) => (t.estimates ? [{ letters: t.letters, estimates: t.estimates }] : [])),
+      withInterceptOrBlocks: v.aliasedWithInterceptOrBlocks,
+    });
+  }
+  return out;
+}

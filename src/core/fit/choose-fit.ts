@@ -1,0 +1,43 @@
+/**
+ * The fit step of the analysis: the model's columns (intercept, block contrasts, terms in model
+ * order) and the least-squares fit by the right path. Yates' algorithm when the runs are a
+ * complete, balanced factorial at exactly +-1 with no blocks (see fit-yates.ts), Householder QR
+ * otherwise (fit-qr.ts); both give one LinearFit. Blocks count only when there are two or more.
+ * Terms are de-duplicated and sorted into model order (model/term.ts compareTerms); the default
+ * is main effects and two-factor interactions (model/formula.ts defaultTerms).
+ * Cost: O(k 2^k + n) on the Yates path, O(n p^2) on the QR path.
+ * Throws InputError for a term that names a factor the study does not have.
+ * Example: chooseFit(the 2^2 yield data of Montgomery 8th ed. section 6.2, {}) -> method 'yates', terms [A, B, AB].
+ */
+import { defaultTerms } from '../model/formula.ts';
+import { checkTerms, compareTerms, isSquare, type Term } from '../model/term.ts';
+import type { ResponseData } from '../study/response-data.ts';
+import { blockLevels, modelColumns, modelMatrix } from './columns.ts';
+import { fitQr } from './fit-qr.ts';
+import { fitYates, yatesCells } from './fit-yates.ts';
+import type { LinearFit } from './linear-fit.ts';
+
+export interface FitChoice {
+  /** Model terms in model order. */
+  readonly terms: readonly Term[];
+  /** Distinct block labels in ascending order when there are two or more blocks, else empty. */
+  readonly blockLevels: readonly number[];
+  /** Block of each run when there are two or more blocks, else null. */
+  readonly blocks: readonly number[] | null;
+  /** Yates cell of each run (-1 for a center run) on the Yates path, else null. */
+  readonly cells: Int32Array | null;
+  readonly fit: LinearFit;
+}
+
+export function chooseFit(data: ResponseData, options: { readonly terms?: readonly Term[]; readonly forceQr?: boolean } = {}): FitChoice {
+  const k = data.factors.length;
+  const terms = [...new Set(options.terms ?? defaultTerms(k))].sort(compareTerms);
+  checkTerms(terms, data.factors);
+  const levels = blockLevels(data.blocks);
+  const blocks = levels.length > 1 ? data.blocks : null;
+  const columns = modelColumns(blocks ? levels : [], terms);
+  // Yates' algorithm holds for products of two-level columns only: any square takes the QR path.
+  const cells = !blocks && !options.forceQr && !terms.some(isSquare) ? yatesCells(data.coded, k) : null;
+  const fit = cells ? fitYates(columns, terms, cells, k, data.y) : fitQr(columns, modelMatrix(columns, data.coded, blocks), data.y);
+  return { terms, blockLevels: blocks ? levels : [], blocks, cells, fit };
+}

@@ -1,0 +1,62 @@
+/**
+ * What the analysis concludes about the runs, as typed data (a kind and its figures), never as
+ * text: the screens, the text report and the warnings all turn these into words through one
+ * module (core/text/verdict-text.ts), so they say the same thing in one wording.
+ * The significance rules are common practice (p below the chosen alpha, 0.05 by default);
+ * the tests themselves are in curvature.ts, anova-tables.ts and lenth.ts.
+ */
+
+/** Whether the center runs differ from the factorial runs (Montgomery, 8th ed., section 6.8). */
+export interface CurvatureVerdict {
+  readonly kind: 'curvature';
+  /** 'curved': p < alpha; 'flat': p >= alpha; 'untestable': no p (see `reason`). */
+  readonly outcome: 'curved' | 'flat' | 'untestable';
+  /** Why there is no test: no repeated runs, or repeated runs that agree exactly (pure error 0). */
+  readonly reason: 'no-repeats' | 'no-spread' | null;
+  /** Letters of the model's square terms ("A^2"); when there are any, the model allows for the curvature. */
+  readonly squares?: readonly string[];
+  readonly p: number | null;
+  readonly alpha: number;
+  /** Factorial mean minus center mean. */
+  readonly estimate: number;
+  readonly nCenter: number;
+  readonly nFactorial: number;
+}
+
+export type Verdict =
+  /** Repeats of a planned point whose actual settings differ slightly (near replicates). */
+  | { readonly kind: 'near-replicates'; readonly groups: number }
+  /** Columns not orthogonal: sequential and adjusted sums of squares differ. */
+  | { readonly kind: 'not-orthogonal' }
+  | CurvatureVerdict
+  /** Lack of fit tested against pure error. */
+  | { readonly kind: 'lack-of-fit'; readonly outcome: 'significant' | 'not-significant'; readonly p: number; readonly alpha: number }
+  /** Lenth's method over fewer contrasts than advised. */
+  | { readonly kind: 'lenth-weak'; readonly m: number; readonly advised: number }
+  /** No residual degrees of freedom: no standard errors, t or p. */
+  | { readonly kind: 'no-residual-df' }
+  /** Model terms the runs cannot separate, and what each kept estimate carries. */
+  | {
+      readonly kind: 'aliased';
+      readonly count: number;
+      readonly carried: readonly { readonly letters: string; readonly estimates: string }[];
+      readonly withInterceptOrBlocks: boolean;
+    };
+
+export type VerdictKind = Verdict['kind'];
+
+/**
+ * Whether a verdict is a warning (it goes into `warnings`) or a plain statement (a flat
+ * curvature test, lack of fit that is not significant). Cost O(1).
+ * Example: isWarning({ kind: 'not-orthogonal' }) -> true.
+ */
+export function isWarning(v: Verdict): boolean {
+  switch (v.kind) {
+    case 'curvature':
+      return v.outcome === 'curved' ? (v.squares ?? []).length === 0 : v.outcome !== 'flat';
+    case 'lack-of-fit':
+      return v.outcome === 'significant';
+    default:
+      return true;
+  }
+}
