@@ -11,7 +11,8 @@ import { plannedSetting } from '../../core/design/planned-settings.ts';
 import { InputError } from '../../core/errors.ts';
 import { parseNumber } from '../../core/factor/coding.ts';
 import type { FactorSpec } from '../../core/factor/factor.ts';
-import { plannedColumn, runSheetCsv } from '../../io/csv/run-sheet.ts';
+import { factorLabel } from '../../core/study/name-with-unit.ts';
+import { runSheetCsv } from '../../io/csv/run-sheet.ts';
 import { parseCommandArgs } from '../args.ts';
 import type { Command } from '../command.ts';
 
@@ -205,7 +206,7 @@ export function designText(d: Design): string {
       ['', 'Name', 'Low (-1)', 'High (+1)'],
       d.factors.map((f) => [
         f.letter,
-        plannedColumn(f).replace(/ planned$/, '') + (f.kind === 'numeric' && f.scale === 'log' ? ', log scale' : ''),
+        factorLabel(f) + (f.kind === 'numeric' && f.scale === 'log' ? ', log scale' : ''),
         String(f.kind === 'numeric' ? f.low : f.levels[0]),
         String(f.kind === 'numeric' ? f.high : f.levels[1]),
       ]),

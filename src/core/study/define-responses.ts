@@ -43,9 +43,9 @@ export function defineResponses(specs: readonly ResponseSpec[]): Response[] {
     const out: Response = { name, goal: r.goal, ...(unit ? { unit } : {}) };
     if (r.goal !== 'target') return out;
     const t = r.target;
-    const what = `${name}: the goal is a target, so the target`;
-    const target = typeof t === 'number' ? t : readNumber(t ?? '', what);
-    if (!Number.isFinite(target)) throw new InputError(`${what} needs a finite number, got ${target}`);
+    if (t === undefined || (typeof t === 'string' && t.trim() === '')) throw new InputError(`${name}: the goal is a target, so it needs a target value`);
+    const target = typeof t === 'number' ? t : readNumber(t, `${name}: the target`);
+    if (!Number.isFinite(target)) throw new InputError(`${name}: the target needs a finite number, got ${target}`);
     return { ...out, target };
   });
 }

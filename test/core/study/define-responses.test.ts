@@ -22,8 +22,9 @@ describe('defineResponses', () => {
     expect(() => defineResponses([{ name: 'Gloss', goal: 'maximize' }, { name: 'gloss', goal: 'minimize' }])).toThrow('Response names must differ, got "gloss" twice (responses 1 and 2)');
   });
   it('a target goal needs a readable, finite target', () => {
-    expect(() => defineResponses([{ name: 'Gloss', goal: 'target', target: '' }])).toThrow('Gloss: the goal is a target, so the target needs a number, got nothing');
-    expect(() => defineResponses([{ name: 'Gloss', goal: 'target', target: '7,5' }])).toThrow('use a point for decimals), got "7,5"');
+    expect(() => defineResponses([{ name: 'Gloss', goal: 'target', target: '' }])).toThrow('Gloss: the goal is a target, so it needs a target value');
+    expect(() => defineResponses([{ name: 'Gloss', goal: 'target' }])).toThrow('Gloss: the goal is a target, so it needs a target value');
+    expect(() => defineResponses([{ name: 'Gloss', goal: 'target', target: '7,5' }])).toThrow('Gloss: the target needs a number (use a point for decimals), got "7,5"');
     expect(() => defineResponses([{ name: 'Gloss', goal: 'target', target: Number.POSITIVE_INFINITY }])).toThrow('needs a finite number');
   });
   it('refuses an unknown goal', () => {

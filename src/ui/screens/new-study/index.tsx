@@ -11,7 +11,7 @@ import type { Store } from '../../../store/store.ts';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { CountStepper } from '../../components/count-stepper/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
-import { href } from '../../models/router-model.ts';
+import { hrefTo } from '../../app/routes.tsx';
 import { BLOCK_CHOICES, MAX_FORM_FACTORS, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
 
 export type NewStudyScreenProps = { readonly store: Store };
@@ -81,13 +81,13 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
 
   async function create() {
     const made = await model.create();
-    if (made) location.hash = href.sheet(made.id);
+    if (made) location.hash = hrefTo('runSheet', { studyId: made.id });
     else problemRef.current?.scrollIntoView({ block: 'center' });
   }
 
   return (
     <section class="new-study">
-      <a class="back" href={href.studies()}>
+      <a class="back" href={hrefTo('studies', {})}>
         ‹ All studies
       </a>
       <h2>Plan a new study</h2>
