@@ -12,7 +12,8 @@ import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { CountStepper } from '../../components/count-stepper/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { hrefTo } from '../../app/routes.tsx';
-import { BLOCK_CHOICES, MAX_FORM_FACTORS, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
+import { MAX_DESIGN_FACTORS } from '../../../core/design/max-design-factors.ts';
+import { BLOCK_CHOICES, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
 
 export type NewStudyScreenProps = { readonly store: Store };
 
@@ -141,7 +142,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
             </div>
           );
         })}
-        <button type="button" class="btn block" disabled={factors.length >= MAX_FORM_FACTORS} onClick={() => model.addFactor()}>
+        <button type="button" class="btn block" disabled={factors.length >= MAX_DESIGN_FACTORS} onClick={() => model.addFactor()}>
           + Add a factor
         </button>
       </fieldset>
