@@ -6,6 +6,7 @@
 import { nameWithUnit } from '../../../core/study/name-with-unit.ts';
 import type { Response } from '../../../core/study/response.ts';
 import { withUnit } from '../../lib/format.ts';
+import './style.css';
 
 export type ReadingsFieldProps = {
   readonly response: Response;

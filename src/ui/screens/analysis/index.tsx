@@ -24,6 +24,7 @@ import { AnalysisModel, twoFactorTerms } from '../../models/analysis-model.ts';
 import { MODEL_CHOICES, openStudyAnalysis } from '../../models/study-analysis-model.ts';
 import { interactionLines } from './interaction-lines.ts';
 import { hrefTo } from '../../app/routes.tsx';
+import './style.css';
 
 export type AnalysisScreenProps = { readonly store: Store; readonly studyId: string };
 

@@ -13,6 +13,7 @@ import { when } from '../../lib/format.ts';
 import { ExportModel } from '../../models/export-model.ts';
 import { hrefTo } from '../../app/routes.tsx';
 import { isDemo } from '../../seed/demo-seed.ts';
+import './style.css';
 
 /** Without a study id: every study on this device. */
 export type ExportScreenProps = { readonly store: Store; readonly studyId?: string | null };

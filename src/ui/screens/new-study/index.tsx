@@ -14,6 +14,7 @@ import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { hrefTo } from '../../app/routes.tsx';
 import { MAX_DESIGN_FACTORS } from '../../../core/design/max-design-factors.ts';
 import { BLOCK_CHOICES, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
+import './style.css';
 
 export type NewStudyScreenProps = { readonly store: Store };
 

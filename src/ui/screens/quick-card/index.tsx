@@ -15,8 +15,10 @@ import { FactorControl } from '../../components/factor-control/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { num, signed, termLabel, withUnit } from '../../lib/format.ts';
+import { useHeightProperty } from '../../lib/use-height-property.ts';
 import { QuickCardModel, SLIDER_REACH } from '../../models/quick-card-model.ts';
 import { MODEL_CHOICES, openStudyAnalysis } from '../../models/study-analysis-model.ts';
+import './style.css';
 
 export type QuickCardScreenProps = { readonly store: Store; readonly studyId: string };
 
@@ -56,6 +58,8 @@ function PredictionPanel({ p, response }: { p: Prediction; response: Response })
 export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
   const shared = openStudyAnalysis(store, studyId);
   const model = useModel(() => new QuickCardModel(shared));
+  // Measured for the scroll padding that keeps a focused field clear of the sticky block (style.css).
+  const stickyRef = useHeightProperty('--sticky-top-height');
   useEffect(() => void shared.load(), []);
   const d = shared.data.value;
   const problem = shared.problem.value;
@@ -84,7 +88,7 @@ export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
         </p>
       )}
       {/* The prediction and the caution stay on screen together while the sliders move. */}
-      <div class="sticky-top">
+      <div class="sticky-top" ref={stickyRef}>
         {p && <PredictionPanel p={p} response={response} />}
         <CautionBox lines={model.caution.value} compact />
       </div>

@@ -17,6 +17,7 @@ import { problemOf } from '../../lib/problem.ts';
 import { backupText } from '../../models/export-model.ts';
 import { readingBoxes, RunFormModel } from '../../models/run-form-model.ts';
 import { hrefTo } from '../../app/routes.tsx';
+import './style.css';
 
 export type RunFormScreenProps = { readonly store: Store; readonly studyId: string; readonly plannedRun: number };
 

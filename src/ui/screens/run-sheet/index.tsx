@@ -10,6 +10,7 @@ import { StudyHeader } from '../../components/study-header/index.tsx';
 import { setting, withUnit } from '../../lib/format.ts';
 import { hrefTo } from '../../app/routes.tsx';
 import { RunSheetModel } from '../../models/run-sheet-model.ts';
+import './style.css';
 
 export type RunSheetScreenProps = { readonly store: Store; readonly studyId: string };
 
