@@ -1,8 +1,9 @@
+// The base stylesheet first, so the components' own rules follow it in the bundle.
+import './app/style.css';
 import { render } from 'preact';
 import { App } from './app/index.tsx';
 import { UpdateBanner } from './components/update-banner/index.tsx';
 import { registerServiceWorker } from './sw-bridge.ts';
-import './app/style.css';
 
 render(
   <>

@@ -17,7 +17,8 @@ import { parseTerms } from '../../core/model/formula.ts';
 import { termLetters, termName } from '../../core/model/term.ts';
 import { planPower, type PlanPower } from '../../core/plan/power.ts';
 import { powerInWords } from '../../core/plan/power-words.ts';
-import { plannedColumn, runSheetCsv } from '../../io/csv/run-sheet.ts';
+import { factorLabel } from '../../core/study/name-with-unit.ts';
+import { runSheetCsv } from '../../io/csv/run-sheet.ts';
 import { parseCommandArgs } from '../args.ts';
 import type { Command } from '../command.ts';
 
@@ -384,7 +385,7 @@ export function designText(d: Design): string {
       ['', 'Name', 'Low (-1)', 'High (+1)'],
       d.factors.map((f) => [
         f.letter,
-        plannedColumn(f).replace(/ planned$/, '') + (f.kind === 'numeric' && f.scale === 'log' ? ', log scale' : ''),
+        factorLabel(f) + (f.kind === 'numeric' && f.scale === 'log' ? ', log scale' : ''),
         String(f.kind === 'numeric' ? f.low : f.levels[0]),
         String(f.kind === 'numeric' ? f.high : f.levels[1]),
       ]),

@@ -17,6 +17,7 @@ import type { Design, DesignRun } from './design.ts';
 import { foldPoints, foldRelation, separatedPairs, type Foldover } from './foldover.ts';
 import { basicFactors, fractionalFactorial, parseFraction, type FactorialPoint } from './fractional.ts';
 import { MAX_FULL_FACTORIAL_FACTORS } from './full-factorial.ts';
+import { MAX_DESIGN_FACTORS } from './max-design-factors.ts';
 import { generatorWord, parseGenerators, type Generator } from './generators.ts';
 import { drawSeed, MAX_SEED } from './random.ts';
 import { plackettBurmanAliasing, plackettBurmanPoints, PLACKETT_BURMAN_SOURCE } from './plackett-burman.ts';
@@ -66,9 +67,6 @@ function factorIndex(factors: readonly Factor[], nameOrLetter: string, what: str
   if (!f) throw new InputError(`${what}: unknown factor "${nameOrLetter}" (factors: ${factors.map((x) => `${x.letter}=${x.name}`).join(', ')})`);
   return factors.indexOf(f);
 }
-
-/** Most factors of a fraction: the catalogue's range (up to 15 factors), kept for typed generators too. */
-export const MAX_FRACTION_FACTORS = 15;
 
 interface Point extends FactorialPoint {
   readonly half: number;
@@ -127,8 +125,8 @@ export function buildDesign(spec: DesignSpec): Design {
   } else if (pbPoints === null && k > MAX_FULL_FACTORIAL_FACTORS) {
     checkRunLimit(2 ** k, `A full factorial of ${k} factors: 2^${k} factorial runs`);
   }
-  if (generators.length > 0 && k > MAX_FRACTION_FACTORS) {
-    throw new InputError(`A fraction takes up to ${MAX_FRACTION_FACTORS} factors, got ${k}`);
+  if (generators.length > 0 && k > MAX_DESIGN_FACTORS) {
+    throw new InputError(`A fraction takes up to ${MAX_DESIGN_FACTORS} factors, got ${k}`);
   }
   const basic = basicFactors(k, generators);
   const perHalf = 2 ** basic.length;

@@ -19,6 +19,7 @@
  */
 import { InputError } from '../errors.ts';
 import { factorLetters } from '../factor/letters.ts';
+import { MAX_DESIGN_FACTORS } from './max-design-factors.ts';
 
 export interface CatalogueEntry {
   readonly runs: number;
@@ -93,9 +94,6 @@ const PRODUCTS: Readonly<Record<number, Readonly<Record<number, readonly string[
 /** Run sizes the catalogue covers. */
 export const CATALOGUE_RUN_SIZES = [8, 16, 32, 64, 128] as const;
 
-/** Most factors a catalogue fraction has. */
-export const CATALOGUE_MAX_FACTORS = 15;
-
 function entryFor(runs: number, k: number): CatalogueEntry | undefined {
   const products = PRODUCTS[runs]?.[k];
   if (!products) return undefined;
@@ -113,7 +111,7 @@ function entryFor(runs: number, k: number): CatalogueEntry | undefined {
 export function catalogueEntries(): CatalogueEntry[] {
   const out: CatalogueEntry[] = [];
   for (const runs of CATALOGUE_RUN_SIZES) {
-    for (let k = 2; k <= CATALOGUE_MAX_FACTORS; k++) {
+    for (let k = 2; k <= MAX_DESIGN_FACTORS; k++) {
       const e = entryFor(runs, k);
       if (e) out.push(e);
     }
@@ -133,8 +131,8 @@ export function catalogueFraction(k: number, p: number): CatalogueEntry {
   }
   const runs = 2 ** (k - p);
   const frac = `1/${2 ** p}`;
-  if (k > CATALOGUE_MAX_FACTORS) {
-    throw new InputError(`The built-in catalogue covers fractions of up to ${CATALOGUE_MAX_FACTORS} factors, got ${k}; type generators instead`);
+  if (k > MAX_DESIGN_FACTORS) {
+    throw new InputError(`The built-in catalogue covers fractions of up to ${MAX_DESIGN_FACTORS} factors, got ${k}; type generators instead`);
   }
   if (k - p < 3 || runs < 8) {
     throw new InputError(`A ${frac} fraction of ${k} factors has ${k - p < 0 ? 'no' : runs} runs; the built-in catalogue covers 8 to 128 runs (type generators for a smaller fraction)`);

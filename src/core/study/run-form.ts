@@ -7,6 +7,8 @@
  */
 import { InputError } from '../errors.ts';
 import { parseNumber } from '../factor/coding.ts';
+import { readSetting } from '../factor/read-setting.ts';
+import { splitReadings } from './reading-text.ts';
 import { checkRunValues, plannedSettings, type RunValues, type StudyPlan } from './study.ts';
 
 export interface RunForm {
@@ -50,7 +52,7 @@ export function formFromValues(values: RunValues): RunForm {
 
 /** Readings typed for one response; throws naming the response and the reading. */
 export function parseReadings(textIn: string, responseName: string): number[] {
-  const parts = textIn.split(/[\s;]+/).filter((p) => p !== '');
+  const parts = splitReadings(textIn).filter((p) => p !== '');
   return parts.map((p, i) => {
     const x = parseNumber(p);
     if (!Number.isFinite(x)) {
@@ -65,13 +67,7 @@ export function parseReadings(textIn: string, responseName: string): number[] {
 export function parseRunForm(study: StudyPlan, form: RunForm): RunValues {
   if (form.actual.length !== study.factors.length) throw new InputError(`Actual settings: needs one per factor (${study.factors.length}), got ${form.actual.length}`);
   if (form.readings.length !== study.responses.length) throw new InputError(`Readings: needs one per response (${study.responses.length}), got ${form.readings.length}`);
-  const actual = study.factors.map((f, i) => {
-    const t = form.actual[i].trim();
-    if (f.kind === 'categorical') return t;
-    const x = parseNumber(t);
-    if (!Number.isFinite(x)) throw new InputError(`${f.name}: the actual setting needs a number, got "${form.actual[i]}"`);
-    return x;
-  });
+  const actual = study.factors.map((f, i) => readSetting(f, form.actual[i], `${f.name}: the actual setting`));
   const readings = study.responses.map((r, i) => parseReadings(form.readings[i], r.name));
   const loggedAt = form.loggedAt.trim() === '' ? null : form.loggedAt.trim();
   return checkRunValues(study, {

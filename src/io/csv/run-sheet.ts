@@ -12,6 +12,7 @@ import type { Design, DesignRun } from '../../core/design/design.ts';
 import { plannedSetting } from '../../core/design/planned-settings.ts';
 import { InputError } from '../../core/errors.ts';
 import type { Factor } from '../../core/factor/factor.ts';
+import { factorLabel } from '../../core/study/name-with-unit.ts';
 
 export type Cell = string | number;
 
@@ -28,8 +29,7 @@ export const RUN_COLUMNS = ['Run', 'Std order', 'Replicate', 'Block', 'Kind'] as
  * without a unit. Example: plannedColumn(Temperature in degC) -> "Temperature (degC) planned".
  */
 export function plannedColumn(f: Factor): string {
-  const unit = f.kind === 'numeric' && f.unit && f.unit.trim() !== '' ? ` (${f.unit.trim()})` : '';
-  return `${f.name}${unit} planned`;
+  return `${factorLabel(f)} planned`;
 }
 
 /**

@@ -13,6 +13,7 @@
  */
 import { toCoded } from '../../core/factor/coding.ts';
 import type { Factor } from '../../core/factor/factor.ts';
+import { factorLabel, nameWithUnit } from '../../core/study/name-with-unit.ts';
 import type { Response } from '../../core/study/response.ts';
 import { meanReading, type LoggedRun, type StudyRecord } from '../../core/study/study.ts';
 import { runSheetTable, toCsv, type Cell, type Table } from './run-sheet.ts';
@@ -22,13 +23,9 @@ export interface StudyCsvOptions {
   readonly bom?: boolean;
 }
 
-function unitPart(unit: string | undefined): string {
-  return unit && unit.trim() !== '' ? ` (${unit.trim()})` : '';
-}
-
 /** Header of a factor's actual-settings column: "<name> (<unit>) actual". */
 export function actualColumn(f: Factor): string {
-  return `${f.name}${f.kind === 'numeric' ? unitPart(f.unit) : ''} actual`;
+  return `${factorLabel(f)} actual`;
 }
 
 /** Header of a factor's coded actual setting: "<name> coded". */
@@ -38,12 +35,12 @@ export function codedColumn(f: Factor): string {
 
 /** Header of a response's value (the mean of its readings): "<name> (<unit>)". */
 export function responseColumn(r: Response): string {
-  return `${r.name}${unitPart(r.unit)}`;
+  return nameWithUnit(r.name, r.unit);
 }
 
 /** Header of a response's readings: "<name> (<unit>) readings". */
 export function readingsColumn(r: Response): string {
-  return `${r.name}${unitPart(r.unit)} readings`;
+  return `${nameWithUnit(r.name, r.unit)} readings`;
 }
 
 export const TRAILING_COLUMNS = ['Logged at', 'Operator', 'Notes', 'Excluded', 'Reason'] as const;

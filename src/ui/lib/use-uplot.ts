@@ -7,6 +7,7 @@ import { useSignal, type ReadonlySignal } from '@preact/signals';
 import { useEffect, useRef } from 'preact/hooks';
 import type { RefObject } from 'preact';
 import type UPlotType from 'uplot';
+import './chart.css';
 
 export type ChartState = 'loading' | 'ready' | 'failed';
 

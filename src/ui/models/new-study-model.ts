@@ -6,13 +6,15 @@
  */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { buildDesign, type DesignSpec } from '../../core/design/build-design.ts';
-import { catalogueFraction } from '../../core/design/catalogue.ts';
+import { catalogueChoices } from '../../core/design/catalogue-choices.ts';
 import { romanResolution } from '../../core/design/defining-relation.ts';
+import { MAX_DESIGN_FACTORS } from '../../core/design/max-design-factors.ts';
 import type { Design } from '../../core/design/design.ts';
 import { drawSeed } from '../../core/design/random.ts';
 import { InputError } from '../../core/errors.ts';
-import { parseNumber } from '../../core/factor/coding.ts';
+import { readNumber } from '../../core/factor/read-setting.ts';
 import { defineFactors, type FactorSpec } from '../../core/factor/factor.ts';
+import { defineResponses } from '../../core/study/define-responses.ts';
 import type { Response } from '../../core/study/response.ts';
 import { studyPlan, type StudyRecord } from '../../core/study/study.ts';
 import type { Store } from '../../store/store.ts';
@@ -52,9 +54,6 @@ export interface FractionOption {
 
 export const BLOCK_CHOICES = [1, 2, 4, 8] as const;
 
-/** The most factors the form offers (the catalogue's range). */
-export const MAX_FORM_FACTORS = 15;
-
 let nextKey = 1;
 
 function blankFactor(): FactorDraft {
@@ -65,11 +64,11 @@ function blankResponse(): ResponseDraft {
   return { key: nextKey++, name: '', unit: '', goal: 'maximize', target: '' };
 }
 
-/** A factor row as the core's factor declaration (numbers read with a point for decimals). */
-export function factorSpecOf(f: FactorDraft): FactorSpec {
+/** A factor row as the core's factor declaration; throws InputError for a low or high that is not a number. */
+export function factorSpecOf(f: FactorDraft, label = f.name.trim()): FactorSpec {
   if (f.kind === 'categorical') return { kind: 'categorical', name: f.name, levels: [f.levelA, f.levelB] };
   const unit = f.unit.trim();
-  return { kind: 'numeric', name: f.name, low: parseNumber(f.low), high: parseNumber(f.high), ...(unit ? { unit } : {}) };
+  return { kind: 'numeric', name: f.name, low: readNumber(f.low, `${label}: the low setting`), high: readNumber(f.high, `${label}: the high setting`), ...(unit ? { unit } : {}) };
 }
 
 /** The message for one factor row on its own, or null when it is complete and valid. */
@@ -78,11 +77,10 @@ export function factorMessage(f: FactorDraft, i: number): string | null {
   if (f.kind === 'numeric') {
     for (const [text, which] of [[f.low, 'low'], [f.high, 'high']] as const) {
       if (text.trim() === '') return `${label} needs a ${which} setting`;
-      if (!Number.isFinite(parseNumber(text))) return `${label}: the ${which} setting must be a number (use a point for decimals), got "${text.trim()}"`;
     }
   }
   try {
-    defineFactors([factorSpecOf(f)]);
+    defineFactors([factorSpecOf(f, label)]);
     return null;
   } catch (err) {
     if (err instanceof InputError) return err.message.replace(/^Factor 1 /, `Factor ${i + 1} `);
@@ -90,24 +88,9 @@ export function factorMessage(f: FactorDraft, i: number): string | null {
   }
 }
 
-/** The responses as the study keeps them; throws InputError with a clear message. */
+/** The responses as the study keeps them (the core's rules, defineResponses); throws InputError with a clear message. */
 export function responsesOf(drafts: readonly ResponseDraft[]): Response[] {
-  if (drafts.length === 0) throw new InputError('A study needs at least one response (what you will measure), got none');
-  const seen = new Map<string, number>();
-  return drafts.map((r, i) => {
-    const name = r.name.trim();
-    if (name === '') throw new InputError(`Response ${i + 1} needs a name (what you will measure)`);
-    const k = name.toLowerCase();
-    if (seen.has(k)) throw new InputError(`Response names must differ, got "${name}" twice (responses ${seen.get(k)! + 1} and ${i + 1})`);
-    seen.set(k, i);
-    const unit = r.unit.trim();
-    const out: Response = { name, goal: r.goal, ...(unit ? { unit } : {}) };
-    if (r.goal !== 'target') return out;
-    const t = parseNumber(r.target);
-    if (r.target.trim() === '') throw new InputError(`${name}: the goal is a target, so it needs a target value`);
-    if (!Number.isFinite(t)) throw new InputError(`${name}: the target must be a number (use a point for decimals), got "${r.target.trim()}"`);
-    return { ...out, target: t };
-  });
+  return defineResponses(drafts.map((r) => ({ name: r.name, unit: r.unit, goal: r.goal, target: r.target })));
 }
 
 /** A count typed in a box: a whole number, or InputError saying what is needed. */
@@ -117,22 +100,14 @@ function wholeCount(text: string, what: string, min: number): number {
   return Number(s);
 }
 
-/** What the form offers for k factors: the full factorial and each catalogue fraction, with runs and resolution. */
+/** What the form offers for k factors: the full factorial and each catalogue fraction, with runs and resolution (from the core's catalogueChoices). */
 export function fractionOptions(k: number): FractionOption[] {
-  const options: FractionOption[] = [{ value: 'full', runs: 2 ** k, resolution: null, label: `Full factorial · ${2 ** k} runs` }];
-  if (k < 2) return options;
-  const stand = Array.from({ length: k }, (_, i): FactorSpec => ({ kind: 'numeric', name: `x${i + 1}`, low: 0, high: 1 }));
-  for (let p = 1; p < k; p++) {
-    try {
-      const entry = catalogueFraction(k, p);
-      const d = buildDesign({ factors: stand, fraction: `1/${2 ** p}`, randomise: false });
-      const res = d.resolution === null ? null : romanResolution(d.resolution);
-      options.push({ value: `1/${2 ** p}`, runs: entry.runs, resolution: res, label: `1/${2 ** p} · ${entry.runs} runs${res ? ` · resolution ${res}` : ''}` });
-    } catch (err) {
-      if (!(err instanceof InputError)) throw err;
-    }
-  }
-  return options;
+  if (k < 1) return [{ value: 'full', runs: 1, resolution: null, label: 'Full factorial · 1 runs' }];
+  return catalogueChoices(Math.min(k, MAX_DESIGN_FACTORS)).map((c) => {
+    const res = c.resolution === null ? null : romanResolution(c.resolution);
+    const label = c.fraction === 'full' ? `Full factorial · ${c.runs} runs` : `${c.fraction} · ${c.runs} runs${res ? ` · resolution ${res}` : ''}`;
+    return { value: c.fraction, runs: c.runs, resolution: res, label };
+  });
 }
 
 export type Preview = { readonly design: Design; readonly error: null } | { readonly design: null; readonly error: string };
@@ -177,7 +152,7 @@ export const NewStudyModel = createModel((store: Store) => {
     const s = seed.value;
     if (s !== null && !Number.isFinite(s)) throw new InputError(`The seed must be a whole number, or left blank to draw one; got "${seedText.value.trim()}"`);
     return {
-      factors: rows.map(factorSpecOf),
+      factors: rows.map((f) => factorSpecOf(f)),
       ...(fraction.value === 'full' ? {} : { fraction: fraction.value }),
       centerRuns: wholeCount(centerRuns.value, 'Center runs', 0),
       replicates: wholeCount(replicates.value, 'Replicates', 1),
@@ -256,7 +231,7 @@ export const NewStudyModel = createModel((store: Store) => {
     },
     setFactor,
     addFactor() {
-      if (factors.peek().length >= MAX_FORM_FACTORS) return;
+      if (factors.peek().length >= MAX_DESIGN_FACTORS) return;
       factors.value = [...factors.peek(), blankFactor()];
       edit();
     },

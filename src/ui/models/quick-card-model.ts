@@ -1,20 +1,21 @@
 /**
  * The quick card: settings in real units for every factor (numeric ones by slider or typed
- * number, categorical ones by their two levels), and the prediction of the chosen response
- * there from the fitted model, with its intervals, the baseline and each term's contribution,
- * the tested-range check and the standing caution. A number that cannot be read gets a message
- * and leaves the prediction as it was.
+ * number, categorical ones by their two levels), and the prediction of the shown response there
+ * from the model fitted in the study's shared analysis (study-analysis-model.ts, so the model
+ * chosen on the Effects screen is the one used here), with its intervals, the baseline and each
+ * term's contribution, the tested-range check and the standing caution. A number that cannot be
+ * read gets a message and leaves the prediction as it was.
  */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
-import { parseNumber, toCoded, toReal } from '../../core/factor/coding.ts';
+import { toCoded, toReal } from '../../core/factor/coding.ts';
 import type { Factor } from '../../core/factor/factor.ts';
+import { readSetting } from '../../core/factor/read-setting.ts';
 import { CAUTION } from '../../core/predict/caution.ts';
 import { predict, type Prediction } from '../../core/predict/predict.ts';
 import type { Setting } from '../../core/study/study.ts';
-import type { Store } from '../../store/store.ts';
-import { problemOf, type Problem } from '../lib/problem.ts';
-import { analyseResponse, type AnalysisResult, type ModelChoice } from './analysis-model.ts';
-import { loadStudyData, type StudyData } from './study-data.ts';
+import { setting } from '../lib/format.ts';
+import { problemOf } from '../lib/problem.ts';
+import type { AnalysisResult, StudyAnalysis } from './study-analysis-model.ts';
 
 /** How far the sliders reach, in coded units: half a range beyond each tested end. */
 export const SLIDER_REACH = 1.5;
@@ -30,122 +31,95 @@ function centerOf(f: Factor): Setting {
 
 export type PredictionResult = { readonly ok: true; readonly prediction: Prediction } | { readonly ok: false; readonly message: string };
 
-export const QuickCardModel = createModel((store: Store, studyId: string) => {
-  const data = signal<StudyData | null>(null);
-  const problem = signal<Problem | null>(null);
-  const responseIndex = signal(0);
-  const choice = signal<ModelChoice>('two-way');
-  const settings = signal<Setting[]>([]);
+interface Entry {
+  readonly settings: readonly Setting[];
   /** What is in each number field (may be a half-typed number). */
-  const texts = signal<string[]>([]);
-  const fieldErrors = signal<(string | null)[]>([]);
+  readonly texts: readonly string[];
+  readonly errors: readonly (string | null)[];
+}
 
-  const analysis = computed<AnalysisResult | null>(() => (data.value ? analyseResponse(data.value, responseIndex.value, choice.value) : null));
+export const QuickCardModel = createModel((shared: StudyAnalysis) => {
+  /** What the person has set; null until they set something (then the centers are shown). */
+  const typed = signal<Entry | null>(null);
+  const factors = computed<readonly Factor[]>(() => shared.data.value?.study.factors ?? []);
+  const entry = computed<Entry>(() => {
+    const t = typed.value;
+    if (t && t.settings.length === factors.value.length) return t;
+    const start = factors.value.map(centerOf);
+    return { settings: start, texts: start.map(String), errors: start.map(() => null) };
+  });
+
+  const analysis = computed<AnalysisResult | null>(() => shared.shown.value?.result.value ?? null);
 
   const prediction = computed<PredictionResult | null>(() => {
     const a = analysis.value;
-    const d = data.value;
-    if (!a || !d) return null;
+    if (!a) return null;
     if (!a.ok) return { ok: false, message: a.message };
     try {
-      const input: [string, Setting][] = d.study.factors.map((f, i) => [f.name, settings.value[i]]);
+      const input: [string, Setting][] = factors.value.map((f, i) => [f.name, entry.value.settings[i]]);
       return { ok: true, prediction: predict(a.analysis.model, input) };
     } catch (err) {
       return { ok: false, message: problemOf(err).message };
     }
   });
 
-  function put(i: number, value: Setting, text: string) {
-    const s = [...settings.peek()];
-    s[i] = value;
-    settings.value = s;
-    const t = [...texts.peek()];
-    t[i] = text;
-    texts.value = t;
-    const e = [...fieldErrors.peek()];
-    e[i] = null;
-    fieldErrors.value = e;
+  function update(i: number, patch: { setting?: Setting; text: string; error: string | null }) {
+    const e = entry.peek();
+    const settings = [...e.settings];
+    if (patch.setting !== undefined) settings[i] = patch.setting;
+    const texts = [...e.texts];
+    texts[i] = patch.text;
+    const errors = [...e.errors];
+    errors[i] = patch.error;
+    typed.value = { settings, texts, errors };
   }
 
   return {
-    data: data as ReadonlySignal<StudyData | null>,
-    problem: problem as ReadonlySignal<Problem | null>,
-    responseIndex: responseIndex as ReadonlySignal<number>,
-    settings: settings as ReadonlySignal<Setting[]>,
-    texts: texts as ReadonlySignal<string[]>,
-    fieldErrors: fieldErrors as ReadonlySignal<(string | null)[]>,
+    settings: computed(() => entry.value.settings),
+    texts: computed(() => entry.value.texts),
+    fieldErrors: computed(() => entry.value.errors),
     analysis,
     prediction,
     /** Coded value of each factor at the current settings. */
-    coded: computed<number[]>(() => {
-      const d = data.value;
-      if (!d) return [];
-      return d.study.factors.map((f, i) => {
+    coded: computed<number[]>(() =>
+      factors.value.map((f, i) => {
         try {
-          return toCoded(f, settings.value[i]);
+          return toCoded(f, entry.value.settings[i]);
         } catch {
           return 0;
         }
-      });
-    }),
+      }),
+    ),
     /** The caution lines: the prediction's own, or the standing ones before there is a prediction. */
     caution: computed<readonly string[]>(() => {
       const p = prediction.value;
       return p && p.ok ? p.prediction.caution : CAUTION;
-    }),
+    }) as ReadonlySignal<readonly string[]>,
 
-    async load() {
-      try {
-        const d = await loadStudyData(store, studyId);
-        const start = d.study.factors.map(centerOf);
-        settings.value = start;
-        texts.value = start.map(String);
-        fieldErrors.value = start.map(() => null);
-        data.value = d;
-      } catch (err) {
-        problem.value = problemOf(err);
-      }
-    },
-    chooseResponse(i: number) {
-      responseIndex.value = i;
-    },
     /** From a slider, in coded units. */
     setCoded(i: number, x: number) {
-      const f = data.peek()?.study.factors[i];
+      const f = factors.peek()[i];
       if (!f || f.kind !== 'numeric' || !Number.isFinite(x)) return;
       const real = roundReal(toReal(f, x) as number);
-      put(i, real, String(real));
+      update(i, { setting: real, text: String(real), error: null });
     },
-    /** From a number field, in real units: a number that cannot be used changes nothing. */
+    /** From a number field, in real units: a number that cannot be used changes nothing but the message. */
     setText(i: number, text: string) {
-      const f = data.peek()?.study.factors[i];
+      const f = factors.peek()[i];
       if (!f || f.kind !== 'numeric') return;
-      const t = [...texts.peek()];
-      t[i] = text;
-      texts.value = t;
-      const x = parseNumber(text.trim());
-      let message: string | null = null;
-      if (!Number.isFinite(x)) message = `${f.name}: type a number (use a point for decimals). The prediction still uses ${settings.peek()[i]}${f.unit ? ' ' + f.unit : ''}.`;
-      else if (f.scale === 'log' && x <= 0) message = `${f.name} is on a log scale and needs a positive number. The prediction still uses ${settings.peek()[i]}.`;
-      if (message) {
-        const e = [...fieldErrors.peek()];
-        e[i] = message;
-        fieldErrors.value = e;
-        return;
+      try {
+        update(i, { setting: readSetting(f, text), text, error: null });
+      } catch (err) {
+        const still = setting(entry.peek().settings[i], f.unit);
+        update(i, { text, error: `${problemOf(err).message}. The prediction still uses ${still}.` });
       }
-      put(i, x, text);
     },
     setLevel(i: number, label: string) {
-      put(i, label, label);
+      update(i, { setting: label, text: label, error: null });
     },
     /** Back to the center of every numeric factor. */
     reset() {
-      const d = data.peek();
-      if (!d) return;
-      const start = d.study.factors.map(centerOf);
-      settings.value = start;
-      texts.value = start.map(String);
-      fieldErrors.value = start.map(() => null);
+      typed.value = null;
     },
   };
 });

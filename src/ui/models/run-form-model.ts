@@ -6,7 +6,8 @@
  * failure shows the store's message and offers an export.
  */
 import { computed, createModel, effect, signal, type ReadonlySignal } from '@preact/signals';
-import { parseNumber } from '../../core/factor/coding.ts';
+import { readSetting } from '../../core/factor/read-setting.ts';
+import { joinReadings, splitReadings } from '../../core/study/reading-text.ts';
 import { parseReadings, parseRunForm, type RunForm } from '../../core/study/run-form.ts';
 import { meanReading, plannedSettings, type Setting } from '../../core/study/study.ts';
 import { discardDraft, saveDraft } from '../../store/drafts.ts';
@@ -20,12 +21,17 @@ export type DraftState = 'none' | 'restored' | 'keeping' | 'kept' | 'failed';
 
 /** The boxes of one response's readings, as the form text holds them ("70.2;70.4" or "70.2 70.4"). */
 export function readingBoxes(text: string): string[] {
-  return text === '' ? [''] : text.split(/;|\s+/);
+  return splitReadings(text);
 }
 
 /** The form text of a response's reading boxes. */
 export function joinBoxes(boxes: readonly string[]): string {
-  return boxes.length === 1 && boxes[0] === '' ? '' : boxes.join(';');
+  return joinReadings(boxes);
+}
+
+/** What the actual-setting fields are called in messages, the same words as at saving (parseRunForm). */
+function actualField(name: string): string {
+  return `${name}: the actual setting`;
 }
 
 export const RunFormModel = createModel((store: Store, studyId: string, plannedRun: number) => {
@@ -45,11 +51,26 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     const f = form.value;
     if (!s || !f) return [];
     return s.study.factors.map((factor, i) => {
-      if (factor.kind === 'categorical') return null;
-      const x = parseNumber(f.actual[i].trim());
-      if (!Number.isFinite(x)) return `${factor.name}: needs a number (use a point for decimals), got "${f.actual[i]}"`;
-      if (factor.scale === 'log' && x <= 0) return `${factor.name}: needs a positive number`;
-      return null;
+      try {
+        readSetting(factor, f.actual[i], actualField(factor.name));
+        return null;
+      } catch (err) {
+        return problemOf(err).message;
+      }
+    });
+  });
+
+  /** Per factor: true when the actual setting as typed can be read and differs from the plan. */
+  const differs = computed<boolean[]>(() => {
+    const s = state.value;
+    const f = form.value;
+    if (!s || !f) return [];
+    return s.study.factors.map((factor, i) => {
+      try {
+        return readSetting(factor, f.actual[i]) !== planned.value[i];
+      } catch {
+        return false;
+      }
     });
   });
 
@@ -158,6 +179,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     lastSave: lastSave as ReadonlySignal<SaveResult | null>,
     planned,
     actualErrors,
+    differs,
     readingErrors,
     means,
     dirty,

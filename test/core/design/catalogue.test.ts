@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import {
-  CATALOGUE_MAX_FACTORS,
   CATALOGUE_RUN_SIZES,
   CHEN_SUN_WU_1993,
   XU_2009,
   catalogueEntries,
   catalogueFraction,
 } from '../../../src/core/design/catalogue.ts';
+import { MAX_DESIGN_FACTORS } from '../../../src/core/design/max-design-factors.ts';
 import { definingRelation, resolution, wordLengthPattern } from '../../../src/core/design/defining-relation.ts';
 import { generatorWord, parseGenerators } from '../../../src/core/design/generators.ts';
 import { minimumAberration, patternOf } from '../../../src/core/design/minimum-aberration.ts';
@@ -91,7 +91,7 @@ describe('catalogue', () => {
     for (const runs of CATALOGUE_RUN_SIZES) {
       const ks = entries.filter((e) => e.runs === runs).map((e) => e.factors);
       const m = Math.log2(runs);
-      expect(ks).toEqual(Array.from({ length: Math.min(runs - 1, CATALOGUE_MAX_FACTORS) - m }, (_, i) => m + 1 + i));
+      expect(ks).toEqual(Array.from({ length: Math.min(runs - 1, MAX_DESIGN_FACTORS) - m }, (_, i) => m + 1 + i));
       expect(new Set(entries.filter((e) => e.runs === runs).map((e) => e.source))).toEqual(new Set([runs === 128 ? XU_2009 : CHEN_SUN_WU_1993]));
     }
   });

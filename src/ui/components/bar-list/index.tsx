@@ -3,6 +3,7 @@
  * the left, the length proportional to the size. The sign is also written, so the colour is
  * never the only cue.
  */
+import './style.css';
 export type BarRow = {
   readonly key: string;
   readonly label: string;

@@ -2,6 +2,7 @@
  * The standing caution shown with every prediction, always visible (never folded away). The
  * lines are the core's own words (CAUTION, or a result's `caution`), shown as they come.
  */
+import './style.css';
 export type CautionBoxProps = {
   readonly lines: readonly string[];
   /** One paragraph instead of a list, to take less height where it stays on screen. */

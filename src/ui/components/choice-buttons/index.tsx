@@ -1,4 +1,5 @@
 /** A row of large buttons of which one is chosen (a categorical level, a response, a model). */
+import './style.css';
 export type ChoiceButtonsProps<T extends string | number> = {
   /** Read out before the buttons, and shown unless hidden. */
   readonly label: string;

@@ -1,4 +1,5 @@
 /** A whole-number box with large − and + buttons beside it (center runs, replicates). */
+import './style.css';
 export type CountStepperProps = {
   readonly id: string;
   readonly label: string;

@@ -1,4 +1,5 @@
 /** The mark on every screen that shows the invented demo study. */
+import './style.css';
 export type DemoBadgeProps = { readonly compact?: boolean };
 
 export function DemoBadge({ compact }: DemoBadgeProps) {

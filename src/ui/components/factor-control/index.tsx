@@ -9,6 +9,7 @@ import { isOutside } from '../../../core/predict/outside-range.ts';
 import type { Setting } from '../../../core/study/study.ts';
 import { coded as codedText, setting as settingText } from '../../lib/format.ts';
 import { ChoiceButtons } from '../choice-buttons/index.tsx';
+import './style.css';
 
 export type FactorControlProps = {
   readonly factor: Factor;

@@ -3,8 +3,10 @@
  * no space key, so each repeat reading gets its own box), a button to add another, and their
  * mean when there are several.
  */
+import { nameWithUnit } from '../../../core/study/name-with-unit.ts';
 import type { Response } from '../../../core/study/response.ts';
 import { withUnit } from '../../lib/format.ts';
+import './style.css';
 
 export type ReadingsFieldProps = {
   readonly response: Response;
@@ -19,7 +21,7 @@ export type ReadingsFieldProps = {
 };
 
 export function ReadingsField({ response, index, boxes, mean, error, disabled, onReading, onAdd, onRemove }: ReadingsFieldProps) {
-  const name = response.unit ? `${response.name} (${response.unit})` : response.name;
+  const name = nameWithUnit(response.name, response.unit);
   return (
     <fieldset class="readings" disabled={disabled}>
       <legend>{name}</legend>

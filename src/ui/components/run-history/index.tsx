@@ -10,6 +10,7 @@ import type { Store } from '../../../store/store.ts';
 import { num, setting, when } from '../../lib/format.ts';
 import { RunHistoryModel } from '../../models/run-history-model.ts';
 import { ProblemBox } from '../problem-box/index.tsx';
+import './style.css';
 
 export type RunHistoryProps = {
   readonly store: Store;

@@ -1,6 +1,7 @@
 /** Offers a waiting new version of the app, but only when no form holds unsaved input. */
 import { anyUnsaved } from '../../lib/unsaved-forms.ts';
 import { applyUpdate, updateWaiting } from '../../sw-bridge.ts';
+import './style.css';
 
 export type UpdateBannerProps = Record<string, never>;
 

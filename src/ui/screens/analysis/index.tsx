@@ -9,6 +9,7 @@ import { useEffect } from 'preact/hooks';
 import type { Analysis, RunDiagnostics, TermEstimate } from '../../../core/fit/analysis.ts';
 import type { Factor } from '../../../core/factor/factor.ts';
 import { termFactors, type Term } from '../../../core/model/term.ts';
+import { nameWithUnit } from '../../../core/study/name-with-unit.ts';
 import type { Response } from '../../../core/study/response.ts';
 import type { Store } from '../../../store/store.ts';
 import { BarList, type BarRow } from '../../components/bar-list/index.tsx';
@@ -21,9 +22,11 @@ import { StudyHeader } from '../../components/study-header/index.tsx';
 import { pPhrase } from '../../../core/text/p-value.ts';
 import { curvatureStatement } from '../../../core/text/verdict-text.ts';
 import { num, percent, setting, signed, termLabel, withUnit } from '../../lib/format.ts';
-import { AnalysisModel, MODEL_CHOICES, twoFactorTerms } from '../../models/analysis-model.ts';
+import { AnalysisModel, twoFactorTerms } from '../../models/analysis-model.ts';
+import { MODEL_CHOICES, openStudyAnalysis } from '../../models/study-analysis-model.ts';
 import { interactionLines } from './interaction-lines.ts';
-import { href } from '../../models/router-model.ts';
+import { hrefTo } from '../../app/routes.ts';
+import './style.css';
 
 export type AnalysisScreenProps = { readonly store: Store; readonly studyId: string };
 
@@ -84,7 +87,6 @@ function InteractionSection({ a, term, response, onChoose }: { a: Analysis; term
     return <p class="quiet">This model has no two-factor interactions; choose “With interactions” above to see how one factor's effect depends on another.</p>;
   }
   const view = interactionLines(a, term);
-  const unit = response.unit ? ` (${response.unit})` : '';
   return (
     <>
       {two.length > 1 && (
@@ -98,7 +100,7 @@ function InteractionSection({ a, term, response, onChoose }: { a: Analysis; term
         acrossLabels={view.acrossLabels}
         heldName={view.held.name}
         lines={view.lines}
-        responseLabel={`${response.name}${unit}`}
+        responseLabel={nameWithUnit(response.name, response.unit)}
         othersNote={view.others.length > 0 ? `Held: ${view.others.join('; ')}.` : ''}
       />
     </>
@@ -106,7 +108,6 @@ function InteractionSection({ a, term, response, onChoose }: { a: Analysis; term
 }
 
 function ResidualSection({ a, response }: { a: Analysis; response: Response }) {
-  const unit = response.unit ? ` (${response.unit})` : '';
   if (a.df.residual === 0) {
     return <p class="quiet">No runs are left over after fitting this model, so every residual is zero and there is nothing to plot; fit fewer terms to see them.</p>;
   }
@@ -118,8 +119,8 @@ function ResidualSection({ a, response }: { a: Analysis; response: Response }) {
       <ResidualChart
         title="Residual against fitted value"
         points={a.runs.map((r) => ({ ...common(r), x: r.fitted, xShown: num(r.fitted) }))}
-        xLabel={`Fitted value${unit}`}
-        yLabel={`Residual${unit}`}
+        xLabel={nameWithUnit('Fitted value', response.unit)}
+        yLabel={nameWithUnit('Residual', response.unit)}
         xColumn="Fitted value"
         caption="Look for a funnel or a curve; points scattered evenly about zero are what you want."
       />
@@ -127,7 +128,7 @@ function ResidualSection({ a, response }: { a: Analysis; response: Response }) {
         title="Residual against run order"
         points={a.runs.map((r, i) => ({ ...common(r), x: i + 1, xShown: String(i + 1) }))}
         xLabel="Run (run-sheet order)"
-        yLabel={`Residual${unit}`}
+        yLabel={nameWithUnit('Residual', response.unit)}
         xColumn="Place"
         caption="Runs in run-sheet order (by planned run number, not the time logged); look for a drift or a step."
         order
@@ -150,14 +151,16 @@ function ResidualSection({ a, response }: { a: Analysis; response: Response }) {
 }
 
 export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
-  const model = useModel(() => new AnalysisModel(store, studyId));
-  useEffect(() => void model.load(), []);
-  const d = model.data.value;
-  const problem = model.problem.value;
+  const shared = openStudyAnalysis(store, studyId);
+  const model = useModel(() => new AnalysisModel(shared));
+  useEffect(() => void shared.load(), []);
+  const d = shared.data.value;
+  const problem = shared.problem.value;
+  const shown = shared.shown.value;
   if (problem) return <ProblemBox problem={problem} />;
-  if (!d) return <p class="quiet">Reading the runs…</p>;
+  if (!d || !shown) return <p class="quiet">Reading the runs…</p>;
   const { study } = d;
-  const response = study.responses[model.responseIndex.value];
+  const { response } = shown;
   const result = model.result.value;
   return (
     <section>
@@ -166,14 +169,14 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
       <ChoiceButtons
         label="Response"
         options={study.responses.map((r, i) => ({ value: i, label: r.name }))}
-        value={model.responseIndex.value}
-        onChoose={(i) => model.chooseResponse(i)}
+        value={shown.index}
+        onChoose={(i) => shared.show(i)}
       />
-      <ChoiceButtons label="Model" options={MODEL_CHOICES} value={model.choice.value} onChoose={(c) => model.chooseModel(c)} />
+      <ChoiceButtons label="Model" options={MODEL_CHOICES} value={shown.settings.value.model} onChoose={(c) => shared.chooseModel(shown.index, c)} />
       {result && !result.ok && (
         <div class="problem input" role="alert">
           <p>{result.message}</p>
-          <a class="btn" href={href.sheet(study.id)}>
+          <a class="btn" href={hrefTo('runSheet', { studyId: study.id })}>
             Go to the run sheet
           </a>
         </div>
@@ -189,7 +192,7 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
           {result.analysis.halfNormal.length >= 3 && (
             <>
               <h3>Half-normal plot</h3>
-              <HalfNormalChart points={result.analysis.halfNormal} axisLabel={`Size of effect${response.unit ? ` (${response.unit})` : ''}`} />
+              <HalfNormalChart points={result.analysis.halfNormal} axisLabel={nameWithUnit('Size of effect', response.unit)} />
             </>
           )}
           <h3>Interaction chart</h3>
@@ -226,7 +229,7 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
               </ul>
             </>
           )}
-          <a class="btn primary block" href={href.predict(study.id)}>
+          <a class="btn primary block" href={hrefTo('quickCard', { studyId: study.id })}>
             Check a prediction
           </a>
         </>

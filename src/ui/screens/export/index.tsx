@@ -11,13 +11,15 @@ import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { when } from '../../lib/format.ts';
 import { ExportModel } from '../../models/export-model.ts';
-import { href } from '../../models/router-model.ts';
+import { hrefTo } from '../../app/routes.ts';
 import { isDemo } from '../../seed/demo-seed.ts';
+import './style.css';
 
-export type ExportScreenProps = { readonly store: Store; readonly studyId: string | null };
+/** Without a study id: every study on this device. */
+export type ExportScreenProps = { readonly store: Store; readonly studyId?: string | null };
 
 export function ExportScreen({ store, studyId }: ExportScreenProps) {
-  const model = useModel(() => new ExportModel(store, studyId));
+  const model = useModel(() => new ExportModel(store, studyId ?? null));
   useEffect(() => void model.load(), []);
   const focus = model.focus.value;
   const studies: readonly StudyRecord[] = focus ? [focus] : model.studies.value;
@@ -27,7 +29,7 @@ export function ExportScreen({ store, studyId }: ExportScreenProps) {
   const share = model.canShare.value;
   return (
     <section>
-      {focus ? <StudyHeader study={focus} current="export" /> : <a class="back" href={href.studies()}>‹ All studies</a>}
+      {focus ? <StudyHeader study={focus} current="export" /> : <a class="back" href={hrefTo('studies', {})}>‹ All studies</a>}
       <h2>Export</h2>
       <p>The backup (JSON) keeps everything, history included, and can be imported on another device. The CSV is for a spreadsheet or the desktop analysis.</p>
       {problem && <ProblemBox problem={problem} />}

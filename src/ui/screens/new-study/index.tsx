@@ -11,8 +11,10 @@ import type { Store } from '../../../store/store.ts';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { CountStepper } from '../../components/count-stepper/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
-import { href } from '../../models/router-model.ts';
-import { BLOCK_CHOICES, MAX_FORM_FACTORS, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
+import { hrefTo } from '../../app/routes.ts';
+import { MAX_DESIGN_FACTORS } from '../../../core/design/max-design-factors.ts';
+import { BLOCK_CHOICES, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
+import './style.css';
 
 export type NewStudyScreenProps = { readonly store: Store };
 
@@ -81,13 +83,13 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
 
   async function create() {
     const made = await model.create();
-    if (made) location.hash = href.sheet(made.id);
+    if (made) location.hash = hrefTo('runSheet', { studyId: made.id });
     else problemRef.current?.scrollIntoView({ block: 'center' });
   }
 
   return (
     <section class="new-study">
-      <a class="back" href={href.studies()}>
+      <a class="back" href={hrefTo('studies', {})}>
         ‹ All studies
       </a>
       <h2>Plan a new study</h2>
@@ -141,7 +143,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
             </div>
           );
         })}
-        <button type="button" class="btn block" disabled={factors.length >= MAX_FORM_FACTORS} onClick={() => model.addFactor()}>
+        <button type="button" class="btn block" disabled={factors.length >= MAX_DESIGN_FACTORS} onClick={() => model.addFactor()}>
           + Add a factor
         </button>
       </fieldset>

@@ -15,7 +15,10 @@ import { FactorControl } from '../../components/factor-control/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { num, signed, termLabel, withUnit } from '../../lib/format.ts';
+import { useHeightProperty } from '../../lib/use-height-property.ts';
 import { QuickCardModel, SLIDER_REACH } from '../../models/quick-card-model.ts';
+import { MODEL_CHOICES, openStudyAnalysis } from '../../models/study-analysis-model.ts';
+import './style.css';
 
 export type QuickCardScreenProps = { readonly store: Store; readonly studyId: string };
 
@@ -53,26 +56,31 @@ function PredictionPanel({ p, response }: { p: Prediction; response: Response })
 }
 
 export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
-  const model = useModel(() => new QuickCardModel(store, studyId));
-  useEffect(() => void model.load(), []);
-  const d = model.data.value;
-  const problem = model.problem.value;
+  const shared = openStudyAnalysis(store, studyId);
+  const model = useModel(() => new QuickCardModel(shared));
+  // Measured for the scroll padding that keeps a focused field clear of the sticky block (style.css).
+  const stickyRef = useHeightProperty('--sticky-top-height');
+  useEffect(() => void shared.load(), []);
+  const d = shared.data.value;
+  const problem = shared.problem.value;
+  const shown = shared.shown.value;
   if (problem) return <ProblemBox problem={problem} />;
-  if (!d) return <p class="quiet">Reading the runs…</p>;
+  if (!d || !shown) return <p class="quiet">Reading the runs…</p>;
   const { study } = d;
-  const response = study.responses[model.responseIndex.value];
+  const { response } = shown;
   const result = model.prediction.value;
   const p = result && result.ok ? result.prediction : null;
   const analysis = model.analysis.value;
+  const modelLabel = MODEL_CHOICES.find((c) => c.value === shown.settings.value.model)?.label ?? '';
   return (
     <section class="quick">
-      <StudyHeader study={study} current="predict" />
+      <StudyHeader study={study} current="quickCard" />
       <h2>Quick card</h2>
       <ChoiceButtons
         label="Response"
         options={study.responses.map((r, i) => ({ value: i, label: r.name }))}
-        value={model.responseIndex.value}
-        onChoose={(i) => model.chooseResponse(i)}
+        value={shown.index}
+        onChoose={(i) => shared.show(i)}
       />
       {result && !result.ok && (
         <p class="problem input" role="alert">
@@ -80,7 +88,7 @@ export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
         </p>
       )}
       {/* The prediction and the caution stay on screen together while the sliders move. */}
-      <div class="sticky-top">
+      <div class="sticky-top" ref={stickyRef}>
         {p && <PredictionPanel p={p} response={response} />}
         <CautionBox lines={model.caution.value} compact />
       </div>
@@ -128,7 +136,7 @@ export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
           />
           <p class="quiet">
             Baseline plus these {p.contributions.length} contributions gives {withUnit(p.fit, response.unit)}.
-            {analysis && analysis.ok ? ` Model fitted to ${analysis.analysis.n} logged runs.` : ''}
+            {analysis && analysis.ok ? ` Model: ${modelLabel.toLowerCase()} (as chosen on the Effects screen), fitted to ${analysis.analysis.n} logged runs.` : ''}
           </p>
         </>
       )}

@@ -6,7 +6,6 @@
 import { useModel, useSignal } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
 import { RUN_KIND_NAMES } from '../../../core/design/design.ts';
-import { parseNumber } from '../../../core/factor/coding.ts';
 import type { Store } from '../../../store/store.ts';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
@@ -18,7 +17,8 @@ import { fileName, downloadText, mimeOf } from '../../lib/save-file.ts';
 import { problemOf } from '../../lib/problem.ts';
 import { backupText } from '../../models/export-model.ts';
 import { readingBoxes, RunFormModel } from '../../models/run-form-model.ts';
-import { href } from '../../models/router-model.ts';
+import { hrefTo } from '../../app/routes.ts';
+import './style.css';
 
 export type RunFormScreenProps = { readonly store: Store; readonly studyId: string; readonly plannedRun: number };
 
@@ -61,7 +61,7 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
 
   return (
     <section class="run-form">
-      <StudyHeader study={study} current={null} back={{ href: href.sheet(study.id), label: 'Run sheet' }} />
+      <StudyHeader study={study} current={null} back={{ href: hrefTo('runSheet', { studyId: study.id }), label: 'Run sheet' }} />
       <h2 class="run-title">
         Run {plannedRun} <span class="quiet">of {runCount}</span>
         {kind !== undefined && kind !== 'factorial' && <span class="run-kind"> {RUN_KIND_NAMES[kind]}</span>}
@@ -108,7 +108,7 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
           {study.factors.map((f, i) => {
             const plannedText = setting(planned[i], f.kind === 'numeric' ? f.unit : undefined);
             const typed = form.actual[i];
-            const differs = f.kind === 'numeric' ? parseNumber(typed.trim()) !== planned[i] : typed.trim().toLowerCase() !== String(planned[i]).toLowerCase();
+            const differs = model.differs.value[i];
             const error = model.actualErrors.value[i];
             return (
               <div class="field" key={f.name}>
@@ -221,11 +221,11 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
           </p>
           {saveState === 'saved' ? (
             nextRun !== null ? (
-              <a class="btn primary big" href={href.run(study.id, nextRun)}>
+              <a class="btn primary big" href={hrefTo('runForm', { studyId: study.id, plannedRun: nextRun })}>
                 Next: run {nextRun}
               </a>
             ) : (
-              <a class="btn primary big" href={href.sheet(study.id)}>
+              <a class="btn primary big" href={hrefTo('runSheet', { studyId: study.id })}>
                 Run sheet
               </a>
             )
@@ -240,7 +240,7 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
         <p class="notice">This run was changed elsewhere after the form opened. Both versions are kept in its history.</p>
       )}
       {!showHistory.value && saveState === 'saved' && (
-        <a class="btn block" href={href.sheet(study.id)}>
+        <a class="btn block" href={hrefTo('runSheet', { studyId: study.id })}>
           Back to the run sheet
         </a>
       )}

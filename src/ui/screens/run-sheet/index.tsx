@@ -8,9 +8,10 @@ import type { Store } from '../../../store/store.ts';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { setting, withUnit } from '../../lib/format.ts';
-import { href } from '../../models/router-model.ts';
+import { hrefTo } from '../../app/routes.ts';
 import { RunSheetModel } from '../../models/run-sheet-model.ts';
 import { RUN_KIND_NAMES } from '../../../core/design/design.ts';
+import './style.css';
 
 export type RunSheetScreenProps = { readonly store: Store; readonly studyId: string };
 
@@ -25,7 +26,7 @@ export function RunSheetScreen({ store, studyId }: RunSheetScreenProps) {
   const next = model.nextRun.value;
   return (
     <section>
-      <StudyHeader study={study} current="sheet" />
+      <StudyHeader study={study} current="runSheet" />
       {study.purpose && <p class="purpose">{study.purpose}</p>}
       <p class="progress">
         <strong>
@@ -58,7 +59,7 @@ export function RunSheetScreen({ store, studyId }: RunSheetScreenProps) {
               )}
               {row.excluded && <p class="run-result">Reason: {row.logged[0].reason}</p>}
               {row.hasDraft && <p class="draft-note">Typing not saved yet is waiting in this run's form.</p>}
-              <a class={logged ? 'btn block' : 'btn primary block'} href={href.run(study.id, row.run)}>
+              <a class={logged ? 'btn block' : 'btn primary block'} href={hrefTo('runForm', { studyId: study.id, plannedRun: row.run })}>
                 {logged ? `Review run ${row.run}` : `Log run ${row.run}`}
               </a>
             </li>

@@ -5,7 +5,7 @@ import type { Store } from '../../../store/store.ts';
 import { DemoBadge } from '../../components/demo-badge/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { when } from '../../lib/format.ts';
-import { href } from '../../models/router-model.ts';
+import { hrefTo } from '../../app/routes.ts';
 import { StudiesModel } from '../../models/studies-model.ts';
 
 export type StudiesScreenProps = { readonly store: Store };
@@ -17,7 +17,7 @@ export function StudiesScreen({ store }: StudiesScreenProps) {
   return (
     <section>
       <h2>Studies</h2>
-      <a class="btn primary block" href={href.newStudy()}>
+      <a class="btn primary block" href={hrefTo('newStudy', {})}>
         Plan a new study
       </a>
       {problem && <ProblemBox problem={problem} />}
@@ -37,13 +37,13 @@ export function StudiesScreen({ store }: StudiesScreenProps) {
             <p class="card-line quiet">
               {study.factors.length} factors · {study.responses.map((r) => r.name).join(', ')} · made {when(study.createdAt)}
             </p>
-            <a class="btn primary block" href={href.sheet(study.id)} aria-label={`Open ${study.title}`}>
+            <a class="btn primary block" href={hrefTo('runSheet', { studyId: study.id })} aria-label={`Open ${study.title}`}>
               Open study
             </a>
           </li>
         ))}
       </ul>
-      <a class="btn block" href={href.export()}>
+      <a class="btn block" href={hrefTo('export', {})}>
         Export or import files
       </a>
     </section>
