@@ -19,6 +19,7 @@ readings, time, operator, notes, excluded and reason.
 
 export const csv: Command = {
   summary: 'one study of a backup as the app\'s CSV export',
+  writesFile: true,
   usage: USAGE,
   async run(argv) {
     const { values, positionals } = parseCommandArgs(argv, { study: { type: 'string' }, bom: { type: 'boolean' } });
