@@ -11,6 +11,7 @@ import { plannedSetting } from '../../core/design/planned-settings.ts';
 import { InputError } from '../../core/errors.ts';
 import { parseNumber } from '../../core/factor/coding.ts';
 import type { FactorSpec } from '../../core/factor/factor.ts';
+import { checkNewFactor } from '../../core/factor/new-factor.ts';
 import { plannedColumn, runSheetCsv } from '../../io/csv/run-sheet.ts';
 import { parseCommandArgs } from '../args.ts';
 import type { Command } from '../command.ts';
@@ -72,12 +73,26 @@ function wholeNumber(text: string | undefined, option: string): number | undefin
 
 /**
  * Reads one --factor: NAME [(UNIT)] = LOW : HIGH [: log]. Both levels numbers -> numeric,
- * otherwise categorical with two named levels.
+ * otherwise categorical with two named levels. Checked as a new factor (checkNewFactor: no
+ * comma, colon or equals sign in a name or level, the low below the high).
  * Example: parseFactorOption('Temperature (degC)=160:200') -> numeric, unit degC.
  */
 export function parseFactorOption(text: string): FactorSpec {
+  const spec = readFactorOption(text);
+  try {
+    checkNewFactor(spec);
+  } catch (err) {
+    throw err instanceof InputError ? new InputError(`--factor "${text}": ${err.message}`) : err;
+  }
+  return spec;
+}
+
+function readFactorOption(text: string): FactorSpec {
   const eq = text.indexOf('=');
   if (eq <= 0) throw new InputError(`--factor "${text}": expected NAME=LOW:HIGH, such as "Temperature (degC)=160:200" or "Powder=matte:gloss"`);
+  if (text.indexOf('=', eq + 1) >= 0) {
+    throw new InputError(`--factor "${text}": expected one "=" between the name and the levels (NAME=LOW:HIGH), got ${text.split('=').length - 1}; a name or level cannot contain "="`);
+  }
   let name = text.slice(0, eq).trim();
   let unit: string | undefined;
   const m = /^(.*?)\s*\(([^()]*)\)$/.exec(name);
