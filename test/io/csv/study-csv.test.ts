@@ -72,11 +72,17 @@ describe('study CSV export', () => {
   it('neutralises text a spreadsheet would run as a formula, and leaves numbers alone', async () => {
     const notes = ['=HYPERLINK("http://example.invalid","x")', '+1+2', '-2+3', '@SUM(A1:A2)', '\tTAB', '\rCR'];
     const { study, runs } = await studyWithNotes(notes, '=cmd|calc');
-    const t = readTable(studyCsv(study, runs));
-    const col = t.header.indexOf('Notes');
-    expect(t.rows.slice(0, 6).map((r) => r[col])).toEqual(notes.map((n) => `'${n}`));
-    expect(t.rows[0][t.header.indexOf('Operator')]).toBe("'=cmd|calc");
-    expect(t.rows[0][t.header.indexOf('Oven temperature coded')]).toBe('-1'); // a number, not quoted
+    const csv = studyCsv(study, runs);
+    // As a spreadsheet sees the file (papaparse reads cells as they are): guarded.
+    const raw = Papa.parse<string[]>(csv.trim(), { newline: '\r\n' }).data;
+    const col = raw[0].indexOf('Notes');
+    expect(raw.slice(1, 7).map((r) => r[col])).toEqual(notes.map((n) => `'${n}`));
+    expect(raw[1][raw[0].indexOf('Operator')]).toBe("'=cmd|calc");
+    expect(raw[1][raw[0].indexOf('Oven temperature coded')]).toBe('-1'); // a number, not quoted
+    // Read back by Trialbook: the guard removed again, every note as it was.
+    const t = readTable(csv);
+    expect(t.rows.slice(0, 6).map((r) => r[t.header.indexOf('Notes')])).toEqual(notes);
+    expect(t.rows[0][t.header.indexOf('Operator')]).toBe('=cmd|calc');
   });
 
   it('starts with a byte-order mark only when asked', async () => {
