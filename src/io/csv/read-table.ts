@@ -1,7 +1,7 @@
 /**
  * Reads CSV text into a header and rows of strings, with papaparse (RFC 4180 quoting; a leading
  * byte-order mark is dropped). Blank lines are skipped.
- * - The separator is guessed by papaparse from ",", ";", tab and "|" and reported in `delimiter`.
+ * - The separator is found among ",", ";", tab and "|" (guessDelimiter) and reported in `delimiter`.
  * - Line ends: CRLF, LF and CR may be mixed in one file (a file edited in two programs); outside
  *   quoted cells each is one line end, inside a quoted cell it is kept as it is.
  * - A cell guarded against formulas by a leading single quote (formula-guard.ts) is read without
@@ -35,11 +35,25 @@ export function rowNumber(table: Table, r: number): number {
 
 const DELIMITERS = [',', ';', '\t', '|'];
 
-/** The separator, guessed by papaparse on the first lines (line ends made uniform for the guess). */
+/**
+ * The separator: of ",", ";", tab and "|", the one that splits the first 20 lines into the same
+ * number of cells, more than one, the most cells winning; "," when none does (a one-column
+ * file, or a ragged one, which is then refused with its row). Quoting is respected (papaparse
+ * splits the sample). Common practice; papaparse's own guess is thrown off by a final line end.
+ */
 function guessDelimiter(body: string): string {
   const sample = body.slice(0, 65536).replace(/\r\n?/g, '\n');
-  const guessed = Papa.parse<string[]>(sample, { preview: 20, delimitersToGuess: DELIMITERS }).meta.delimiter;
-  return DELIMITERS.includes(guessed) ? guessed : ',';
+  let best = ',';
+  let bestCells = 1;
+  for (const d of DELIMITERS) {
+    const rows = Papa.parse<string[]>(sample, { delimiter: d, newline: '\n', preview: 20, skipEmptyLines: 'greedy' }).data;
+    const n = rows[0]?.length ?? 0;
+    if (n > bestCells && rows.every((r) => r.length === n)) {
+      best = d;
+      bestCells = n;
+    }
+  }
+  return best;
 }
 
 /**

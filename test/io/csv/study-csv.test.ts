@@ -85,6 +85,17 @@ describe('study CSV export', () => {
     expect(t.rows[0][t.header.indexOf('Operator')]).toBe('=cmd|calc');
   });
 
+  it('writes a mean without binary round-off and the readings exactly (IEEE 754: (70.2 + 70.4) / 2 is 70.30000000000001)', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, brandPlan());
+    const state = await openNewRun(store, study.id, 1);
+    await saveRun(store, { ...state, studyId: study.id, values: parseRunForm(study, { ...state.form, readings: ['70.2 70.4'] }) });
+    const rows = Papa.parse<string[]>(studyCsv(study, await listRuns(store, study.id)).trimEnd(), { header: false }).data;
+    const h = rows[0];
+    expect(rows[1][h.indexOf('Gloss (GU)')]).toBe('70.3');
+    expect(rows[1][h.indexOf('Gloss (GU) readings')]).toBe('70.2 70.4');
+  });
+
   it('starts with a byte-order mark only when asked', async () => {
     const { store, study } = await studyWithNotes(['a']);
     expect((await exportStudyCsv(store, study.id, { bom: true })).charCodeAt(0)).toBe(0xfeff);
