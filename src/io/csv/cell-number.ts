@@ -3,9 +3,11 @@
  * (coding.ts parseNumber), and when a cell is not a number the part of the message that says why
  * and what to do, so that no NaN or Infinity reaches the analysis or a message. A number beyond
  * the largest double (about 1.8e308, IEEE 754 binary64) and the words NaN and Infinity are
- * refused at reading; a decimal comma in a comma-separated file gets a suggestion.
+ * refused at reading; a decimal comma in a comma-separated file gets a suggestion; a response
+ * beyond what the analysis carries (MAX_RESPONSE_MAGNITUDE) is refused with its own message.
  */
 import { parseNumber } from '../../core/factor/coding.ts';
+import { MAX_RESPONSE_MAGNITUDE } from '../../core/tolerance.ts';
 
 const DECIMAL_COMMA = /^[+-]?(\d+,\d*|,\d+)([eE][+-]?\d+)?$/;
 const NOT_A_MEASUREMENT = /^[+-]?(nan|inf|infinity|∞)$/i;
@@ -39,4 +41,14 @@ export function whyNotANumber(text: string, delimiter = ','): string {
       : `; a decimal comma is read only in a file separated by semicolons or tabs, and this file is separated by "${delimiter}": write ${s.replace(',', '.')}, or save the file with ";" as the separator`;
   }
   return '';
+}
+
+/**
+ * Why a response value cannot be analysed although it is a number, as a message part, or '' when
+ * it can: a magnitude above MAX_RESPONSE_MAGNITUDE, whose square would overflow.
+ * Example: responseMagnitudeProblem(1e200) -> 'is 1e+200, beyond what the analysis can carry ...'.
+ */
+export function responseMagnitudeProblem(x: number): string {
+  if (Math.abs(x) <= MAX_RESPONSE_MAGNITUDE) return '';
+  return `is ${x}, beyond what the analysis can carry (magnitudes up to ${MAX_RESPONSE_MAGNITUDE}, so that sums of squares stay finite): give the response in a larger unit`;
 }

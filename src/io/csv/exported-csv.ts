@@ -11,7 +11,7 @@ import { InputError } from '../../core/errors.ts';
 import { parseNumber, toCoded } from '../../core/factor/coding.ts';
 import { defineFactors, type FactorSpec } from '../../core/factor/factor.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
-import { cellNumber, isNonFiniteNumberText, whyNotANumber } from './cell-number.ts';
+import { cellNumber, isNonFiniteNumberText, responseMagnitudeProblem, whyNotANumber } from './cell-number.ts';
 import { bareColumnName, columnUnit, readTable, rowNumber, uniqueColumn, type Table } from './read-table.ts';
 
 /** Relative agreement needed between a coded value and the one the recovered coding gives. */
@@ -152,6 +152,8 @@ export function exportedCsvResponseData(csvText: string, responseName: string, f
   const y = used.map((r) => {
     const v = cellNumber(cell(table, r, response.value));
     if (!Number.isFinite(v)) throw new InputError(`${where(table, r, response.value)}: ${response.name} needs a number, got "${table.rows[r][response.value]}"${whyNotANumber(table.rows[r][response.value], table.delimiter)}`);
+    const big = responseMagnitudeProblem(v);
+    if (big) throw new InputError(`${where(table, r, response.value)}: ${response.name} ${big}`);
     return v;
   });
   const blocks = layout.block >= 0 ? used.map((r) => parseNumber(cell(table, r, layout.block))) : null;

@@ -17,7 +17,7 @@ import { checkRunValues, type RunValues, type StudyPlan } from '../../core/study
 import { SETTING_TOLERANCE } from '../../core/tolerance.ts';
 import { MAX_TEXT, MAX_TIME } from '../backup/validate.ts';
 import { checkNewFactor } from '../../core/factor/new-factor.ts';
-import { cellNumber, isNonFiniteNumberText, whyNotANumber } from './cell-number.ts';
+import { cellNumber, isNonFiniteNumberText, responseMagnitudeProblem, whyNotANumber } from './cell-number.ts';
 import { bareColumnName, columnUnit, readTable, rowNumber, type Table } from './read-table.ts';
 
 export type ColumnRole = 'factor' | 'response' | 'block' | 'notes' | 'excluded' | 'reason' | 'operator' | 'time' | 'ignore';
@@ -260,11 +260,15 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
       const parts = row[rIdx[j]].split(/[\s;]+/).filter((t) => t !== '');
       const k = parts.findIndex((t) => !isNumberCell(t) && whyNotANumber(t, table.delimiter) !== '');
       if (k >= 0) throw new InputError(`${cellAt(i, table, rIdx[j])}: ${r.name}: reading ${k + 1} needs a number, got "${parts[k]}"${whyNotANumber(parts[k], table.delimiter)}`);
+      let values: number[];
       try {
-        return parseReadings(row[rIdx[j]], r.name);
+        values = parseReadings(row[rIdx[j]], r.name);
       } catch (err) {
         throw err instanceof InputError ? new InputError(`${cellAt(i, table, rIdx[j])}: ${err.message}`) : err;
       }
+      const big = values.findIndex((v) => responseMagnitudeProblem(v) !== '');
+      if (big >= 0) throw new InputError(`${cellAt(i, table, rIdx[j])}: ${r.name}: reading ${big + 1} ${responseMagnitudeProblem(values[big])}`);
+      return values;
     });
     let block = 1;
     if (bIdx >= 0) {

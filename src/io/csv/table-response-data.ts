@@ -14,7 +14,7 @@ import { InputError } from '../../core/errors.ts';
 import { parseNumber, toCoded } from '../../core/factor/coding.ts';
 import { defineFactors, type FactorSpec } from '../../core/factor/factor.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
-import { cellNumber, isNonFiniteNumberText, whyNotANumber } from './cell-number.ts';
+import { cellNumber, isNonFiniteNumberText, responseMagnitudeProblem, whyNotANumber } from './cell-number.ts';
 import { bareColumnName, columnUnit, rowNumber, uniqueColumn, type Table } from './read-table.ts';
 
 export interface TableColumns {
@@ -124,6 +124,8 @@ export function tableResponseData(table: Table, cols: TableColumns): ResponseDat
     );
     const v = cellNumber(row[yIdx]);
     if (!Number.isFinite(v)) throw new InputError(`Row ${rowNumber(table, r)}, column "${table.header[yIdx]}": ${cols.response} needs a number, got "${row[yIdx]}"${whyNotANumber(row[yIdx], table.delimiter)}`);
+    const big = responseMagnitudeProblem(v);
+    if (big) throw new InputError(`Row ${rowNumber(table, r)}, column "${table.header[yIdx]}": ${cols.response} ${big}`);
     y.push(v);
     if (bIdx >= 0) {
       const b = row[bIdx].trim();

@@ -58,3 +58,13 @@ describe('tableResponseData: hand-edited and foreign files', () => {
     expect(d.notes).toEqual(['Read as a file separated by semicolons with decimal commas in the columns "A", "y"']);
   });
 });
+
+describe('tableResponseData: numbers the analysis cannot carry', () => {
+  it('refuses a response above MAX_RESPONSE_MAGNITUDE at reading, with row and column (its square would overflow binary64)', () => {
+    const t = readTable('A,y\n1,5\n2,1e300\n');
+    expect(() => tableResponseData(t, { factors: ['A'], response: 'y' })).toThrow(
+      'Row 3, column "y": y is 1e+300, beyond what the analysis can carry (magnitudes up to 1e+150, so that sums of squares stay finite): give the response in a larger unit',
+    );
+    expect(tableResponseData(readTable('A,y\n1,5\n2,-1e150\n'), { factors: ['A'], response: 'y' }).y).toEqual([5, -1e150]);
+  });
+});
