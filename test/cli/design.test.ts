@@ -144,3 +144,10 @@ describe('design command: factor names and levels the other commands can use', (
     expect(parseFactorOption('Offset (mm)=-20:-10')).toEqual({ kind: 'numeric', name: 'Offset', low: -20, high: -10, unit: 'mm' });
   });
 });
+
+describe('design command: settings beyond what a calculation carries', () => {
+  it('refuses 1e400 and NaN as a setting instead of making them level names', () => {
+    expect(() => parseFactorOption('A=1:1e400')).toThrow(/--factor "A=1:1e400": needs finite settings or two level names, got "1e400"; 1e400 is beyond the largest number/);
+    expect(() => parseFactorOption('A=NaN:2')).toThrow(/got "NaN"; "NaN" is not a measurement/);
+  });
+});

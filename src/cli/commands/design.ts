@@ -12,6 +12,7 @@ import { InputError } from '../../core/errors.ts';
 import { parseNumber } from '../../core/factor/coding.ts';
 import type { FactorSpec } from '../../core/factor/factor.ts';
 import { checkNewFactor } from '../../core/factor/new-factor.ts';
+import { isNonFiniteNumberText, whyNotANumber } from '../../io/csv/cell-number.ts';
 import { plannedColumn, runSheetCsv } from '../../io/csv/run-sheet.ts';
 import { parseCommandArgs } from '../args.ts';
 import type { Command } from '../command.ts';
@@ -110,6 +111,8 @@ function readFactorOption(text: string): FactorSpec {
   if (parts.length !== 2) {
     throw new InputError(`--factor "${text}": expected two levels separated by ":", such as 160:200 or matte:gloss, got ${parts.length} part${parts.length === 1 ? '' : 's'}`);
   }
+  const huge = parts.find(isNonFiniteNumberText);
+  if (huge !== undefined) throw new InputError(`--factor "${text}": needs finite settings or two level names, got "${huge}"${whyNotANumber(huge)}`);
   const [lo, hi] = parts.map(parseNumber);
   if (Number.isFinite(lo) && Number.isFinite(hi)) {
     return { kind: 'numeric', name, low: lo, high: hi, ...(unit ? { unit } : {}), ...(log ? { scale: 'log' as const } : {}) };

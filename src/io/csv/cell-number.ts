@@ -32,7 +32,7 @@ export function isNonFiniteNumberText(text: string): boolean {
  */
 export function whyNotANumber(text: string, delimiter = ','): string {
   const s = text.trim();
-  if (NOT_A_MEASUREMENT.test(s)) return `; "${s}" is not a measurement: leave the cell empty where there is no value`;
+  if (NOT_A_MEASUREMENT.test(s)) return `; "${s}" is not a measurement (in a file, leave the cell empty where there is no value)`;
   const x = parseNumber(s);
   if (!Number.isNaN(x) && !Number.isFinite(x)) return `; ${s} is beyond the largest number a calculation can carry (about 1.8e308): give it in a larger unit`;
   if (DECIMAL_COMMA.test(s)) {

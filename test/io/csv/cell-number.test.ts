@@ -9,7 +9,7 @@ describe('cellNumber and whyNotANumber', () => {
   });
   it('says why, with what to do', () => {
     expect(whyNotANumber('1e400')).toMatch(/1e400 is beyond the largest number a calculation can carry \(about 1.8e308\): give it in a larger unit/);
-    expect(whyNotANumber('NaN')).toMatch(/"NaN" is not a measurement: leave the cell empty/);
+    expect(whyNotANumber('NaN')).toMatch(/"NaN" is not a measurement \(in a file, leave the cell empty/);
     expect(whyNotANumber('-Infinity')).toMatch(/"-Infinity" is not a measurement/);
     expect(whyNotANumber('12,5', ',')).toMatch(/a decimal comma is read only in a file separated by semicolons or tabs, and this file is separated by ",": write 12.5/);
     expect(whyNotANumber('12,5', ';')).toMatch(/mixes decimal commas and points/);

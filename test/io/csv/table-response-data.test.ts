@@ -45,7 +45,7 @@ describe('tableResponseData: hand-edited and foreign files', () => {
       'Row 3, column "A": A needs a number, got "1e400"; 1e400 is beyond the largest number a calculation can carry (about 1.8e308): give it in a larger unit',
     );
     expect(() => tableResponseData(bad('Infinity', 'A'), { factors: ['A'], response: 'y' })).toThrow(/Row 3, column "A": A needs a number, got "Infinity"; "Infinity" is not a measurement/);
-    expect(() => tableResponseData(bad('NaN', 'y'), { factors: ['A'], response: 'y' })).toThrow(/Row 3, column "y": y needs a number, got "NaN"; "NaN" is not a measurement: leave the cell empty/);
+    expect(() => tableResponseData(bad('NaN', 'y'), { factors: ['A'], response: 'y' })).toThrow(/Row 3, column "y": y needs a number, got "NaN"; "NaN" is not a measurement \(in a file, leave the cell empty/);
     expect(() => tableResponseData(bad('-1e999', 'y'), { factors: ['A'], response: 'y' })).toThrow(/Row 3, column "y": y needs a number, got "-1e999"; -1e999 is beyond/);
   });
   it('suggests the separator for decimal commas in a comma file, and notes them in a semicolon file', () => {
