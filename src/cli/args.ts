@@ -41,7 +41,7 @@ export function parseCommandArgs<O extends OptionSpec>(argv: string[], options: 
   }
 }
 
-/** Splits "A=180,B=gloss" into [["A","180"],["B","gloss"]]; throws on a part without "=". */
+/** Splits "A=180,B=gloss" into [["A","180"],["B","gloss"]]; throws on a part without "=" or with two. */
 export function parseAssignments(text: string, what: string): [string, string][] {
   return text
     .split(',')
@@ -50,6 +50,8 @@ export function parseAssignments(text: string, what: string): [string, string][]
     .map((p) => {
       const eq = p.indexOf('=');
       if (eq <= 0) throw new InputError(`${what}: expected NAME=VALUE, got "${p}"`);
+      // "A=B=1:2" is refused rather than read as A with the value "B=1:2": no name or level holds "=".
+      if (p.indexOf('=', eq + 1) >= 0) throw new InputError(`${what}: expected one "=" in NAME=VALUE, got "${p}"; a name or level cannot contain "="`);
       return [p.slice(0, eq).trim(), p.slice(eq + 1).trim()];
     });
 }

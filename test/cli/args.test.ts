@@ -18,3 +18,13 @@ describe('negative option values need no --opt= quoting', () => {
     expect(() => parseCommandArgs(['--step', '-x'], OPTIONS)).toThrow(/--step/);
   });
 });
+
+describe('parseAssignments', () => {
+  it('reads NAME=VALUE lists and refuses a part with two "=" (A=B=1:2)', async () => {
+    const { parseAssignments } = await import('../../src/cli/args.ts');
+    expect(parseAssignments('Temperature=185, Powder=gloss', '--at')).toEqual([['Temperature', '185'], ['Powder', 'gloss']]);
+    expect(() => parseAssignments('A=B=1:2', '--levels')).toThrow('--levels: expected one "=" in NAME=VALUE, got "A=B=1:2"; a name or level cannot contain "="');
+    expect(() => parseAssignments('A', '--at')).toThrow(/expected NAME=VALUE, got "A"/);
+    expect(parseAssignments('', '--at')).toEqual([]);
+  });
+});

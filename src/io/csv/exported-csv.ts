@@ -40,7 +40,9 @@ export function exportedCsvLayout(table: Table): ExportedCsvLayout | null {
   const responses = table.header.flatMap((h, c) => {
     const m = /^(.*) readings$/.exec(bare[c]);
     if (!m) return [];
-    const value = at(m[1]);
+    // The value column is the readings column's own name without " readings" (units included).
+    const own = table.header.indexOf(h.replace(/\s+readings$/i, ''));
+    const value = own >= 0 ? own : at(m[1]);
     return value >= 0 ? [{ name: h.replace(/\s*\([^)]*\)\s*/g, ' ').replace(/ readings$/, '').trim(), value }] : [];
   });
   const excluded = at('excluded');
@@ -111,12 +113,14 @@ export function exportedCsvResponseData(csvText: string, responseName: string, f
   if (!layout) {
     throw new InputError('This CSV is not a Trialbook export: it needs the columns Run, Kind and Excluded, and for each factor "<name> actual" and "<name> coded"');
   }
+  // The column named in full first ("Gloss (GU)"), else the one response whose bare name matches.
   const key = bareColumnName(responseName);
-  const responses = layout.responses.filter((r) => bareColumnName(r.name) === key);
+  const full = layout.responses.find((r) => table.header[r.value].toLowerCase() === responseName.trim().toLowerCase());
+  const responses = full ? [full] : layout.responses.filter((r) => bareColumnName(r.name) === key);
   if (responses.length > 1) {
     throw new InputError(`The response "${responseName}" matches ${responses.length} columns: ${responses.map((r) => `"${table.header[r.value]}" (column ${r.value + 1})`).join(' and ')}; name it in full, unit included`);
   }
-  const response = responses[0] ?? layout.responses.find((r) => table.header[r.value].toLowerCase() === responseName.trim().toLowerCase());
+  const response = responses[0];
   if (!response) throw new InputError(`The export has no response "${responseName}"; its responses are ${layout.responses.map((r) => `"${r.name}"`).join(', ') || 'none'}`);
   const chosen = factorNames
     ? factorNames.map((n) => {

@@ -154,9 +154,12 @@ export function readTable(text: string): Table {
   return { header: names, rows, rowNumbers, delimiter, notes };
 }
 
-/** A column's name without a unit in parentheses or square brackets, lower case: "Temperature (degC)" -> "temperature". */
+/**
+ * A column's name without a unit in parentheses or square brackets, lower case, in Unicode
+ * normal form C (so "é" typed as e and a combining accent matches "é"): "Temperature (degC)" -> "temperature".
+ */
 export function bareColumnName(name: string): string {
-  return name.replace(/\s*[([][^)\]]*[)\]]\s*/g, ' ').trim().toLowerCase();
+  return name.normalize('NFC').replace(/\s*[([][^)\]]*[)\]]\s*/g, ' ').trim().toLowerCase();
 }
 
 /** The unit in parentheses of a column name, if any: "Temperature (degC)" -> "degC". */

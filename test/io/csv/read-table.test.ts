@@ -87,3 +87,9 @@ describe('uniqueColumn', () => {
     expect(uniqueColumn(t, 'z', 'response', (h) => h === 'z')).toBe(-1);
   });
 });
+
+describe('bareColumnName and Unicode', () => {
+  it('matches a name typed with a combining accent to the composed one (Unicode Standard Annex #15, form C)', () => {
+    expect(bareColumnName('Tempe\u0301rature (°C)')).toBe('temp\u00e9rature');
+  });
+});

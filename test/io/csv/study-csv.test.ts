@@ -172,3 +172,15 @@ describe('backups on the command line', () => {
     expect(selectStudy({ payload: { studies: [s, twin], revisions: [] } }, 'second-study-id')).toBe(twin);
   });
 });
+
+describe('reading an export back: a hand-edited file', () => {
+  it('refuses a response name that matches two columns, listing both', () => {
+    const csv = [
+      'Run,Kind,Excluded,A actual,A coded,Gloss (GU),Gloss (GU) readings,Gloss (%),Gloss (%) readings',
+      '1,factorial,no,1,-1,80,80,50,50',
+      '2,factorial,no,2,1,90,90,60,60',
+    ].join('\r\n');
+    expect(() => exportedCsvResponseData(csv, 'Gloss')).toThrow('The response "Gloss" matches 2 columns: "Gloss (GU)" (column 6) and "Gloss (%)" (column 8); name it in full, unit included');
+    expect(exportedCsvResponseData(csv, 'Gloss (%)').y).toEqual([50, 60]);
+  });
+});
