@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { decodeText, windows1252Char } from '../../src/io/decode-text.ts';
+import { decodeText, decodeUtf8Strict, windows1252Char } from '../../src/io/decode-text.ts';
 import { InputError } from '../../src/core/errors.ts';
 
 // References: Node's Buffer (UTF-8, UTF-16LE encoders) and its WHATWG TextDecoder.
@@ -21,11 +21,33 @@ describe('decodeText', () => {
     expect(decodeText(utf16le(sample))).toEqual({ text: sample, encoding: 'UTF-16LE' });
     expect(decodeText(utf16be(sample))).toEqual({ text: sample, encoding: 'UTF-16BE' });
   });
+  it('property: the loop refuses exactly what the WHATWG decoder refuses, for any bytes', () => {
+    fc.assert(
+      // Uniform bytes, and bytes from the edges of table 3-7's ranges, where well-formed sequences are common.
+      fc.property(fc.oneof(fc.uint8Array({ maxLength: 12 }), fc.array(fc.constantFrom(0x41, 0x7f, 0x80, 0x8f, 0x90, 0x9f, 0xa0, 0xbf, 0xc0, 0xc2, 0xdf, 0xe0, 0xe1, 0xed, 0xef, 0xf0, 0xf4, 0xf5), { maxLength: 12 }).map((a) => new Uint8Array(a))), (b) => {
+        let ref = true;
+        try {
+          new TextDecoder('utf-8', { fatal: true, ignoreBOM: true }).decode(b);
+        } catch {
+          ref = false;
+        }
+        let ours = true;
+        try {
+          decodeUtf8Strict(b, 0, 'f');
+        } catch {
+          ours = false;
+        }
+        expect(ours).toBe(ref);
+      }),
+      { numRuns: 5000 },
+    );
+  });
   it('property: agrees with Node for any well-formed text, in all three forms', () => {
     fc.assert(
       fc.property(fc.string({ unit: 'grapheme' }), (s) => {
         const expected = new TextDecoder('utf-8').decode(utf8(s));
         expect(decodeText(utf8(s)).text).toBe(expected);
+        expect(decodeUtf8Strict(utf8(s), 0, 'f')).toBe(expected); // the loop used without a platform decoder
         expect(decodeText(utf16le(s)).text).toBe(s);
         expect(decodeText(utf16be(s)).text).toBe(s);
       }),
@@ -51,6 +73,7 @@ describe('decodeText', () => {
     ];
     for (const b of bad) {
       expect(() => decodeText(new Uint8Array(b))).toThrow(/is not UTF-8/);
+      expect(() => decodeUtf8Strict(new Uint8Array(b), 0, 'f')).toThrow(/is not UTF-8/);
       expect(() => new TextDecoder('utf-8', { fatal: true }).decode(new Uint8Array(b))).toThrow(); // the reference agrees
     }
   });

@@ -62,37 +62,45 @@ function guessDelimiter(body: string): string {
  */
 export function uniformLineEnds(text: string, delimiter: string): string {
   if (!text.includes('\r')) return text;
+  if (!text.includes('"')) return text.replace(/\r\n?/g, '\n');
+  // Jump from one quote or CR to the next; a quote opens a quoted cell only at a cell's start.
   const parts: string[] = [];
+  const next = /["\r]/g;
   let last = 0;
-  let quoted = false;
-  let fieldStart = true;
-  for (let i = 0; i < text.length; i++) {
-    const c = text[i];
-    if (quoted) {
-      if (c === '"') {
-        if (text[i + 1] === '"') i++;
-        else quoted = false;
-      }
+  let m: RegExpExecArray | null;
+  while ((m = next.exec(text)) !== null) {
+    const i = m.index;
+    if (m[0] === '\r') {
+      parts.push(text.slice(last, i), '\n');
+      last = text[i + 1] === '\n' ? i + 2 : i + 1;
+      next.lastIndex = last;
       continue;
     }
-    if (c === '"' && fieldStart) {
-      quoted = true;
-      fieldStart = false;
-    } else if (c === '\r') {
-      parts.push(text.slice(last, i), '\n');
-      if (text[i + 1] === '\n') i++;
-      last = i + 1;
-      fieldStart = true;
-    } else {
-      fieldStart = c === '\n' || c === delimiter;
+    const prev = i === 0 ? '\n' : text[i - 1];
+    if (prev !== delimiter && prev !== '\n' && prev !== '\r') continue; // a quote inside an unquoted cell
+    // Skip the quoted cell: its end is a quote not followed by another.
+    let j = i + 1;
+    for (;;) {
+      const q = text.indexOf('"', j);
+      if (q < 0) {
+        j = text.length;
+        break;
+      }
+      if (text[q + 1] === '"') j = q + 2;
+      else {
+        j = q + 1;
+        break;
+      }
     }
+    next.lastIndex = j;
   }
   parts.push(text.slice(last));
   return parts.join('');
 }
 
 const COMMA_NUMBER = /^[+-]?(\d+,\d*|,\d+)([eE][+-]?\d+)?$/;
-const POINT_NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+// A number with neither comma nor point, which reads the same in both conventions.
+const WHOLE_NUMBER = /^[+-]?\d+([eE][+-]?\d+)?$/;
 
 /** Columns of a ";" or tab file written with decimal commas, read with points (see the file comment). */
 function readDecimalCommas(header: string[], rows: string[][]): string[] {
@@ -101,10 +109,14 @@ function readDecimalCommas(header: string[], rows: string[][]): string[] {
     let comma = false;
     for (const row of rows) {
       const cell = row[c].trim();
-      if (cell === '') continue;
+      if (cell === '' || WHOLE_NUMBER.test(cell)) continue;
+      if (COMMA_NUMBER.test(cell)) {
+        comma = true;
+        continue;
+      }
       for (const tok of cell.split(/\s+/)) {
         if (COMMA_NUMBER.test(tok)) comma = true;
-        else if (!POINT_NUMBER.test(tok) || tok.includes('.')) return;
+        else if (!WHOLE_NUMBER.test(tok)) return;
       }
     }
     if (!comma) return;

@@ -93,3 +93,18 @@ describe('bareColumnName and Unicode', () => {
     expect(bareColumnName('Tempe\u0301rature (°C)')).toBe('temp\u00e9rature');
   });
 });
+
+describe('readTable: property over mixed line ends', () => {
+  it('rows written with CRLF, LF or CR each (papaparse quoting) read back cell for cell', async () => {
+    const fc = (await import('fast-check')).default;
+    const Papa = (await import('papaparse')).default;
+    const cell = fc.string({ unit: fc.constantFrom('a', '1', ' ', ',', '"', '\n', '\r\n', ';', 'é'), maxLength: 5 });
+    fc.assert(
+      fc.property(fc.array(fc.tuple(cell, cell, fc.constantFrom('\r\n', '\n', '\r')), { minLength: 1, maxLength: 6 }), fc.boolean(), (rows, quotes) => {
+        const line = (cells: string[]) => Papa.unparse([cells], { quotes });
+        const text = 'h1,h2\r\n' + rows.map(([a, b, end]) => line([a, b]) + end).join('');
+        expect(readTable(text).rows).toEqual(rows.map(([a, b]) => [a, b]).filter((r) => !r.every((c) => c.trim() === '')));
+      }),
+    );
+  });
+});
