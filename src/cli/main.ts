@@ -5,6 +5,12 @@
  */
 import { InputError } from '../core/errors.ts';
 import type { Command } from './command.ts';
+import { visibleText } from './visible-text.ts';
+
+/** Every print goes through here: control characters from files and arguments made visible. */
+function print(stream: NodeJS.WriteStream, text: string, exact = false): void {
+  stream.write(exact ? text : visibleText(text));
+}
 
 const commands: Record<string, () => Promise<Command>> = {
   analyze: async () => (await import('./commands/analyze.ts')).analyze,
@@ -30,26 +36,26 @@ async function usage(): Promise<string> {
 async function main(argv: string[]): Promise<number> {
   const [name, ...rest] = argv;
   if (!name || name === '--help' || name === '-h' || name === 'help') {
-    process.stdout.write((await usage()) + '\n');
+    print(process.stdout, (await usage()) + '\n');
     return name ? 0 : 2;
   }
   const load = commands[name];
   if (!load) {
-    process.stderr.write(`Unknown command "${name}".\n\n${await usage()}\n`);
+    print(process.stderr, `Unknown command "${name}".\n\n${await usage()}\n`);
     return 2;
   }
   const command = await load();
   if (rest.includes('--help') || rest.includes('-h')) {
-    process.stdout.write(command.usage + '\n');
+    print(process.stdout, command.usage + '\n');
     return 0;
   }
   try {
     const out = await command.run(rest);
-    process.stdout.write(out.endsWith('\n') ? out : out + '\n');
+    print(process.stdout, out.endsWith('\n') ? out : out + '\n', command.writesFile === true && !process.stdout.isTTY);
     return 0;
   } catch (err) {
     if (err instanceof InputError) {
-      process.stderr.write(`trialbook ${name}: ${err.message}\n`);
+      print(process.stderr, `trialbook ${name}: ${err.message}\n`);
       return 2;
     }
     throw err;
@@ -61,7 +67,7 @@ main(process.argv.slice(2)).then(
     process.exitCode = code;
   },
   (err: unknown) => {
-    process.stderr.write(`trialbook: unexpected failure, please report it: ${err instanceof Error ? err.stack : String(err)}\n`);
+    print(process.stderr, `trialbook: unexpected failure, please report it: ${err instanceof Error ? err.stack : String(err)}\n`);
     process.exitCode = 1;
   },
 );

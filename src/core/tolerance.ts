@@ -95,3 +95,8 @@ export const RATIO_TOLERANCE = 1e-12;
 /** Main effects whose variance is within this fraction of the largest count as equally well
  * estimated (a balanced design's columns, up to rounding; common practice). */
 export const EQUAL_VARIANCE_TOLERANCE = 1e-9;
+/** The largest response magnitude the analysis carries: its sums of squares must stay finite in
+ * IEEE 754 binary64 (largest 1.797e308, so a square needs |y| < 1.34e154), with room for sums over
+ * a million runs (1e150^2 x 1e6 = 1e306). Files are refused above it at reading, naming the cell.
+ * Common practice (overflow headroom); raise it when the fit scales the response first. */
+export const MAX_RESPONSE_MAGNITUDE = 1e150;

@@ -244,3 +244,28 @@ describe('design command: the plan title reads the foldover from the plan, not f
     expect(plain.split('\n')[0]).toBe('Plan: 2^(7-4) fractional factorial, 8 runs');
   });
 });
+
+describe('design command: factor names and levels the other commands can use', () => {
+  it('"A=B=1:2" is refused, not made a categorical factor with a level "B=1"', () => {
+    expect(() => parseFactorOption('A=B=1:2')).toThrow(InputError);
+    expect(() => parseFactorOption('A=B=1:2')).toThrow(/--factor "A=B=1:2": expected one "=" between the name and the levels \(NAME=LOW:HIGH\), got 2/);
+  });
+  it('a comma or colon in a name or level is refused, saying which and why', () => {
+    expect(() => parseFactorOption('Temp, C=160:200')).toThrow(/--factor "Temp, C=160:200": The factor name "Temp, C" contains a comma \(","\), which the command line uses as a separator/);
+    expect(() => parseFactorOption('Powder=matte,fine:gloss')).toThrow(/The level "matte,fine" of Powder contains a comma/);
+    expect(() => parseFactorOption('A:B (s)=1:2')).toThrow(/The factor name "A:B" contains a colon/);
+  });
+  it('a low above the high is refused with both settings', async () => {
+    expect(() => parseFactorOption('Temperature (degC)=200:160')).toThrow(/Temperature: the low setting \(200\) is above the high setting \(160\)/);
+    await expect(design.run(['--factor', 'T=2:1', '--factor', 'B=1:2'])).rejects.toThrow(/low setting \(2\) is above the high setting \(1\)/);
+    // Negative settings read without --opt= quoting; -20 is below -10 (a valid pair).
+    expect(parseFactorOption('Offset (mm)=-20:-10')).toEqual({ kind: 'numeric', name: 'Offset', low: -20, high: -10, unit: 'mm' });
+  });
+});
+
+describe('design command: settings beyond what a calculation carries', () => {
+  it('refuses 1e400 and NaN as a setting instead of making them level names', () => {
+    expect(() => parseFactorOption('A=1:1e400')).toThrow(/--factor "A=1:1e400": needs finite settings or two level names, got "1e400"; 1e400 is beyond the largest number/);
+    expect(() => parseFactorOption('A=NaN:2')).toThrow(/got "NaN"; "NaN" is not a measurement/);
+  });
+});

@@ -55,3 +55,9 @@ describe('path command: the worked example of Montgomery 8th ed., section 11.2 (
     await expect(path.run([yieldFile, ...model, '--base', 'A', '--step=-5'])).rejects.toThrow(/positive number of min, got -5/);
   });
 });
+
+describe('path command: a negative value needs no --step=-5 quoting', () => {
+  it('reaches the command\'s own check of the step rather than the argument parser', async () => {
+    await expect(path.run([yieldFile, ...model, '--base', 'A', '--step', '-5'])).rejects.toThrow(/The base factor's step must be a positive number of min, got -5/);
+  });
+});

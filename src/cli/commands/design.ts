@@ -13,11 +13,13 @@ import { plannedSetting } from '../../core/design/planned-settings.ts';
 import { InputError } from '../../core/errors.ts';
 import { parseNumber } from '../../core/factor/coding.ts';
 import type { Factor, FactorSpec } from '../../core/factor/factor.ts';
+import { checkNewFactor } from '../../core/factor/new-factor.ts';
 import { parseTerms } from '../../core/model/formula.ts';
 import { termLetters, termName } from '../../core/model/term.ts';
 import { planPower, type PlanPower } from '../../core/plan/power.ts';
 import { powerInWords } from '../../core/plan/power-words.ts';
 import { factorLabel } from '../../core/study/name-with-unit.ts';
+import { isNonFiniteNumberText, whyNotANumber } from '../../io/csv/cell-number.ts';
 import { runSheetCsv } from '../../io/csv/run-sheet.ts';
 import { parseCommandArgs } from '../args.ts';
 import type { Command } from '../command.ts';
@@ -117,12 +119,26 @@ function wholeNumber(text: string | undefined, option: string): number | undefin
 
 /**
  * Reads one --factor: NAME [(UNIT)] = LOW : HIGH [: log]. Both levels numbers -> numeric,
- * otherwise categorical with two named levels.
+ * otherwise categorical with two named levels. Checked as a new factor (checkNewFactor: no
+ * comma, colon or equals sign in a name or level, the low below the high).
  * Example: parseFactorOption('Temperature (degC)=160:200') -> numeric, unit degC.
  */
 export function parseFactorOption(text: string): FactorSpec {
+  const spec = readFactorOption(text);
+  try {
+    checkNewFactor(spec);
+  } catch (err) {
+    throw err instanceof InputError ? new InputError(`--factor "${text}": ${err.message}`) : err;
+  }
+  return spec;
+}
+
+function readFactorOption(text: string): FactorSpec {
   const eq = text.indexOf('=');
   if (eq <= 0) throw new InputError(`--factor "${text}": expected NAME=LOW:HIGH, such as "Temperature (degC)=160:200" or "Powder=matte:gloss"`);
+  if (text.indexOf('=', eq + 1) >= 0) {
+    throw new InputError(`--factor "${text}": expected one "=" between the name and the levels (NAME=LOW:HIGH), got ${text.split('=').length - 1}; a name or level cannot contain "="`);
+  }
   let name = text.slice(0, eq).trim();
   let unit: string | undefined;
   const m = /^(.*?)\s*\(([^()]*)\)$/.exec(name);
@@ -140,6 +156,8 @@ export function parseFactorOption(text: string): FactorSpec {
   if (parts.length !== 2) {
     throw new InputError(`--factor "${text}": expected two levels separated by ":", such as 160:200 or matte:gloss, got ${parts.length} part${parts.length === 1 ? '' : 's'}`);
   }
+  const huge = parts.find(isNonFiniteNumberText);
+  if (huge !== undefined) throw new InputError(`--factor "${text}": needs finite settings or two level names, got "${huge}"${whyNotANumber(huge)}`);
   const [lo, hi] = parts.map(parseNumber);
   if (Number.isFinite(lo) && Number.isFinite(hi)) {
     return { kind: 'numeric', name, low: lo, high: hi, ...(unit ? { unit } : {}), ...(log ? { scale: 'log' as const } : {}) };

@@ -14,11 +14,16 @@ function transform(f: NumericFactor, u: number): number {
   return f.scale === 'log' ? Math.log(u) : u;
 }
 
-/** Center M and half-range D of a numeric factor on its coding scale. */
+/**
+ * Center M and half-range D of a numeric factor on its coding scale. Each end is halved before
+ * the sum or difference: halving is exact in binary64 (above the subnormal range), so M and D are
+ * the same numbers as (hi + lo) / 2 and (hi - lo) / 2, but stay finite for settings near the
+ * largest double (1e308 and -1e308 would overflow the sum and give a NaN setting).
+ */
 export function centerAndHalfRange(f: NumericFactor): { center: number; halfRange: number } {
   const lo = transform(f, f.low);
   const hi = transform(f, f.high);
-  return { center: (hi + lo) / 2, halfRange: (hi - lo) / 2 };
+  return { center: hi / 2 + lo / 2, halfRange: hi / 2 - lo / 2 };
 }
 
 /**

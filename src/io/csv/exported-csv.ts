@@ -11,7 +11,8 @@ import { InputError } from '../../core/errors.ts';
 import { parseNumber, toCoded } from '../../core/factor/coding.ts';
 import { defineFactors, type FactorSpec } from '../../core/factor/factor.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
-import { bareColumnName, columnUnit, readTable, rowNumber, type Table } from './read-table.ts';
+import { cellNumber, isNonFiniteNumberText, responseMagnitudeProblem, whyNotANumber } from './cell-number.ts';
+import { bareColumnName, columnUnit, readTable, rowNumber, uniqueColumn, type Table } from './read-table.ts';
 
 /** Relative agreement needed between a coded value and the one the recovered coding gives. */
 const CODING_TOLERANCE = 1e-6;
@@ -39,7 +40,9 @@ export function exportedCsvLayout(table: Table): ExportedCsvLayout | null {
   const responses = table.header.flatMap((h, c) => {
     const m = /^(.*) readings$/.exec(bare[c]);
     if (!m) return [];
-    const value = at(m[1]);
+    // The value column is the readings column's own name without " readings" (units included).
+    const own = table.header.indexOf(h.replace(/\s+readings$/i, ''));
+    const value = own >= 0 ? own : at(m[1]);
     return value >= 0 ? [{ name: h.replace(/\s*\([^)]*\)\s*/g, ' ').replace(/ readings$/, '').trim(), value }] : [];
   });
   const excluded = at('excluded');
@@ -62,9 +65,11 @@ function factorSpec(table: Table, f: ExportedCsvLayout['factors'][number], rows:
   const pairs = rows
     .filter((r) => cell(table, r, f.actual) !== '')
     .map((r) => {
-      const coded = parseNumber(cell(table, r, f.coded));
-      if (!Number.isFinite(coded)) throw new InputError(`${where(table, r, f.coded)}: needs the coded setting as a number, got "${table.rows[r][f.coded]}"`);
-      return { r, text: cell(table, r, f.actual), coded };
+      const coded = cellNumber(cell(table, r, f.coded));
+      if (!Number.isFinite(coded)) throw new InputError(`${where(table, r, f.coded)}: needs the coded setting as a number, got "${table.rows[r][f.coded]}"${whyNotANumber(table.rows[r][f.coded], table.delimiter)}`);
+      const text = cell(table, r, f.actual);
+      if (isNonFiniteNumberText(text)) throw new InputError(`${where(table, r, f.actual)}: ${f.name} needs a number, got "${text}"${whyNotANumber(text, table.delimiter)}`);
+      return { r, text, coded };
     });
   if (pairs.length === 0) throw new InputError(`Column "${table.header[f.actual]}": ${f.name} has no actual settings in the runs used`);
   const numeric = pairs.every((p) => Number.isFinite(parseNumber(p.text)));
@@ -108,12 +113,19 @@ export function exportedCsvResponseData(csvText: string, responseName: string, f
   if (!layout) {
     throw new InputError('This CSV is not a Trialbook export: it needs the columns Run, Kind and Excluded, and for each factor "<name> actual" and "<name> coded"');
   }
+  // The column named in full first ("Gloss (GU)"), else the one response whose bare name matches.
   const key = bareColumnName(responseName);
-  const response = layout.responses.find((r) => bareColumnName(r.name) === key);
+  const full = layout.responses.find((r) => table.header[r.value].toLowerCase() === responseName.trim().toLowerCase());
+  const responses = full ? [full] : layout.responses.filter((r) => bareColumnName(r.name) === key);
+  if (responses.length > 1) {
+    throw new InputError(`The response "${responseName}" matches ${responses.length} columns: ${responses.map((r) => `"${table.header[r.value]}" (column ${r.value + 1})`).join(' and ')}; name it in full, unit included`);
+  }
+  const response = responses[0];
   if (!response) throw new InputError(`The export has no response "${responseName}"; its responses are ${layout.responses.map((r) => `"${r.name}"`).join(', ') || 'none'}`);
   const chosen = factorNames
     ? factorNames.map((n) => {
-        const f = layout.factors.find((x) => bareColumnName(x.name) === bareColumnName(n));
+        const c = uniqueColumn(table, n, 'factor', (h, col) => layout.factors.some((x) => x.actual === col && bareColumnName(x.name) === bareColumnName(n)));
+        const f = layout.factors.find((x) => x.actual === c);
         if (!f) throw new InputError(`The export has no factor "${n}"; its factors are ${layout.factors.map((x) => `"${x.name}"`).join(', ')}`);
         return f;
       })
@@ -142,15 +154,17 @@ export function exportedCsvResponseData(csvText: string, responseName: string, f
     }),
   );
   const y = used.map((r) => {
-    const v = parseNumber(cell(table, r, response.value));
-    if (!Number.isFinite(v)) throw new InputError(`${where(table, r, response.value)}: ${response.name} needs a number, got "${table.rows[r][response.value]}"`);
+    const v = cellNumber(cell(table, r, response.value));
+    if (!Number.isFinite(v)) throw new InputError(`${where(table, r, response.value)}: ${response.name} needs a number, got "${table.rows[r][response.value]}"${whyNotANumber(table.rows[r][response.value], table.delimiter)}`);
+    const big = responseMagnitudeProblem(v);
+    if (big) throw new InputError(`${where(table, r, response.value)}: ${response.name} ${big}`);
     return v;
   });
   const blocks = layout.block >= 0 ? used.map((r) => parseNumber(cell(table, r, layout.block))) : null;
   if (blocks) blocks.forEach((b, i) => {
     if (!Number.isInteger(b) || b < 1) throw new InputError(`${where(table, used[i], layout.block)}: the block needs a whole number from 1, got "${table.rows[used[i]][layout.block]}"`);
   });
-  const notes: string[] = [];
+  const notes: string[] = [...(table.notes ?? [])];
   if (excluded > 0) notes.push(`${excluded} excluded run${excluded === 1 ? '' : 's'} skipped`);
   if (missing > 0) notes.push(`${missing} run${missing === 1 ? '' : 's'} without a value for ${response.name} skipped`);
   const unit = columnUnit(table.header[response.value]);

@@ -4,8 +4,10 @@
  * printed from either looks the same. CSV follows RFC 4180 (Shafranovich 2005): comma-separated,
  * CRLF line ends, fields with commas, quotes or line breaks quoted, written with papaparse's
  * unparse. Text cells that a spreadsheet would run as a formula (starting with =, +, -, @, tab or
- * carriage return) get a leading single quote, as the OWASP "CSV Injection" advice says; numbers
- * stay numbers.
+ * carriage return, also after spaces or zero-width characters; formula-guard.ts) get a leading
+ * single quote, as the OWASP "CSV Injection" advice says; numbers stay numbers. Numbers are
+ * written by JavaScript's Number to String, the shortest text that reads back to the same value
+ * (ECMA-262, Number::toString).
  */
 import Papa from 'papaparse';
 import type { Design, DesignRun } from '../../core/design/design.ts';
@@ -13,6 +15,7 @@ import { plannedSetting } from '../../core/design/planned-settings.ts';
 import { InputError } from '../../core/errors.ts';
 import type { Factor } from '../../core/factor/factor.ts';
 import { factorLabel } from '../../core/study/name-with-unit.ts';
+import { guardCell } from './formula-guard.ts';
 
 export type Cell = string | number;
 
@@ -57,10 +60,9 @@ export function runSheetTable(design: Pick<Design, 'factors' | 'runs'>): Table {
   };
 }
 
-const FORMULA_START = /^[=+\-@\t\r]/;
-
 /**
- * A cell made safe for a spreadsheet: text starting with =, +, -, @, tab or carriage return gets a
+ * A cell made safe for a spreadsheet: text that a spreadsheet could run as a formula (=, +, -, @,
+ * also after spaces or zero-width characters, or their full-width forms; formula-guard.ts) gets a
  * leading single quote; numbers and other text are returned as they are. Throws InputError for a
  * number that is not finite (a spreadsheet cannot hold it).
  * Example: neutraliseCell('=SUM(A1)') -> "'=SUM(A1)"; neutraliseCell(-1.5) -> -1.5.
@@ -70,7 +72,7 @@ export function neutraliseCell(cell: Cell): Cell {
     if (!Number.isFinite(cell)) throw new InputError(`A CSV cell needs a finite number, got ${cell}`);
     return cell;
   }
-  return FORMULA_START.test(cell) ? `'${cell}` : cell;
+  return guardCell(cell);
 }
 
 /**

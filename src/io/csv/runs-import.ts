@@ -16,6 +16,8 @@ import { parseReadings } from '../../core/study/run-form.ts';
 import { checkRunValues, type RunValues, type StudyPlan } from '../../core/study/study.ts';
 import { SETTING_TOLERANCE } from '../../core/tolerance.ts';
 import { MAX_TEXT, MAX_TIME } from '../../core/records/field-checks.ts';
+import { checkNewFactor } from '../../core/factor/new-factor.ts';
+import { cellNumber, isNonFiniteNumberText, responseMagnitudeProblem, whyNotANumber } from './cell-number.ts';
 import { bareColumnName, columnUnit, readTable, rowNumber, type Table } from './read-table.ts';
 
 export type ColumnRole = 'factor' | 'response' | 'block' | 'notes' | 'excluded' | 'reason' | 'operator' | 'time' | 'ignore';
@@ -76,6 +78,8 @@ export interface CsvInspection {
   readonly columns: readonly ColumnInfo[];
   /** A mapping from the guessed roles, to show and let the person change. */
   readonly suggestion: CsvMapping;
+  /** What reading did that the person should know (decimal commas read as points). */
+  readonly notes: readonly string[];
 }
 
 export interface CsvRunsImport {
@@ -94,7 +98,7 @@ const ROLE_WORDS: [RegExp, ColumnRole][] = [
 ];
 
 function isNumberCell(v: string): boolean {
-  return Number.isFinite(parseNumber(v));
+  return Number.isFinite(cellNumber(v));
 }
 
 /** Looks at a CSV of runs and guesses each column's role (last numeric columns are responses). */
@@ -145,7 +149,7 @@ export function inspectRunsCsv(text: string, title = 'Imported runs'): CsvInspec
     ...(pick('operator') ? { operator: pick('operator') } : {}),
     ...(pick('time') ? { time: pick('time') } : {}),
   };
-  return { rows: n, columns: guessed, suggestion };
+  return { rows: n, columns: guessed, suggestion, notes: table.notes ?? [] };
 }
 
 function columnIndex(table: Table, name: string, what: string): number {
@@ -192,6 +196,7 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
     const cells = table.rows.map((r, i) => {
       const v = r[c].trim();
       if (v === '') throw new InputError(`${cellAt(i, table, c)}: ${name} has no setting`);
+      if (isNonFiniteNumberText(v)) throw new InputError(`${cellAt(i, table, c)}: ${name} needs a number, got "${v}"${whyNotANumber(v, table.delimiter)}`);
       return v;
     });
     const numeric = f.levels === undefined && cells.every(isNumberCell);
@@ -212,13 +217,15 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
     if (labels.length !== 2) {
       const bad = cells.findIndex((v) => !isNumberCell(v));
       throw new InputError(
-        `${cellAt(bad, table, c)}: ${name} needs numbers in every row, or exactly two level labels, got ${labels.length} labels (${labels.slice(0, 5).join(', ')})`,
+        `${cellAt(bad, table, c)}: ${name} needs numbers in every row, or exactly two level labels, got ${labels.length} labels (${labels.slice(0, 5).join(', ')})${whyNotANumber(cells[bad], table.delimiter)}`,
       );
     }
     return { kind: 'categorical', name, levels: [labels[0], labels[1]] };
   });
   let factors: Factor[];
   try {
+    // A new study: its names and levels must be usable by every command (checkNewFactor).
+    specs.forEach(checkNewFactor);
     factors = defineFactors(specs);
   } catch (err) {
     throw err instanceof InputError ? new InputError(`Factor columns: ${err.message}`) : err;
@@ -251,11 +258,19 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
       }
     });
     const readings = responses.map((r, j) => {
+      // A reading that is a decimal comma, 1e400, NaN or Infinity gets the file's own advice.
+      const parts = row[rIdx[j]].split(/[\s;]+/).filter((t) => t !== '');
+      const k = parts.findIndex((t) => !isNumberCell(t) && whyNotANumber(t, table.delimiter) !== '');
+      if (k >= 0) throw new InputError(`${cellAt(i, table, rIdx[j])}: ${r.name}: reading ${k + 1} needs a number, got "${parts[k]}"${whyNotANumber(parts[k], table.delimiter)}`);
+      let values: number[];
       try {
-        return parseReadings(row[rIdx[j]], r.name);
+        values = parseReadings(row[rIdx[j]], r.name);
       } catch (err) {
         throw err instanceof InputError ? new InputError(`${cellAt(i, table, rIdx[j])}: ${err.message}`) : err;
       }
+      const big = values.findIndex((v) => responseMagnitudeProblem(v) !== '');
+      if (big >= 0) throw new InputError(`${cellAt(i, table, rIdx[j])}: ${r.name}: reading ${big + 1} ${responseMagnitudeProblem(values[big])}`);
+      return values;
     });
     let block = 1;
     if (bIdx >= 0) {
@@ -319,7 +334,7 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
       blockWords: [],
       seed: null,
       summary: `Imported from a CSV file of ${table.rows.length} runs; the planned settings are the settings in the file.`,
-      notes: ['The runs were made elsewhere: their order and settings are as the file gives them, not a plan made here.'],
+      notes: ['The runs were made elsewhere: their order and settings are as the file gives them, not a plan made here.', ...(table.notes ?? [])],
     },
   };
   return { plan, runs };

@@ -3,7 +3,7 @@
  * logged), in run order. Columns: the run sheet's (Run, Std order, Replicate, Block, Kind and each
  * factor's planned setting, from run-sheet.ts, so the two files agree), then each factor's actual
  * setting ("<name> (<unit>) actual"), each factor's coded actual setting ("<name> coded"), each
- * response's value, the mean of its readings ("<name> (<unit>)"), and its readings
+ * response's value, the mean of its readings ("<name> (<unit>)", without binary round-off), and its readings
  * ("<name> (<unit>) readings", separated by spaces), then Logged at, Operator, Notes, Excluded
  * (yes/no) and Reason. Written by run-sheet.ts's toCsv: RFC 4180, CRLF, text cells that a
  * spreadsheet would run as a formula neutralised as OWASP advises, numbers as numbers; UTF-8,
@@ -14,6 +14,7 @@
 import { toCoded } from '../../core/factor/coding.ts';
 import type { Factor } from '../../core/factor/factor.ts';
 import { factorLabel, nameWithUnit } from '../../core/study/name-with-unit.ts';
+import { withoutRoundOff } from '../../core/format/without-round-off.ts';
 import type { Response } from '../../core/study/response.ts';
 import { meanReading, type LoggedRun, type StudyRecord } from '../../core/study/study.ts';
 import { runSheetTable, toCsv, type Cell, type Table } from './run-sheet.ts';
@@ -70,7 +71,8 @@ export function studyTable(study: StudyRecord, runs: readonly LoggedRun[]): Tabl
         ...study.responses.flatMap((_, j): Cell[] => {
           const readings = run.readings[j] ?? [];
           const mean = meanReading(readings);
-          return [mean ?? '', readings.length === 1 ? readings[0] : readings.join(' ')];
+          // The mean without binary round-off (70.3, not 70.30000000000001); the readings exactly.
+          return [mean === null ? '' : withoutRoundOff(mean), readings.length === 1 ? readings[0] : readings.join(' ')];
         }),
         run.loggedAt ?? '',
         run.operator ?? '',

@@ -6,13 +6,16 @@
  * "<name> actual" column exists (a Trialbook export), the actual settings are used, and a
  * "<name> planned" column (a filled-in run sheet) is used when nothing else matches. Runs whose
  * response cell is empty are skipped, and so are runs marked excluded; the notes say how many.
- * Throws InputError naming row and column for a value that cannot be read.
+ * Throws InputError naming row and column for a value that cannot be read (a number beyond what
+ * a calculation carries, NaN or Infinity included), and listing both columns when a name matches
+ * two ("Temp (C)" and "Temp (F)").
  */
 import { InputError } from '../../core/errors.ts';
 import { parseNumber, toCoded } from '../../core/factor/coding.ts';
 import { defineFactors, type FactorSpec } from '../../core/factor/factor.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
-import { bareColumnName, columnUnit, rowNumber, type Table } from './read-table.ts';
+import { cellNumber, isNonFiniteNumberText, responseMagnitudeProblem, whyNotANumber } from './cell-number.ts';
+import { bareColumnName, columnUnit, rowNumber, uniqueColumn, type Table } from './read-table.ts';
 
 export interface TableColumns {
   /** Factor column names, in the order that gives their letters. */
@@ -29,14 +32,15 @@ const EXCLUDED_WORDS = new Set(['yes', 'true', '1', 'y', 'x', 'excluded']);
 function findColumn(table: Table, name: string, what: string): number {
   const key = bareColumnName(name);
   const bare = table.header.map(bareColumnName);
-  const actual = bare.indexOf(`${key} actual`);
+  const actual = uniqueColumn(table, name, `${what} column`, (_, c) => bare[c] === `${key} actual`);
   if (actual >= 0) return actual;
   const exact = table.header.findIndex((h) => h.toLowerCase() === name.trim().toLowerCase());
   if (exact >= 0) return exact;
-  const loose = bare.indexOf(key);
+  // Two columns with the same name and different units ("Temp (C)", "Temp (F)") are refused, not picked.
+  const loose = uniqueColumn(table, name, `${what} column`, (_, c) => bare[c] === key);
   if (loose >= 0) return loose;
   // A filled-in run sheet from the design command has only planned settings.
-  const planned = bare.indexOf(`${key} planned`);
+  const planned = uniqueColumn(table, name, `${what} column`, (_, c) => bare[c] === `${key} planned`);
   if (planned >= 0) return planned;
   throw new InputError(`The ${what} column "${name}" is not in the file (columns: ${table.header.join(', ')})`);
 }
@@ -48,7 +52,7 @@ export function tableResponseData(table: Table, cols: TableColumns): ResponseDat
   const bIdx = cols.block ? findColumn(table, cols.block, 'block') : -1;
   const exIdx = table.header.findIndex((h) => bareColumnName(h) === 'excluded');
   const runIdx = table.header.findIndex((h) => bareColumnName(h) === 'run');
-  const notes: string[] = [];
+  const notes: string[] = [...(table.notes ?? [])];
 
   // Rows used: a response value present and not excluded.
   const used: number[] = [];
@@ -70,11 +74,15 @@ export function tableResponseData(table: Table, cols: TableColumns): ResponseDat
     const cells = used.map((r) => table.rows[r][c].trim());
     cells.forEach((v, i) => {
       if (v === '') throw new InputError(`Row ${rowNumber(table, used[i])}, column "${header}": ${factorName} has no setting`);
+      if (isNonFiniteNumberText(v)) throw new InputError(`Row ${rowNumber(table, used[i])}, column "${header}": ${factorName} needs a number, got "${v}"${whyNotANumber(v, table.delimiter)}`);
     });
-    const numeric = cells.every((v) => Number.isFinite(parseNumber(v)));
+    const numeric = cells.every((v) => Number.isFinite(cellNumber(v)));
     const unit = columnUnit(header);
     if (given) {
       const [lo, hi] = given;
+      for (const v of given) {
+        if (isNonFiniteNumberText(v)) throw new InputError(`The levels given for ${factorName} need finite numbers or labels, got "${v}"${whyNotANumber(v)}`);
+      }
       const nlo = parseNumber(lo);
       const nhi = parseNumber(hi);
       if (Number.isFinite(nlo) && Number.isFinite(nhi)) {
@@ -90,7 +98,7 @@ export function tableResponseData(table: Table, cols: TableColumns): ResponseDat
     for (const v of cells) if (!labels.some((l) => l.toLowerCase() === v.toLowerCase())) labels.push(v);
     if (labels.length !== 2) {
       throw new InputError(
-        `${factorName} needs numbers or exactly two level labels, got ${labels.length} label${labels.length === 1 ? '' : 's'} (${labels.slice(0, 5).join(', ')})`,
+        `${factorName} needs numbers or exactly two level labels, got ${labels.length} label${labels.length === 1 ? '' : 's'} (${labels.slice(0, 5).join(', ')})${labels.map((l) => whyNotANumber(l, table.delimiter)).find((w) => w !== '') ?? ''}`,
       );
     }
     return { kind: 'categorical', name: factorName, levels: [labels[0], labels[1]] };
@@ -114,13 +122,16 @@ export function tableResponseData(table: Table, cols: TableColumns): ResponseDat
         }
       }),
     );
-    const v = parseNumber(row[yIdx]);
-    if (!Number.isFinite(v)) throw new InputError(`Row ${rowNumber(table, r)}, column "${table.header[yIdx]}": ${cols.response} needs a number, got "${row[yIdx]}"`);
+    const v = cellNumber(row[yIdx]);
+    if (!Number.isFinite(v)) throw new InputError(`Row ${rowNumber(table, r)}, column "${table.header[yIdx]}": ${cols.response} needs a number, got "${row[yIdx]}"${whyNotANumber(row[yIdx], table.delimiter)}`);
+    const big = responseMagnitudeProblem(v);
+    if (big) throw new InputError(`Row ${rowNumber(table, r)}, column "${table.header[yIdx]}": ${cols.response} ${big}`);
     y.push(v);
     if (bIdx >= 0) {
       const b = row[bIdx].trim();
       if (b === '') throw new InputError(`Row ${rowNumber(table, r)}, column "${table.header[bIdx]}": the block is empty`);
-      if (!blockIds.has(b)) blockIds.set(b, Number.isFinite(parseNumber(b)) ? parseNumber(b) : blockIds.size + 1);
+      if (isNonFiniteNumberText(b)) throw new InputError(`Row ${rowNumber(table, r)}, column "${table.header[bIdx]}": the block needs a number or a name, got "${b}"${whyNotANumber(b, table.delimiter)}`);
+      if (!blockIds.has(b)) blockIds.set(b, Number.isFinite(cellNumber(b)) ? cellNumber(b) : blockIds.size + 1);
       blocks.push(blockIds.get(b)!);
     }
     labels.push(runIdx >= 0 && row[runIdx].trim() !== '' ? row[runIdx].trim() : String(r + 1));

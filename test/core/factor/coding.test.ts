@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { parseNumber, toCoded, toReal } from '../../../src/core/factor/coding.ts';
-import { defineFactors } from '../../../src/core/factor/factor.ts';
+import { centerAndHalfRange, parseNumber, toCoded, toReal } from '../../../src/core/factor/coding.ts';
+import { defineFactors, type NumericFactor } from '../../../src/core/factor/factor.ts';
 import { factorLetters } from '../../../src/core/factor/letters.ts';
 
 const [temp, powder, speed] = defineFactors([
@@ -78,5 +78,26 @@ describe('factors', () => {
     expect(() => defineFactors([{ kind: 'categorical', name: 'Powder', levels: ['a', 'A'] }])).toThrow(/two different levels/);
     expect(() => defineFactors([{ kind: 'numeric', name: ' ', low: 1, high: 2 }])).toThrow(/needs a name/);
     expect(() => defineFactors([])).toThrow(/at least one factor/);
+  });
+});
+
+describe('coding near the largest double', () => {
+  it('codes settings of -1e308 and 1e308 without overflow (the sum would be Infinity; IEEE 754 binary64 max 1.797e308)', () => {
+    const [wide] = defineFactors([{ kind: 'numeric', name: 'W', low: -1e308, high: 1e308 }]);
+    expect(toCoded(wide, 1e308)).toBe(1);
+    expect(toCoded(wide, 0)).toBe(0);
+    expect(toCoded(wide, -5e307)).toBe(-0.5);
+    expect(toReal(wide, 0.5)).toBe(5e307);
+    const [near] = defineFactors([{ kind: 'numeric', name: 'N', low: 1.6e308, high: 1.7e308 }]);
+    expect(toCoded(near, 1.65e308)).toBeCloseTo(0, 12);
+  });
+  it('property: the halved form gives the same center and half range as (hi+lo)/2 and (hi-lo)/2 for ordinary settings', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -1e300, max: 1e300, noNaN: true }), fc.double({ min: -1e300, max: 1e300, noNaN: true }), (a, b) => {
+        fc.pre(a < b && Math.abs(a) > 1e-290 && Math.abs(b) > 1e-290);
+        const [f] = defineFactors([{ kind: 'numeric', name: 'F', low: a, high: b }]);
+        expect(centerAndHalfRange(f as NumericFactor)).toEqual({ center: (a + b) / 2, halfRange: (b - a) / 2 });
+      }),
+    );
   });
 });

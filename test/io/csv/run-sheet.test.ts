@@ -70,3 +70,21 @@ describe('toCsv and runSheetCsv', () => {
     expect(toCsv({ header: ['a'], rows: [] })).toBe('a\r\n');
   });
 });
+
+describe('toCsv numbers', () => {
+  it('property: every finite number is written in the shortest form that reads back to the same value (ECMA-262 Number::toString)', async () => {
+    const fc = (await import('fast-check')).default;
+    const { readTable } = await import('../../../src/io/csv/read-table.ts');
+    fc.assert(
+      fc.property(fc.array(fc.double({ noNaN: true, noDefaultInfinity: true }), { minLength: 1, maxLength: 8 }), (xs) => {
+        const text = toCsv({ header: xs.map((_, i) => `x${i}`), rows: [xs] });
+        const cells = readTable(text).rows[0];
+        cells.forEach((c, i) => {
+          expect(Number(c) === xs[i]).toBe(true);
+          expect(c).toBe(String(xs[i]));
+        });
+      }),
+    );
+    expect(toCsv({ header: ['a', 'b', 'c'], rows: [[0.1 + 0.2, 1e21, 5e-324]] })).toBe('a,b,c\r\n0.30000000000000004,1e+21,5e-324\r\n');
+  });
+});

@@ -88,3 +88,31 @@ describe('CSV of runs made elsewhere', () => {
     expect(await store.db.revisions.count()).toBe(0);
   });
 });
+
+describe('CSV of runs made elsewhere: names and numbers the other commands can use', () => {
+  it('refuses a factor name or level with a separator at creation (checkNewFactor), naming the character', () => {
+    const named = 'Temp, C;Gloss\n160;80\n200;91\n';
+    const m = inspectRunsCsv(named).suggestion;
+    expect(() => mapRunsCsv(named, { ...m, title: 't', factors: [{ column: 'Temp, C' }], responses: [{ column: 'Gloss', goal: 'maximize' }] })).toThrow(
+      /Factor columns: The factor name "Temp, C" contains a comma/,
+    );
+    expect(mapRunsCsv(named, { ...m, title: 't', factors: [{ column: 'Temp, C', name: 'Temp' }], responses: [{ column: 'Gloss', goal: 'maximize' }] }).plan.factors[0].name).toBe('Temp');
+    const levels = 'Mould,Gloss\nsteel:hard,80\nalu,91\n';
+    expect(() => mapRunsCsv(levels, { title: 't', factors: [{ column: 'Mould' }], responses: [{ column: 'Gloss', goal: 'maximize' }] })).toThrow(/The level "steel:hard" of Mould contains a colon/);
+  });
+  it('reads a European export (semicolons, decimal commas) and records that it did', () => {
+    const eu = CSV.replaceAll(',', ';').replace(/(\d)\.(\d)/g, '$1,$2').replace('"flash on edge; trimmed"', '"flash on edge, trimmed"');
+    const ins = inspectRunsCsv(eu);
+    expect(ins.notes).toEqual(['Read as a file separated by semicolons with decimal commas in the column "Shrinkage (%)"']);
+    const mapped = mapRunsCsv(eu, { ...ins.suggestion, title: 'x', responses: [{ column: 'Shrinkage (%)', goal: 'minimize' }] });
+    const ref = mapRunsCsv(CSV, { ...inspectRunsCsv(CSV).suggestion, title: 'x', responses: [{ column: 'Shrinkage (%)', goal: 'minimize' }] });
+    expect(mapped.runs).toEqual(ref.runs);
+    expect(mapped.plan.design.notes).toContain('Read as a file separated by semicolons with decimal commas in the column "Shrinkage (%)"');
+  });
+  it('refuses 1e400 and NaN readings with row and column', () => {
+    const mapping = { ...inspectRunsCsv(CSV).suggestion, title: 'x', responses: [{ column: 'Shrinkage (%)', goal: 'minimize' as const }] };
+    expect(() => mapRunsCsv(CSV.replace('1.50', '1e400'), mapping)).toThrow(/Row 5, column 5 \("Shrinkage \(%\)"\): Shrinkage: reading 1 needs a number, got "1e400"; 1e400 is beyond the largest number/);
+    expect(() => mapRunsCsv(CSV.replace('1.50', 'NaN'), mapping)).toThrow(/Row 5, column 5 \("Shrinkage \(%\)"\): Shrinkage: reading 1 needs a number, got "NaN"; "NaN" is not a measurement/);
+    expect(() => mapRunsCsv(CSV.replace('2,250,steel', '2,1e400,steel'), mapping)).toThrow(/Row 3, column 2 \("Melt temperature \(°C\)"\): Melt temperature needs a number, got "1e400"/);
+  });
+});

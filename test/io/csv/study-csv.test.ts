@@ -72,11 +72,28 @@ describe('study CSV export', () => {
   it('neutralises text a spreadsheet would run as a formula, and leaves numbers alone', async () => {
     const notes = ['=HYPERLINK("http://example.invalid","x")', '+1+2', '-2+3', '@SUM(A1:A2)', '\tTAB', '\rCR'];
     const { study, runs } = await studyWithNotes(notes, '=cmd|calc');
-    const t = readTable(studyCsv(study, runs));
-    const col = t.header.indexOf('Notes');
-    expect(t.rows.slice(0, 6).map((r) => r[col])).toEqual(notes.map((n) => `'${n}`));
-    expect(t.rows[0][t.header.indexOf('Operator')]).toBe("'=cmd|calc");
-    expect(t.rows[0][t.header.indexOf('Oven temperature coded')]).toBe('-1'); // a number, not quoted
+    const csv = studyCsv(study, runs);
+    // As a spreadsheet sees the file (papaparse reads cells as they are): guarded.
+    const raw = Papa.parse<string[]>(csv.trim(), { newline: '\r\n' }).data;
+    const col = raw[0].indexOf('Notes');
+    expect(raw.slice(1, 7).map((r) => r[col])).toEqual(notes.map((n) => `'${n}`));
+    expect(raw[1][raw[0].indexOf('Operator')]).toBe("'=cmd|calc");
+    expect(raw[1][raw[0].indexOf('Oven temperature coded')]).toBe('-1'); // a number, not quoted
+    // Read back by Trialbook: the guard removed again, every note as it was.
+    const t = readTable(csv);
+    expect(t.rows.slice(0, 6).map((r) => r[t.header.indexOf('Notes')])).toEqual(notes);
+    expect(t.rows[0][t.header.indexOf('Operator')]).toBe('=cmd|calc');
+  });
+
+  it('writes a mean without binary round-off and the readings exactly (IEEE 754: (70.2 + 70.4) / 2 is 70.30000000000001)', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, brandPlan());
+    const state = await openNewRun(store, study.id, 1);
+    await saveRun(store, { ...state, studyId: study.id, values: parseRunForm(study, { ...state.form, readings: ['70.2 70.4'] }) });
+    const rows = Papa.parse<string[]>(studyCsv(study, await listRuns(store, study.id)).trimEnd(), { header: false }).data;
+    const h = rows[0];
+    expect(rows[1][h.indexOf('Gloss (GU)')]).toBe('70.3');
+    expect(rows[1][h.indexOf('Gloss (GU) readings')]).toBe('70.2 70.4');
   });
 
   it('starts with a byte-order mark only when asked', async () => {
@@ -153,5 +170,17 @@ describe('backups on the command line', () => {
     const twin = { ...s, id: 'second-study-id' };
     expect(() => selectStudy({ payload: { studies: [s, twin], revisions: [] } }, s.title)).toThrow(new RegExp(`matches 2 studies; give one of their ids instead: ${s.id} .*second-study-id`));
     expect(selectStudy({ payload: { studies: [s, twin], revisions: [] } }, 'second-study-id')).toBe(twin);
+  });
+});
+
+describe('reading an export back: a hand-edited file', () => {
+  it('refuses a response name that matches two columns, listing both', () => {
+    const csv = [
+      'Run,Kind,Excluded,A actual,A coded,Gloss (GU),Gloss (GU) readings,Gloss (%),Gloss (%) readings',
+      '1,factorial,no,1,-1,80,80,50,50',
+      '2,factorial,no,2,1,90,90,60,60',
+    ].join('\r\n');
+    expect(() => exportedCsvResponseData(csv, 'Gloss')).toThrow('The response "Gloss" matches 2 columns: "Gloss (GU)" (column 6) and "Gloss (%)" (column 8); name it in full, unit included');
+    expect(exportedCsvResponseData(csv, 'Gloss (%)').y).toEqual([50, 60]);
   });
 });

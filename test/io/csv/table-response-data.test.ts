@@ -29,3 +29,42 @@ describe('tableResponseData', () => {
     expect(() => tableResponseData(t, { factors: ['B'], response: 'y' })).toThrow(/"B" is not in the file/);
   });
 });
+
+describe('tableResponseData: hand-edited and foreign files', () => {
+  it('refuses a factor name that matches two columns, listing both, and takes the column named in full', () => {
+    const t = readTable('Temp (C),Temp (F),y\n160,320,5\n200,392,7\n');
+    expect(() => tableResponseData(t, { factors: ['Temp'], response: 'y' })).toThrow(
+      'The factor column "Temp" matches 2 columns: "Temp (C)" (column 1) and "Temp (F)" (column 2); name the column in full, unit included',
+    );
+    expect(tableResponseData(t, { factors: ['Temp (F)'], response: 'y' }).factors[0]).toMatchObject({ low: 320, high: 392, unit: 'F' });
+  });
+  it('refuses NaN, Infinity and 1e400 at reading, naming row and column and what to do', () => {
+    const bad = (cell: string, where: 'A' | 'y') =>
+      readTable(where === 'A' ? `A,y\n1,5\n${cell},6\n1,7\n` : `A,y\n1,5\n2,${cell}\n1,7\n`);
+    expect(() => tableResponseData(bad('1e400', 'A'), { factors: ['A'], response: 'y' })).toThrow(
+      'Row 3, column "A": A needs a number, got "1e400"; 1e400 is beyond the largest number a calculation can carry (about 1.8e308): give it in a larger unit',
+    );
+    expect(() => tableResponseData(bad('Infinity', 'A'), { factors: ['A'], response: 'y' })).toThrow(/Row 3, column "A": A needs a number, got "Infinity"; "Infinity" is not a measurement/);
+    expect(() => tableResponseData(bad('NaN', 'y'), { factors: ['A'], response: 'y' })).toThrow(/Row 3, column "y": y needs a number, got "NaN"; "NaN" is not a measurement \(in a file, leave the cell empty/);
+    expect(() => tableResponseData(bad('-1e999', 'y'), { factors: ['A'], response: 'y' })).toThrow(/Row 3, column "y": y needs a number, got "-1e999"; -1e999 is beyond/);
+  });
+  it('suggests the separator for decimal commas in a comma file, and notes them in a semicolon file', () => {
+    const comma = readTable('A,y\n1,"5,5"\n2,6\n');
+    expect(() => tableResponseData(comma, { factors: ['A'], response: 'y' })).toThrow(/got "5,5"; a decimal comma is read only in a file separated by semicolons or tabs/);
+    const semi = readTable('A;y\n1,5;5,5\n2,5;6\n');
+    const d = tableResponseData(semi, { factors: ['A'], response: 'y' });
+    expect(d.y).toEqual([5.5, 6]);
+    expect(d.factors[0]).toMatchObject({ low: 1.5, high: 2.5 });
+    expect(d.notes).toEqual(['Read as a file separated by semicolons with decimal commas in the columns "A", "y"']);
+  });
+});
+
+describe('tableResponseData: numbers the analysis cannot carry', () => {
+  it('refuses a response above MAX_RESPONSE_MAGNITUDE at reading, with row and column (its square would overflow binary64)', () => {
+    const t = readTable('A,y\n1,5\n2,1e300\n');
+    expect(() => tableResponseData(t, { factors: ['A'], response: 'y' })).toThrow(
+      'Row 3, column "y": y is 1e+300, beyond what the analysis can carry (magnitudes up to 1e+150, so that sums of squares stay finite): give the response in a larger unit',
+    );
+    expect(tableResponseData(readTable('A,y\n1,5\n2,-1e150\n'), { factors: ['A'], response: 'y' }).y).toEqual([5, -1e150]);
+  });
+});

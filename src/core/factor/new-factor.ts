@@ -1,0 +1,78 @@
+/**
+ * The rules a factor must meet when it is declared (planning on the phone, `design --factor`, a
+ * study made from a CSV of runs), on top of defineFactors' checks. They apply at creation only:
+ * a study already stored or in a backup is read as it is, so that no record becomes unreadable.
+ *
+ * - Its name and its level labels contain no comma, colon or equals sign: the command line
+ *   separates factors with commas (--factors A,B), levels and interaction names with colons
+ *   (160:200, A:B in --terms and --generators) and a name from its value with an equals sign
+ *   (--at "Temperature=180", --levels, --generators "E=ABCD"), so a name holding one of them could
+ *   not be named by the other commands.
+ * - Nor any control character (Unicode category Cc, or a bidirectional formatting character):
+ *   it cannot be typed on a form and it would change how a terminal shows a report.
+ * - A numeric factor's low setting is below its high one: the low is coded -1, and a reversed
+ *   pair would turn every effect's sign silently.
+ * Source: common practice (the separators are this tool's own option syntax).
+ */
+import { InputError } from '../errors.ts';
+import type { FactorSpec } from './factor.ts';
+
+/** The characters the command line uses as separators, with what each separates. */
+export const RESERVED_NAME_CHARACTERS: readonly { readonly char: string; readonly word: string; readonly use: string }[] = [
+  { char: ',', word: 'a comma', use: 'separates factors and settings (--factors A,B)' },
+  { char: ':', word: 'a colon', use: 'separates levels and joins names in an interaction (160:200, A:B)' },
+  { char: '=', word: 'an equals sign', use: 'joins a name to its value (--at "Temperature=180", --generators "E=ABCD")' },
+];
+
+const CONTROL = /[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u202a-\u202e\u2066-\u2069]/;
+
+/**
+ * What is wrong with a factor name or level label as a new name, or null when nothing is.
+ * `what` names it in the message, such as 'The factor name "A,B"'.
+ * Example: namingProblem('Temp, C', 'The factor name "Temp, C"') ->
+ *   'The factor name "Temp, C" contains a comma, which the command line ...'.
+ */
+export function namingProblem(text: string, what: string): string | null {
+  const found = RESERVED_NAME_CHARACTERS.filter((r) => text.includes(r.char));
+  if (found.length > 0) {
+    const words = found.map((r) => `${r.word} ("${r.char}")`).join(' and ');
+    const uses = found.map((r) => `${r.word} ${r.use}`).join('; ');
+    return `${what} contains ${words}, which the command line uses as a separator (${uses}); names and levels cannot contain a comma, a colon or an equals sign, so choose another, such as "${suggestion(text)}"`;
+  }
+  const c = CONTROL.exec(text);
+  if (c) {
+    return `${what} contains the control character U+${c[0].charCodeAt(0).toString(16).toUpperCase().padStart(4, '0')}, which cannot be typed or shown; remove it`;
+  }
+  return null;
+}
+
+function suggestion(text: string): string {
+  return text.replace(/\s*[,:=]\s*/g, ' ').replace(/\s+/g, ' ').trim() || 'Factor';
+}
+
+/**
+ * Checks a factor as it is declared: its name and level labels (namingProblem) and, for a
+ * numeric factor, a low setting below the high one. Throws InputError naming the factor and
+ * what came; returns nothing. Cost: linear in the name lengths.
+ * Example: checkNewFactor({kind:'numeric', name:'Temperature', low:200, high:160}) throws
+ *   'Temperature: the low setting (200) is above the high setting (160); the low is coded -1 ...'.
+ */
+export function checkNewFactor(spec: FactorSpec): void {
+  const name = spec.name.trim();
+  const problem = namingProblem(name, `The factor name "${name}"`);
+  if (problem) throw new InputError(problem);
+  if (spec.kind === 'categorical') {
+    for (const level of spec.levels) {
+      const p = namingProblem(level.trim(), `The level "${level.trim()}" of ${name}`);
+      if (p) throw new InputError(p);
+    }
+    return;
+  }
+  const unit = CONTROL.exec(spec.unit ?? '');
+  if (unit) throw new InputError(`The unit of ${name} contains the control character U+${unit[0].charCodeAt(0).toString(16).toUpperCase().padStart(4, '0')}, which cannot be typed or shown; remove it`);
+  if (spec.low > spec.high) {
+    throw new InputError(
+      `${name}: the low setting (${spec.low}) is above the high setting (${spec.high}); the low is coded -1 and must be the smaller, so give ${spec.high} as the low and ${spec.low} as the high`,
+    );
+  }
+}
