@@ -55,6 +55,13 @@ describe('app icons', () => {
     }
   });
 
+  it('the maskable and iPhone icons are opaque in every pixel (the iPhone shows transparency as black; from memory)', () => {
+    for (const icon of icons.filter((i) => i.bleed)) {
+      const d = decode(read(icon.file));
+      for (let y = 0; y < icon.size; y++) for (let x = 0; x < icon.size; x++) if (d.px(x, y)[3] !== 255) expect.fail(`${icon.file} (${x}, ${y}) is not opaque`);
+    }
+  });
+
   it('a size of zero draws no pixels', () => {
     expect(drawIcon(0, true).length).toBe(0);
   });
