@@ -30,7 +30,8 @@ export const modelOptionUsage = `  FILE                 a CSV with a header row 
   --levels A=low:high,B=labelLow:labelHigh
                        the coding; without it a numeric factor runs from the column's min to max
                        and a categorical factor's first label in the file is -1
-  --terms "A*B*C"      model terms in Wilkinson-Rogers notation (A + B + A:B, A*B*C, (A+B+C)^2)
+  --terms "A*B*C"      model terms in Wilkinson-Rogers notation (A + B + A:B, A*B*C, (A+B+C)^2;
+                       A^2 is the square of a numeric factor, quadratic the full second-order model)
   --order N            or: all terms up to order N (default: main effects and two-factor interactions)
   --block COLUMN       a column holding each run's block, fitted as a fixed effect
   --study ID-OR-NAME   with a Trialbook backup (.json): the study to analyse; its own factors,

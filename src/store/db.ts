@@ -4,7 +4,7 @@
  * fixture database of every earlier version lives in test/fixtures/ and a test opens it with the
  * current code and checks that nothing is lost. This is the only file that declares the schema.
  *
- * Tables (version 1):
+ * Tables (version 1; version 2 keeps them and changes the shape of the study records):
  *   studies    id -> StudyRecord (title, purpose, factors, responses, design with planned runs and seed)
  *   revisions  id -> RunRevision: the append-only history of every logged run (indexed by run and study)
  *   runs       id -> LoggedRun: the current state of each logged run, decided from its revisions
@@ -14,6 +14,7 @@
 import { Dexie, type DexieOptions, type Table, type Transaction } from 'dexie';
 import type { LoggedRun, RunRevision, StudyRecord } from '../core/study/study.ts';
 import type { RunForm } from '../core/study/run-form.ts';
+import { upgradeStudyRecord } from '../core/records/upgrade-study-record.ts';
 
 /** A run form's unsaved typing, kept on every change until the run is saved. */
 export interface Draft {
@@ -53,6 +54,20 @@ export const SCHEMA: readonly SchemaVersion[] = [
       runs: 'id, studyId',
       drafts: 'runId, studyId',
       meta: 'key',
+    },
+  },
+  {
+    // Study records gain each planned run's block of origin (its block) and each response's
+    // lower bound (null); run kinds become an open list, so stored kinds stay as they are.
+    version: 2,
+    stores: {},
+    upgrade: async (tx) => {
+      await tx
+        .table('studies')
+        .toCollection()
+        .modify((study, ref) => {
+          ref.value = upgradeStudyRecord(study);
+        });
     },
   },
 ];

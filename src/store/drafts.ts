@@ -6,11 +6,13 @@
 import type { RunForm } from '../core/study/run-form.ts';
 import type { Draft } from './db.ts';
 import { guarded } from './errors.ts';
-import type { RunFormState } from './runs.ts';
 import type { Store } from './store.ts';
 
+/** Which form a draft belongs to: the ids its form fixed when it opened (a run form's state has them all). */
+export type DraftOwner = Pick<Draft, 'runId' | 'studyId' | 'plannedRun' | 'revisionId' | 'parents'>;
+
 /** Keeps the typing of a run's form as its draft (called on every change). */
-export async function saveDraft(store: Store, state: Pick<RunFormState, 'runId' | 'plannedRun' | 'revisionId' | 'parents'> & { studyId: string }, form: RunForm): Promise<Draft> {
+export async function saveDraft(store: Store, state: DraftOwner, form: RunForm): Promise<Draft> {
   const draft: Draft = {
     runId: state.runId,
     studyId: state.studyId,

@@ -5,13 +5,13 @@
  * by id, so the same file twice changes nothing and two phones' files merge into their union.
  */
 import { InputError } from '../core/errors.ts';
-import { currentRun, type RunRevision, type StudyRecord } from '../core/study/study.ts';
+import type { RunRevision, StudyRecord } from '../core/study/study.ts';
 import { readBackup, writeBackup, type Backup, type BackupPayload } from '../io/backup/backup.ts';
 import { planMerge, type MergeConflict } from '../io/backup/merge.ts';
-import type { Digest } from '../io/sha256.ts';
+import type { Digest } from '../io/digest.ts';
 import type { CsvRunsImport } from '../io/csv/runs-import.ts';
 import { studyCsv, type StudyCsvOptions } from '../io/csv/study-csv.ts';
-import { checkRevision } from '../io/backup/validate.ts';
+import { appendRevisions, type MadeRevision } from './append-revisions.ts';
 import { guarded } from './errors.ts';
 import { newId } from './ids.ts';
 import { markExported } from './status.ts';
@@ -88,10 +88,8 @@ export async function mergeBackup(store: Store, backup: Pick<Backup, 'payload'>)
         },
         incoming,
       );
-      // No catching inside the transaction: any failure aborts all of it.
-      if (plan.newStudies.length > 0) await db.studies.bulkAdd([...plan.newStudies]);
-      if (plan.newRevisions.length > 0) await db.revisions.bulkAdd([...plan.newRevisions]);
-      if (plan.runs.length > 0) await db.runs.bulkPut([...plan.runs]);
+      // The one write path (its record checks, in this transaction); any failure aborts all of it.
+      await appendRevisions(store, { studies: plan.newStudies, imported: plan.newRevisions });
       const runsAdded = plan.runs.filter((r) => !byRun.has(r.id)).length;
       const report = {
         studiesAdded: plan.newStudies.length,
@@ -115,37 +113,18 @@ export async function importBackup(store: Store, text: string, digest?: Digest):
 /** Makes a new study from a mapped CSV of runs made elsewhere, with one logged run per row, in one transaction. */
 export async function importRunsCsv(store: Store, mapped: CsvRunsImport): Promise<{ study: StudyRecord; runs: number }> {
   const study = newStudyRecord(store, mapped.plan);
-  const savedAt = store.now().toISOString();
-  const studies = new Map([[study.id, study]]);
-  // The same checks as reading a backup, so that the new study can be exported and read back.
-  const revisions: RunRevision[] = mapped.runs.map((r, i) =>
-    checkRevision(
-      JSON.parse(
-        JSON.stringify({
-          id: newId(),
-          runId: newId(),
-          studyId: study.id,
-          plannedRun: r.plannedRun,
-          rev: 1,
-          device: store.device,
-          parents: [],
-          restoredFrom: null,
-          savedAt,
-          ...r.values,
-        }),
-      ),
-      `runs[${i}]`,
-      studies,
-    ),
-  );
-  const { db } = store;
-  await guarded(() =>
-    db.transaction('rw', [db.studies, db.revisions, db.runs], async () => {
-      await db.studies.add(study);
-      await db.revisions.bulkAdd(revisions);
-      await db.runs.bulkPut(revisions.map((r) => currentRun([r])));
-    }),
-  );
+  const made: MadeRevision[] = mapped.runs.map((r) => ({
+    id: newId(),
+    runId: newId(),
+    studyId: study.id,
+    plannedRun: r.plannedRun,
+    rev: 1,
+    parents: [],
+    restoredFrom: null,
+    ...r.values,
+  }));
+  // The one write path: the record checks, this device, the store's clock, in one transaction.
+  const { revisions } = await guarded(() => appendRevisions(store, { studies: [study], made, pathOf: (i) => `runs[${i}]` }));
   return { study, runs: revisions.length };
 }
 

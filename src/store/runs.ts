@@ -18,9 +18,9 @@ import {
   type RunValues,
   type StudyRecord,
 } from '../core/study/study.ts';
-import { canonicalJson } from '../io/backup/canonical.ts';
-import { checkRevision } from '../io/backup/validate.ts';
-import { sha256, utf8Encode } from '../io/sha256.ts';
+import { canonicalJson } from '../core/records/canonical-json.ts';
+import { sha256, utf8Encode } from '../core/records/sha256.ts';
+import { appendRevisions } from './append-revisions.ts';
 import { listDrafts } from './drafts.ts';
 import { guarded } from './errors.ts';
 import { newId, uuidFromBytes } from './ids.ts';
@@ -160,28 +160,12 @@ async function appendRevision(store: Store, input: SaveInput, restoredFrom: stri
   const before = history.length > 0 ? currentRun(history) : null;
   const changedSince = before && !sameSet(before.heads, input.parents) ? before.revisionId : null;
   const rev = history.reduce((m, r) => Math.max(m, r.rev), 0) + 1;
-  // The same checks as reading a backup, so that every stored revision can be exported and read back.
-  const revision: RunRevision = checkRevision(
-    JSON.parse(
-      JSON.stringify({
-        id: revisionId,
-        runId: input.runId,
-        studyId: input.studyId,
-        plannedRun: input.plannedRun,
-        rev,
-        device: store.device,
-        parents: [...input.parents],
-        restoredFrom,
-        savedAt: store.now().toISOString(),
-        ...values,
-      }),
-    ),
-    `Run ${input.plannedRun}`,
-    new Map([[study.id, study]]),
-  );
-  const run = currentRun([...history, revision]);
-  await db.revisions.add(revision);
-  await db.runs.put(run);
+  // The one write path: the record checks, this device, the store's clock, the run's new state.
+  const appended = await appendRevisions(store, {
+    made: [{ id: revisionId, runId: input.runId, studyId: input.studyId, plannedRun: input.plannedRun, rev, parents: [...input.parents], restoredFrom, ...values }],
+  });
+  const revision = appended.revisions[0];
+  const run = appended.runs[0];
   await db.drafts.delete(input.runId);
   return { run, revision, duplicate: false, changedSince };
 }

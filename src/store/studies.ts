@@ -3,25 +3,31 @@
  * (what was planned is the record against which the runs are read).
  */
 import { InputError } from '../core/errors.ts';
+import { checkStudy } from '../core/records/check-study.ts';
 import type { StudyPlan, StudyRecord } from '../core/study/study.ts';
-import { checkStudy } from '../io/backup/validate.ts';
+import { appendRevisions } from './append-revisions.ts';
 import { guarded } from './errors.ts';
 import { newId } from './ids.ts';
 import type { Store } from './store.ts';
 
-/** Checks a plan as the backup reader would and gives it an id, this device and the time. */
+/**
+ * Checks a plan with the record checks every stored study passes and gives it an id, this device
+ * and the time from the store's clock. A response without a lower bound is stored with null.
+ */
 export function newStudyRecord(store: Store, plan: StudyPlan): StudyRecord {
   const { factors: _inDesign, ...design } = plan.design as StudyPlan['design'] & { factors?: unknown };
-  const draft = { ...plan, design, id: newId(), device: store.device, createdAt: store.now().toISOString() };
-  // The same checks as an import, so that every stored study can be exported and read back.
-  return checkStudy(JSON.parse(JSON.stringify(draft)), 'study');
+  const responses = Array.isArray(plan.responses) ? plan.responses.map((r) => (typeof r === 'object' && r !== null ? { ...r, lowerBound: r.lowerBound ?? null } : r)) : plan.responses;
+  const draft = { ...plan, responses, design, id: newId(), device: store.device, createdAt: store.now().toISOString() };
+  // The same checks as an import, so that every stored study can be exported and read back
+  // (checked before the JSON copy: JSON would turn a NaN into null instead of refusing it).
+  return JSON.parse(JSON.stringify(checkStudy(draft, 'study'))) as StudyRecord;
 }
 
 /** Makes a study from its plan and saves it; resolves once it is on disk. */
 export async function createStudy(store: Store, plan: StudyPlan): Promise<StudyRecord> {
   const record = newStudyRecord(store, plan);
-  await guarded(() => store.db.transaction('rw', store.db.studies, () => store.db.studies.add(record)));
-  return record;
+  const { studies } = await guarded(() => appendRevisions(store, { studies: [record] }));
+  return studies[0];
 }
 
 /** All studies, newest first. */

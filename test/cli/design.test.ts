@@ -102,6 +102,115 @@ describe('design command: bad input', () => {
   });
 });
 
+describe('design command: power of the plan', () => {
+  // The power itself is checked against jstat and Cohen (1988) in test/core/plan/power.test.ts;
+  // here the command's keys, defaults and wording. A 2^4 with 4 center runs is the example plan.
+  const FOUR = ['Temperature (degC)=160:200', 'Time (min)=10:20', 'Speed=2:4', 'Feed=1:3'].flatMap((f) => ['--factor', f]);
+
+  it('prints the power block with the keys the issue names', async () => {
+    const d = await json([...FOUR, '--center-runs', '4', '--seed', '7', '--effect', '2', '--sigma', '1.5']);
+    expect(Object.keys(d.power).slice(0, 8)).toEqual(['effect', 'sigma', 'significance', 'residualDf', 'power', 'target', 'smallestEffect', 'replicatesNeeded']);
+    expect(d.power.effect).toBe(2);
+    expect(d.power.sigma).toBe(1.5);
+    expect(d.power.significance).toBe(0.05); // default
+    expect(d.power.target).toBe(0.8); // default
+    // Default model: 4 main effects + 6 two-factor interactions; 20 runs - 11 parameters.
+    expect(d.power.model).toEqual(['A', 'B', 'C', 'D', 'AB', 'AC', 'AD', 'BC', 'BD', 'CD']);
+    expect(d.power.residualDf).toBe(9);
+    expect(d.power.standardError).toBeCloseTo((2 * 1.5) / Math.sqrt(16), 12); // 2 sigma / sqrt(Nf)
+    expect(d.power.power).toBeGreaterThan(0.6);
+    expect(d.power.power).toBeLessThan(0.7);
+    expect(d.power.smallestEffect).toBeGreaterThan(2);
+    expect(d.power.replicatesNeeded).toBe(2);
+    expect(d.power.summary).toMatch(/^With these 20 runs and noise of about 1\.5, an effect of 2 is found about 2 times in 3/);
+    // No power block unless asked for.
+    expect((await json([...FOUR, '--seed', '7'])).power).toBeUndefined();
+  });
+
+  it('takes a model, a significance level and a target power; text shows the block', async () => {
+    const d = await json([...FOUR, '--seed', '7', '--effect', '2', '--sigma', '1.5', '--terms', 'A+B+C+D', '--significance', '0.1', '--power', '0.9']);
+    expect(d.power.model).toEqual(['A', 'B', 'C', 'D']);
+    expect(d.power.residualDf).toBe(11);
+    expect(d.power.significance).toBe(0.1);
+    expect(d.power.target).toBe(0.9);
+    const text = await design.run([...FOUR, '--center-runs', '4', '--seed', '7', '--effect', '2', '--sigma', '1.5']);
+    expect(text).toMatch(/\n\nPower \(two-sided t test of one main effect; model A \+ B \+ C \+ D \+ AB/);
+    expect(text).toMatch(/ {2}Residual df +9\n/);
+    expect(text).toMatch(/ {2}Standard error +0\.75 \(of each main effect\)/);
+  });
+
+  it('says no test is possible when the model leaves no residual df', async () => {
+    const d = await json([...FOUR, '--fraction', '1/2', '--seed', '7', '--effect', '2', '--sigma', '1.5']);
+    expect(d.power.residualDf).toBe(0);
+    expect(d.power.power).toBeNull();
+    expect(d.power.smallestEffect).toBeNull();
+    expect(d.power.summary).toMatch(/no t test of an effect is possible: add replicates or center runs, or judge the effects by Lenth's method/);
+    const text = await design.run([...FOUR, '--fraction', '1/2', '--seed', '7', '--effect', '2', '--sigma', '1.5']);
+    expect(text).toMatch(/Power +- \(no residual df: no t test possible\)/);
+  });
+
+  it('refuses bad power input with clear messages', async () => {
+    const bad = async (args: string[], message: RegExp) => {
+      await expect(design.run(args)).rejects.toThrow(message);
+      await expect(design.run(args)).rejects.toBeInstanceOf(InputError);
+    };
+    await bad([...FOUR, '--effect', '2', '--sigma', '-1'], /sigma\) must be a number greater than 0, got -1/);
+    await bad([...FOUR, '--effect', '0', '--sigma', '1'], /The effect to detect must be a number greater than 0, got 0/);
+    await bad([...FOUR, '--effect', '2'], /needs both --effect .* and --sigma .*; got only --effect/);
+    await bad([...FOUR, '--sigma', '2'], /got only --sigma/);
+    await bad([...FOUR, '--terms', 'A*B'], /--terms belongs to the power of the plan: give --effect and --sigma/);
+    await bad([...FOUR, '--effect', 'big', '--sigma', '1'], /--effect needs a number, got "big"/);
+    await bad([...FOUR, '--effect', '2', '--sigma', '1', '--csv'], /--csv prints the run sheet only/);
+    await bad([...FOUR, '--effect', '2', '--sigma', '1', '--power', '1.5'], /target power must be a probability between 0 and 1/);
+    await bad([...FOUR, '--effect', '2', '--sigma', '1', '--terms', 'A+Q'], /Q/);
+  });
+});
+
+describe('design command: Plackett-Burman screening designs', () => {
+  const factors = (k: number) => Array.from({ length: k }, (_, i) => ['--factor', `X${i + 1}=0:10`]).flat();
+
+  it('plans 12, 20 and 24 runs; runs are factorial; JSON carries the partial aliasing', async () => {
+    const d = await json([...factors(7), '--plackett-burman', '12', '--seed', '3']);
+    expect(d.runs).toHaveLength(12);
+    expect(d.runs.every((r: any) => r.kind === 'factorial')).toBe(true);
+    expect(d.screening).toMatchObject({ kind: 'plackett-burman', runs: 12 });
+    expect(d.generators).toEqual([]);
+    expect(d.definingRelation).toEqual([]);
+    expect(d.resolution).toBeNull();
+    expect(d.partialAliasing).toHaveLength(7 * 15);
+    // 12 runs: every correlation of a main effect with an interaction of two others is +-1/3 (Lin and Draper 1992, from memory).
+    for (const a of d.partialAliasing) expect(Math.abs(a.correlation)).toBeCloseTo(1 / 3, 12);
+    expect(d.summary).toMatch(/main effects are estimated clear of each other but partly mixed with two-factor interactions/);
+    expect((await json([...factors(19), '--plackett-burman', '20', '--seed', '3'])).runs).toHaveLength(20);
+    const s = await json([...factors(3), '--plackett-burman', '24', '--center-runs', '2', '--replicates', '2', '--standard-order']);
+    expect(s.runs).toHaveLength(2 * 26);
+    expect(s.runs.slice(0, 24).map((r: any) => r.yates)).toEqual(Array.from({ length: 24 }, (_, i) => i + 1));
+  });
+
+  it('prints text with the partial aliasing and a CSV run sheet', async () => {
+    const text = await design.run([...factors(5), '--plackett-burman', '12', '--seed', '3']);
+    expect(text).toMatch(/^Plan: 12-run Plackett-Burman screening design for 5 factors, 12 runs\n/);
+    expect(text).toMatch(/Partial aliasing \(correlation of each main effect with the two-factor interactions of other factors\)\n {2}A: /);
+    expect(text).toMatch(/Defining relation +none \(a Plackett-Burman design/);
+    const csv = await design.run([...factors(5), '--plackett-burman', '12', '--seed', '3', '--csv']);
+    expect(csv.split('\r\n')).toHaveLength(14); // header, 12 runs, the closing line break
+    expect(csv.split('\r\n')[1]).toMatch(/,factorial,/);
+  });
+
+  it('gives the power of a screening plan for main effects', async () => {
+    const d = await json([...factors(7), '--plackett-burman', '12', '--seed', '3', '--effect', '3', '--sigma', '1']);
+    expect(d.power.model).toEqual(['A', 'B', 'C', 'D', 'E', 'F', 'G']);
+    expect(d.power.residualDf).toBe(4);
+    expect(d.power.standardError).toBeCloseTo(2 / Math.sqrt(12), 12);
+  });
+
+  it('refuses more factors than the design allows and run counts it does not offer', async () => {
+    await expect(design.run([...factors(12), '--plackett-burman', '12'])).rejects.toThrow(/A 12-run Plackett-Burman design takes up to 11 factors, got 12/);
+    await expect(design.run([...factors(5), '--plackett-burman', '16'])).rejects.toThrow(/--plackett-burman takes 12, 20 or 24 runs, got "16"/);
+    await expect(design.run([...factors(5), '--plackett-burman', '12', '--fraction', '1/2'])).rejects.toThrow(/does not take a fraction/);
+  });
+});
+
 describe('parseFactorOption', () => {
   it('reads numeric factors with units and log scales, and categorical factors', () => {
     expect(parseFactorOption('Temperature (degC)=160:200')).toEqual({ kind: 'numeric', name: 'Temperature', low: 160, high: 200, unit: 'degC' });

@@ -12,6 +12,9 @@ declare module 'jstat' {
       cdf(t: number, df: number): number;
       inv(p: number, df: number): number;
     };
+    noncentralt: {
+      cdf(t: number, df: number, ncp: number): number;
+    };
     centralF: {
       cdf(f: number, d1: number, d2: number): number;
       inv(p: number, d1: number, d2: number): number;

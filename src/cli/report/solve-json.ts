@@ -3,7 +3,7 @@ import type { Solution } from '../../core/predict/solve-for-target.ts';
 
 /**
  * The solve command's JSON object (keys setting, reachable, fit, pi, messages, caution, with the
- * factor, target, coded, se, ci, slope, reach, needed and settings besides).
+ * factor, target, coded, se, ci, slope, reach, solutions, needed and settings besides).
  * Example: solveJson(solveForTarget(model, { factor: 'A', target: 41 })).reachable -> true.
  */
 export function solveJson(s: Solution) {
@@ -21,6 +21,7 @@ export function solveJson(s: Solution) {
     pi: s.pi,
     slope: s.slope,
     reach: s.reach,
+    solutions: s.solutions,
     needed: s.needed,
     settings: Object.fromEntries(s.settings.map((x) => [x.name, x.real])),
     outside: s.outside,

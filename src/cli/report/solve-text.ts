@@ -23,7 +23,7 @@ export function solveText(s: Solution): string {
   if (s.needed) {
     out.push(`  The model would need ${s.factor.name} = ${s.needed.real === null ? 'a setting far outside the range' : formatSetting(s.needed.real, s.factor.unit)} (coded ${signedNum(s.needed.coded)}), outside the tested range.`);
   }
-  out.push(`  The tested range of ${s.factor.name} reaches ${num(Math.min(...s.reach))} to ${num(Math.max(...s.reach))} at these settings (slope ${num(s.slope)} per coded unit).`);
+  out.push(`  The tested range of ${s.factor.name} reaches ${num(s.span[0])} to ${num(s.span[1])} at these settings (slope ${num(s.slope)} per coded unit).`);
   out.push('');
   out.push(settingsTable(s.settings));
   out.push('');

@@ -19,6 +19,8 @@ import { basicFactors, fractionalFactorial, parseFraction, type FactorialPoint }
 import { MAX_FULL_FACTORIAL_FACTORS } from './full-factorial.ts';
 import { generatorWord, parseGenerators, type Generator } from './generators.ts';
 import { drawSeed, MAX_SEED } from './random.ts';
+import { plackettBurmanAliasing, plackettBurmanPoints, PLACKETT_BURMAN_SOURCE } from './plackett-burman.ts';
+import { PARTIAL_ALIASING_NOTE, plackettBurmanSummary } from './plackett-burman-summary.ts';
 import { orderRuns } from './run-order.ts';
 import { checkRunLimit } from './run-limit.ts';
 import { designSummary } from './summary.ts';
@@ -48,6 +50,8 @@ export interface DesignSpec {
   readonly sortBy?: readonly string[];
   /** Longest effect listed in alias chains; default the larger of 3 and resolution - 1. */
   readonly aliasOrder?: number;
+  /** A Plackett-Burman screening design of 12, 20 or 24 runs (not with a fraction, generators, blocks or a foldover). */
+  readonly plackettBurman?: number;
 }
 
 function wholeAtLeast(v: number | undefined, min: number, what: string, dflt: number): number {
@@ -102,6 +106,12 @@ export function buildDesign(spec: DesignSpec): Design {
   if (new Set(sortBy).size !== sortBy.length) throw new InputError('Keep sorted: a factor is named twice');
   let fold: Foldover | null = null;
   if (spec.foldover !== undefined) fold = spec.foldover === 'all' ? 'all' : factorIndex(factors, spec.foldover, 'Foldover');
+  const pb = spec.plackettBurman;
+  if (pb !== undefined) {
+    const other = [spec.fraction !== undefined && 'a fraction', spec.generators !== undefined && 'generators', blocks > 1 && 'blocks', fold !== null && 'a foldover'].filter(Boolean);
+    if (other.length > 0) throw new InputError(`A Plackett-Burman design is a plan of its own; it does not take ${other.join(', ')}`);
+  }
+  const pbPoints = pb === undefined ? null : plackettBurmanPoints(pb, k);
 
   // Generators: typed, from the catalogue, or none (full factorial).
   const notes: string[] = [];
@@ -113,7 +123,7 @@ export function buildDesign(spec: DesignSpec): Design {
     const entry = catalogueFraction(k, p);
     generators = parseGenerators(entry.generators, factors);
     notes.push(`Generators from the minimum aberration catalogue (${entry.source}).`);
-  } else if (k > MAX_FULL_FACTORIAL_FACTORS) {
+  } else if (pbPoints === null && k > MAX_FULL_FACTORIAL_FACTORS) {
     checkRunLimit(2 ** k, `A full factorial of ${k} factors: 2^${k} factorial runs`);
   }
   if (generators.length > 0 && k > MAX_FRACTION_FACTORS) {
@@ -121,7 +131,7 @@ export function buildDesign(spec: DesignSpec): Design {
   }
   const basic = basicFactors(k, generators);
   const perHalf = 2 ** basic.length;
-  const factorialRuns = perHalf * (fold === null ? 1 : 2);
+  const factorialRuns = pbPoints ? pbPoints.length : perHalf * (fold === null ? 1 : 2);
   const centerSetSize = centerRuns > 0 ? centerSet(factors).length : 0;
   const centerPerReplicate = centerRuns * centerSetSize;
   checkRunLimit(
@@ -147,7 +157,7 @@ export function buildDesign(spec: DesignSpec): Design {
   const blockWords = blockConfounded(blockGenerators, relation);
 
   // Factorial points of one replicate, then center runs spread over its blocks.
-  const first = fractionalFactorial(k, generators).map((p) => ({ ...p, half: 0 }));
+  const first = (pbPoints ?? fractionalFactorial(k, generators)).map((p) => ({ ...p, half: 0 }));
   const points: Point[] = fold === null ? first : [...first, ...foldPoints(first, fold).map((p) => ({ ...p, half: 1 }))];
   type Draft = { yates: number | null; replicate: number; block: number; kind: 'factorial' | 'center'; coded: readonly number[] };
   const perReplicate: Omit<Draft, 'replicate'>[] = points.map((p) => ({
@@ -170,13 +180,13 @@ export function buildDesign(spec: DesignSpec): Design {
   }
   const seed = randomise ? spec.seed ?? drawSeed() : null;
   const ordered = orderRuns(drafts, { seed, sortBy });
-  const runs: DesignRun[] = ordered.map((d, i) => ({ run: i + 1, yates: d.yates, replicate: d.replicate, block: d.block, kind: d.kind, coded: [...d.coded] }));
+  const runs: DesignRun[] = ordered.map((d, i) => ({ run: i + 1, yates: d.yates, replicate: d.replicate, block: d.block, originBlock: d.block, kind: d.kind, coded: [...d.coded] }));
 
   // What the design can and cannot separate.
   const res = resolutionOf(relation);
   const aliasOrder = spec.aliasOrder ?? defaultAliasOrder(res, k);
   if (!Number.isInteger(aliasOrder) || aliasOrder < 1) throw new InputError(`The longest effect in alias chains must be a whole number, 1 or more, got ${aliasOrder}`);
-  const chains = designAliasChains(relation, k, aliasOrder);
+  const chains = pbPoints ? [] : designAliasChains(relation, k, aliasOrder);
 
   // Notes.
   if (blocking.generators.length > 0) notes.push(`Block words: ${blocking.generators.map((w) => formatWord(w, letters)).join(', ')}, from ${blocking.source}.`);
@@ -222,7 +232,22 @@ export function buildDesign(spec: DesignSpec): Design {
     );
   }
 
-  const summary = designSummary({
+  if (pb !== undefined) {
+    notes.push(`Generating row from ${PLACKETT_BURMAN_SOURCE}; the factors take the first ${k} of its ${pb - 1} columns.`);
+    if (k >= 3) notes.push(PARTIAL_ALIASING_NOTE);
+  }
+  const summary =
+    pb !== undefined
+      ? plackettBurmanSummary({
+          factorialRuns,
+          factors: k,
+          totalRuns: runs.length,
+          centerRuns: centerPerReplicate,
+          replicates,
+          seed,
+          largestCorrelation: k < 3 ? null : Math.max(...plackettBurmanAliasing(pb, k).map((a) => Math.abs(a.correlation))),
+        })
+      : designSummary({
     letters,
     totalRuns: runs.length,
     factorialRuns,
@@ -248,5 +273,6 @@ export function buildDesign(spec: DesignSpec): Design {
     seed,
     summary,
     notes,
+    ...(pb !== undefined ? { screening: { kind: 'plackett-burman' as const, runs: pb, source: PLACKETT_BURMAN_SOURCE } } : {}),
   };
 }

@@ -5,6 +5,32 @@
  */
 import type { Factor } from '../factor/factor.ts';
 
+/**
+ * Every kind a planned run can be, the one list that the record checks, the backup schema and
+ * the screens follow. A two-level plan makes factorial and center runs; an augmented plan adds
+ * axial runs (the star points of a central composite design), runs along a path of steepest
+ * ascent, and confirmation runs at a predicted setting. Source: common practice (Montgomery,
+ * Design and Analysis of Experiments, 8th ed., sections 11.2-11.4, from memory).
+ */
+export const RUN_KINDS = ['factorial', 'center', 'axial', 'path', 'confirmation'] as const;
+
+/** The kind of a planned run: one of RUN_KINDS. */
+export type RunKind = (typeof RUN_KINDS)[number];
+
+/** The words a screen or report uses for each run kind (a factorial run is a corner of the cube). */
+export const RUN_KIND_NAMES: Readonly<Record<RunKind, string>> = {
+  factorial: 'corner',
+  center: 'center point',
+  axial: 'axial point',
+  path: 'path run',
+  confirmation: 'confirmation run',
+};
+
+/** True when the value is one of RUN_KINDS. Example: isRunKind('axial') -> true; isRunKind('star') -> false. */
+export function isRunKind(v: unknown): v is RunKind {
+  return typeof v === 'string' && (RUN_KINDS as readonly string[]).includes(v);
+}
+
 export interface DesignRun {
   /** Position in the run order, from 1. */
   readonly run: number;
@@ -14,7 +40,15 @@ export interface DesignRun {
   readonly replicate: number;
   /** Block, from 1 (1 when unblocked). */
   readonly block: number;
-  readonly kind: 'factorial' | 'center';
+  /**
+   * Block of origin: the block this run was planned in when it was added to the study. For a
+   * plan made in one go it equals `block`; when a plan is augmented later (axial runs, a path,
+   * confirmation runs, a foldover added afterwards) the added runs carry the block they were
+   * added as, so an analysis can tell the original runs from the later ones even when `block`
+   * is renumbered. Never changes once the run is planned.
+   */
+  readonly originBlock: number;
+  readonly kind: RunKind;
   /** Coded planned settings, one per factor in declared order. */
   readonly coded: readonly number[];
 }
@@ -40,4 +74,10 @@ export interface Design {
   readonly summary: string;
   /** Warnings and notes about the plan (split-plot warning, center runs with categorical factors ...). */
   readonly notes: readonly string[];
+  /**
+   * Present only for a screening design that is not a regular fraction: a Plackett-Burman design
+   * of `runs` factorial runs per replicate, which has no defining relation (generators,
+   * definingRelation and aliases are empty; see plackett-burman.ts for its partial aliasing).
+   */
+  readonly screening?: { readonly kind: 'plackett-burman'; readonly runs: number; readonly source: string };
 }

@@ -15,7 +15,7 @@ import { fUpperP } from '../dist/f-dist.ts';
 import { tQuantile, tTwoSidedP } from '../dist/student-t.ts';
 import { toReal } from '../factor/coding.ts';
 import { defaultTerms } from '../model/formula.ts';
-import { compareTerms, termLetters, termName, type Term } from '../model/term.ts';
+import { checkTerms, compareTerms, isProduct, isSquare, termLetters, termName, type Term } from '../model/term.ts';
 import type { ResponseData } from '../study/response-data.ts';
 import { CONSTANT_TOLERANCE } from '../tolerance.ts';
 import { inverseQuadraticForm } from '../linalg/small-solve.ts';
@@ -41,6 +41,7 @@ import { lenth, LENTH_MIN_CONTRASTS } from './lenth.ts';
 import type { LinearFit } from './linear-fit.ts';
 import { labelGroups, pureErrorOfGroups, settingGroups } from './pure-error.ts';
 import { saturatedEffects } from './saturated-effects.ts';
+import { tIntervals } from './t-intervals.ts';
 
 export interface AnalyzeOptions {
   /** Model terms (bit masks); default: main effects and two-factor interactions. */
@@ -112,16 +113,15 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
   const k = factors.length;
   const alpha = options.alpha ?? 0.05;
   const terms = [...new Set(options.terms ?? defaultTerms(k))].sort(compareTerms);
-  for (const t of terms) {
-    if (t <= 0 || t >= 1 << k) throw new InputError(`Model term ${t} refers to a factor the study does not have`);
-  }
+  checkTerms(terms, factors);
   const levels = blockLevels(data.blocks);
   const blocks = levels.length > 1 ? data.blocks : null;
   const usedLevels = blocks ? levels : [];
   const columns = modelColumns(usedLevels, terms);
   const warnings: string[] = [...data.notes];
 
-  const cells = !blocks && !options.forceQr ? yatesCells(coded, k) : null;
+  // Yates' algorithm holds for products of two-level columns only: any square takes the QR path.
+  const cells = !blocks && !options.forceQr && !terms.some(isSquare) ? yatesCells(coded, k) : null;
   const fit: LinearFit = cells ? fitYates(columns, terms, cells, k, y) : fitQr(columns, modelMatrix(columns, coded, blocks), y);
   const m = fit.kept.length;
   const dfRes = fit.dfResidual;
@@ -131,10 +131,10 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
   const estimate = (j: number): Estimate => {
     const coef = fit.coef[j];
     if (sigma === null || tq === null) return { coef, se: null, t: null, p: null, ci: null };
-    const se = sigma * Math.sqrt(fit.covUnscaled[j * m + j]);
-    if (se === 0) return { coef, se, t: null, p: null, ci: [coef, coef] };
-    const t = coef / se;
-    return { coef, se, t, p: tTwoSidedP(t, dfRes), ci: [coef - tq * se, coef + tq * se] };
+    const { se, ciLo, ciHi } = tIntervals(coef, fit.covUnscaled[j * m + j], sigma, tq);
+    if (se === 0) return { coef, se, t: null, p: null, ci: [ciLo!, ciHi!] };
+    const t = coef / se!;
+    return { coef, se, t, p: tTwoSidedP(t, dfRes), ci: [ciLo!, ciHi!] };
   };
 
   // Names and letters of every column, computed once.
@@ -271,7 +271,7 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
   // Curvature from center points.
   const kinds = runKinds(factors, coded);
   const curv = curvatureTest(kinds, y, pe);
-  if (curv && curv.p !== null && curv.p < alpha) {
+  if (curv && curv.p !== null && curv.p < alpha && !terms.some(isSquare)) {
     warnings.push(
       `Curvature is significant (p = ${fmt(curv.p)}): the center runs differ from the factorial average, so this first-order model is biased near the center. Add axial runs for a second-order design before relying on predictions inside the range.`,
     );
@@ -286,7 +286,8 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
   // Unreplicated: no two factorial runs share their planned point or settings (blocks aside).
   const unblockedGroups = !blocks ? groups : data.points ? labelGroups(data.points, null) : settingGroups(coded, null);
   const distinctPoints = new Set(factorialRows.map((i) => unblockedGroups[i])).size;
-  let effectsForChart: { name: string; letters: string; effect: number }[] = termEstimates.map((t) => ({
+  // The half-normal chart shows two-level contrasts only: products of distinct factors, never a square.
+  let effectsForChart: { name: string; letters: string; effect: number }[] = termEstimates.filter((t) => isProduct(t.term)).map((t) => ({
     name: t.name,
     letters: t.estimates ?? t.letters,
     effect: t.effect,

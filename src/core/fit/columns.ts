@@ -1,6 +1,7 @@
 /**
  * The columns of the model matrix: the intercept, then blocks as a fixed effect, then the
- * model terms in model order. Blocks use effect (sum-to-zero) coding: for B blocks, B-1 columns,
+ * model terms in model order (each a product of coded factor columns, or the square of one;
+ * see model/term.ts). Blocks use effect (sum-to-zero) coding: for B blocks, B-1 columns,
  * column b is +1 in block b, -1 in the last block, 0 elsewhere, so the intercept stays the
  * average over blocks and a prediction is for an average block (Montgomery, Design and Analysis
  * of Experiments, 8th ed., section 7.2; the coding is common practice for fixed block effects).
@@ -26,7 +27,7 @@ export function modelColumns(levels: readonly number[], terms: readonly Term[]):
   return cols;
 }
 
-/** Value of a column at one run. */
+/** Value of a column at one run: 1, the block contrast, or the term's value (termValue: a product, or x_i^2). */
 export function columnValue(c: Column, coded: ArrayLike<number>, block: number | undefined, lastBlock: number): number {
   switch (c.kind) {
     case 'intercept':

@@ -2,7 +2,9 @@
  * Half-normal plotting positions for effects (Daniel 1959, "Use of half-normal plots in
  * interpreting factorial two-level experiments", Technometrics 1, 311-341): with the m absolute
  * effects sorted ascending, the i-th (1-based) is plotted against the half-normal quantile
- * Phi^-1(0.5 + 0.5 (i - 0.5) / m) (the plotting position (i - 0.5)/m is common practice).
+ * Phi^-1(0.5 + 0.5 (i - 0.5) / m) (the plotting position (i - 0.5)/m is common practice). The
+ * effects are two-level contrasts (products of distinct factors); the analysis never plots a
+ * square term here.
  * Cost O(m log m).
  * Example: halfNormalQuantiles(1) -> [0.674...] (Phi^-1(0.75)).
  */

@@ -3,11 +3,16 @@
  * 392-399): `A + B + A:B`, `A*B*C` (all products), `(A+B+C)^2` (up to two-factor
  * interactions), and `-` to drop a term (`A*B*C - A:B:C`). Factors may be named by name or by
  * letter. The intercept is always in the model and is not written.
+ * Squares: a power of a single factor's name means that power of the factor, so `A^2` and
+ * `Temperature^2` are its square (only a numeric factor has one), while a power of a
+ * parenthesised sum keeps its crossing meaning (`(A+B+C)^2`). `quadratic` stands for the full
+ * second-order model (see quadraticTerms). Cubes, squares inside interactions (`A^2:B`) and
+ * squares of categorical factors are refused with a message.
  * Example: parseTerms('A*B', factors) -> [0b01, 0b10, 0b11] (A, B, A:B).
  */
 import { InputError } from '../errors.ts';
 import type { Factor } from '../factor/factor.ts';
-import { compareTerms, termOrder, type Term } from './term.ts';
+import { compareTerms, isProduct, squareTerm, termLetters, termMask, termOrder, type Term } from './term.ts';
 
 type Tok = { kind: 'name' | 'num' | 'op'; text: string; pos: number };
 
@@ -34,11 +39,6 @@ function normalise(set: Set<Term>): Term[] {
   return [...set].filter((t) => t !== 0).sort(compareTerms);
 }
 
-function cross(a: Set<Term>, b: Set<Term>): Set<Term> {
-  const out = new Set<Term>([...a, ...b]);
-  for (const x of a) for (const y of b) out.add(x | y);
-  return out;
-}
 
 /**
  * Parses a Wilkinson-Rogers model formula into terms in model order.
@@ -73,17 +73,38 @@ export function parseTerms(text: string, factors: readonly Factor[]): Term[] {
     return 1 << idx;
   };
 
+  // The product of two terms: the union of their factors (A:A is A, as in Wilkinson-Rogers).
+  // A square only multiplies itself: anything else would be a cube or a square inside an interaction.
+  const times = (x: Term, y: Term): Term => {
+    if (isProduct(x) && isProduct(y)) return x | y;
+    if (x === y) return x;
+    const both = `${termLetters(x, factors)}:${termLetters(y, factors)}`;
+    return fail(
+      (termMask(x) & termMask(y)) !== 0
+        ? `${both} would hold a factor three times or more; cubes and higher powers are not supported`
+        : `${both} would put a square inside an interaction, which is not supported; write the interaction and the square as separate terms`,
+    );
+  };
+  const cross = (a: Set<Term>, b: Set<Term>): Set<Term> => {
+    const out = new Set<Term>([...a, ...b]);
+    for (const x of a) for (const y of b) out.add(times(x, y));
+    return out;
+  };
+  const isKeyword = (name: string): boolean =>
+    name.toLowerCase() === 'quadratic' && !factors.some((f) => f.name.toLowerCase() === 'quadratic' || f.letter.toLowerCase() === 'quadratic');
+
   // expr   := sum
   // sum    := prod (('+'|'-') prod)*
   // prod   := colon ('*' colon)*
   // colon  := power (':' power)*
-  // power  := atom ('^' num)?
-  // atom   := name | '(' sum ')'
+  // power  := atom ('^' num)?      (name ^ 2: the square of one factor; ( sum ) ^ n: crossing)
+  // atom   := 'quadratic' | name | '(' sum ')'
   function atom(): Set<Term> {
     const t = peek();
     if (!t) return fail('a factor is missing');
     if (t.kind === 'name') {
       i++;
+      if (isKeyword(t.text)) return new Set(quadraticTerms(factors));
       return new Set([lookup(t.text)]);
     }
     if (t.kind === 'op' && t.text === '(') {
@@ -96,14 +117,32 @@ export function parseTerms(text: string, factors: readonly Factor[]): Term[] {
     return fail('a factor is expected');
   }
   function power(): Set<Term> {
+    const first = peek();
+    const bare = first !== undefined && first.kind === 'name' && !isKeyword(first.text);
     const base = atom();
     if (peek()?.text === '^') {
       i++;
       const n = peek();
       if (!n || n.kind !== 'num') return fail('"^" needs a whole number');
-      i++;
       const order = Number(n.text);
       if (order < 1) fail('"^" needs an order of 1 or more');
+      if (bare) {
+        // A power of one name: the power of that factor (or of a run of letters, which holds several).
+        const [t] = base;
+        if (order === 1) {
+          i++;
+          return base;
+        }
+        if (termOrder(t) > 1) fail(`${first.text}^${order} would put a square inside an interaction, which is not supported; a power of a sum such as (A+B)^2 gives the crossing`);
+        if (order > 2) fail(`${first.text}^${order}: cubes and higher powers of a factor are not supported, only squares`);
+        const f = factors[31 - Math.clz32(t)];
+        if (f.kind !== 'numeric') {
+          fail(`${f.name} is categorical ("${f.levels[0]}" or "${f.levels[1]}"): its square is the same at both levels, so only a numeric factor can have a square term`);
+        }
+        i++;
+        return new Set([squareTerm(31 - Math.clz32(t), factors)]);
+      }
+      i++;
       let acc = new Set(base);
       for (let k = 1; k < order; k++) acc = cross(acc, base);
       return new Set([...acc].filter((t) => termOrder(t) <= order));
@@ -116,7 +155,7 @@ export function parseTerms(text: string, factors: readonly Factor[]): Term[] {
       i++;
       const rhs = power();
       const out = new Set<Term>();
-      for (const x of acc) for (const y of rhs) out.add(x | y);
+      for (const x of acc) for (const y of rhs) out.add(times(x, y));
       acc = out;
     }
     return acc;
@@ -162,4 +201,19 @@ export function termsUpToOrder(k: number, order: number): Term[] {
 /** The default model: main effects plus two-factor interactions (common practice for screening). */
 export function defaultTerms(k: number): Term[] {
   return termsUpToOrder(k, Math.min(2, k));
+}
+
+/**
+ * The full second-order (quadratic) model: main effects, two-factor interactions and the square
+ * of every numeric factor, in model order; y = b0 + sum b_i x_i + sum_{i<j} b_ij x_i x_j +
+ * sum b_ii x_i^2 (Montgomery, Design and Analysis of Experiments, 8th ed., section 11.1, Eq.
+ * 11.2, from memory). A categorical factor has no square (two levels only). Cost O(k^2).
+ * Throws InputError for no factors.
+ * Example: with numeric A, B and categorical C: A, B, C, AB, AC, BC, A^2, B^2.
+ */
+export function quadraticTerms(factors: readonly Factor[]): Term[] {
+  if (factors.length === 0) throw new InputError('A quadratic model needs at least one factor, got none');
+  const out = termsUpToOrder(factors.length, Math.min(2, factors.length));
+  factors.forEach((f, i) => f.kind === 'numeric' && out.push(squareTerm(i, factors)));
+  return out.sort(compareTerms);
 }

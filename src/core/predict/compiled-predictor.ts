@@ -1,5 +1,6 @@
 /**
- * A fitted model prepared once for many predictions: the term masks, their coefficients, the
+ * A fitted model prepared once for many predictions: the terms (factor masks, and which are
+ * squares), their coefficients, the
  * unscaled covariance over the intercept and the terms (block columns are 0 for an average
  * block, so they drop out), sigma and the t quantile. Each call then evaluates the model columns
  * into a reused buffer and allocates nothing (unless asked for a fresh result object).
@@ -8,7 +9,8 @@ import { tQuantile } from '../dist/student-t.ts';
 import { InputError } from '../errors.ts';
 import type { Factor } from '../factor/factor.ts';
 import type { FittedModel } from '../fit/analysis.ts';
-import { termOrder } from '../model/term.ts';
+import { tIntervals } from '../fit/t-intervals.ts';
+import { checkTerms, isSquare, termColumnFactors, termMask, termOrder } from '../model/term.ts';
 
 /**
  * Off-diagonal entries of (X'X)^-1 below this fraction of sqrt(C_ii C_jj) are rounding, so the
@@ -56,7 +58,11 @@ class Compiled implements CompiledPredictor {
   readonly diagonal: boolean;
   private readonly k: number;
   private readonly m: number;
+  /** factor mask of each term (a square's single factor) */
   private readonly masks: Int32Array;
+  /** 1 where the term is a square (its column is the table entry squared) */
+  private readonly squares: Uint8Array;
+  private readonly hasSquares: boolean;
   /** coefficients over [intercept, terms...] */
   private readonly b: Float64Array;
   /** diagonal of C over [intercept, terms...] */
@@ -68,7 +74,7 @@ class Compiled implements CompiledPredictor {
   /** subset-product table (2^k entries) when that is cheaper than term by term, else null */
   private readonly table: Float64Array | null;
   private readonly lowBit: Int8Array | null;
-  /** factor indices of each term, flattened, with start offsets (term-by-term path) */
+  /** factor indices of each term with repeats (A^2 -> 0, 0), flattened, with start offsets (term-by-term path) */
   private readonly idx: Int32Array;
   private readonly start: Int32Array;
 
@@ -84,9 +90,7 @@ class Compiled implements CompiledPredictor {
     }
     if (model.covUnscaled.length !== mf * mf) throw new InputError(`The model needs a ${mf} x ${mf} covariance, got ${model.covUnscaled.length} entries`);
     if (!(level > 0 && level < 1)) throw new InputError(`The confidence level must lie between 0 and 1, got ${level}`);
-    for (const t of model.terms) {
-      if (!Number.isInteger(t) || t <= 0 || t >= 2 ** k) throw new InputError(`Model term ${t} refers to a factor the model does not have (${k} factors)`);
-    }
+    checkTerms(model.terms, model.factors);
     for (let j = 0; j < mf; j++) {
       if (!Number.isFinite(model.coef[j])) throw new InputError(`The model's coefficient ${j + 1} must be a finite number, got ${model.coef[j]}`);
     }
@@ -99,7 +103,9 @@ class Compiled implements CompiledPredictor {
     this.k = k;
     const m = 1 + nt;
     this.m = m;
-    this.masks = Int32Array.from(model.terms);
+    this.masks = Int32Array.from(model.terms, termMask);
+    this.squares = Uint8Array.from(model.terms, (t) => (isSquare(t) ? 1 : 0));
+    this.hasSquares = this.squares.includes(1);
     // Local column a -> model column: 0 -> 0 (intercept), 1 + j -> 1 + nb + j (term j).
     const col = (a: number) => (a === 0 ? 0 : nb + a);
     this.b = new Float64Array(m);
@@ -143,7 +149,7 @@ class Compiled implements CompiledPredictor {
       let p = 0;
       for (let j = 0; j < nt; j++) {
         this.start[j] = p;
-        for (let i = 0; i < k; i++) if ((model.terms[j] >> i) & 1) this.idx[p++] = i;
+        for (const i of termColumnFactors(model.terms[j])) this.idx[p++] = i;
       }
       this.start[nt] = p;
     }
@@ -162,10 +168,20 @@ class Compiled implements CompiledPredictor {
       table[0] = 1;
       for (let s = 1; s < table.length; s++) table[s] = table[s & (s - 1)] * x[low[s]];
       const masks = this.masks;
-      for (let j = 0; j < nt; j++) {
-        const val = table[masks[j]];
-        v[j + 1] = val;
-        fit += b[j + 1] * val;
+      if (!this.hasSquares) {
+        for (let j = 0; j < nt; j++) {
+          const val = table[masks[j]];
+          v[j + 1] = val;
+          fit += b[j + 1] * val;
+        }
+      } else {
+        const sq = this.squares;
+        for (let j = 0; j < nt; j++) {
+          const t = table[masks[j]];
+          const val = sq[j] === 1 ? t * t : t;
+          v[j + 1] = val;
+          fit += b[j + 1] * val;
+        }
       }
     } else {
       const idx = this.idx;
@@ -213,28 +229,16 @@ class Compiled implements CompiledPredictor {
     const fit = this.columns(x);
     const r = out ?? { fit: 0, se: null, ciLo: null, ciHi: null, piLo: null, piHi: null };
     r.fit = fit;
-    if (this.sigma === null || this.tValue === null) {
-      r.se = r.ciLo = r.ciHi = r.piLo = r.piHi = null;
-      return r;
-    }
-    const q = this.quadratic();
-    const se = this.sigma * Math.sqrt(q);
-    const half = this.tValue * se;
-    const halfPi = this.tValue * this.sigma * Math.sqrt(1 + q);
-    r.se = se;
-    r.ciLo = fit - half;
-    r.ciHi = fit + half;
-    r.piLo = fit - halfPi;
-    r.piHi = fit + halfPi;
-    return r;
+    return tIntervals(fit, this.sigma === null || this.tValue === null ? 0 : this.quadratic(), this.sigma, this.tValue, r);
   }
 }
 
 /**
  * Prepares a fitted model for fast predictions at coded settings x0 (one value per factor).
  * Method: x0 holds 1 for the intercept and, for each term, the product of its factors' coded
- * values (block columns are 0: an average block); fit = b'x0; se_fit = sigma sqrt(x0' C x0) with
- * C = (X'X)^-1; the 100(1-a)% confidence interval for the mean response is fit +- t_{a/2,df}
+ * values or, for a square, the factor's coded value squared (block columns are 0: an average
+ * block); fit = b'x0; se_fit = sigma sqrt(x0' C x0) with
+ * C = (X'X)^-1; the intervals by tIntervals (fit/t-intervals.ts): the 100(1-a)% confidence interval for the mean response is fit +- t_{a/2,df}
  * se_fit and the prediction interval for one new run is fit +- t_{a/2,df} sigma sqrt(1 + x0' C x0)
  * (Montgomery, Design and Analysis of Experiments, 8th ed., section 10.6, Eqs. 10.39-10.41;
  * Montgomery section 10.5 for the mean response). With residual df 0 sigma is unknown and the
@@ -242,7 +246,8 @@ class Compiled implements CompiledPredictor {
  * Cost: compile O(p^2) with p = 1 + terms; each call O(p + sum of term orders) for the fit (or
  * O(2^k) by a subset-product table when that is cheaper) and O(p) for x0'Cx0 when C is diagonal
  * (orthogonal designs), else p(p+1)/2 multiply-adds. A call allocates nothing when `out` is given.
- * Throws InputError for a model without factors, inconsistent sizes, a term beyond the factors,
+ * Throws InputError for a model without factors, inconsistent sizes, a term beyond the factors or
+ * a square that is not of one numeric factor (checkTerm),
  * a non-finite coefficient, a level outside (0, 1), or (per call) a wrong number of settings.
  * Example: for the fit yhat = 40.44 + 0.775 x1 + 0.325 x2 (Montgomery 8th ed., section 6.8 data),
  * compilePredictor(model).fit([1, 1]) -> 41.54.

@@ -6,7 +6,8 @@
  */
 import { InputError } from '../errors.ts';
 import type { FittedModel } from '../fit/analysis.ts';
-import { termLetters, termName, termValue, type Term } from '../model/term.ts';
+import { tIntervals } from '../fit/t-intervals.ts';
+import { isSquare, termLetters, termName, termValue, type Term } from '../model/term.ts';
 import { CAUTION } from './caution.ts';
 import { cachedPredictor } from './compiled-predictor.ts';
 import { outsideRange, type OutsideSetting } from './outside-range.ts';
@@ -19,7 +20,7 @@ export interface Contribution {
   /** When the runs cannot separate this term from others: the combination it stands for ("C + AB"). */
   readonly estimates?: string;
   readonly coef: number;
-  /** Product of the term's coded settings. */
+  /** Product of the term's coded settings (for a square, the coded setting squared). */
   readonly product: number;
   /** coef x product: what this term adds to the baseline at these settings. */
   readonly value: number;
@@ -62,7 +63,8 @@ function fmtP(p: number): string {
 /**
  * The notes a prediction from this model carries: no residual df (so no intervals), an average
  * block, and significant curvature (p < alpha from the center runs; Montgomery, Design and
- * Analysis of Experiments, 8th ed., section 6.8). Cost O(1).
+ * Analysis of Experiments, 8th ed., section 6.8), which biases a model without squares and is
+ * allowed for by one with them. Cost O(terms).
  * Example: modelNotes({ ...model, curvatureP: 0.2 }, 0.05) -> [] for an unblocked model with residual df.
  */
 export function modelNotes(model: FittedModel, alpha: number): string[] {
@@ -74,8 +76,11 @@ export function modelNotes(model: FittedModel, alpha: number): string[] {
   }
   if (model.blockColumns > 0) out.push('The prediction is for an average block.');
   if (model.curvatureP !== null && model.curvatureP < alpha) {
+    const squares = model.terms.filter(isSquare);
     out.push(
-      `Curvature is significant (p ${fmtP(model.curvatureP)}): the center runs differ from the corners, so this first-order model is biased between the corners as well.`,
+      squares.length > 0
+        ? `Curvature is significant (p ${fmtP(model.curvatureP)}): the center runs differ from the corners; the model's square terms (${squares.map((t) => termLetters(t, model.factors)).join(', ')}) allow for it.`
+        : `Curvature is significant (p ${fmtP(model.curvatureP)}): the center runs differ from the corners, so this first-order model is biased between the corners as well.`,
     );
   }
   return out;
@@ -133,17 +138,11 @@ export function predictSettings(model: FittedModel, settings: readonly FactorSet
   const baseline = model.coef[0];
   let fit = baseline;
   for (const c of contributions) fit += c.value;
-  let se: number | null = null;
-  let ci: [number, number] | null = null;
-  let pi: [number, number] | null = null;
-  if (predictor.sigma !== null && predictor.tValue !== null) {
-    const q = predictor.varianceFactor(x);
-    se = predictor.sigma * Math.sqrt(q);
-    const h = predictor.tValue * se;
-    const hp = predictor.tValue * predictor.sigma * Math.sqrt(1 + q);
-    ci = [fit - h, fit + h];
-    pi = [fit - hp, fit + hp];
-  }
+  const known = predictor.sigma !== null && predictor.tValue !== null;
+  const r = tIntervals(fit, known ? predictor.varianceFactor(x) : 0, predictor.sigma, predictor.tValue);
+  const se = r.se;
+  const ci: [number, number] | null = r.ciLo !== null && r.ciHi !== null ? [r.ciLo, r.ciHi] : null;
+  const pi: [number, number] | null = r.piLo !== null && r.piHi !== null ? [r.piLo, r.piHi] : null;
   const outsideFactors = outsideRange(model.factors, x);
   const messages = [...centerNotes(settings), ...outsideFactors.map((o) => o.message)];
   if (outsideFactors.length > 0) {
@@ -170,9 +169,9 @@ export function predictSettings(model: FittedModel, settings: readonly FactorSet
 /**
  * Predicts one response at real settings, given by factor name or letter. A numeric factor not
  * given is held at its center; a categorical factor must be given (see parseSettings).
- * Method: coded x0, fit = b0 + sum_t b_t prod_{i in t} x0_i; se_fit = sigma sqrt(x0'(X'X)^-1 x0);
+ * Method: coded x0, fit = b0 + sum_t b_t prod_{i in t} x0_i (x0_i^2 for a square); se_fit = sigma sqrt(x0'(X'X)^-1 x0);
  * CI = fit +- t_{0.025,df} se_fit (mean response) and PI = fit +- t_{0.025,df} sigma
- * sqrt(1 + x0'(X'X)^-1 x0) (one new run) (Montgomery, Design and Analysis of Experiments, 8th
+ * sqrt(1 + x0'(X'X)^-1 x0) (one new run), by tIntervals (Montgomery, Design and Analysis of Experiments, 8th
  * ed., section 10.6, Eqs. 10.39-10.41). Each term's contribution is b_t x its product of coded
  * values; the fit is summed as baseline + contributions in the order listed, so they agree
  * exactly. With residual df 0 se, ci and pi are null and a message says why.

@@ -1,13 +1,14 @@
 /**
  * Solve for one numeric factor: the real setting that gives a target response with the other
- * factors held. With the others held the model is linear in that factor (every term holds it at
- * most once), so the answer is exact.
+ * factors held. With the others held the model is linear in that factor (every product term
+ * holds it at most once), or quadratic when the model holds its square, so the answer is exact:
+ * one root of a line, or up to two roots of a parabola.
  */
 import { InputError } from '../errors.ts';
 import { toReal } from '../factor/coding.ts';
 import { findFactor } from '../factor/factor.ts';
 import type { FittedModel } from '../fit/analysis.ts';
-import { termLetters, termValue } from '../model/term.ts';
+import { isSquare, termLetters, termMask, termValue } from '../model/term.ts';
 import { SETTING_TOLERANCE } from '../tolerance.ts';
 import { CAUTION } from './caution.ts';
 import { cachedPredictor } from './compiled-predictor.ts';
@@ -38,7 +39,10 @@ export interface Solution {
   readonly response: string;
   readonly factor: { readonly name: string; readonly letter: string; readonly unit?: string };
   readonly target: number;
-  /** The real setting: the exact answer when reachable, else the nearest setting inside the range. */
+  /**
+   * The real setting: the exact answer when reachable (when two settings give the target, the
+   * one nearer the center), else the setting inside the range whose fit comes nearest the target.
+   */
   readonly setting: number;
   readonly coded: number;
   /** True when a setting inside the tested range gives the target. */
@@ -49,10 +53,19 @@ export interface Solution {
   readonly level: number;
   readonly ci: readonly [number, number] | null;
   readonly pi: readonly [number, number] | null;
-  /** Change of the fit per coded unit of the factor, at the held settings. */
+  /** Every setting inside the tested range that gives the target, low to high (up to two with a
+   * square; empty when none does, or when the factor has no effect at all). */
+  readonly solutions: readonly { readonly setting: number; readonly coded: number }[];
+  /** Change of the fit per coded unit of the factor at its center, the others held (s in a + s x + q x^2). */
   readonly slope: number;
-  /** Fit with the factor at its -1 and +1 settings: the span the tested range reaches. */
+  /** Coefficient q of the factor's coded square at the held settings; 0 when the model has no square of it. */
+  readonly quadratic: number;
+  /** Where the fit turns (x = -s / 2q) when quadratic is not 0, inside the range or not; else null. */
+  readonly stationary: { readonly real: number | null; readonly coded: number; readonly fit: number } | null;
+  /** Fit with the factor at its -1 and +1 settings (with a square the fit between may go beyond them). */
   readonly reach: readonly [number, number];
+  /** The lowest and highest fit over the tested range of the factor, the others held: what it can reach. */
+  readonly span: readonly [number, number];
   /** The setting the model would need outside the tested range (an extrapolation); null otherwise. */
   readonly needed: { readonly real: number | null; readonly coded: number } | null;
   /** Every factor's setting, the solved one included. */
@@ -74,14 +87,20 @@ function signed(x: number): string {
 
 /**
  * Finds the real setting of one numeric factor that gives the target response, the others held.
- * Method: with the others held at coded values, every term either omits factor j (adding a
- * constant) or holds it once, so yhat(x_j) = a + s x_j with a = b0 + sum_{t not containing j} b_t
- * prod_t x and s = sum_{t containing j} b_t prod_{t \ j} x; then x_j = (target - a) / s, mapped to
- * real units (common practice for a model linear in each factor; Montgomery, Design and
- * Analysis of Experiments, 8th ed., section 6.7, on coded and real units). When |x_j| > 1 the
- * target lies outside what the tested range reaches: the result gives the nearest end of the
- * range (reachable false) and the setting that would be needed. When s is 0 at the held settings
- * no setting changes the fit: the center is given. The fit, CI and PI at the setting follow
+ * Method: with the others held at coded values, every product term either omits factor j
+ * (adding a constant) or holds it once, and the square of j (when the model has it) holds it
+ * twice, so yhat(x_j) = a + s x_j + q x_j^2 with a = b0 + sum_{t not containing j} b_t prod_t x,
+ * s = sum_{products t containing j} b_t prod_{t \ j} x and q = b_jj. With q = 0 (no square of j),
+ * x_j = (target - a) / s, mapped to real units (common practice for a model linear in each
+ * factor; Montgomery, Design and Analysis of Experiments, 8th ed., section 6.7, on coded and real
+ * units). When |x_j| > 1 the target lies outside what the tested range reaches: the result gives
+ * the nearest end of the range (reachable false) and the setting that would be needed. When s is
+ * 0 at the held settings no setting changes the fit: the center is given. With q not 0 the roots
+ * of q x^2 + s x + (a - target) = 0 are taken (a cancellation-free formula, see quadraticRoots):
+ * every root inside the range is listed in `solutions` and the one nearer the center is the
+ * answer; with none inside, the answer is the setting in the range whose fit comes nearest the
+ * target (an end, or the turning point x = -s / 2q), and `needed` is the root nearest the range,
+ * or null when the parabola never reaches the target. The fit, CI and PI at the setting follow
  * Montgomery section 10.6 (see compilePredictor).
  * Cost O(p) after the model is compiled.
  * Throws InputError for a non-finite target, an unknown factor, a categorical factor (it has no
@@ -89,7 +108,8 @@ function signed(x: number): string {
  * the factor solved for, and as parseSettings does.
  * Example: for yhat = 40.44 + 0.775 x1 + 0.325 x2 (time 30..40 min; Montgomery 8th ed., section 6.8
  * data), solveForTarget(model, { factor: 'Time', target: 41, at: { Temperature: 155 } }).setting
- * -> 38.59 (x1 = 0.717).
+ * -> 38.59 (x1 = 0.717). For yhat = 10 + x1 - 4 x1^2 (invented), target 9.5: solutions at
+ * x1 = -0.25 and 0.5, and the answer is x1 = -0.25.
  */
 export function solveForTarget(model: FittedModel, options: SolveOptions): Solution {
   const { target } = options;
@@ -121,13 +141,18 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
   x[j] = 0;
   const nb = model.blockColumns;
   const bit = 1 << j;
+  // yhat(x_j) = a + s x_j + q x_j^2 with the others held.
   let a = model.coef[0];
   let s = 0;
+  let q = 0;
   let scale = Math.abs(a);
   const partners: string[] = [];
   model.terms.forEach((t, i) => {
     const coef = model.coef[1 + nb + i];
-    if (t & bit) {
+    if (isSquare(t) && termMask(t) === bit) {
+      q += coef;
+      scale += Math.abs(coef);
+    } else if (!isSquare(t) && t & bit) {
       const other = termValue(t & ~bit, x);
       s += coef * other;
       scale += Math.abs(coef * other);
@@ -138,39 +163,104 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
       scale += Math.abs(v);
     }
   });
-  const reach: [number, number] = [a - s, a + s];
+  const quadratic = Math.abs(q) > ZERO_SLOPE_TOLERANCE * scale;
+  if (!quadratic) q = 0;
+  const fitAt = (c: number) => a + s * c + q * c * c;
+  const reach: [number, number] = [fitAt(-1), fitAt(1)];
   const unit = f.unit;
   const messages: string[] = [...centerNotes(held)];
   let coded: number;
   let reachable: boolean;
   let needed: Solution['needed'] = null;
-  const lo = Math.min(reach[0], reach[1]);
-  const hi = Math.max(reach[0], reach[1]);
-  const span = `${fmt(lo)} to ${fmt(hi)}`;
-  if (Math.abs(s) <= ZERO_SLOPE_TOLERANCE * scale) {
-    coded = 0;
-    reachable = Math.abs(target - a) <= ZERO_SLOPE_TOLERANCE * scale;
-    messages.push(
-      reachable
-        ? `${f.name} has no effect at these settings (slope 0) and the fit already equals the target: every setting in the tested range gives ${fmt(a)}; its center is shown.`
-        : `${f.name} has no effect at these settings (slope 0): every setting in the tested range gives ${fmt(a)}, so the target ${fmt(target)} cannot be reached by ${f.name}; its center is shown.`,
-    );
-  } else {
-    const xs = (target - a) / s;
-    if (Math.abs(xs) <= 1 + SETTING_TOLERANCE) {
-      coded = Math.max(-1, Math.min(1, xs));
-      reachable = true;
-      messages.push(`To reach ${fmt(target)}, set ${f.name} to ${formatSetting(toReal(f, coded) as number, unit)} (coded ${signed(coded)}).`);
-    } else {
-      coded = Math.sign(xs);
-      reachable = false;
-      const real = toReal(f, xs) as number;
-      needed = { real: Number.isFinite(real) ? real : null, coded: xs };
-      const nearest = toReal(f, coded) as number;
+  let solutions: { setting: number; coded: number }[] = [];
+  let stationary: Solution['stationary'] = null;
+  let spanLoHi: [number, number];
+  const inRange = (c: number) => Math.abs(c) <= 1 + SETTING_TOLERANCE;
+  const clamp = (c: number) => Math.max(-1, Math.min(1, c));
+  const realOf = (c: number) => toReal(f, c) as number;
+  const at = (c: number) => `${formatSetting(realOf(c), unit)} (coded ${signed(c)})`;
+  if (!quadratic) {
+    const lo = Math.min(reach[0], reach[1]);
+    const hi = Math.max(reach[0], reach[1]);
+    const span = `${fmt(lo)} to ${fmt(hi)}`;
+    spanLoHi = [lo, hi];
+    if (Math.abs(s) <= ZERO_SLOPE_TOLERANCE * scale) {
+      coded = 0;
+      reachable = Math.abs(target - a) <= ZERO_SLOPE_TOLERANCE * scale;
       messages.push(
-        `The target ${fmt(target)} lies outside what the tested range of ${f.name} reaches at these settings (${span})` +
-          (needed.real !== null ? `; the model would need ${f.name} = ${formatSetting(needed.real, unit)} (coded ${signed(xs)}), an extrapolation` : '; the model would need a setting far outside the range') +
-          `. The nearest setting inside the range is ${formatSetting(nearest, unit)} (the ${coded > 0 ? 'high' : 'low'} setting).`,
+        reachable
+          ? `${f.name} has no effect at these settings (slope 0) and the fit already equals the target: every setting in the tested range gives ${fmt(a)}; its center is shown.`
+          : `${f.name} has no effect at these settings (slope 0): every setting in the tested range gives ${fmt(a)}, so the target ${fmt(target)} cannot be reached by ${f.name}; its center is shown.`,
+      );
+    } else {
+      const xs = (target - a) / s;
+      if (inRange(xs)) {
+        coded = clamp(xs);
+        reachable = true;
+        solutions = [{ setting: realOf(coded), coded }];
+        messages.push(`To reach ${fmt(target)}, set ${f.name} to ${formatSetting(realOf(coded), unit)} (coded ${signed(coded)}).`);
+      } else {
+        coded = Math.sign(xs);
+        reachable = false;
+        const real = realOf(xs);
+        needed = { real: Number.isFinite(real) ? real : null, coded: xs };
+        messages.push(
+          `The target ${fmt(target)} lies outside what the tested range of ${f.name} reaches at these settings (${span})` +
+            (needed.real !== null ? `; the model would need ${f.name} = ${formatSetting(needed.real, unit)} (coded ${signed(xs)}), an extrapolation` : '; the model would need a setting far outside the range') +
+            `. The nearest setting inside the range is ${formatSetting(realOf(coded), unit)} (the ${coded > 0 ? 'high' : 'low'} setting).`,
+        );
+      }
+    }
+  } else {
+    const xv = -s / (2 * q);
+    const yv = a - (s * s) / (4 * q);
+    const vReal = realOf(xv);
+    stationary = { real: Number.isFinite(vReal) ? vReal : null, coded: xv, fit: yv };
+    // The span the range reaches: the ends, and the turning point when it lies inside.
+    const ends = inRange(xv) ? [-1, 1, clamp(xv)] : [-1, 1];
+    let cLo = ends[0];
+    let cHi = ends[0];
+    for (const c of ends) {
+      if (fitAt(c) < fitAt(cLo)) cLo = c;
+      if (fitAt(c) > fitAt(cHi)) cHi = c;
+    }
+    spanLoHi = [fitAt(cLo), fitAt(cHi)];
+    const span = `${fmt(spanLoHi[0])} to ${fmt(spanLoHi[1])}`;
+    const roots = quadraticRoots(q, s, a - target);
+    const inside = roots.filter(inRange).map(clamp);
+    messages.push(
+      `The model is quadratic in ${f.name} (coefficient of its square ${signed(q)} in coded units): at these settings the fit turns ${q < 0 ? 'down' : 'up'} at ${f.name} = ` +
+        (stationary.real !== null ? formatSetting(stationary.real, unit) : 'a setting far outside the range') +
+        ` (coded ${signed(xv)}), where it is ${fmt(yv)}${inRange(xv) ? '' : ', outside the tested range'}.`,
+    );
+    if (inside.length > 0) {
+      reachable = true;
+      solutions = inside.map((c) => ({ setting: realOf(c), coded: c }));
+      coded = inside.reduce((best, c) => (Math.abs(c) < Math.abs(best) ? c : best));
+      messages.push(
+        inside.length === 1
+          ? `To reach ${fmt(target)}, set ${f.name} to ${at(coded)}.`
+          : `Two settings of ${f.name} inside the tested range give ${fmt(target)}: ${at(inside[0])} and ${at(inside[1])}; the one nearer the center is shown.`,
+      );
+    } else {
+      reachable = false;
+      coded = target > fitAt(cHi) ? cHi : cLo;
+      const where = coded === 1 ? 'the high setting' : coded === -1 ? 'the low setting' : `where the fit turns`;
+      let need = '';
+      if (roots.length > 0) {
+        const r = roots.reduce((best, c) => (Math.abs(c) < Math.abs(best) ? c : best));
+        const real = realOf(r);
+        needed = { real: Number.isFinite(real) ? real : null, coded: r };
+        need =
+          needed.real !== null
+            ? `; the model would need ${f.name} = ${formatSetting(needed.real, unit)} (coded ${signed(r)}), an extrapolation`
+            : '; the model would need a setting far outside the range';
+      } else {
+        need = `; no setting of ${f.name} reaches it in the fitted model, whose fit ${q < 0 ? 'peaks' : 'bottoms out'} at ${fmt(yv)}`;
+      }
+      messages.push(
+        `The target ${fmt(target)} lies outside what the tested range of ${f.name} reaches at these settings (${span})${need}. ` +
+          `The nearest setting inside the range is ${formatSetting(realOf(coded), unit)} (${where}).`,
       );
     }
   }
@@ -199,8 +289,12 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
     level,
     ci: r.ciLo !== null && r.ciHi !== null ? [r.ciLo, r.ciHi] : null,
     pi: r.piLo !== null && r.piHi !== null ? [r.piLo, r.piHi] : null,
+    solutions,
     slope: s,
+    quadratic: q,
+    stationary,
     reach,
+    span: spanLoHi,
     needed,
     settings,
     outside: outsideFactors.length > 0,
@@ -208,4 +302,25 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
     messages,
     caution: CAUTION,
   };
+}
+
+/**
+ * Real roots of q x^2 + s x + c = 0 (q not 0), low to high; a double root once. Method: the
+ * cancellation-free form x1 = w / q, x2 = c / w with w = -(s + sign(s) sqrt(s^2 - 4qc)) / 2
+ * (Press, Teukolsky, Vetterling and Flannery, Numerical Recipes, 3rd ed., section 5.6). A
+ * discriminant below 0 by no more than rounding (ZERO_SLOPE_TOLERANCE relative to s^2 + |4qc|)
+ * counts as 0: the target sits at the turning point.
+ */
+function quadraticRoots(q: number, s: number, c: number): number[] {
+  let disc = s * s - 4 * q * c;
+  if (disc < 0) {
+    if (-disc > ZERO_SLOPE_TOLERANCE * (s * s + Math.abs(4 * q * c))) return [];
+    disc = 0;
+  }
+  const w = -0.5 * (s + (s >= 0 ? 1 : -1) * Math.sqrt(disc));
+  if (w === 0) return [0]; // s = 0 and c = 0: the double root at 0
+  const x1 = w / q;
+  const x2 = c / w;
+  if (disc === 0) return [x1];
+  return x1 < x2 ? [x1, x2] : [x2, x1];
 }

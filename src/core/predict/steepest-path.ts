@@ -8,7 +8,7 @@ import { InputError } from '../errors.ts';
 import { centerAndHalfRange, toReal } from '../factor/coding.ts';
 import { findFactor } from '../factor/factor.ts';
 import type { FittedModel } from '../fit/analysis.ts';
-import { termLetters, termOrder } from '../model/term.ts';
+import { isInteraction, isSquare, mainEffect, termLetters } from '../model/term.ts';
 import type { Response } from '../study/response.ts';
 import { CAUTION } from './caution.ts';
 import { cachedPredictor, type PointInterval } from './compiled-predictor.ts';
@@ -118,7 +118,10 @@ function fmtP(p: number): string {
  * are held still. Each step's prediction uses the full fitted model, and a step is marked
  * outside once it leaves the tested range (the point of the path is to leave it). Warns when
  * interactions or curvature are significant, since the first-order direction then points less
- * reliably. Worked example (Montgomery 8th ed., section 11.2): yhat = 40.44 + 0.775 x1 +
+ * reliably. With squares in the model the direction is unchanged (at the center the gradient of a
+ * second-order model is still the main-effect coefficients, since b_ii x_i^2 and b_ij x_i x_j
+ * have zero slope there: plain calculus) and a message says that the surface curves along the
+ * path. Worked example (Montgomery 8th ed., section 11.2): yhat = 40.44 + 0.775 x1 +
  * 0.325 x2, base time with a 5 min step -> Delta x1 = 1, Delta x2 = 0.42, about 2 degF per step.
  * Cost O(steps x p) after the model is compiled.
  * Throws InputError for a step that is not a positive number (a ratio above 1 on a log scale), a
@@ -139,7 +142,7 @@ export function steepestPath(model: FittedModel, options: PathOptions): Steepest
   const factors = model.factors;
   const nb = model.blockColumns;
   const mainCoef = factors.map((_, i) => {
-    const j = model.terms.indexOf(1 << i);
+    const j = model.terms.indexOf(mainEffect(i));
     return j < 0 ? 0 : model.coef[1 + nb + j];
   });
   const messages: string[] = [];
@@ -240,13 +243,24 @@ export function steepestPath(model: FittedModel, options: PathOptions): Steepest
   if (model.dfResidual <= 0 || model.sigma === null) {
     messages.push('No runs are left over to estimate the noise (residual df 0): the significance of interactions and curvature cannot be judged, and there are no intervals.');
   }
-  const significant = model.terms
-    .filter((t) => termOrder(t) >= 2)
-    .map((t) => ({ t, p: model.pValues.get(t) ?? null }))
-    .filter((e): e is { t: number; p: number } => e.p !== null && e.p < alpha);
+  const significantOf = (keep: (t: number) => boolean) =>
+    model.terms
+      .filter(keep)
+      .map((t) => ({ t, p: model.pValues.get(t) ?? null }))
+      .filter((e): e is { t: number; p: number } => e.p !== null && e.p < alpha);
+  const significant = significantOf(isInteraction);
   if (significant.length > 0) {
     messages.push(
       `Interactions are significant (${significant.map((e) => `${termLetters(e.t, factors)} p ${fmtP(e.p)}`).join(', ')}): the response surface twists, so the path from the main effects points less reliably.`,
+    );
+  }
+  const squares = model.terms.filter(isSquare);
+  if (squares.length > 0) {
+    const sig = significantOf(isSquare);
+    messages.push(
+      `The model holds squares (${squares.map((t) => termLetters(t, factors)).join(', ')}): the path still starts in the direction of steepest ${sense} at the center (the gradient there is the main-effect coefficients), but the fitted surface curves, so a straight path may pass a peak or a valley; the predictions along it use every term` +
+        (sig.length > 0 ? `, and the squares ${sig.map((e) => `${termLetters(e.t, factors)} p ${fmtP(e.p)}`).join(', ')} are significant` : '') +
+        '. With a second-order model, its stationary point and canonical analysis describe the surface better than a straight path.',
     );
   }
   if (model.curvatureP !== null && model.curvatureP < alpha) {

@@ -7,4 +7,12 @@ export interface Response {
   /** 'maximize' and 'minimize' steer the path of steepest ascent or descent; 'target' aims at `target`. */
   readonly goal: 'maximize' | 'minimize' | 'target';
   readonly target?: number;
+  /**
+   * The lowest value the response can take in the physical world, in its unit, or null when it
+   * has none: 0 for a response that cannot be negative (a thickness, a count of defects, a
+   * time). A finite number when given. A plan may leave it out (read as null); every stored
+   * study and every backup carries it, null or a number. It does not change the analysis yet;
+   * it is recorded so that readings at or near the floor can be treated as such later.
+   */
+  readonly lowerBound?: number | null;
 }

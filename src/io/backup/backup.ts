@@ -3,7 +3,7 @@
  * revision of every logged run (the whole history). Its shape is written down in
  * trialbook-backup.schema.json and backup-format.md beside this file.
  *
- *   { "format": "trialbook-backup", "formatVersion": 1,
+ *   { "format": "trialbook-backup", "formatVersion": 2,
  *     "app": { "name": "Trialbook", "version": "0.1.0" },
  *     "exportedAt": "...", "device": "...", "scope": "all" | "study",
  *     "counts": { "studies": 1, "runs": 16, "revisions": 19 },
@@ -11,20 +11,27 @@
  *     "payload": { "studies": [...], "revisions": [...] } }
  *
  * The checksum is SHA-256 (FIPS 180-4) of the UTF-8 bytes of the canonical JSON of `payload`
- * (see canonical.ts). Reading checks, in this order: that the text is JSON, the format name, the
- * version (a newer one is refused, an older one migrated), the checksum, then every field.
+ * (src/core/records/canonical-json.ts). Reading checks, in this order: that the text is JSON,
+ * the format name, the version (a newer one is refused, an older one migrated), the checksum,
+ * then every field (the record checks of src/core/records, the same the store applies on every
+ * write).
  */
 import { InputError } from '../../core/errors.ts';
 import type { RunRevision, StudyRecord } from '../../core/study/study.ts';
-import { defaultDigest, portableDigest, sha256, toHex, utf8Encode, type Digest } from '../sha256.ts';
+import { canonicalJson } from '../../core/records/canonical-json.ts';
+import { checkHistories, checkUniqueIds } from '../../core/records/check-histories.ts';
+import { checkRevision } from '../../core/records/check-revision.ts';
+import { checkStudy } from '../../core/records/check-study.ts';
+import { id, int, list, obj, only, text, time } from '../../core/records/field-checks.ts';
+import { sha256, toHex, utf8Encode } from '../../core/records/sha256.ts';
+import { defaultDigest, portableDigest, type Digest } from '../digest.ts';
 import { APP_NAME, APP_VERSION } from '../app-version.ts';
-import { canonicalJson } from './canonical.ts';
 import { jsonErrorOffset } from './json-error.ts';
-import { checkHistories, checkRevision, checkStudy, checkUniqueIds, id, int, list, obj, only, text, time } from './validate.ts';
+import { backupV1ToV2 } from './migrate-v1.ts';
 
 export const BACKUP_FORMAT = 'trialbook-backup';
-/** The format version this code writes. */
-export const BACKUP_VERSION = 1;
+/** The format version this code writes (version 2: open run kinds, block of origin, lower bound). */
+export const BACKUP_VERSION = 2;
 
 export interface BackupPayload {
   readonly studies: readonly StudyRecord[];
@@ -54,10 +61,12 @@ export interface Backup {
 
 /**
  * Upgrades of older format versions: MIGRATIONS[v] turns a version-v document (already checked
- * for its checksum) into a version v+1 document. Version 1 is the first, so none exist yet; when
- * version 2 comes, MIGRATIONS[1] is added together with a fixture file of version 1 in test/.
+ * for its checksum) into a version v+1 document. Each step comes with a fixture file of its
+ * version in test/fixtures (trialbook-backup-v1.json for version 1).
  */
-export const MIGRATIONS: Readonly<Record<number, (doc: Record<string, unknown>) => Record<string, unknown>>> = {};
+export const MIGRATIONS: Readonly<Record<number, (doc: Record<string, unknown>) => Record<string, unknown>>> = {
+  1: backupV1ToV2,
+};
 
 /** Counts of a payload. */
 export function countPayload(p: BackupPayload): BackupCounts {

@@ -8,7 +8,7 @@
  */
 import { InputError } from '../../core/errors.ts';
 import { currentRun, type LoggedRun, type RunRevision, type StudyRecord } from '../../core/study/study.ts';
-import { canonicalJson } from './canonical.ts';
+import { canonicalJson } from '../../core/records/canonical-json.ts';
 import type { BackupPayload } from './backup.ts';
 
 /** Runs whose edits diverged: more than one revision that nobody has built on. */

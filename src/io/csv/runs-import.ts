@@ -15,7 +15,7 @@ import type { Response } from '../../core/study/response.ts';
 import { parseReadings } from '../../core/study/run-form.ts';
 import { checkRunValues, type RunValues, type StudyPlan } from '../../core/study/study.ts';
 import { SETTING_TOLERANCE } from '../../core/tolerance.ts';
-import { MAX_TEXT, MAX_TIME } from '../backup/validate.ts';
+import { MAX_TEXT, MAX_TIME } from '../../core/records/field-checks.ts';
 import { bareColumnName, columnUnit, readTable, rowNumber, type Table } from './read-table.ts';
 
 export type ColumnRole = 'factor' | 'response' | 'block' | 'notes' | 'excluded' | 'reason' | 'operator' | 'time' | 'ignore';
@@ -39,6 +39,8 @@ export interface ResponseColumn {
   readonly unit?: string;
   readonly goal: Response['goal'];
   readonly target?: number;
+  /** The lowest value the response can take (0: cannot be negative); none when not given. */
+  readonly lowerBound?: number | null;
 }
 
 export interface CsvMapping {
@@ -226,7 +228,7 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
     const unit = r.unit ?? columnUnit(header);
     const name = (r.name ?? header.replace(/\s*\([^)]*\)\s*/g, ' ')).trim();
     if (r.goal === 'target' && (r.target === undefined || !Number.isFinite(r.target))) throw new InputError(`${name}: the goal "target" needs a target value`);
-    return { name, goal: r.goal, ...(unit ? { unit } : {}), ...(r.goal === 'target' ? { target: r.target } : {}) };
+    return { name, goal: r.goal, ...(unit ? { unit } : {}), ...(r.goal === 'target' ? { target: r.target } : {}), ...(r.lowerBound != null ? { lowerBound: r.lowerBound } : {}) };
   });
 
   const designRuns: DesignRun[] = [];
@@ -286,6 +288,7 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
       yates: corner ? 1 + coded.reduce((s, v, j) => s + (v > 0 ? 2 ** j : 0), 0) : null,
       replicate,
       block,
+      originBlock: block,
       kind: center ? 'center' : 'factorial',
       coded,
     });

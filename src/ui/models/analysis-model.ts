@@ -8,7 +8,7 @@ import { computed, createModel, signal, type ReadonlySignal } from '@preact/sign
 import type { Analysis, TermEstimate } from '../../core/fit/analysis.ts';
 import { analyze } from '../../core/fit/analyze.ts';
 import { termsUpToOrder } from '../../core/model/formula.ts';
-import { termOrder, type Term } from '../../core/model/term.ts';
+import { isInteraction, termOrder, type Term } from '../../core/model/term.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
 import { responseDataFromRuns } from '../../core/study/run-data.ts';
 import type { Store } from '../../store/store.ts';
@@ -43,7 +43,7 @@ export function analyseResponse(d: StudyData, responseIndex: number, choice: Mod
 
 /** The model's two-factor terms, largest |effect| first. */
 export function twoFactorTerms(a: Analysis): TermEstimate[] {
-  return a.terms.filter((t) => termOrder(t.term) === 2).sort((x, y) => Math.abs(y.effect) - Math.abs(x.effect));
+  return a.terms.filter((t) => isInteraction(t.term) && termOrder(t.term) === 2).sort((x, y) => Math.abs(y.effect) - Math.abs(x.effect));
 }
 
 export const AnalysisModel = createModel((store: Store, studyId: string) => {

@@ -24,7 +24,7 @@ export async function backupText(store: Store, studyIds?: readonly string[]): Pr
   } catch (err) {
     if (!(err instanceof StorageError)) throw err;
     const payload = await payloadOf(store, studyIds);
-    return writeBackup(payload, { device: store.device, exportedAt: new Date().toISOString(), scope: studyIds ? 'study' : 'all' });
+    return writeBackup(payload, { device: store.device, exportedAt: store.now().toISOString(), scope: studyIds ? 'study' : 'all' });
   }
 }
 

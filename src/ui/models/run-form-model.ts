@@ -235,7 +235,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
       change({ reason });
     },
     setTimeNow() {
-      change({ loggedAt: new Date().toISOString() });
+      change({ loggedAt: store.now().toISOString() });
     },
 
     /** Checks the form and saves it as a new revision; a wrong entry changes nothing. */
@@ -244,7 +244,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
       const typed = form.peek();
       if (!s || !typed || saveState.peek() === 'saving') return;
       // A run without a time gets the time of its first saving.
-      const f = typed.loggedAt.trim() === '' && !s.current ? { ...typed, loggedAt: new Date().toISOString() } : typed;
+      const f = typed.loggedAt.trim() === '' && !s.current ? { ...typed, loggedAt: store.now().toISOString() } : typed;
       let values;
       try {
         values = parseRunForm(s.study, f);

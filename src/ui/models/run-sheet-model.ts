@@ -3,6 +3,7 @@
  * whether each is logged (and excluded), and whether typing is waiting in a draft.
  */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
+import type { RunKind } from '../../core/design/design.ts';
 import { meanReading, plannedSettings, type LoggedRun, type Setting, type StudyRecord } from '../../core/study/study.ts';
 import type { Draft } from '../../store/db.ts';
 import { listDrafts } from '../../store/drafts.ts';
@@ -13,7 +14,7 @@ import { problemOf, type Problem } from '../lib/problem.ts';
 
 export interface SheetRow {
   readonly run: number;
-  readonly kind: 'factorial' | 'center' | string;
+  readonly kind: RunKind;
   readonly block: number;
   readonly planned: readonly Setting[];
   /** Logged runs of this planned run (usually none or one). */

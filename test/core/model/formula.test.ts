@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { defaultTerms, parseTerms, termsUpToOrder } from '../../../src/core/model/formula.ts';
+import { defaultTerms, parseTerms, quadraticTerms, termsUpToOrder } from '../../../src/core/model/formula.ts';
+import { InputError } from '../../../src/core/errors.ts';
 import { termLetters, termName } from '../../../src/core/model/term.ts';
 import { defineFactors } from '../../../src/core/factor/factor.ts';
 
@@ -49,5 +50,36 @@ describe('termsUpToOrder and defaultTerms', () => {
   });
   it('refuses order 0', () => {
     expect(() => termsUpToOrder(3, 0)).toThrow(/order/);
+  });
+});
+
+// Squares: the second-order model y = b0 + sum b_i x_i + sum b_ij x_i x_j + sum b_ii x_i^2
+// (Montgomery, Design and Analysis of Experiments, 8th ed., section 11.1, from memory). A power of
+// one factor's name is its square; a power of a parenthesised sum keeps the Wilkinson-Rogers crossing.
+describe('parseTerms: squares and the quadratic model', () => {
+  it('a power of one name is its square, by name or letter; a power of a sum is still a crossing', () => {
+    expect(letters('A + A^2')).toEqual(['A', 'A^2']);
+    expect(letters('Temperature^2 + Time^2 + A:C')).toEqual(['AC', 'A^2', 'C^2']);
+    expect(letters('(A+B+C)^2')).toEqual(['A', 'B', 'C', 'AB', 'AC', 'BC']);
+    expect(letters('A^1')).toEqual(['A']);
+    expect(letters('A^2 - A^2 + C')).toEqual(['C']);
+  });
+  it('quadratic: main effects, two-factor interactions and the squares of the numeric factors', () => {
+    expect(letters('quadratic')).toEqual(['A', 'B', 'C', 'AB', 'AC', 'BC', 'A^2', 'C^2']);
+    expect(letters('quadratic - A:B - C^2')).toEqual(['A', 'B', 'C', 'AC', 'BC', 'A^2']);
+    expect(quadraticTerms(factors)).toEqual(parseTerms('quadratic', factors));
+  });
+  it('refuses cubes, squares inside interactions and squares of categorical factors, saying why', () => {
+    expect(() => parseTerms('A^3', factors)).toThrow(/cubes and higher powers of a factor are not supported/);
+    expect(() => parseTerms('A^2:C', factors)).toThrow(/A\^2:C would put a square inside an interaction/);
+    expect(() => parseTerms('A^2*C', factors)).toThrow(/square inside an interaction/);
+    expect(() => parseTerms('(A^2 + C)^2', factors)).toThrow(/square inside an interaction/);
+    expect(() => parseTerms('A^2:A', factors)).toThrow(/three times or more/);
+    expect(() => parseTerms('AC^2', factors)).toThrow(/AC\^2 would put a square inside an interaction/);
+    expect(() => parseTerms('Powder^2', factors)).toThrow(/Powder is categorical \("matte" or "gloss"\)/);
+    expect(() => parseTerms('B^2', factors)).toThrow(InputError);
+  });
+  it('degenerate: quadraticTerms of no factors', () => {
+    expect(() => quadraticTerms([])).toThrow(/at least one factor, got none/);
   });
 });

@@ -1,12 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { analyze } from '../../../src/core/fit/analyze.ts';
-import { termsUpToOrder } from '../../../src/core/model/formula.ts';
+import { parseTerms, termsUpToOrder } from '../../../src/core/model/formula.ts';
+import { squareTerm } from '../../../src/core/model/term.ts';
 import { cachedPredictor, compilePredictor, type PointInterval } from '../../../src/core/predict/compiled-predictor.ts';
 import { InputError } from '../../../src/core/errors.ts';
 import { fixtureData } from '../../helpers/fixtures.ts';
 import { fullFactorial, handModel, lcg, numeric, responseData } from './designs.ts';
-import { jstatT, referenceModel } from './reference.ts';
+import { jstatT, referenceColumnsModel, referenceModel } from './reference.ts';
 
 function expectSame(got: PointInterval, ref: ReturnType<ReturnType<typeof referenceModel>['at']>, scale: number) {
   const tol = 1e-8 * scale;
@@ -141,5 +142,32 @@ describe('compilePredictor against ml-regression-multivariate-linear 2.0.4 (se_f
     expect(() => compilePredictor({ ...good, factors: [] })).toThrow(InputError);
     expect(() => compilePredictor(good, 1)).toThrow(/between 0 and 1/);
     expect(() => compilePredictor(good).fit([1])).toThrow(/needs 2 coded settings/);
+  });
+});
+
+describe('compilePredictor with squares, against ml-regression-multivariate-linear 2.0.4 on columns written by hand', () => {
+  it('central composite design (Montgomery 8th ed., Example 11.2 yield), full quadratic model: subset-table path', () => {
+    const data = fixtureData('montgomery-8e-ex11-2-ccd-yield.csv', { factors: ['Time', 'Temperature'], response: 'Yield', levels: { Time: ['80', '90'], Temperature: ['170', '180'] } });
+    const p = compilePredictor(analyze(data, { terms: parseTerms('quadratic', data.factors) }).model);
+    expect(p.diagonal).toBe(false); // the squares are correlated with the intercept
+    const ref = referenceColumnsModel(data, (x) => [x[0], x[1], x[0] * x[1], x[0] * x[0], x[1] * x[1]]);
+    for (const x of points(2, 21)) expectSame(p.interval(x), ref.at(x), 100);
+  });
+
+  it('five factors with two squares (term-by-term path), three-level random settings (invented response)', () => {
+    const r = lcg(31);
+    const k = 5;
+    const coded = Array.from({ length: 30 }, () => Array.from({ length: k }, () => Math.floor(r() * 3) - 1 + (r() - 0.5) * 0.05));
+    const y = coded.map((x) => 10 + 2 * x[0] - x[2] - 3 * x[0] * x[0] + 1.5 * x[2] * x[2] + r()); // invented
+    const data = responseData(Array.from({ length: k }, (_, i) => numeric(`F${i + 1}`)), coded, y);
+    const terms = [...termsUpToOrder(k, 1), squareTerm(0, data.factors), squareTerm(2, data.factors)];
+    const p = compilePredictor(analyze(data, { terms }).model);
+    const ref = referenceColumnsModel(data, (x) => [...x, x[0] * x[0], x[2] * x[2]]);
+    for (const x of points(k, 22)) expectSame(p.interval(x), ref.at(x), 100);
+  });
+
+  it('refuses a model holding the square of a categorical factor', () => {
+    const good = handModel([numeric('A'), { kind: 'categorical', name: 'Powder', levels: ['matte', 'gloss'] }], [1, 2], [1, 2, 3]);
+    expect(() => compilePredictor({ ...good, terms: [1, squareTerm(1)] })).toThrow(/Powder is categorical/);
   });
 });

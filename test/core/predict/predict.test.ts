@@ -9,7 +9,7 @@ import { centerNotes, modelNotes, predict, predictSettings } from '../../../src/
 import { parseSettings } from '../../../src/core/predict/parse-settings.ts';
 import { fixtureData } from '../../helpers/fixtures.ts';
 import { fullFactorial, handModel, lcg, numeric, responseData } from './designs.ts';
-import { referenceModel } from './reference.ts';
+import { referenceColumnsModel, referenceModel } from './reference.ts';
 
 const yieldData = fixtureData('montgomery-8e-ex6-6-center-points.csv', { factors: ['Time', 'Temperature'], response: 'Yield' });
 const yieldModel = analyze(yieldData, { terms: [1, 2] }).model;
@@ -180,5 +180,42 @@ describe('predict: a term the runs cannot separate is labelled with what it esti
     expect(p.contributions.find((c) => c.letters === 'C')!.estimates).toBe('C + AB');
     // the fitted value at a run of the fraction is that run's fitted value from the analysis
     expect(p.fit).toBeCloseTo(a.runs[3].fitted, 10);
+  });
+});
+
+describe('predict with squares: Montgomery 8th ed., Example 11.2 (central composite design, yield), full quadratic model', () => {
+  const data = fixtureData('montgomery-8e-ex11-2-ccd-yield.csv', { factors: ['Time', 'Temperature'], response: 'Yield', levels: { Time: ['80', '90'], Temperature: ['170', '180'] } });
+  const model = analyze(data, { terms: parseTerms('quadratic', data.factors) }).model;
+  // ml-regression-multivariate-linear 2.0.4 on the columns x1, x2, x1 x2, x1^2, x2^2 written by hand
+  const ref = referenceColumnsModel(data, (x) => [x[0], x[1], x[0] * x[1], x[0] * x[0], x[1] * x[1]]);
+
+  it('fit, se and both intervals equal the reference at real settings, inside and outside the range', () => {
+    for (const [time, temp] of [[85, 175], [87, 176.5], [78, 182], [95, 165]]) {
+      const p = predict(model, { Time: time, Temperature: temp });
+      const r = ref.at([(time - 85) / 5, (temp - 175) / 5]);
+      // 1e-7 absolute on values near 80: the reference library's own rounding is about 1e-9 here
+      expect(p.fit).toBeCloseTo(r.fit, 7);
+      expect(p.se!).toBeCloseTo(r.se, 7);
+      expect(p.ci![0]).toBeCloseTo(r.ci[0], 7);
+      expect(p.pi![1]).toBeCloseTo(r.pi[1], 7);
+    }
+  });
+
+  it('significant curvature: the note says the squares allow for it, not that a first-order model is biased', () => {
+    const notes = modelNotes({ ...model, curvatureP: 0.001 }, 0.05).join(' ');
+    expect(notes).toMatch(/the model's square terms \(A\^2, B\^2\) allow for it/);
+    expect(notes).not.toMatch(/first-order/);
+    expect(modelNotes({ ...model, terms: [1, 2, 3], curvatureP: 0.001 }, 0.05).join(' ')).toMatch(/first-order model is biased/);
+  });
+
+  it('a square contributes coef x (coded setting)^2, and the contributions add up to the fit', () => {
+    const p = predict(model, { Time: 90, Temperature: 172.5 }); // coded (1, -0.5)
+    const sq = Object.fromEntries(p.contributions.map((c) => [c.letters, c]));
+    expect(sq['A^2'].product).toBe(1);
+    expect(sq['B^2'].product).toBe(0.25); // (-0.5)^2, by hand
+    expect(sq['B^2'].value).toBeCloseTo(0.25 * sq['B^2'].coef, 14);
+    expect(sq['B^2'].name).toBe('Temperature^2');
+    expect(p.contributions.reduce((s, c) => s + c.value, p.baseline)).toBe(p.fit);
+    expect(p.fit).toBeCloseTo(ref.at([1, -0.5]).fit, 7);
   });
 });

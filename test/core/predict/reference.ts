@@ -37,8 +37,17 @@ export interface ReferenceInterval {
 
 /** A reference fit of the same model, and intervals at coded settings x0 for an average block (block columns 0). */
 export function referenceModel(data: ResponseData, terms: readonly number[], level = 0.95) {
-  const x = data.coded.map((row, i) => [...blockColumns(data, i), ...terms.map((t) => termValue(t, row))]);
-  const nb = x[0].length - terms.length;
+  return referenceColumnsModel(data, (row) => terms.map((t) => termValue(t, row)), level);
+}
+
+/**
+ * The same, with the model columns built by the caller from the coded settings (so a test can
+ * write x1^2 or x1 x2 by hand, independent of the core's term code).
+ */
+export function referenceColumnsModel(data: ResponseData, columns: (coded: readonly number[]) => number[], level = 0.95) {
+  const x = data.coded.map((row, i) => [...blockColumns(data, i), ...columns(row)]);
+  const width = columns(data.coded[0]).length;
+  const nb = x[0].length - width;
   const reg = new MLR(x, data.y.map((v) => [v]), { intercept: true, statistics: true });
   const cov = reg.stdErrorMatrix.to2DArray();
   const df = data.y.length - (x[0].length + 1);
@@ -47,7 +56,7 @@ export function referenceModel(data: ResponseData, terms: readonly number[], lev
   return {
     reg,
     at(x0: readonly number[]): ReferenceInterval {
-      const row = [...Array(nb).fill(0), ...terms.map((tm) => termValue(tm, x0))];
+      const row = [...Array(nb).fill(0), ...columns(x0)];
       const fit = reg.predict(row)[0];
       const v = [...row, 1];
       let q = 0;

@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { InputError } from '../../../src/core/errors.ts';
 import { analyze } from '../../../src/core/fit/analyze.ts';
-import { termsUpToOrder } from '../../../src/core/model/formula.ts';
+import { parseTerms, termsUpToOrder } from '../../../src/core/model/formula.ts';
+import { squareTerm } from '../../../src/core/model/term.ts';
 import { CAUTION } from '../../../src/core/predict/caution.ts';
 import { predict } from '../../../src/core/predict/predict.ts';
 import { solveForTarget } from '../../../src/core/predict/solve-for-target.ts';
@@ -113,5 +114,93 @@ describe('solveForTarget: zero slope, categorical factors, bad input (hand-built
     expect(s.se).toBeNull();
     expect(s.fit).toBeCloseTo(11, 12);
     expect(s.messages.join(' ')).toMatch(/residual df 0/);
+  });
+});
+
+describe('solveForTarget with a square: the model is quadratic in the factor solved for', () => {
+  // Invented coefficients: yhat = 10 + xA - 4 xA^2 (A 0..10); by hand, 9.5 is reached at xA = -0.25 and 0.5,
+  // the fit turns at xA = 1/8 with 10 + 1/16 = 10.0625.
+  const m = handModel([numeric('A', 0, 10), numeric('B', 0, 10)], [1, 2, squareTerm(0)], [10, 1, 0, -4]);
+
+  it('two roots inside the range: both listed, the one nearer the center is the answer', () => {
+    const s = solveForTarget(m, { factor: 'A', target: 9.5 });
+    expect(s.solutions.map((r) => r.coded)).toEqual([-0.25, 0.5]);
+    expect(s.solutions.map((r) => r.setting)).toEqual([3.75, 7.5]);
+    expect(s.coded).toBe(-0.25);
+    expect(s.reachable).toBe(true);
+    expect(s.fit).toBeCloseTo(9.5, 12);
+    expect(s.quadratic).toBe(-4);
+    expect(s.slope).toBe(1);
+    expect(s.stationary!.coded).toBeCloseTo(0.125, 15);
+    expect(s.stationary!.fit).toBeCloseTo(10.0625, 14);
+    // the span over the range: from the low end (10 - 1 - 4 = 5) up to the turning point, by hand
+    expect(s.span[0]).toBe(5);
+    expect(s.span[1]).toBeCloseTo(10.0625, 14);
+    expect(s.reach).toEqual([5, 7]);
+    expect(s.messages.join(' ')).toMatch(/Two settings of A inside the tested range give 9\.5: 3\.75 \(coded -0\.25\) and 7\.5 \(coded \+0\.5\)/);
+    expect(s.messages.join(' ')).toMatch(/The model is quadratic in A/);
+  });
+
+  it('one root inside and one outside: only the inside one is a solution', () => {
+    // 10 + x - 4x^2 = 7: x = (1 +- 7) / 8 -> 1 (the high end) and -0.75, by hand
+    const s = solveForTarget(m, { factor: 'A', target: 7 });
+    expect(s.solutions.map((r) => r.coded)).toEqual([-0.75, 1]);
+    // 10 + x - 4x^2 = 6.5: x = (1 +- sqrt(57)) / 8 -> 1.069 (outside) and -0.819
+    const t = solveForTarget(m, { factor: 'A', target: 6.5 });
+    expect(t.solutions).toHaveLength(1);
+    expect(t.coded).toBeCloseTo((1 - Math.sqrt(57)) / 8, 14);
+  });
+
+  it('a target above the peak: not reachable, no setting would reach it, the turning point is the nearest', () => {
+    const s = solveForTarget(m, { factor: 'A', target: 11 });
+    expect(s.reachable).toBe(false);
+    expect(s.needed).toBeNull();
+    expect(s.solutions).toEqual([]);
+    expect(s.coded).toBeCloseTo(0.125, 15);
+    expect(s.fit).toBeCloseTo(10.0625, 12);
+    expect(s.messages.join(' ')).toMatch(/no setting of A reaches it in the fitted model, whose fit peaks at 10\.06/);
+    expect(s.messages.join(' ')).toMatch(/where the fit turns/);
+  });
+
+  it('a target below the range but on the parabola: the nearer outside root is needed, the nearer end is given', () => {
+    // 10 + x - 4x^2 = 0: x = (1 +- sqrt(161)) / 8 -> -1.461 and 1.711; the lower end gives 5, the higher 7
+    const s = solveForTarget(m, { factor: 'A', target: 0 });
+    expect(s.reachable).toBe(false);
+    expect(s.coded).toBe(-1);
+    expect(s.needed!.coded).toBeCloseTo((1 - Math.sqrt(161)) / 8, 13);
+    expect(s.needed!.real).toBeCloseTo(5 + 5 * s.needed!.coded, 12);
+  });
+
+  it('the square of another factor adds a constant only: the answer is linear in A', () => {
+    const other = handModel([numeric('A', 0, 10), numeric('B', 0, 10)], [1, 2, squareTerm(1)], [10, 2, 0, 1]);
+    const s = solveForTarget(other, { factor: 'A', target: 12, at: { B: 10 } }); // 10 + 2x + 1 = 12 -> x = 0.5
+    expect(s.quadratic).toBe(0);
+    expect(s.stationary).toBeNull();
+    expect(s.coded).toBeCloseTo(0.5, 15);
+    expect(s.solutions).toHaveLength(1);
+  });
+
+  it('property: on the central composite fit (Montgomery 8th ed., Example 11.2), predict at every solution gives the target (fast-check)', () => {
+    const data = fixtureData('montgomery-8e-ex11-2-ccd-yield.csv', { factors: ['Time', 'Temperature'], response: 'Yield', levels: { Time: ['80', '90'], Temperature: ['170', '180'] } });
+    const model = analyze(data, { terms: parseTerms('quadratic', data.factors) }).model;
+    let two = 0;
+    fc.assert(
+      fc.property(fc.double({ min: 170, max: 180, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (temp, u) => {
+        const probe = solveForTarget(model, { factor: 'Time', target: 0, at: { Temperature: temp } });
+        // The fit along Time is a downward parabola: every value from the lower end up to the peak inside the range is reached.
+        const top = probe.stationary!.fit;
+        const low = Math.min(...probe.reach);
+        const target = low + u * (top - low);
+        const s = solveForTarget(model, { factor: 'Time', target, at: { Temperature: temp } });
+        expect(s.reachable).toBe(true);
+        if (s.solutions.length === 2) two++;
+        for (const r of s.solutions) {
+          const p = predict(model, { Time: r.setting, Temperature: temp });
+          expect(Math.abs(p.fit - target)).toBeLessThan(1e-9 * 100);
+        }
+      }),
+      { numRuns: 100 },
+    );
+    expect(two).toBeGreaterThan(0);
   });
 });

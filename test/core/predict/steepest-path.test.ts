@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { InputError } from '../../../src/core/errors.ts';
 import { analyze } from '../../../src/core/fit/analyze.ts';
+import { parseTerms } from '../../../src/core/model/formula.ts';
 import { CAUTION } from '../../../src/core/predict/caution.ts';
 import { predict } from '../../../src/core/predict/predict.ts';
 import { MAX_PATH_STEPS, pathSenseForGoal, steepestPath } from '../../../src/core/predict/steepest-path.ts';
@@ -149,5 +150,32 @@ describe('pathSenseForGoal (the response goal of src/core/study/response.ts)', (
 
   it('degenerate: a target goal has no single direction', () => {
     expect(() => pathSenseForGoal({ name: 'Thickness', goal: 'target', target: 2 })).toThrow(/aims at a target/);
+  });
+});
+
+describe('steepestPath from a model with squares (Montgomery 8th ed., Example 11.2 central composite fit)', () => {
+  const data = fixtureData('montgomery-8e-ex11-2-ccd-yield.csv', { factors: ['Time', 'Temperature'], response: 'Yield', levels: { Time: ['80', '90'], Temperature: ['170', '180'] } });
+  const a = analyze(data, { terms: parseTerms('quadratic', data.factors) });
+  const p = steepestPath(a.model, { base: 'Time', step: 5, steps: 4 });
+
+  it('the direction is still the main-effect coefficients (the gradient at the center), and each step predicts with every term', () => {
+    const b = Object.fromEntries(a.terms.map((t) => [t.letters, t.coef]));
+    expect(p.direction[1]).toBeCloseTo(b.B / b.A, 12);
+    for (const s of p.steps) {
+      const x = s.coded;
+      // the fitted quadratic, by hand from the coefficients
+      const byHand = a.intercept.coef + b.A * x[0] + b.B * x[1] + b.AB * x[0] * x[1] + b['A^2'] * x[0] ** 2 + b['B^2'] * x[1] ** 2;
+      expect(s.fit).toBeCloseTo(byHand, 10);
+    }
+    // the surface curves: the peak lies within one coded unit of the center (stationary point near
+    // x = (0.39, 0.31), Montgomery Example 11.2, from memory), so a straight path of 5-min steps falls from step 1 on
+    for (let k = 1; k <= 4; k++) expect(p.steps[k].fit).toBeLessThan(p.steps[k - 1].fit);
+  });
+
+  it('says that the model holds squares and that the surface curves; squares are not called interactions', () => {
+    const text = p.messages.join(' ');
+    expect(text).toMatch(/The model holds squares \(A\^2, B\^2\)/);
+    expect(text).toMatch(/the squares A\^2 p [<=] [\d.]+, B\^2 p [<=] [\d.]+ are significant/);
+    expect(text).not.toMatch(/Interactions are significant \([^)]*\^2/);
   });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { BACKUP_VERSION, migrateBackup, parseJsonText, readBackupSync, writeBackup, readBackup } from '../../../src/io/backup/backup.ts';
-import { portableDigest } from '../../../src/io/sha256.ts';
+import { portableDigest } from '../../../src/io/digest.ts';
 
 const empty = { studies: [], revisions: [] };
 const header = { device: 'dev-1', exportedAt: '2024-05-02T10:00:00.000Z', scope: 'all' as const };
@@ -34,7 +34,7 @@ describe('reading a backup', () => {
     expect(() => readBackupSync(JSON.stringify({ ...doc, counts: { ...doc.counts, revisions: 3 } }))).toThrow(/counts.revisions: the file says 3, but its payload holds 0/);
   });
 
-  it('migrates an older version step by step (with a stand-in step, since version 1 is the first)', () => {
+  it('migrates an older version step by step (with a stand-in step), and refuses a version nobody wrote', () => {
     const calls: number[] = [];
     const older = { format: 'trialbook-backup', formatVersion: BACKUP_VERSION - 1, payload: { studies: [], runs: [] } };
     const steps = {
@@ -47,7 +47,7 @@ describe('reading a backup', () => {
     const migrated = migrateBackup(older, steps);
     expect(calls).toEqual([BACKUP_VERSION - 1]);
     expect(migrated).toEqual({ format: 'trialbook-backup', formatVersion: BACKUP_VERSION, payload: { studies: [], revisions: [] } });
-    expect(() => migrateBackup(older)).toThrow(/not one Trialbook ever wrote/);
+    expect(() => migrateBackup({ ...older, formatVersion: 0 })).toThrow(/version 0 is not one Trialbook ever wrote/);
   });
 });
 

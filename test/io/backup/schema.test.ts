@@ -9,6 +9,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { parseRunForm } from '../../../src/core/study/run-form.ts';
+import { RUN_KINDS } from '../../../src/core/design/design.ts';
 import { BACKUP_VERSION, readBackup, writeBackup } from '../../../src/io/backup/backup.ts';
 import { APP_VERSION } from '../../../src/io/app-version.ts';
 import { exportBackup } from '../../../src/store/files.ts';
@@ -92,6 +93,13 @@ describe('trialbook-backup.schema.json', () => {
     expect((schema.properties as Record<string, Schema>).formatVersion.const).toBe(BACKUP_VERSION);
   });
 
+  it('lists the run kinds of the one list in the core (RUN_KINDS), and requires the fields version 2 added', () => {
+    const defs = schema.$defs as Record<string, Schema>;
+    expect(defs.runKind.enum).toEqual([...RUN_KINDS]);
+    expect(defs.plannedRun.required).toContain('originBlock');
+    expect(defs.response.required).toContain('lowerBound');
+  });
+
   it('accepts a backup written by the export', () => {
     expect(validate(schema, JSON.parse(text))).toEqual([]);
   });
@@ -110,6 +118,9 @@ describe('trialbook-backup.schema.json', () => {
       ['a bad id', (d) => (d.payload.revisions[0].id = 'has space')],
       ['an unknown goal', (d) => (d.payload.studies[0].responses[0].goal = 'best')],
       ['a letter I', (d) => (d.payload.studies[0].factors[0].letter = 'I')],
+      ['an unknown run kind', (d) => (d.payload.studies[0].design.runs[0].kind = 'star')],
+      ['a missing block of origin', (d) => delete d.payload.studies[0].design.runs[0].originBlock],
+      ['a lower bound that is text', (d) => (d.payload.studies[0].responses[0].lowerBound = '0')],
       ['a third level', (d) => d.payload.studies.flatMap((s: { factors: { levels?: string[] }[] }) => s.factors).find((f: { levels?: string[] }) => f.levels)!.levels!.push('x')],
     ];
     for (const [what, change] of broken) {

@@ -66,6 +66,18 @@ describe('CSV of runs made elsewhere', () => {
       /^Row 2, column 3 \("Time"\): the time needs a date and time/,
     );
   });
+  it('carries a response\'s lower bound from the mapping into the stored study, and refuses one that is not finite', async () => {
+    // Shrinkage in % cannot be negative: lower bound 0 (invented trial).
+    const mapped = mapRunsCsv(CSV, { ...inspectRunsCsv(CSV).suggestion, title: 'Invented moulding trial', responses: [{ column: 'Shrinkage (%)', goal: 'minimize', lowerBound: 0 }] });
+    expect(mapped.plan.responses).toEqual([{ name: 'Shrinkage', goal: 'minimize', unit: '%', lowerBound: 0 }]);
+    expect(mapped.plan.design.runs.every((r) => r.originBlock === r.block)).toBe(true);
+    const store = await freshStore();
+    const { study } = await importRunsCsv(store, mapped);
+    expect(study.responses[0].lowerBound).toBe(0);
+    const bad = mapRunsCsv(CSV, { ...inspectRunsCsv(CSV).suggestion, title: 'Invented moulding trial', responses: [{ column: 'Shrinkage (%)', goal: 'minimize', lowerBound: Number.NaN }] });
+    await expect(importRunsCsv(store, bad)).rejects.toThrow(/^study\.responses\[0\]\.lowerBound: needs a finite number, got NaN$/);
+    expect((await listStudies(store)).length).toBe(1);
+  });
   it('the store refuses a mapped import whose runs the backup file could not carry, and writes nothing', async () => {
     const mapped = mapRunsCsv(CSV, { ...inspectRunsCsv(CSV).suggestion, title: 'Invented moulding trial' });
     const long = new Date(Date.UTC(2024, 4, 2, 12)).toString(); // over the 40 characters of a backup time

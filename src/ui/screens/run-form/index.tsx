@@ -5,6 +5,7 @@
  */
 import { useModel, useSignal } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
+import { RUN_KIND_NAMES } from '../../../core/design/design.ts';
 import { parseNumber } from '../../../core/factor/coding.ts';
 import type { Store } from '../../../store/store.ts';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
@@ -63,7 +64,7 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
       <StudyHeader study={study} current={null} back={{ href: href.sheet(study.id), label: 'Run sheet' }} />
       <h2 class="run-title">
         Run {plannedRun} <span class="quiet">of {runCount}</span>
-        {kind === 'center' && <span class="run-kind"> center point</span>}
+        {kind !== undefined && kind !== 'factorial' && <span class="run-kind"> {RUN_KIND_NAMES[kind]}</span>}
       </h2>
       {state.current && (
         <p class="quiet">

@@ -10,6 +10,7 @@ import { StudyHeader } from '../../components/study-header/index.tsx';
 import { setting, withUnit } from '../../lib/format.ts';
 import { href } from '../../models/router-model.ts';
 import { RunSheetModel } from '../../models/run-sheet-model.ts';
+import { RUN_KIND_NAMES } from '../../../core/design/design.ts';
 
 export type RunSheetScreenProps = { readonly store: Store; readonly studyId: string };
 
@@ -39,7 +40,7 @@ export function RunSheetScreen({ store, studyId }: RunSheetScreenProps) {
             <li key={row.run} class={logged ? (row.excluded ? 'run-card excluded' : 'run-card logged') : 'run-card'} data-run={row.run}>
               <div class="run-head">
                 <span class="run-no">Run {row.run}</span>
-                <span class="run-kind">{row.kind === 'center' ? 'center point' : row.kind === 'factorial' ? 'corner' : row.kind}</span>
+                <span class="run-kind">{RUN_KIND_NAMES[row.kind]}</span>
                 <span class={logged ? 'run-state done' : 'run-state'}>{logged ? (row.excluded ? 'Excluded' : 'Logged ✓') : 'Not logged'}</span>
               </div>
               <dl class="settings">

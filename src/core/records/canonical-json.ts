@@ -3,9 +3,12 @@
  * object members sorted by their names compared as UTF-16 code units, strings and numbers written
  * as ECMAScript's JSON.stringify writes them. This is the JSON Canonicalization Scheme of RFC 8785
  * for the values a backup holds (finite numbers, text, true/false/null, lists and objects).
+ * The store takes it for comparing revisions' values and deriving ids; the backup for its checksum.
+ * Cost: linear in the size of the value, plus sorting each object's member names.
+ * Throws InputError for a value JSON cannot hold (a non-finite number, a function, a bigint).
  * Example: canonicalJson({b: 1, a: [true, null]}) -> '{"a":[true,null],"b":1}'.
  */
-import { InputError } from '../../core/errors.ts';
+import { InputError } from '../errors.ts';
 
 /** Canonical JSON text; members whose value is undefined are left out, as JSON.stringify does. */
 export function canonicalJson(value: unknown): string {

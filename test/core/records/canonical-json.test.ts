@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { canonicalJson } from '../../../src/io/backup/canonical.ts';
+import { canonicalJson } from '../../../src/core/records/canonical-json.ts';
 
 describe('canonicalJson', () => {
   // RFC 8785 (JSON Canonicalization Scheme), section 3.2.2, the example input and its output.

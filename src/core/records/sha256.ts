@@ -1,7 +1,8 @@
 /**
- * SHA-256 (FIPS 180-4, "Secure Hash Standard", section 6.2), a small implementation for pages and
- * programs without Web Crypto (a page served over plain http has no crypto.subtle), plus the
- * digest the backup uses: Web Crypto where present, this implementation otherwise.
+ * SHA-256 (FIPS 180-4, "Secure Hash Standard", section 6.2), a small pure implementation: the
+ * backup checksum where a page or program has no Web Crypto (a page served over plain http has
+ * no crypto.subtle), and the derived revision ids the store makes. Cost: one pass over the
+ * bytes, 64 rounds per 64-byte block. Throws nothing.
  * Example: toHex(sha256(utf8Encode('abc'))) ->
  *   'ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad' (FIPS 180-4 example).
  */
@@ -100,19 +101,3 @@ export function utf8Encode(text: string): Uint8Array {
   }
   return Uint8Array.from(out);
 }
-
-/** A SHA-256 digest function: bytes in, 32 bytes out. */
-export type Digest = (bytes: Uint8Array) => Promise<Uint8Array>;
-
-// The one part of Web Crypto used here; src/io's lib (ES2022) has no DOM types.
-declare const crypto: { subtle?: { digest(algorithm: 'SHA-256', data: Uint8Array): Promise<ArrayBuffer> } } | undefined;
-
-/** The small implementation as a Digest. */
-export const portableDigest: Digest = async (bytes) => sha256(bytes);
-
-/** Web Crypto's SHA-256 where the page or program has it, the small implementation otherwise. */
-export const defaultDigest: Digest = async (bytes) => {
-  const subtle = typeof crypto !== 'undefined' ? crypto?.subtle : undefined;
-  if (subtle && typeof subtle.digest === 'function') return new Uint8Array(await subtle.digest('SHA-256', bytes));
-  return sha256(bytes);
-};

@@ -1,0 +1,101 @@
+/**
+ * The record checks of a study: what every stored study and every study in a backup obeys.
+ * The study here is INVENTED (a made-up 2^2 plan with one center run).
+ */
+import { describe, expect, it } from 'vitest';
+import { InputError } from '../../../src/core/errors.ts';
+import { RUN_KINDS } from '../../../src/core/design/design.ts';
+import { checkStudy } from '../../../src/core/records/check-study.ts';
+
+function study(): any {
+  return {
+    id: 's-1',
+    device: 'dev-1',
+    createdAt: '2024-05-02T10:00:00.000Z',
+    title: 'Invented demo: two-factor trial',
+    purpose: 'INVENTED DEMO DATA.',
+    factors: [
+      { kind: 'numeric', name: 'Temperature', letter: 'A', low: 160, high: 200, unit: '°C' },
+      { kind: 'categorical', name: 'Powder', letter: 'B', levels: ['matte', 'gloss'] },
+    ],
+    responses: [
+      { name: 'Thickness', unit: 'µm', goal: 'target', target: 70, lowerBound: 0 },
+      { name: 'Gloss', goal: 'maximize', lowerBound: null },
+    ],
+    design: {
+      // Standard order of a 2^2 (Montgomery, 8th ed., section 6.2): (1), a, b, ab; then a center run.
+      runs: [
+        { run: 1, yates: 1, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, -1] },
+        { run: 2, yates: 2, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, -1] },
+        { run: 3, yates: 3, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, 1] },
+        { run: 4, yates: 4, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, 1] },
+        { run: 5, yates: null, replicate: 1, block: 1, originBlock: 1, kind: 'center', coded: [0, -1] },
+      ],
+      generators: [],
+      definingRelation: [],
+      resolution: null,
+      wordLengths: {},
+      aliases: [],
+      blockWords: [],
+      seed: null,
+      summary: 'Full factorial in 2 factors (invented test plan).',
+      notes: [],
+    },
+  };
+}
+
+describe('checkStudy', () => {
+  it('gives back a good record as it is', () => {
+    expect(checkStudy(study(), 'study')).toEqual(study());
+  });
+
+  it('takes every run kind of the one list, and refuses any other, listing the kinds', () => {
+    for (const kind of RUN_KINDS) {
+      const s = study();
+      s.design.runs[4].kind = kind;
+      expect(checkStudy(s, 'study').design.runs[4].kind).toBe(kind);
+    }
+    const s = study();
+    s.design.runs[4].kind = 'star';
+    expect(() => checkStudy(s, 'study')).toThrow('study.design.runs[4].kind: needs "factorial" or "center" or "axial" or "path" or "confirmation", got "star"');
+  });
+
+  it('needs each planned run\'s block of origin, a whole number from 1, which may differ from its block', () => {
+    const later = study();
+    later.design.runs[4] = { ...later.design.runs[4], block: 2, originBlock: 2, kind: 'axial' };
+    later.design.runs[3] = { ...later.design.runs[3], block: 2 }; // renumbered, planned in block 1
+    const checked = checkStudy(later, 'study');
+    expect(checked.design.runs.map((r) => [r.block, r.originBlock])).toEqual([[1, 1], [1, 1], [1, 1], [2, 1], [2, 2]]);
+    const missing = study();
+    delete missing.design.runs[0].originBlock;
+    expect(() => checkStudy(missing, 'study')).toThrow(/^study\.design\.runs\[0\]\.originBlock: needs a whole number from 1 to \d+, got nothing$/);
+    const zero = study();
+    zero.design.runs[2].originBlock = 0;
+    expect(() => checkStudy(zero, 'study')).toThrow(/^study\.design\.runs\[2\]\.originBlock: needs a whole number from 1/);
+  });
+
+  it('needs each response\'s lower bound: a finite number or null, with a target at or above it', () => {
+    const missing = study();
+    delete missing.responses[1].lowerBound;
+    expect(() => checkStudy(missing, 'study')).toThrow('study.responses[1].lowerBound: needs a number or null (null: no lower bound), got nothing');
+    for (const bad of [Number.NaN, Number.POSITIVE_INFINITY, '0', true]) {
+      const s = study();
+      s.responses[0].lowerBound = bad;
+      expect(() => checkStudy(s, 'study'), String(bad)).toThrow(/^study\.responses\[0\]\.lowerBound: needs a finite number, got /);
+    }
+    const below = study();
+    below.responses[0].lowerBound = 75;
+    expect(() => checkStudy(below, 'study')).toThrow('study.responses[0].target: needs a target at or above the lower bound 75, got 70');
+    const negative = study();
+    negative.responses[1].lowerBound = -40; // a response may have a negative floor (a temperature difference)
+    expect(checkStudy(negative, 'study').responses[1].lowerBound).toBe(-40);
+  });
+
+  it('refuses a field the format does not have, and throws only InputError', () => {
+    const s = study();
+    s.design.runs[0].origin = 1;
+    expect(() => checkStudy(s, 'study')).toThrow('study.design.runs[0]: has no field "origin" in this format');
+    expect(() => checkStudy(null, 'study')).toThrow(InputError);
+    expect(() => checkStudy({}, 'study')).toThrow(InputError);
+  });
+});
