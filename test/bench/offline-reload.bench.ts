@@ -31,8 +31,8 @@ test('offline reload to a usable run sheet', async ({ baseURL }, info) => {
     await page.reload();
     await page.waitForFunction(() => navigator.serviceWorker.controller !== null, undefined, { timeout: 10_000 });
     await page.getByRole('link', { name: /^Open Invented demo/ }).click();
+    await expect(page.locator('.run-card').first()).toBeVisible();
     const runs = await page.locator('.run-card').count();
-    expect(runs).toBeGreaterThan(0);
     await expect(page.locator('.run-card a[href*="/run/"]')).toHaveCount(runs);
 
     // Before any of the page's own script: note when the whole sheet is on screen with its links.
