@@ -1,25 +1,43 @@
-import { defineConfig } from 'vitest/config';
+import { defineConfig, type Plugin } from 'vitest/config';
 import preact from '@preact/preset-vite';
-import { fileURLToPath } from 'node:url';
+import { readFileSync } from 'node:fs';
 
-// The page lives in src/ui (its index.html is the entry); static files in public/; the service
-// worker is built from sw/ (see DEVELOPERS.md). A second page, harness/index.html, is the store's
-// browser-test page: its own entry, so nothing of it enters the app's bundle.
+// The page lives in src/ui (its index.html is the only entry); static files in public/; the
+// service worker is built from sw/ (see DEVELOPERS.md). The deployed folder dist/ holds the app
+// and nothing else: the store's test page is built by vite.harness.config.ts into dist-test/,
+// and source maps are written only on request (TRIALBOOK_SOURCEMAP=1).
+
+const pkg = JSON.parse(readFileSync(new URL('./package.json', import.meta.url), 'utf8')) as { version: string };
+
+/** The version string the app shows: TRIALBOOK_VERSION when set (the update test builds twice), else package.json's. */
+const version = process.env.TRIALBOOK_VERSION ?? pkg.version;
+if (!/^[\w.+-]{1,40}$/.test(version)) {
+  throw new Error(`TRIALBOOK_VERSION needs letters, digits, dots, plus or minus signs (at most 40), got "${version}"`);
+}
+
+/**
+ * The development server injects each stylesheet as a <style> element, which the page's content
+ * security policy (style-src 'self') forbids; only there, the policy also allows inline styles.
+ * Built files keep the policy exactly as index.html writes it.
+ */
+function devStyles(): Plugin {
+  return {
+    name: 'trialbook-dev-csp',
+    apply: 'serve',
+    transformIndexHtml: (html) => html.replace("style-src 'self'", "style-src 'self' 'unsafe-inline'"),
+  };
+}
+
 export default defineConfig({
   root: 'src/ui',
   publicDir: '../../public',
-  plugins: [preact()],
+  plugins: [preact(), devStyles()],
+  define: { __TRIALBOOK_VERSION__: JSON.stringify(version) },
   build: {
     outDir: '../../dist',
     emptyOutDir: true,
-    sourcemap: true,
+    sourcemap: process.env.TRIALBOOK_SOURCEMAP === '1',
     target: 'es2022',
-    rolldownOptions: {
-      input: {
-        main: fileURLToPath(new URL('./src/ui/index.html', import.meta.url)),
-        harness: fileURLToPath(new URL('./src/ui/harness/index.html', import.meta.url)),
-      },
-    },
   },
   preview: { host: '127.0.0.1', port: 4173, strictPort: true },
   test: {

@@ -42,8 +42,9 @@ export default defineConfig({
       ],
     },
   },
+  // The built app at /, and the store's test page (built only for tests) at /harness/.
   webServer: {
-    command: `npx vite preview --host 127.0.0.1 --port ${PORT} --strictPort`,
+    command: `node test/tools/test-server.mjs --port ${PORT}`,
     cwd: '..',
     url: `http://127.0.0.1:${PORT}`,
     reuseExistingServer: false,

@@ -3,6 +3,9 @@ import { expect, type Page } from '@playwright/test';
 
 export const HARNESS = '/harness/';
 
+/** The test page's own database (src/ui/harness/harness.ts), never the app's 'trialbook'. */
+export const HARNESS_DB = 'trialbook-test-page';
+
 export async function openHarness(page: Page, query = '') {
   await page.goto(HARNESS + query);
   await expect(page.locator('#status')).toHaveText(/Ready|Could not open/);

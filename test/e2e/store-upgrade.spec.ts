@@ -1,5 +1,5 @@
 import { test, expect } from '@playwright/test';
-import { counts, openHarness, openRunForm } from './store-helpers.ts';
+import { counts, HARNESS_DB, openHarness, openRunForm } from './store-helpers.ts';
 
 // An upgrade step that throws aborts the upgrade: the database stays at its old version with
 // every record, and the page says so.
@@ -29,13 +29,13 @@ test('when another tab upgrades, this tab says so', async ({ page, context }) =>
   await expect(page.locator('#save-state')).toHaveText('Draft kept');
   const other = await context.newPage();
   await other.goto('/harness/');
-  await other.evaluate(async () => {
+  await other.evaluate(async (HARNESS_DB) => {
     // A newer version of the app opening the same database (one schema version up).
     await new Promise<void>((resolve, reject) => {
-      const req = indexedDB.open('trialbook', 1000);
+      const req = indexedDB.open(HARNESS_DB, 1000);
       req.onsuccess = () => (req.result.close(), resolve());
       req.onerror = () => reject(req.error);
     });
-  });
+  }, HARNESS_DB);
   await expect(page.locator('#problem')).toHaveText(/updated in another tab.*saved your draft and closed its database/);
 });

@@ -38,6 +38,7 @@ const e2eJson = join(out, 'e2e.json');
 const browserOk =
   step('find chromium', 'node', ['test/tools/find-chromium.mjs']) &&
   step('build', 'npm', ['run', '--silent', 'build']) &&
+  step('build the store test page', 'npm', ['run', '--silent', 'build:test']) &&
   step('browser tests', 'npx', ['playwright', 'test', '-c', 'test/playwright.config.ts', '--reporter=list,json'], {
     PLAYWRIGHT_JSON_OUTPUT_NAME: e2eJson,
   });

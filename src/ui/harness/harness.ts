@@ -1,5 +1,6 @@
 /**
- * The store's browser-test page (built beside the app, never part of its bundle): a bare form
+ * The store's browser-test page (built only for the tests by vite.harness.config.ts, never into
+ * the deployed folder; it opens its own database, never the app's): a bare form
  * that drives the store functions the way the screens will. Every change to a field is kept as a
  * draft; "Saved" shows only after the save's transaction has resolved. With ?upgrade=throw it
  * opens with a made-up next schema version whose upgrade throws. window.harness exposes the
@@ -19,6 +20,9 @@ import { newId } from '../../store/ids.ts';
 
 const $ = <T extends HTMLElement>(id: string) => document.getElementById(id) as T;
 const params = new URLSearchParams(location.search);
+
+/** The test page's own database, so that visiting it can never touch the app's records (DB_NAME). */
+export const HARNESS_DB_NAME = 'trialbook-test-page';
 
 function say(text: string) {
   $('status').textContent = text;
@@ -163,6 +167,7 @@ async function timeSaves(n: number): Promise<number[]> {
 
 async function start() {
   store = await openStore({
+    name: HARNESS_DB_NAME,
     onClosed: (m) => problem(new Error(m)),
     onBlocked: (m) => say(m),
     ...(params.get('upgrade') === 'throw' ? { declare: throwingUpgrade } : {}),

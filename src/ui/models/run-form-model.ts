@@ -14,7 +14,7 @@ import { discardDraft, saveDraft } from '../../store/drafts.ts';
 import { openPlannedRun, openRun, saveRun, type RunFormState, type SaveResult } from '../../store/runs.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
-import { markUnsaved } from '../lib/unsaved-forms.ts';
+import { markTyping } from '../lib/unsaved-forms.ts';
 
 export type SaveState = 'loading' | 'editing' | 'saving' | 'saved';
 export type DraftState = 'none' | 'restored' | 'keeping' | 'kept' | 'failed';
@@ -147,11 +147,14 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     if (!s.current || s.fromDraft) return true;
     return JSON.stringify(f) !== JSON.stringify(s.form);
   });
-  // An app update waits while this form holds unsaved typing (components/update-banner).
+  // An app update waits while this form holds typing a reload would lose: typing whose draft
+  // is still being written or could not be written, or a save under way (components/update-banner).
   const formKey = `run-form:${studyId}:${plannedRun}`;
   effect(() => {
-    markUnsaved(formKey, dirty.value && saveState.value !== 'saved');
-    return () => markUnsaved(formKey, false);
+    const d = draftState.value;
+    const s = saveState.value;
+    markTyping(formKey, !dirty.value || s === 'saved' ? 'none' : s === 'saving' || d === 'keeping' || d === 'failed' ? 'unsaved' : d === 'none' ? 'none' : 'kept');
+    return () => markTyping(formKey, 'none');
   });
 
   /** Reopens the form from the stored run (after a restore wrote a new current version). */

@@ -1,5 +1,8 @@
-/** Offers a waiting new version of the app, but only when no form holds unsaved input. */
-import { anyUnsaved } from '../../lib/unsaved-forms.ts';
+/**
+ * Offers a waiting new version of the app, but only when reloading loses no typing: a form's
+ * typing kept as a draft comes back after the update; typing not yet kept holds the offer back.
+ */
+import { anyKeptAsDraft, anyUnsaved } from '../../lib/unsaved-forms.ts';
 import { applyUpdate, updateWaiting } from '../../sw-bridge.ts';
 import './style.css';
 
@@ -13,7 +16,10 @@ export function UpdateBanner(_props: UpdateBannerProps) {
         <p>A new version of Trialbook is ready. It will be offered once the run you are typing is saved.</p>
       ) : (
         <>
-          <p>A new version of Trialbook is ready. Your records stay on this phone.</p>
+          <p>
+            A new version of Trialbook is ready. Your records stay on this phone.
+            {anyKeptAsDraft.value && ' The run you are typing is kept as a draft and comes back after the update; it is not saved yet.'}
+          </p>
           <button type="button" class="btn primary" onClick={applyUpdate}>
             Use the new version
           </button>

@@ -20,6 +20,10 @@ export function StudiesScreen({ store }: StudiesScreenProps) {
       <a class="btn primary block" href={hrefTo('newStudy', {})}>
         Plan a new study
       </a>
+      {/* Above the list, so the list arriving from the store moves nothing on screen (layout shift 0). */}
+      <a class="btn block" href={hrefTo('export', {})}>
+        Export or import files
+      </a>
       {problem && <ProblemBox problem={problem} />}
       {model.loading.value && <p class="quiet">Reading the studies on this device…</p>}
       {!model.loading.value && !problem && model.summaries.value.length === 0 && <p>There are no studies on this device yet.</p>}
@@ -43,9 +47,6 @@ export function StudiesScreen({ store }: StudiesScreenProps) {
           </li>
         ))}
       </ul>
-      <a class="btn block" href={hrefTo('export', {})}>
-        Export or import files
-      </a>
     </section>
   );
 }
