@@ -2,7 +2,6 @@
  * The file and model options shared by analyze, predict, solve and path: which file, which
  * factor and response columns, their coding, the model terms and the block column.
  */
-import { readFileSync } from 'node:fs';
 import { InputError } from '../core/errors.ts';
 import { parseTerms, termsUpToOrder, defaultTerms } from '../core/model/formula.ts';
 import type { Term } from '../core/model/term.ts';
@@ -12,6 +11,7 @@ import { tableResponseData } from '../io/csv/table-response-data.ts';
 import { exportedCsvLayout, exportedCsvResponseData } from '../io/csv/exported-csv.ts';
 import { backupResponseData } from '../io/backup/select-study.ts';
 import { parseAssignments, type OptionSpec } from './args.ts';
+import { readTextFile } from './read-text-file.ts';
 
 export const modelOptionSpec = {
   factors: { type: 'string' },
@@ -46,19 +46,12 @@ export interface ModelInput {
   readonly terms: Term[];
 }
 
-function readFile(path: string): string {
-  try {
-    return readFileSync(path, 'utf8');
-  } catch (err) {
-    throw new InputError(`Cannot read the file "${path}": ${(err as NodeJS.ErrnoException).code === 'ENOENT' ? 'it does not exist' : (err as Error).message}`);
-  }
-}
-
 export function loadModelInput(positionals: string[], values: Values): ModelInput {
   if (positionals.length !== 1) throw new InputError(`Give one file to analyse, got ${positionals.length === 0 ? 'none' : positionals.join(', ')}`);
   const [path] = positionals;
   if (!values.response) throw new InputError('Name the response with --response NAME');
-  const text = readFile(path);
+  // A .json file is a backup, measured before it is read; other text is sniffed after reading.
+  const text = readTextFile(path, { backup: /\.json$/i.test(path) });
   const factors = values.factors?.split(',').map((f) => f.trim()).filter((f) => f !== '');
   let data: ResponseData;
   if (/\.json$/i.test(path) || /^\s*\{/.test(text)) {

@@ -1,11 +1,11 @@
 /** `csv BACKUP --study ID-OR-NAME [--bom]`: a study's records from a backup as the app's CSV export. */
-import { readFileSync } from 'node:fs';
 import { InputError } from '../../core/errors.ts';
 import { readBackupSync } from '../../io/backup/backup.ts';
 import { selectStudy, studyRuns } from '../../io/backup/select-study.ts';
 import { studyCsv } from '../../io/csv/study-csv.ts';
 import { parseCommandArgs } from '../args.ts';
 import type { Command } from '../command.ts';
+import { readTextFile } from '../read-text-file.ts';
 
 const USAGE = `Usage: npm run --silent cli -- csv BACKUP.json --study ID-OR-NAME [--bom]
 
@@ -24,12 +24,7 @@ export const csv: Command = {
     const { values, positionals } = parseCommandArgs(argv, { study: { type: 'string' }, bom: { type: 'boolean' } });
     if (positionals.length !== 1) throw new InputError(`Give one backup file, got ${positionals.length === 0 ? 'none' : positionals.join(', ')}`);
     if (!values.study) throw new InputError('Name the study with --study ID-OR-NAME');
-    let text: string;
-    try {
-      text = readFileSync(positionals[0], 'utf8');
-    } catch (err) {
-      throw new InputError(`Cannot read the file "${positionals[0]}": ${(err as NodeJS.ErrnoException).code === 'ENOENT' ? 'it does not exist' : (err as Error).message}`);
-    }
+    const text = readTextFile(positionals[0], { backup: true });
     const backup = readBackupSync(text);
     const study = selectStudy(backup, values.study);
     return studyCsv(study, studyRuns(backup, study.id), { bom: values.bom === true });

@@ -4,7 +4,7 @@
  */
 import { InputError } from '../errors.ts';
 import { MAX_FACTORS } from '../factor/letters.ts';
-import { checkRunValues, type RunRevision, type StudyRecord } from '../study/study.ts';
+import { checkRunValues, plannedRunOf, type RunRevision, type StudyRecord } from '../study/study.ts';
 import { MAX_PLANNED_RUNS, bool, finite, id, int, list, obj, only, text, time } from './field-checks.ts';
 
 const REVISION_FIELDS = ['id', 'runId', 'studyId', 'plannedRun', 'rev', 'device', 'parents', 'restoredFrom', 'savedAt', 'actual', 'readings', 'loggedAt', 'operator', 'notes', 'excluded', 'reason'];
@@ -15,7 +15,7 @@ const REVISION_FIELDS = ['id', 'runId', 'studyId', 'plannedRun', 'rev', 'device'
  * 1, parents as ids, times, and its values by checkRunValues (one actual setting per factor that
  * fits it, finite readings per response, an excluded run with a reason). Method: the rules of
  * trialbook-backup.schema.json plus what a schema cannot say (common practice). Cost: linear in
- * the readings. Returns the revision rebuilt from the checked fields (categorical labels spelled
+ * the readings (the plan's runs are indexed once per plan, by plannedRunOf). Returns the revision rebuilt from the checked fields (categorical labels spelled
  * as declared). Throws InputError at the first problem, naming its path.
  * Example: checkRevision({ ...r, rev: 0 }, 'r', studies) throws "r.rev: needs a whole number from 1 to ...".
  */
@@ -26,7 +26,7 @@ export function checkRevision(v: unknown, path: string, studies: ReadonlyMap<str
   const study = studies.get(studyId);
   if (!study) throw new InputError(`${path}.studyId: needs a study in this file, got "${studyId}", which it does not hold`);
   const plannedRun = int(o.plannedRun, `${path}.plannedRun`, 1, MAX_PLANNED_RUNS);
-  if (!study.design.runs.some((r) => r.run === plannedRun)) {
+  if (!plannedRunOf(study, plannedRun)) {
     throw new InputError(`${path}.plannedRun: needs a run of the plan of "${study.title}" (1 to ${study.design.runs.length}), got ${plannedRun}`);
   }
   const actual = list(o.actual, `${path}.actual`, MAX_FACTORS).map((a, i) => {

@@ -12,7 +12,7 @@
  * disagree, and this order gives the same answer on every device and in every merge order.
  */
 import { InputError } from '../errors.ts';
-import type { Design } from '../design/design.ts';
+import type { Design, DesignRun } from '../design/design.ts';
 import type { Factor } from '../factor/factor.ts';
 import { plannedSetting } from '../design/planned-settings.ts';
 import type { Response } from './response.ts';
@@ -129,9 +129,20 @@ export function meanReading(readings: readonly number[]): number | null {
   return s / readings.length;
 }
 
-/** The design's planned run with this run number, or undefined. */
-export function plannedRunOf(study: StudyPlan, plannedRun: number) {
-  return study.design.runs.find((r) => r.run === plannedRun);
+/** Each plan's runs by run number, made once per plan (plans never change once made). */
+const runIndex = new WeakMap<readonly DesignRun[], ReadonlyMap<number, DesignRun>>();
+
+/**
+ * The design's planned run with this run number, or undefined. Cost: a lookup in an index of the
+ * plan's runs, made on the first call for a plan, so checking a long history stays linear.
+ */
+export function plannedRunOf(study: StudyPlan, plannedRun: number): DesignRun | undefined {
+  let index = runIndex.get(study.design.runs);
+  if (!index) {
+    index = new Map(study.design.runs.map((r) => [r.run, r]));
+    runIndex.set(study.design.runs, index);
+  }
+  return index.get(plannedRun);
 }
 
 /**

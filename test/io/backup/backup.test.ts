@@ -49,7 +49,7 @@ describe('reading a backup', () => {
     const revisions = Array.from({ length: 1400 }, (_, i) => ({ id: `r${i}`, notes: note })) as never[];
     await expect(writeBackup({ studies: [], revisions }, header, portableDigest)).rejects.toThrow(/^This backup would be 133\.\d MB; .*Nothing was written/);
     await expect(writeBackup({ studies: [], revisions }, header)).rejects.toThrow(/^This backup would be/);
-  });
+  }, 60_000);
 
   it('refuses what is not a Trialbook backup, and a newer format version', async () => {
     expect(() => readBackupSync('[1,2]')).toThrow(/not a Trialbook backup/);
