@@ -16,6 +16,7 @@ import type { Design, DesignRun } from '../design/design.ts';
 import type { Factor } from '../factor/factor.ts';
 import { plannedSetting } from '../design/planned-settings.ts';
 import type { Response } from './response.ts';
+import { isIsoDateTime } from '../records/iso-date-time.ts';
 
 /** A design as a study stores it: the factors live beside it, once. */
 export type StoredDesign = Omit<Design, 'factors'>;
@@ -178,8 +179,8 @@ export function checkRunValues(study: Pick<StudyPlan, 'factors' | 'responses'>, 
       return x;
     });
   });
-  if (v.loggedAt !== null && (typeof v.loggedAt !== 'string' || Number.isNaN(Date.parse(v.loggedAt)))) {
-    throw new InputError(`Time: needs a date and time (ISO 8601) or nothing, got ${describe(v.loggedAt)}`);
+  if (v.loggedAt !== null && (typeof v.loggedAt !== 'string' || !isIsoDateTime(v.loggedAt))) {
+    throw new InputError(`Time: needs a date and time (ISO 8601, e.g. 2026-03-01T14:05) or nothing, got ${describe(v.loggedAt)}`);
   }
   if (v.operator !== null && typeof v.operator !== 'string') throw new InputError(`Operator: needs text or nothing, got ${describe(v.operator)}`);
   if (typeof v.notes !== 'string') throw new InputError(`Notes: needs text, got ${describe(v.notes)}`);
