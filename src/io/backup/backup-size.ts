@@ -21,13 +21,15 @@ const LIMIT = `${MAX_BACKUP_BYTES / MB} MB (${MAX_BACKUP_BYTES.toLocaleString('e
 
 /**
  * Refuses a backup larger than MAX_BACKUP_BYTES, saying how large it is, the limit, and what to
- * do instead. `action` is "import" for a file being read, "export" for one being written.
+ * do instead. `action` is "import" for a file being read, "export" for one being written;
+ * `bytes` may be Infinity for a size known only to be too large.
  * Example: checkBackupSize(200 * 2 ** 20, 'import') throws "This backup file is 200.0 MB; ...".
  */
 export function checkBackupSize(bytes: number, action: 'import' | 'export'): void {
   if (bytes <= MAX_BACKUP_BYTES) return;
+  const size = Number.isFinite(bytes) ? mb(bytes) : `over ${LIMIT}`;
   if (action === 'import') {
-    throw new InputError(`This backup file is ${mb(bytes)}; Trialbook reads backups of up to ${LIMIT}, so that a phone can check one in memory. Nothing was imported. On the device that made it, export the studies one at a time and import those files.`);
+    throw new InputError(`This backup file is ${size}; Trialbook reads backups of up to ${LIMIT}, so that a phone can check one in memory. Nothing was imported. On the device that made it, export the studies one at a time and import those files.`);
   }
-  throw new InputError(`This backup would be ${mb(bytes)}; Trialbook writes and reads backups of up to ${LIMIT}, so this one could not be imported anywhere. Nothing was written. Export the studies one at a time instead.`);
+  throw new InputError(`This backup would be ${size}; Trialbook writes and reads backups of up to ${LIMIT}, so this one could not be imported anywhere. Nothing was written. Export the studies one at a time instead.`);
 }

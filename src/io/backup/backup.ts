@@ -126,7 +126,7 @@ function assemble(payload: BackupPayload, header: BackupHeader, checksum: string
     textOut = JSON.stringify(doc, null, 1) + '\n';
   } catch (err) {
     // The engine's longest string is far above the limit, so this is a file over it.
-    if (err instanceof RangeError) checkBackupSize(Number.MAX_SAFE_INTEGER, 'export');
+    if (err instanceof RangeError) checkBackupSize(Number.POSITIVE_INFINITY, 'export');
     throw err;
   }
   checkBackupSize(utf8Length(textOut), 'export');

@@ -13,6 +13,7 @@ describe('checkBackupSize', () => {
     expect(() => checkBackupSize(200 * 1024 * 1024, 'import')).toThrow(
       /^This backup file is 200\.0 MB; Trialbook reads backups of up to 128 MB \(134,217,728 bytes\).*Nothing was imported\. .*export the studies one at a time/,
     );
+    expect(() => checkBackupSize(Number.POSITIVE_INFINITY, 'export')).toThrow(/^This backup would be over 128 MB \(134,217,728 bytes\); /);
     expect(() => checkBackupSize(150 * 1024 * 1024, 'export')).toThrow(/^This backup would be 150\.0 MB; .*up to 128 MB.*Nothing was written\. Export the studies one at a time/);
   });
 });
