@@ -51,7 +51,8 @@ export function loadModelInput(positionals: string[], values: Values): ModelInpu
   if (positionals.length !== 1) throw new InputError(`Give one file to analyse, got ${positionals.length === 0 ? 'none' : positionals.join(', ')}`);
   const [path] = positionals;
   if (!values.response) throw new InputError('Name the response with --response NAME');
-  const text = readTextFile(path);
+  // A .json file is a backup, measured before it is read; other text is sniffed after reading.
+  const text = readTextFile(path, { backup: /\.json$/i.test(path) });
   const factors = values.factors?.split(',').map((f) => f.trim()).filter((f) => f !== '');
   let data: ResponseData;
   if (/\.json$/i.test(path) || /^\s*\{/.test(text)) {

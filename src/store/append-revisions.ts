@@ -11,6 +11,7 @@
 import { checkHistories, checkUniqueIds } from '../core/records/check-histories.ts';
 import { checkRevision } from '../core/records/check-revision.ts';
 import { checkStudy } from '../core/records/check-study.ts';
+import { MAX_SAVED_REV } from '../core/records/field-checks.ts';
 import { currentRun, type LoggedRun, type RunRevision, type StudyRecord } from '../core/study/study.ts';
 import type { Store } from './store.ts';
 
@@ -57,7 +58,8 @@ export async function appendRevisions(store: Store, records: NewRecords): Promis
     const wanted = [...new Set([...made, ...imported].map((r) => r.studyId))].filter((id) => !known.has(id));
     if (wanted.length > 0) for (const s of await db.studies.bulkGet(wanted)) if (s) known.set(s.id, s);
     const revisions = [
-      ...made.map((r, i) => plain(checkRevision(r, records.pathOf ? records.pathOf(i, r) : `Run ${r.plannedRun}`, known))),
+      // Saves here may take counters past what a file may bring, so a run is never stuck.
+      ...made.map((r, i) => plain(checkRevision(r, records.pathOf ? records.pathOf(i, r) : `Run ${r.plannedRun}`, known, MAX_SAVED_REV))),
       ...imported.map((r, i) => plain(checkRevision(r, `revisions[${i}]`, known))),
     ];
     const runIds = [...new Set(revisions.map((r) => r.runId))];

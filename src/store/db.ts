@@ -4,17 +4,21 @@
  * fixture database of every earlier version lives in test/fixtures/ and a test opens it with the
  * current code and checks that nothing is lost. This is the only file that declares the schema.
  *
- * Tables (version 1; version 2 keeps them and changes the shape of the study records):
+ * Tables (version 1; version 2 keeps them and changes the shape of the study records; version 3
+ * adds setAside):
  *   studies    id -> StudyRecord (title, purpose, factors, responses, design with planned runs and seed)
  *   revisions  id -> RunRevision: the append-only history of every logged run (indexed by run and study)
  *   runs       id -> LoggedRun: the current state of each logged run, decided from its revisions
  *   drafts     runId -> Draft: what was typed in a run's form and not yet saved
  *   meta       key -> value: device id, last exports, the answer to the persistent-storage request
+ *   setAside   key -> SetAsideRow: records of an imported file that clash with stored ones (same id,
+ *              other content), kept apart with the field that differs (version 3)
  */
 import { Dexie, type DexieOptions, type Table, type Transaction } from 'dexie';
 import type { LoggedRun, RunRevision, StudyRecord } from '../core/study/study.ts';
 import type { RunForm } from '../core/study/run-form.ts';
 import { upgradeStudyRecord } from '../core/records/upgrade-study-record.ts';
+import type { SetAside } from '../io/backup/merge.ts';
 
 /** A run form's unsaved typing, kept on every change until the run is saved. */
 export interface Draft {
@@ -30,6 +34,17 @@ export interface Draft {
   readonly form: RunForm;
   /** Wall-clock time of the last change, ISO 8601 (shown only). */
   readonly updatedAt: string;
+}
+
+/** A record of an imported file that was not merged, kept apart so that nothing is lost. */
+export interface SetAsideRow extends SetAside {
+  /** The kind, the record's id and the SHA-256 of its canonical JSON: the same record set aside
+   * twice (the same file imported again) is one row. */
+  readonly key: string;
+  /** The device that wrote the file, when the file says. */
+  readonly fromDevice: string | null;
+  /** When it was set aside, by the store's clock, ISO 8601 (shown only). */
+  readonly setAsideAt: string;
 }
 
 export interface MetaRow {
@@ -70,6 +85,11 @@ export const SCHEMA: readonly SchemaVersion[] = [
         });
     },
   },
+  {
+    // Records of an imported file that clash with stored ones are kept apart, not refused.
+    version: 3,
+    stores: { setAside: 'key, id, studyId' },
+  },
 ];
 
 /** The schema version this code opens. */
@@ -92,6 +112,7 @@ export class TrialbookDB extends Dexie {
   declare runs: Table<LoggedRun, string>;
   declare drafts: Table<Draft, string>;
   declare meta: Table<MetaRow, string>;
+  declare setAside: Table<SetAsideRow, string>;
 
   /** Opens with strict durability: a write is reported done only once it is on disk. */
   constructor(name: string = DB_NAME, options: DexieOptions = {}, declare: (db: Dexie) => void = declareSchema) {

@@ -7,13 +7,14 @@
 import { InputError } from '../core/errors.ts';
 import type { RunRevision, StudyRecord } from '../core/study/study.ts';
 import { readBackup, writeBackup, type Backup, type BackupPayload } from '../io/backup/backup.ts';
-import { planMerge, type MergeConflict } from '../io/backup/merge.ts';
+import { planMerge, type MergeConflict, type SetAside } from '../io/backup/merge.ts';
 import type { Digest } from '../io/digest.ts';
 import type { CsvRunsImport } from '../io/csv/runs-import.ts';
 import { studyCsv, type StudyCsvOptions } from '../io/csv/study-csv.ts';
 import { appendRevisions, type MadeRevision } from './append-revisions.ts';
 import { guarded } from './errors.ts';
 import { newId } from './ids.ts';
+import { keepSetAside } from './set-aside.ts';
 import { markExported } from './status.ts';
 import { newStudyRecord } from './studies.ts';
 import type { Store } from './store.ts';
@@ -56,30 +57,52 @@ export interface ImportReport {
   /** Runs whose edits on two devices (or tabs) diverged: both revisions are kept, the later
    * by the revision order is current, and the person may restore the other. */
   readonly conflicts: readonly MergeConflict[];
+  /** Records of the file that clash with this device's (same id, other content), with the field
+   * that differs, and the records that depend on them: not merged, kept apart (listSetAside). */
+  readonly setAside: readonly SetAside[];
+  /** How many of those were not already kept from an earlier import. */
+  readonly setAsideNew: number;
   /** One line for the screen or the command line. */
   readonly summary: string;
 }
 
 function summarise(r: Omit<ImportReport, 'summary'>): string {
-  if (r.studiesAdded + r.revisionsAdded === 0) return 'Nothing new: everything in the file was already here.';
+  const n = r.setAside.length;
+  const clashes = r.setAside.filter((s) => s.field !== null);
+  const named = clashes
+    .slice(0, 3)
+    .map((s) => `${s.kind === 'study' ? `study ${s.id}` : `revision ${s.id} of run ${s.plannedRun}`} (${s.field === '' ? 'the whole record' : s.field} differs)`)
+    .join(', ');
+  const aside =
+    n === 0
+      ? ''
+      : ` ${n} ${n === 1 ? 'record' : 'records'} of the file ${n === 1 ? 'was' : 'were'} set aside, not merged: ${clashes.length} ${clashes.length === 1 ? 'has' : 'have'} the id of a record on this device with other content (${named}${clashes.length > 3 ? ', ...' : ''})${n > clashes.length ? ` and ${n - clashes.length} depend on ${clashes.length === 1 ? 'it' : 'them'}` : ''}. Both versions are kept; nothing on this device was changed by them.`;
+  if (r.studiesAdded + r.revisionsAdded === 0) return (n === 0 ? 'Nothing new: everything in the file was already here.' : 'Nothing new was merged.') + aside;
   const parts = [`${r.studiesAdded} new ${r.studiesAdded === 1 ? 'study' : 'studies'}`, `${r.runsAdded} new logged ${r.runsAdded === 1 ? 'run' : 'runs'}`, `${r.revisionsAdded} new ${r.revisionsAdded === 1 ? 'revision' : 'revisions'}`];
   const c = r.conflicts.length;
-  return `Imported ${parts.join(', ')}.` + (c > 0 ? ` ${c} ${c === 1 ? 'run was' : 'runs were'} changed on two devices; both versions are kept in ${c === 1 ? 'its' : 'their'} history.` : '');
+  return `Imported ${parts.join(', ')}.` + (c > 0 ? ` ${c} ${c === 1 ? 'run was' : 'runs were'} changed on two devices; both versions are kept in ${c === 1 ? 'its' : 'their'} history.` : '') + aside;
 }
 
-/** Merges a checked backup into the store in one transaction. */
-export async function mergeBackup(store: Store, backup: Pick<Backup, 'payload'>): Promise<ImportReport> {
+/**
+ * Merges a checked backup into the store in one transaction. Records that clash with stored ones
+ * are set aside (kept in their own table, reported), and the rest is merged.
+ */
+export async function mergeBackup(store: Store, backup: Pick<Backup, 'payload'> & Partial<Pick<Backup, 'device'>>): Promise<ImportReport> {
   const { db } = store;
   const incoming = backup.payload;
   return guarded(() =>
-    db.transaction('rw', [db.studies, db.revisions, db.runs], async () => {
+    db.transaction('rw', [db.studies, db.revisions, db.runs, db.setAside], async () => {
       const studyIds = incoming.studies.map((s) => s.id);
       const revIds = incoming.revisions.map((r) => r.id);
       const [haveStudies, haveRevs] = await Promise.all([db.studies.bulkGet(studyIds), db.revisions.bulkGet(revIds)]);
       const runIds = [...new Set(incoming.revisions.map((r) => r.runId))];
       const history = await db.revisions.where('runId').anyOf(runIds).toArray();
       const byRun = new Map<string, RunRevision[]>();
-      for (const r of history) byRun.set(r.runId, [...(byRun.get(r.runId) ?? []), r]);
+      for (const r of history) {
+        const list = byRun.get(r.runId);
+        if (list) list.push(r);
+        else byRun.set(r.runId, [r]);
+      }
       const plan = planMerge(
         {
           studies: new Map(haveStudies.filter((s): s is StudyRecord => !!s).map((s) => [s.id, s])),
@@ -90,6 +113,7 @@ export async function mergeBackup(store: Store, backup: Pick<Backup, 'payload'>)
       );
       // The one write path (its record checks, in this transaction); any failure aborts all of it.
       await appendRevisions(store, { studies: plan.newStudies, imported: plan.newRevisions });
+      const setAsideNew = await keepSetAside(store, plan.setAside, backup.device ?? null);
       const runsAdded = plan.runs.filter((r) => !byRun.has(r.id)).length;
       const report = {
         studiesAdded: plan.newStudies.length,
@@ -98,6 +122,8 @@ export async function mergeBackup(store: Store, backup: Pick<Backup, 'payload'>)
         studiesUnchanged: plan.unchangedStudies,
         revisionsUnchanged: plan.unchangedRevisions,
         conflicts: plan.conflicts,
+        setAside: plan.setAside,
+        setAsideNew,
       };
       return { ...report, summary: summarise(report) };
     }),

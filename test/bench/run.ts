@@ -74,3 +74,41 @@ console.log(lines.join('\n'));
   }
   console.log(out3.join('\n'));
 }
+
+// (4) Long histories: one logged run with 10,000 and with 100,000 revisions (invented), read and
+// checked (readBackupSync: size, nesting, JSON, checksum, every field, whole histories), the
+// run's current state (studyRuns), the merge plan into a device holding the first half, and the
+// export (writeBackup). Linear work shows as a ratio near 10 between the two sizes.
+{
+  const { benchBackup, benchPayload, BENCH_HEADER } = await import('./large-backup.ts');
+  const { readBackupSync, writeBackup } = await import('../../src/io/backup/backup.ts');
+  const { studyRuns } = await import('../../src/io/backup/select-study.ts');
+  const { planMerge } = await import('../../src/io/backup/merge.ts');
+  const { portableDigest } = await import('../../src/io/digest.ts');
+  const out4: string[] = ['(4) one logged run with a long history: median of 5 (after 1 warm-up)'];
+  const steps: Record<string, number[]> = {};
+  for (const n of [10_000, 100_000]) {
+    const text = await benchBackup(n);
+    const payload = benchPayload(n);
+    const half = payload.revisions.slice(0, n / 2);
+    const base = { studies: new Map(payload.studies.map((s) => [s.id, s])), revisions: new Map(half.map((r) => [r.id, r])), historyOf: () => half };
+    const times = {
+      'read and check': medianMs(() => readBackupSync(text), { batch: 1, rounds: 5, warmup: 1 }),
+      'current state': medianMs(() => studyRuns({ payload }, 'bench-study'), { batch: 1, rounds: 5, warmup: 1 }),
+      'merge plan': medianMs(() => planMerge(base, payload), { batch: 1, rounds: 5, warmup: 1 }),
+    };
+    // writeBackup is async; timed by hand, the same way.
+    const w: number[] = [];
+    for (let i = 0; i < 6; i++) {
+      const t0 = performance.now();
+      await writeBackup(payload, BENCH_HEADER, portableDigest);
+      if (i > 0) w.push(performance.now() - t0);
+    }
+    w.sort((a, b) => a - b);
+    const all = { ...times, export: w[w.length >> 1] };
+    for (const [k, v] of Object.entries(all)) (steps[k] ??= []).push(v);
+    out4.push(`  ${n.toLocaleString('en-US')} revisions (${(text.length / 2 ** 20).toFixed(1)} MB): ` + Object.entries(all).map(([k, v]) => `${k} ${fmtMs(v)}`).join(';  '));
+  }
+  out4.push('  ratio 100,000 / 10,000 (10 for linear work): ' + Object.entries(steps).map(([k, [a, b]]) => `${k} ${(b / a).toFixed(1)}x`).join(';  '));
+  console.log(out4.join('\n'));
+}

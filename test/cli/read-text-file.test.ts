@@ -1,9 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync, truncateSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { analyze } from '../../src/cli/commands/analyze.ts';
 import { readTextFile } from '../../src/cli/read-text-file.ts';
+import { MAX_BACKUP_BYTES } from '../../src/io/backup/backup-size.ts';
 import { fixturePath } from '../helpers/fixtures.ts';
 
 // Montgomery, Design and Analysis of Experiments, 8th ed., example 6.6 (2^2 with five center
@@ -45,4 +48,46 @@ describe('files from other spreadsheets and locales, through the command line', 
       new RegExp(`^The file "${cp1252.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}" is not UTF-8: line 1 has byte 0xB0 \\("°" in Windows-1252\\)`),
     );
   });
+});
+
+
+const root = fileURLToPath(new URL('../..', import.meta.url));
+
+describe('readTextFile', () => {
+  it('refuses a backup above the limit from its size alone, and reads one at the limit', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'trialbook-size-'));
+    try {
+      const big = join(dir, 'big.json');
+      writeFileSync(big, '');
+      truncateSync(big, MAX_BACKUP_BYTES + 1); // a sparse file: nothing is written to disk
+      expect(() => readTextFile(big, { backup: true })).toThrow(/^This backup file is 128\.0 MB; Trialbook reads backups of up to 128 MB \(134,217,728 bytes\)/);
+      // A file of exactly the limit passes the size check.
+      const edge = join(dir, 'edge.json');
+      writeFileSync(edge, '');
+      truncateSync(edge, MAX_BACKUP_BYTES);
+      // A sparse file is all NUL bytes: it passes the size check and is then refused as not text.
+      expect(() => readTextFile(edge, { backup: true })).toThrow(/holds NUL bytes/);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+  it('names a missing file or a folder in plain words (degenerate input)', () => {
+    expect(() => readTextFile(join(tmpdir(), 'no-such-trialbook-file.json'), { backup: true })).toThrow(/^Cannot read the file ".*no-such-trialbook-file\.json": it does not exist$/);
+    expect(() => readTextFile(tmpdir())).toThrow(/: it is a folder$/);
+  });
+  it('the command line refuses an oversized backup with the message and exit code 2, for csv and analyze', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'trialbook-size-'));
+    try {
+      const big = join(dir, 'big.json');
+      writeFileSync(big, '');
+      truncateSync(big, 200 * 1024 * 1024);
+      for (const args of [['csv', big, '--study', 'x'], ['analyze', big, '--study', 'x', '--response', 'y']]) {
+        const r = spawnSync('npx', ['tsx', 'src/cli/main.ts', ...args], { cwd: root, encoding: 'utf8' });
+        expect(r.status).toBe(2);
+        expect(r.stderr).toMatch(new RegExp(`^trialbook ${args[0]}: This backup file is 200\\.0 MB; Trialbook reads backups of up to 128 MB.*Nothing was imported`));
+      }
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  }, 60_000);
 });

@@ -105,4 +105,20 @@ describe('appendRevisions', () => {
     expect(await store.db.studies.get(s.id)).toEqual(s);
     await expect(createStudy(store, { ...plan, responses: [{ ...plan.responses[0], lowerBound: Number.NaN }] })).rejects.toThrow(InputError);
   });
+
+  it('a file\'s revision counter above 1,000,000,000 is refused, saying why; one at the bound imports and the run can still be saved', async () => {
+    const store = await freshStore({ now: () => new Date(CLOCK) });
+    const study = await createStudy(store, coatingPlan());
+    const fromFile = (rev: number, id: string) => ({ ...made(study.id, { rev, id, runId: `run-${id}` }), device: 'other', savedAt: CLOCK });
+    // Number.MAX_SAFE_INTEGER (ECMA-262): a counter there could never be followed exactly.
+    await expect(mergeBackup(store, { payload: { studies: [], revisions: [fromFile(Number.MAX_SAFE_INTEGER, 'huge')] } })).rejects.toThrow(
+      /^revisions\[0\]\.rev: needs a revision counter from 1 to 1000000000, got 9007199254740991; each save adds one to a run's counter, so no real history comes near this, and a counter this large would leave no room for the saves after it/,
+    );
+    expect(await store.db.revisions.count()).toBe(0);
+    await mergeBackup(store, { payload: { studies: [], revisions: [fromFile(1_000_000_000, 'edge')] } });
+    const state = await (await import('../../src/store/runs.ts')).openRun(store, 'run-edge');
+    const saved = await saveRun(store, { ...state, studyId: study.id, values: parseRunForm(study, { ...state.form, readings: ['71', ''] }) });
+    expect(saved.revision.rev).toBe(1_000_000_001);
+    expect((await runHistory(store, 'run-edge')).map((r) => r.rev)).toEqual([1_000_000_000, 1_000_000_001]);
+  });
 });

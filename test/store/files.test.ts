@@ -117,20 +117,71 @@ describe('backup export and import', () => {
     expect(await dump(b)).toBe(before);
   });
 
-  it('a file whose revision has the same id as a stored one but other content is refused whole', async () => {
+  it('a revision with a stored id but other content is set aside with the field that differs; the rest imports; both are kept', async () => {
     const a = await freshStore();
     const study = await createStudy(a, coatingPlan());
     const r = await log(a, study.id, 1, '70');
     const b = await freshStore();
     await importBackup(b, await exportBackup(a));
     await log(b, study.id, 2, '75');
-    const before = await dump(b);
-    // Make a valid file (right checksum) in which the stored revision's readings were changed.
+    const storedBefore = await b.db.revisions.get(r.revision.id);
+    // On a: a later edit of run 1 (built on the revision that will be altered) and a new run 3.
+    const child = await edit(a, r.run.id, '71');
+    const run3 = await log(a, study.id, 3, '68');
+    // Make a valid file (right checksum) in which the revision b holds has other readings.
     const doc = await readBackup(await exportBackup(a));
     const altered = { ...doc.payload, revisions: doc.payload.revisions.map((x) => (x.id === r.revision.id ? { ...x, readings: [[99], []] } : x)) };
     const { writeBackup } = await import('../../src/io/backup/backup.ts');
     const file = await writeBackup(altered, { device: a.device, exportedAt: new Date().toISOString(), scope: 'all' });
-    await expect(importBackup(b, file)).rejects.toThrow(/differs from the revision with the same id on this device/);
+    const report = await importBackup(b, file);
+    // The clash and the edit built on it are set aside; run 3 (consistent) is imported.
+    expect(report.setAside.map((x) => [x.id, x.field])).toEqual([
+      [r.revision.id, 'readings[0][0]'],
+      [child.revision.id, null],
+    ]);
+    expect(report.setAside[0].reason).toMatch(/differs from the revision with the same id on this device in readings\[0\]\[0\]/);
+    expect(report.setAside[1].reason).toMatch(new RegExp(`builds on revision ${r.revision.id}, which was set aside`));
+    expect(report.revisionsAdded).toBe(1);
+    expect(report.summary).toMatch(/Imported 0 new studies, 1 new logged run, 1 new revision\. 2 records of the file were set aside, not merged: 1 has the id of a record on this device with other content \(revision .* of run 1 \(readings\[0\]\[0\] differs\)\) and 1 depend on it\. Both versions are kept/);
+    expect(await b.db.revisions.get(run3.revision.id)).toBeDefined();
+    expect(await b.db.revisions.get(child.revision.id)).toBeUndefined();
+    // The device's own revision is as it was; the file's version is kept apart, whole.
+    expect(await b.db.revisions.get(r.revision.id)).toEqual(storedBefore);
+    const { listSetAside } = await import('../../src/store/set-aside.ts');
+    const kept = await listSetAside(b);
+    expect(kept.map((k) => k.id).sort()).toEqual([r.revision.id, child.revision.id].sort());
+    expect(kept.find((k) => k.id === r.revision.id)!.record).toEqual({ ...storedBefore, readings: [[99], []] });
+    expect(kept[0].fromDevice).toBe(a.device);
+    // The same file again: nothing new, and nothing set aside twice; a later file from a still imports.
+    const again = await importBackup(b, file);
+    expect(again.revisionsAdded).toBe(0);
+    expect(again.setAsideNew).toBe(0);
+    expect((await listSetAside(b)).length).toBe(2);
+    const run4 = await log(a, study.id, 4, '66');
+    const doc2 = await readBackup(await exportBackup(a));
+    const file2 = await writeBackup({ ...doc2.payload, revisions: doc2.payload.revisions.map((x) => (x.id === r.revision.id ? { ...x, readings: [[99], []] } : x)) }, { device: a.device, exportedAt: new Date().toISOString(), scope: 'all' });
+    const later = await importBackup(b, file2);
+    expect(later.revisionsAdded).toBe(1);
+    expect(await b.db.revisions.get(run4.revision.id)).toBeDefined();
+  });
+
+  it('a study with a stored id but another plan is set aside with its revisions; the device\'s study stays', async () => {
+    const a = await freshStore();
+    const study = await createStudy(a, coatingPlan());
+    await log(a, study.id, 1, '70');
+    const b = await freshStore();
+    await importBackup(b, await exportBackup(a));
+    await log(a, study.id, 2, '72');
+    const doc = await readBackup(await exportBackup(a));
+    const { writeBackup } = await import('../../src/io/backup/backup.ts');
+    const file = await writeBackup({ ...doc.payload, studies: doc.payload.studies.map((s) => ({ ...s, title: 'Renamed' })) }, { device: a.device, exportedAt: new Date().toISOString(), scope: 'all' });
+    const before = await dump(b);
+    const report = await importBackup(b, file);
+    expect(report.setAside.map((x) => [x.kind, x.field])).toEqual([
+      ['study', 'title'],
+      ['revision', null],
+    ]);
+    expect(report.setAside[1].reason).toMatch(/belongs to study "Renamed" .* which was set aside/);
     expect(await dump(b)).toBe(before);
   });
 });

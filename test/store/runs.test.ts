@@ -180,12 +180,13 @@ describe('logged runs', () => {
     const study = await createStudy(store, coatingPlan());
     const opened = await openNewRun(store, study.id, 3);
     // What Date.prototype.toString gives (ECMA-262, "Date.prototype.toString"): Date.parse reads
-    // it, but it is longer than the 40 characters of a time in trialbook-backup.schema.json.
+    // it, but it is not ISO 8601, and longer than the 40 characters of a time in
+    // trialbook-backup.schema.json; the save's first check (the run's values) refuses it.
     const loggedAt = new Date(Date.UTC(2024, 4, 2, 12)).toString();
     expect(Number.isNaN(Date.parse(loggedAt))).toBe(false);
     expect(loggedAt.length).toBeGreaterThan(40);
     const values = { ...parseRunForm(study, { ...opened.form, readings: ['70', '90'] }), loggedAt };
-    await expect(saveRun(store, { ...opened, studyId: study.id, values })).rejects.toThrow(/Run 3\.loggedAt: needs a date and time/);
+    await expect(saveRun(store, { ...opened, studyId: study.id, values })).rejects.toThrow(/^Time: needs a date and time \(ISO 8601, e\.g\. 2026-03-01T14:05\) or nothing, got "Thu May 02 2024/);
     expect(await store.db.revisions.count()).toBe(0);
   });
 

@@ -25,7 +25,8 @@ export const csv: Command = {
     const { values, positionals } = parseCommandArgs(argv, { study: { type: 'string' }, bom: { type: 'boolean' } });
     if (positionals.length !== 1) throw new InputError(`Give one backup file, got ${positionals.length === 0 ? 'none' : positionals.join(', ')}`);
     if (!values.study) throw new InputError('Name the study with --study ID-OR-NAME');
-    const backup = readBackupSync(readTextFile(positionals[0]));
+    const text = readTextFile(positionals[0], { backup: true });
+    const backup = readBackupSync(text);
     const study = selectStudy(backup, values.study);
     return studyCsv(study, studyRuns(backup, study.id), { bom: values.bom === true });
   },

@@ -8,6 +8,7 @@
  */
 import { InputError } from '../errors.ts';
 import { describe } from '../study/study.ts';
+import { isIsoDateTime } from './iso-date-time.ts';
 
 /** Longest text accepted in any field (a note of a few pages); longer means a damaged file. */
 export const MAX_TEXT = 100_000;
@@ -47,9 +48,32 @@ export function id(v: unknown, path: string): string {
 /** Longest date and time text accepted (an ISO 8601 time with fractions and offset is under 40). */
 export const MAX_TIME = 40;
 
+/** The words every time field's message uses for what it needs. */
+export const TIME_NEEDED = 'a date and time (ISO 8601, e.g. 2026-03-01T14:05 or 2026-03-01T14:05:00Z)';
+
 export function time(v: unknown, path: string): string {
-  if (typeof v !== 'string' || v.length > MAX_TIME || Number.isNaN(Date.parse(v))) fail(path, 'a date and time (ISO 8601)', v);
+  if (typeof v !== 'string' || v.length > MAX_TIME || !isIsoDateTime(v)) fail(path, TIME_NEEDED, v);
   return v;
+}
+
+/**
+ * Largest revision counter a file may bring: a run's counter starts at 1 and each save adds one
+ * to the highest its device knows, so a real history stays far below a billion; a larger one
+ * was made by hand, and one near the largest exact whole number (2^53 - 1) would leave no room
+ * for the saves after it. Saves on a device may go on above it (MAX_SAVED_REV). Common practice.
+ */
+export const MAX_IMPORTED_REV = 1_000_000_000;
+
+/** Largest counter a save on this device may write: one below 2^53 - 1, so a counter and the
+ * next one are always exact (ECMA-262 Number.MAX_SAFE_INTEGER). */
+export const MAX_SAVED_REV = Number.MAX_SAFE_INTEGER - 1;
+
+/** A revision counter from a file (at most MAX_IMPORTED_REV) or from a save (MAX_SAVED_REV), with the reason in the message. */
+export function revisionCounter(v: unknown, path: string, max: number = MAX_IMPORTED_REV): number {
+  if (typeof v === 'number' && Number.isSafeInteger(v) && v > max && max === MAX_IMPORTED_REV) {
+    throw new InputError(`${path}: needs a revision counter from 1 to ${max}, got ${v}; each save adds one to a run's counter, so no real history comes near this, and a counter this large would leave no room for the saves after it. The file was altered or damaged`);
+  }
+  return int(v, path, 1, max);
 }
 
 export function finite(v: unknown, path: string): number {

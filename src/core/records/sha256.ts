@@ -2,10 +2,12 @@
  * SHA-256 (FIPS 180-4, "Secure Hash Standard", section 6.2), a small pure implementation: the
  * backup checksum where a page or program has no Web Crypto (a page served over plain http has
  * no crypto.subtle), and the derived revision ids the store makes. Cost: one pass over the
- * bytes, 64 rounds per 64-byte block. Throws nothing.
+ * bytes, 64 rounds per 64-byte block (the Sha256 class below takes the bytes in pieces). Throws
+ * nothing.
  * Example: toHex(sha256(utf8Encode('abc'))) ->
  *   'ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad' (FIPS 180-4 example).
  */
+import { Utf8Chunks, utf8Length } from './utf8.ts';
 
 // FIPS 180-4 section 4.2.2: the first 32 bits of the fractional parts of the cube roots of the
 // first 64 primes.
@@ -20,22 +22,65 @@ const K = new Uint32Array([
   0x748f82ee, 0x78a5636f, 0x84c87814, 0x8cc70208, 0x90befffa, 0xa4506ceb, 0xbef9a3f7, 0xc67178f2,
 ]);
 
-/** SHA-256 of the bytes, as 32 bytes. */
-export function sha256(message: Uint8Array): Uint8Array {
-  // Padding (section 5.1.1): a 1 bit, zeros, then the message length in bits as 64 bits.
-  const bitLength = message.length * 8;
-  const padded = new Uint8Array(((message.length + 9 + 63) >> 6) << 6);
-  padded.set(message);
-  padded[message.length] = 0x80;
-  const view = new DataView(padded.buffer);
-  view.setUint32(padded.length - 8, Math.floor(bitLength / 0x100000000));
-  view.setUint32(padded.length - 4, bitLength >>> 0);
+/**
+ * SHA-256 over bytes given in pieces (FIPS 180-4 section 6.2, the message processed block by
+ * block as it comes), so a large message never has to sit in memory whole. Cost: 64 rounds per
+ * 64-byte block; nothing allocated per block. Throws nothing.
+ * Example: new Sha256().update(utf8Encode('ab')).update(utf8Encode('c')).digest() equals sha256(utf8Encode('abc')).
+ */
+export class Sha256 {
   // Initial hash value (section 5.3.3).
-  const H = new Uint32Array([0x6a09e667, 0xbb67ae85, 0x3c6ef372, 0xa54ff53a, 0x510e527f, 0x9b05688c, 0x1f83d9ab, 0x5be0cd19]);
-  const W = new Uint32Array(64);
-  const rotr = (x: number, n: number) => (x >>> n) | (x << (32 - n));
-  for (let off = 0; off < padded.length; off += 64) {
-    for (let t = 0; t < 16; t++) W[t] = view.getUint32(off + t * 4);
+  private readonly H = new Uint32Array([0x6a09e667, 0xbb67ae85, 0x3c6ef372, 0xa54ff53a, 0x510e527f, 0x9b05688c, 0x1f83d9ab, 0x5be0cd19]);
+  private readonly W = new Uint32Array(64);
+  /** A block not yet full. */
+  private readonly partial = new Uint8Array(64);
+  private partialLength = 0;
+  private length = 0;
+  private done = false;
+
+  /** Adds bytes to the message (the bytes are read during the call, not kept). */
+  update(bytes: Uint8Array): this {
+    if (this.done) throw new RangeError('Sha256: update after digest');
+    this.length += bytes.length;
+    let i = 0;
+    const n = bytes.length;
+    if (this.partialLength > 0) {
+      while (i < n && this.partialLength < 64) this.partial[this.partialLength++] = bytes[i++];
+      if (this.partialLength < 64) return this;
+      this.block(this.partial, 0);
+      this.partialLength = 0;
+    }
+    for (; i + 64 <= n; i += 64) this.block(bytes, i);
+    while (i < n) this.partial[this.partialLength++] = bytes[i++];
+    return this;
+  }
+
+  /** The 32 bytes of the digest; the hasher takes no more bytes after this. */
+  digest(): Uint8Array {
+    if (this.done) throw new RangeError('Sha256: digest taken twice');
+    // Padding (section 5.1.1): a 1 bit, zeros, then the message length in bits as 64 bits.
+    const bytes = this.length;
+    const tail = new Uint8Array(((this.partialLength + 9 + 63) >> 6) << 6);
+    tail.set(this.partial.subarray(0, this.partialLength));
+    tail[this.partialLength] = 0x80;
+    const view = new DataView(tail.buffer);
+    view.setUint32(tail.length - 8, Math.floor(bytes / 0x20000000)); // bits / 2^32
+    view.setUint32(tail.length - 4, (bytes * 8) >>> 0);
+    for (let off = 0; off < tail.length; off += 64) this.block(tail, off);
+    this.done = true;
+    const out = new Uint8Array(32);
+    const outView = new DataView(out.buffer);
+    for (let i = 0; i < 8; i++) outView.setUint32(i * 4, this.H[i]);
+    return out;
+  }
+
+  private block(b: Uint8Array, off: number): void {
+    const W = this.W;
+    const H = this.H;
+    for (let t = 0; t < 16; t++) {
+      const o = off + t * 4;
+      W[t] = ((b[o] << 24) | (b[o + 1] << 16) | (b[o + 2] << 8) | b[o + 3]) >>> 0;
+    }
     for (let t = 16; t < 64; t++) {
       const w15 = W[t - 15];
       const w2 = W[t - 2];
@@ -43,25 +88,25 @@ export function sha256(message: Uint8Array): Uint8Array {
       const s1 = rotr(w2, 17) ^ rotr(w2, 19) ^ (w2 >>> 10);
       W[t] = (W[t - 16] + s0 + W[t - 7] + s1) >>> 0;
     }
-    let a = H[0], b = H[1], c = H[2], d = H[3], e = H[4], f = H[5], g = H[6], h = H[7];
+    let a = H[0], b2 = H[1], c = H[2], d = H[3], e = H[4], f = H[5], g = H[6], h = H[7];
     for (let t = 0; t < 64; t++) {
       const S1 = rotr(e, 6) ^ rotr(e, 11) ^ rotr(e, 25);
       const ch = (e & f) ^ (~e & g);
       const T1 = (h + S1 + ch + K[t] + W[t]) >>> 0;
       const S0 = rotr(a, 2) ^ rotr(a, 13) ^ rotr(a, 22);
-      const maj = (a & b) ^ (a & c) ^ (b & c);
+      const maj = (a & b2) ^ (a & c) ^ (b2 & c);
       const T2 = (S0 + maj) >>> 0;
       h = g;
       g = f;
       f = e;
       e = (d + T1) >>> 0;
       d = c;
-      c = b;
-      b = a;
+      c = b2;
+      b2 = a;
       a = (T1 + T2) >>> 0;
     }
     H[0] = (H[0] + a) >>> 0;
-    H[1] = (H[1] + b) >>> 0;
+    H[1] = (H[1] + b2) >>> 0;
     H[2] = (H[2] + c) >>> 0;
     H[3] = (H[3] + d) >>> 0;
     H[4] = (H[4] + e) >>> 0;
@@ -69,10 +114,13 @@ export function sha256(message: Uint8Array): Uint8Array {
     H[6] = (H[6] + g) >>> 0;
     H[7] = (H[7] + h) >>> 0;
   }
-  const out = new Uint8Array(32);
-  const outView = new DataView(out.buffer);
-  for (let i = 0; i < 8; i++) outView.setUint32(i * 4, H[i]);
-  return out;
+}
+
+const rotr = (x: number, n: number) => (x >>> n) | (x << (32 - n));
+
+/** SHA-256 of the bytes, as 32 bytes. */
+export function sha256(message: Uint8Array): Uint8Array {
+  return new Sha256().update(message).digest();
 }
 
 /** Lower-case hexadecimal of the bytes. */
@@ -82,22 +130,16 @@ export function toHex(bytes: Uint8Array): string {
   return s;
 }
 
-/** UTF-8 bytes of a string (RFC 3629); a lone surrogate becomes U+FFFD, as TextEncoder does. */
+/** UTF-8 bytes of a string (RFC 3629) in one typed array of the exact length; a lone surrogate
+ * becomes U+FFFD, as TextEncoder does. */
 export function utf8Encode(text: string): Uint8Array {
-  const out: number[] = [];
-  for (let i = 0; i < text.length; i++) {
-    let cp = text.charCodeAt(i);
-    if (cp >= 0xd800 && cp <= 0xdbff && i + 1 < text.length) {
-      const lo = text.charCodeAt(i + 1);
-      if (lo >= 0xdc00 && lo <= 0xdfff) {
-        cp = 0x10000 + ((cp - 0xd800) << 10) + (lo - 0xdc00);
-        i++;
-      } else cp = 0xfffd;
-    } else if (cp >= 0xd800 && cp <= 0xdfff) cp = 0xfffd;
-    if (cp < 0x80) out.push(cp);
-    else if (cp < 0x800) out.push(0xc0 | (cp >> 6), 0x80 | (cp & 63));
-    else if (cp < 0x10000) out.push(0xe0 | (cp >> 12), 0x80 | ((cp >> 6) & 63), 0x80 | (cp & 63));
-    else out.push(0xf0 | (cp >> 18), 0x80 | ((cp >> 12) & 63), 0x80 | ((cp >> 6) & 63), 0x80 | (cp & 63));
-  }
-  return Uint8Array.from(out);
+  const out = new Uint8Array(utf8Length(text));
+  let at = 0;
+  const chunks = new Utf8Chunks((bytes) => {
+    out.set(bytes, at);
+    at += bytes.length;
+  }, Math.min(1 << 16, Math.max(16, out.length + 4)));
+  chunks.write(text);
+  chunks.end();
+  return out;
 }

@@ -12,10 +12,11 @@
  * disagree, and this order gives the same answer on every device and in every merge order.
  */
 import { InputError } from '../errors.ts';
-import type { Design } from '../design/design.ts';
+import type { Design, DesignRun } from '../design/design.ts';
 import type { Factor } from '../factor/factor.ts';
 import { plannedSetting } from '../design/planned-settings.ts';
 import type { Response } from './response.ts';
+import { isIsoDateTime } from '../records/iso-date-time.ts';
 
 /** A design as a study stores it: the factors live beside it, once; the typed notes and the
  * foldover fact stay with the fresh plan (the stored format keeps the notes in words). */
@@ -130,9 +131,20 @@ export function meanReading(readings: readonly number[]): number | null {
   return s / readings.length;
 }
 
-/** The design's planned run with this run number, or undefined. */
-export function plannedRunOf(study: StudyPlan, plannedRun: number) {
-  return study.design.runs.find((r) => r.run === plannedRun);
+/** Each plan's runs by run number, made once per plan (plans never change once made). */
+const runIndex = new WeakMap<readonly DesignRun[], ReadonlyMap<number, DesignRun>>();
+
+/**
+ * The design's planned run with this run number, or undefined. Cost: a lookup in an index of the
+ * plan's runs, made on the first call for a plan, so checking a long history stays linear.
+ */
+export function plannedRunOf(study: StudyPlan, plannedRun: number): DesignRun | undefined {
+  let index = runIndex.get(study.design.runs);
+  if (!index) {
+    index = new Map(study.design.runs.map((r) => [r.run, r]));
+    runIndex.set(study.design.runs, index);
+  }
+  return index.get(plannedRun);
 }
 
 /**
@@ -168,8 +180,8 @@ export function checkRunValues(study: Pick<StudyPlan, 'factors' | 'responses'>, 
       return x;
     });
   });
-  if (v.loggedAt !== null && (typeof v.loggedAt !== 'string' || Number.isNaN(Date.parse(v.loggedAt)))) {
-    throw new InputError(`Time: needs a date and time (ISO 8601) or nothing, got ${describe(v.loggedAt)}`);
+  if (v.loggedAt !== null && (typeof v.loggedAt !== 'string' || !isIsoDateTime(v.loggedAt))) {
+    throw new InputError(`Time: needs a date and time (ISO 8601, e.g. 2026-03-01T14:05) or nothing, got ${describe(v.loggedAt)}`);
   }
   if (v.operator !== null && typeof v.operator !== 'string') throw new InputError(`Operator: needs text or nothing, got ${describe(v.operator)}`);
   if (typeof v.notes !== 'string') throw new InputError(`Notes: needs text, got ${describe(v.notes)}`);

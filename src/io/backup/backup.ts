@@ -11,22 +11,28 @@
  *     "payload": { "studies": [...], "revisions": [...] } }
  *
  * The checksum is SHA-256 (FIPS 180-4) of the UTF-8 bytes of the canonical JSON of `payload`
- * (src/core/records/canonical-json.ts). Reading checks, in this order: that the text is JSON,
+ * (src/core/records/canonical-json.ts). Reading checks, in this order: the size (at most
+ * MAX_BACKUP_BYTES, backup-size.ts), nesting no deeper than MAX_NESTING, that the text is JSON,
  * the format name, the version (a newer one is refused, an older one migrated), the checksum,
  * then every field (the record checks of src/core/records, the same the store applies on every
  * write).
  */
 import { InputError } from '../../core/errors.ts';
 import type { RunRevision, StudyRecord } from '../../core/study/study.ts';
-import { canonicalJson } from '../../core/records/canonical-json.ts';
+import { MAX_NESTING } from '../../core/records/canonical-json.ts';
+import { canonicalJsonBytes } from '../../core/records/canonical-json-bytes.ts';
+import { canonicalSha256 } from '../../core/records/canonical-sha256.ts';
 import { checkHistories, checkUniqueIds } from '../../core/records/check-histories.ts';
 import { checkRevision } from '../../core/records/check-revision.ts';
 import { checkStudy } from '../../core/records/check-study.ts';
 import { id, int, list, obj, only, text, time } from '../../core/records/field-checks.ts';
-import { sha256, toHex, utf8Encode } from '../../core/records/sha256.ts';
+import { toHex } from '../../core/records/sha256.ts';
+import { utf8Length } from '../../core/records/utf8.ts';
 import { defaultDigest, portableDigest, type Digest } from '../digest.ts';
 import { APP_NAME, APP_VERSION } from '../app-version.ts';
+import { checkBackupSize } from './backup-size.ts';
 import { jsonErrorOffset } from './json-error.ts';
+import { jsonNestingOffset } from './json-nesting.ts';
 import { backupV1ToV2 } from './migrate-v1.ts';
 
 export const BACKUP_FORMAT = 'trialbook-backup';
@@ -82,7 +88,16 @@ export function sortPayload(p: BackupPayload): BackupPayload {
 
 /** The checksum of a payload: SHA-256 of its canonical JSON, as hexadecimal. */
 export async function payloadChecksum(payload: unknown, digest: Digest = defaultDigest): Promise<string> {
-  return toHex(await digest(utf8Encode(canonicalJson(payload))));
+  return (await payloadDigest(payload, digest)).hex;
+}
+
+/** The checksum of a payload and the length of its canonical JSON in bytes. */
+async function payloadDigest(payload: unknown, digest: Digest): Promise<{ hex: string; bytes: number }> {
+  // The portable digest hashes the canonical text as it is written (64 KiB at a time); any
+  // other digest (Web Crypto's) needs the bytes whole, built in typed arrays.
+  if (digest === portableDigest) return canonicalSha256(payload);
+  const bytes = canonicalJsonBytes(payload);
+  return { hex: toHex(await digest(bytes)), bytes: bytes.length };
 }
 
 export interface BackupHeader {
@@ -91,7 +106,10 @@ export interface BackupHeader {
   readonly scope: 'all' | 'study';
 }
 
-function assemble(payload: BackupPayload, header: BackupHeader, checksum: string): string {
+function assemble(payload: BackupPayload, header: BackupHeader, checksum: string, payloadBytes: number): string {
+  // The file holds the canonical payload and more, so a payload above the limit is refused
+  // before the file text is made; the text is measured again once made.
+  checkBackupSize(payloadBytes, 'export');
   const doc: Backup = {
     format: BACKUP_FORMAT,
     formatVersion: BACKUP_VERSION,
@@ -103,13 +121,26 @@ function assemble(payload: BackupPayload, header: BackupHeader, checksum: string
     checksum: { algorithm: 'SHA-256', value: checksum },
     payload,
   };
-  return JSON.stringify(doc, null, 1) + '\n';
+  let textOut: string;
+  try {
+    textOut = JSON.stringify(doc, null, 1) + '\n';
+  } catch (err) {
+    // The engine's longest string is far above the limit, so this is a file over it.
+    if (err instanceof RangeError) checkBackupSize(Number.POSITIVE_INFINITY, 'export');
+    throw err;
+  }
+  checkBackupSize(utf8Length(textOut), 'export');
+  return textOut;
 }
 
-/** The backup file text of a payload (sorted by id), with its counts and checksum. */
+/**
+ * The backup file text of a payload (sorted by id), with its counts and checksum. Throws
+ * InputError when the file would be above MAX_BACKUP_BYTES (which the import refuses).
+ */
 export async function writeBackup(payload: BackupPayload, header: BackupHeader, digest: Digest = defaultDigest): Promise<string> {
   const sorted = sortPayload(payload);
-  return assemble(sorted, header, await payloadChecksum(sorted, digest));
+  const { hex, bytes } = await payloadDigest(sorted, digest);
+  return assemble(sorted, header, hex, bytes);
 }
 
 /** Line and column (from 1) of a character offset. */
@@ -124,6 +155,12 @@ function lineColumn(textIn: string, offset: number): { line: number; column: num
 export function parseJsonText(textIn: string, what = 'The file'): unknown {
   const body = textIn.charCodeAt(0) === 0xfeff ? textIn.slice(1) : textIn;
   if (body.trim() === '') throw new InputError(`${what} is empty; a Trialbook backup is a JSON document`);
+  // Before any parse or walk: nesting deeper than any record needs is refused where it starts.
+  const deep = jsonNestingOffset(body, MAX_NESTING);
+  if (deep >= 0) {
+    const { line, column } = lineColumn(body, deep);
+    throw new InputError(`${what} nests lists and objects deeper than ${MAX_NESTING} levels at line ${line}, column ${column}; a Trialbook backup needs fewer than 10, so the file is damaged or was not made by Trialbook. Nothing was imported.`);
+  }
   try {
     return JSON.parse(body);
   } catch {
@@ -219,8 +256,9 @@ function headOf(doc: unknown): Record<string, unknown> {
   return d;
 }
 
-/** Reads a backup file: JSON, format, version (migrating older ones), checksum, every field. */
+/** Reads a backup file: size, JSON, format, version (migrating older ones), checksum, every field. */
 export async function readBackup(textIn: string, digest: Digest = defaultDigest): Promise<Backup> {
+  checkBackupSize(utf8Length(textIn), 'import');
   const doc = headOf(parseJsonText(textIn));
   const expected = checksumOf(doc);
   if (doc.payload === undefined) throw new InputError('payload: needs an object, got nothing');
@@ -230,10 +268,11 @@ export async function readBackup(textIn: string, digest: Digest = defaultDigest)
 
 /** readBackup without waiting: the same checks with the small SHA-256 (for the command line). */
 export function readBackupSync(textIn: string): Backup {
+  checkBackupSize(utf8Length(textIn), 'import');
   const doc = headOf(parseJsonText(textIn));
   const expected = checksumOf(doc);
   if (doc.payload === undefined) throw new InputError('payload: needs an object, got nothing');
-  checkChecksum(toHex(sha256(utf8Encode(canonicalJson(doc.payload)))), expected);
+  checkChecksum(canonicalSha256(doc.payload).hex, expected);
   return checkBackup(migrateBackup(doc));
 }
 

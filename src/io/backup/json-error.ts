@@ -1,7 +1,8 @@
 /**
  * Where a JSON text first breaks the grammar of RFC 8259 (section 2 to 7), as a character offset,
  * so an error message can name line and column whatever the JavaScript engine's own message
- * says. Only run after JSON.parse has failed; it checks syntax, not meaning.
+ * says. Only run after JSON.parse has failed; it checks syntax, not meaning. Iterative, so any
+ * depth of nesting is located without recursion. Cost: one pass over the text.
  * Example: jsonErrorOffset('{"a": tru}') -> 9 (where "tru}" stops matching "true").
  */
 export function jsonErrorOffset(text: string): number {
@@ -44,50 +45,65 @@ export function jsonErrorOffset(text: string): number {
     if (!r || r[0] === '' || r[0] === '-') stop();
     i += r![0].length;
   };
-  const value = (): void => {
+  const key = () => {
     ws();
-    const c = text[i];
-    if (c === '{') {
-      i++;
+    if (text[i] !== '"') stop();
+    string();
+    ws();
+    if (text[i] !== ':') stop();
+    i++;
+  };
+  const OBJECT = 1;
+  const LIST = 2;
+  // Iterative, with the open lists and objects on a stack of its own: a text nested thousands
+  // deep is located like any other, with no recursion to overflow the call stack.
+  const walk = (): number => {
+    const open: number[] = [];
+    let wantValue = true;
+    for (;;) {
+      if (wantValue) {
+        ws();
+        const c = text[i];
+        if (c === '{') {
+          i++;
+          ws();
+          if (text[i] === '}') i++;
+          else {
+            open.push(OBJECT);
+            key();
+            continue;
+          }
+        } else if (c === '[') {
+          i++;
+          ws();
+          if (text[i] === ']') i++;
+          else {
+            open.push(LIST);
+            continue;
+          }
+        } else if (c === '"') string();
+        else if (c === 't') literal('true');
+        else if (c === 'f') literal('false');
+        else if (c === 'n') literal('null');
+        else if (c === '-' || (c !== undefined && c >= '0' && c <= '9')) number();
+        else stop();
+        wantValue = false;
+      }
       ws();
-      if (text[i] === '}') return void i++;
-      for (;;) {
-        ws();
-        if (text[i] !== '"') stop();
-        string();
-        ws();
-        if (text[i] !== ':') stop();
+      if (open.length === 0) return i < n ? i : -1;
+      const top = open[open.length - 1];
+      if (text[i] === ',') {
         i++;
-        value();
-        ws();
-        if (text[i] === ',') i++;
-        else if (text[i] === '}') return void i++;
-        else stop();
-      }
+        if (top === OBJECT) key();
+        wantValue = true;
+      } else if ((top === OBJECT && text[i] === '}') || (top === LIST && text[i] === ']')) {
+        i++;
+        open.pop();
+      } else stop();
     }
-    if (c === '[') {
-      i++;
-      ws();
-      if (text[i] === ']') return void i++;
-      for (;;) {
-        value();
-        ws();
-        if (text[i] === ',') i++;
-        else if (text[i] === ']') return void i++;
-        else stop();
-      }
-    }
-    if (c === '"') return string();
-    if (c === 't') return literal('true');
-    if (c === 'f') return literal('false');
-    if (c === 'n') return literal('null');
-    if (c === '-' || (c !== undefined && c >= '0' && c <= '9')) return number();
-    stop();
   };
   try {
-    value();
-    ws();
-    return i < n ? i : -1;
+    return walk();
   } catch (e) {
     if (e instanceof Stop) return e.at;
     throw e;

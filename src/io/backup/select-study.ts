@@ -27,10 +27,16 @@ export function selectStudy(backup: Pick<Backup, 'payload'>, ref: string): Study
   throw new InputError(`The backup has no study with the id or name "${ref}"; it holds ${studies.length === 0 ? 'no studies' : list}`);
 }
 
-/** The current state of every logged run of a study in a backup, by planned run. */
+/** The current state of every logged run of a study in a backup, by planned run. Cost: linear in
+ * the revisions (a map by run), plus sorting each run's history. */
 export function studyRuns(backup: Pick<Backup, 'payload'>, studyId: string): LoggedRun[] {
   const byRun = new Map<string, RunRevision[]>();
-  for (const r of backup.payload.revisions) if (r.studyId === studyId) byRun.set(r.runId, [...(byRun.get(r.runId) ?? []), r]);
+  for (const r of backup.payload.revisions) {
+    if (r.studyId !== studyId) continue;
+    const list = byRun.get(r.runId);
+    if (list) list.push(r);
+    else byRun.set(r.runId, [r]);
+  }
   return [...byRun.values()].map(currentRun).sort((a, b) => a.plannedRun - b.plannedRun || (a.id < b.id ? -1 : 1));
 }
 

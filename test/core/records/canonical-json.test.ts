@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { canonicalJson } from '../../../src/core/records/canonical-json.ts';
+import { MAX_NESTING, canonicalJson } from '../../../src/core/records/canonical-json.ts';
+import { InputError } from '../../../src/core/errors.ts';
 
 describe('canonicalJson', () => {
   // RFC 8785 (JSON Canonicalization Scheme), section 3.2.2, the example input and its output.
@@ -34,5 +35,35 @@ describe('canonicalJson', () => {
   });
   it('refuses a number JSON cannot hold', () => {
     expect(() => canonicalJson({ a: Number.POSITIVE_INFINITY })).toThrow(/no place for the number Infinity/);
+  });
+});
+
+describe('canonicalJson nesting', () => {
+  /** A list nested `depth` deep around 1, built without recursion. */
+  function nested(depth: number): unknown {
+    let v: unknown = 1;
+    for (let i = 0; i < depth; i++) v = [v];
+    return v;
+  }
+  it('writes 64 levels and refuses 65, naming where, with no recursion (MAX_NESTING)', () => {
+    expect(canonicalJson(nested(MAX_NESTING))).toBe('['.repeat(64) + '1' + ']'.repeat(64));
+    expect(() => canonicalJson(nested(MAX_NESTING + 1))).toThrow(/^\$(\[0\]){64}: lists and objects nested deeper than 64 levels/);
+  });
+  it('refuses 100,000 levels with an InputError, not a stack overflow', () => {
+    let err: unknown;
+    try {
+      canonicalJson(nested(100_000));
+    } catch (e) {
+      err = e;
+    }
+    expect(err).toBeInstanceOf(InputError);
+  });
+  it('refuses a value that contains itself (a cycle) as too deep, rather than looping', () => {
+    const a: Record<string, unknown> = { name: 'loop' };
+    a.self = a;
+    expect(() => canonicalJson(a)).toThrow(/^\$(\.self){64}: lists and objects nested deeper than 64/);
+  });
+  it('names object members and list places in the path of a refused number', () => {
+    expect(() => canonicalJson({ payload: { 'odd key': [0, Number.NEGATIVE_INFINITY] } })).toThrow(/^\$\.payload\["odd key"\]\[1\]: JSON has no place for the number -Infinity/);
   });
 });

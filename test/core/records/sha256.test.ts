@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { createHash } from 'node:crypto';
-import { sha256, toHex, utf8Encode } from '../../../src/core/records/sha256.ts';
+import { Sha256, sha256, toHex, utf8Encode } from '../../../src/core/records/sha256.ts';
 
 const hex = (s: string) => toHex(sha256(utf8Encode(s)));
 
@@ -48,5 +48,43 @@ describe('utf8Encode', () => {
       }),
       { numRuns: 500 },
     );
+  });
+});
+
+describe('Sha256 (bytes in pieces)', () => {
+  it('agrees with Node\'s OpenSSL SHA-256 however the message is cut', () => {
+    fc.assert(
+      fc.property(fc.uint8Array({ maxLength: 400 }), fc.array(fc.nat(), { maxLength: 8 }), (bytes, cuts) => {
+        const at = [...new Set(cuts.map((c) => c % (bytes.length + 1)))].sort((a, b) => a - b);
+        const h = new Sha256();
+        let from = 0;
+        for (const c of [...at, bytes.length]) {
+          h.update(bytes.subarray(from, c));
+          from = c;
+        }
+        expect(toHex(h.digest())).toBe(createHash('sha256').update(bytes).digest('hex'));
+      }),
+      { numRuns: 500 },
+    );
+  });
+  // FIPS 180-2, Appendix B.3: one million "a", here fed 997 bytes at a time (a prime, so the
+  // pieces straddle every block boundary).
+  it('matches the FIPS 180-2 million-"a" example fed in 997-byte pieces', () => {
+    const piece = new Uint8Array(997).fill(0x61);
+    const h = new Sha256();
+    let left = 1_000_000;
+    while (left > 0) {
+      const n = Math.min(left, piece.length);
+      h.update(piece.subarray(0, n));
+      left -= n;
+    }
+    expect(toHex(h.digest())).toBe('cdc76e5c9914fb9281a1c7e284d73e67f1809a48a497200e046d39ccc7112cd0');
+  });
+  it('refuses more bytes, or a second digest, after the digest (degenerate use)', () => {
+    const h = new Sha256();
+    // NIST CAVP ShortMsg, Len = 0.
+    expect(toHex(h.digest())).toBe('e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855');
+    expect(() => h.update(new Uint8Array(1))).toThrow(RangeError);
+    expect(() => h.digest()).toThrow(RangeError);
   });
 });

@@ -23,6 +23,34 @@ describe('reading a backup', () => {
     expect(() => parseJsonText('   ')).toThrow(/empty/);
   });
 
+  it('refuses nesting deeper than 64 levels with its line and column, before parsing, at any depth', () => {
+    for (const depth of [65, 3000, 12_000, 1_000_000]) {
+      const text = '{"format": "trialbook-backup",\n "payload": ' + '['.repeat(depth) + ']'.repeat(depth) + '}';
+      // The 65th level opens at line 2, column 13 + 63 (the outer object is level 1).
+      expect(() => readBackupSync(text)).toThrow(/nests lists and objects deeper than 64 levels at line 2, column 76; .*Nothing was imported/);
+    }
+    // Exactly 64 levels pass the nesting check (and fail later, as a payload that is no object).
+    const ok = '{"format": "trialbook-backup", "formatVersion": 2, "checksum": {"algorithm": "SHA-256", "value": "' + '0'.repeat(64) + '"}, "payload": ' + '['.repeat(63) + ']'.repeat(63) + '}';
+    expect(() => readBackupSync(ok)).toThrow(/^checksum: the payload does not match/);
+  });
+
+  it('refuses a file above MAX_BACKUP_BYTES before parsing it, on both reading paths', async () => {
+    const { MAX_BACKUP_BYTES } = await import('../../../src/io/backup/backup-size.ts');
+    const text = (await writeBackup(empty, header)).padEnd(MAX_BACKUP_BYTES + 1, ' ');
+    expect(() => readBackupSync(text)).toThrow(/^This backup file is 128\.0 MB; Trialbook reads backups of up to 128 MB/);
+    await expect(readBackup(text)).rejects.toThrow(/Nothing was imported/);
+    // Counted in UTF-8 bytes: 50 million euro signs are 150 million bytes.
+    expect(() => readBackupSync('\u20ac'.repeat(50_000_000))).toThrow(/^This backup file is 143\.1 MB/);
+  });
+
+  it('refuses to write a backup above MAX_BACKUP_BYTES, which no device could import', async () => {
+    // 1,400 revisions sharing one 100,000-character note: 140 MB of canonical text (invented).
+    const note = 'n'.repeat(100_000);
+    const revisions = Array.from({ length: 1400 }, (_, i) => ({ id: `r${i}`, notes: note })) as never[];
+    await expect(writeBackup({ studies: [], revisions }, header, portableDigest)).rejects.toThrow(/^This backup would be 133\.\d MB; .*Nothing was written/);
+    await expect(writeBackup({ studies: [], revisions }, header)).rejects.toThrow(/^This backup would be/);
+  }, 60_000);
+
   it('refuses what is not a Trialbook backup, and a newer format version', async () => {
     expect(() => readBackupSync('[1,2]')).toThrow(/not a Trialbook backup/);
     expect(() => readBackupSync('{"format":"other"}')).toThrow(/format: needs "trialbook-backup"/);
@@ -60,6 +88,12 @@ describe('jsonErrorOffset', () => {
     expect(jsonErrorOffset('{"a": "x\\q"}')).toBe(9);
     expect(jsonErrorOffset('01')).toBe(1);
     expect(jsonErrorOffset('{"a": [1, {"b": null}]} ')).toBe(-1);
+  });
+  it('locates an error under 100,000 levels of nesting without recursion', async () => {
+    const { jsonErrorOffset } = await import('../../../src/io/backup/json-error.ts');
+    const deep = '['.repeat(50_000) + '{"a":'.repeat(50_000);
+    expect(jsonErrorOffset(deep + 'x')).toBe(deep.length);
+    expect(jsonErrorOffset(deep + '1' + '}'.repeat(50_000) + ']'.repeat(50_000))).toBe(-1);
   });
   it('agrees with JSON.parse on which texts are JSON', async () => {
     const { jsonErrorOffset } = await import('../../../src/io/backup/json-error.ts');

@@ -1,8 +1,9 @@
 /**
  * Fuzzed imports: a real backup (written by the store's export) is cut short, has fields
  * replaced by values of the wrong type, a wrong format version, duplicated records, huge
- * numbers or markup in its text, and is re-signed with a correct checksum half of the time so
- * that the field checks are reached. Every case must end in a clean import or an InputError
+ * numbers, markup or control characters in its text, lists and objects nested from 2 to 200,000
+ * levels deep, and is re-signed with a correct checksum half of the time so that the field
+ * checks are reached; files just under and over the size limit are read too. Every case must end in a clean import or an InputError
  * with a readable message (never another exception), and a failed import must change nothing.
  */
 import 'fake-indexeddb/auto';
@@ -81,7 +82,14 @@ type Mutation =
   | { kind: 'remove'; path: number; resign: boolean }
   | { kind: 'version'; value: Json }
   | { kind: 'duplicate'; list: 'studies' | 'revisions'; index: number; resign: boolean }
-  | { kind: 'huge'; path: number; text: string };
+  | { kind: 'huge'; path: number; text: string }
+  | { kind: 'nest'; path: number; depth: number; object: boolean; resign: boolean }
+  | { kind: 'control'; path: number; text: string; resign: boolean };
+
+/** Control characters and terminal escapes (C0, DEL, C1, bidirectional overrides). */
+const controlText = fc
+  .array(fc.oneof(fc.integer({ min: 0, max: 0x1f }), fc.constantFrom(0x7f, 0x85, 0x9b, 0x202e, 0x2028, 0xfeff), fc.integer({ min: 0x20, max: 0x7e })), { minLength: 1, maxLength: 20 })
+  .map((codes) => String.fromCharCode(...codes));
 
 const mutation: fc.Arbitrary<Mutation> = fc.oneof(
   fc.record({ kind: fc.constant('truncate' as const), at: fc.double({ min: 0, max: 1, noNaN: true }) }),
@@ -90,7 +98,22 @@ const mutation: fc.Arbitrary<Mutation> = fc.oneof(
   fc.record({ kind: fc.constant('version' as const), value: fc.oneof(fc.integer({ min: -5, max: 1000 }) as fc.Arbitrary<Json>, fc.string() as fc.Arbitrary<Json>, fc.constant<Json>(null)) }),
   fc.record({ kind: fc.constant('duplicate' as const), list: fc.constantFrom('studies' as const, 'revisions' as const), index: fc.nat(), resign: fc.boolean() }),
   fc.record({ kind: fc.constant('huge' as const), path: fc.nat(), text: fc.constantFrom('1e400', '-1e400', '123456789012345678901234567890', '1e-400') }),
+  fc.record({
+    kind: fc.constant('nest' as const),
+    path: fc.nat(),
+    depth: fc.oneof(fc.integer({ min: 2, max: 70 }), fc.constantFrom(63, 64, 65, 3000, 12_000, 200_000)),
+    object: fc.boolean(),
+    resign: fc.boolean(),
+  }),
+  fc.record({ kind: fc.constant('control' as const), path: fc.nat(), text: fc.oneof(controlText, fc.constantFrom('\u001b]0;owned\u0007', '\u001b[2J\u001b[31mred', 'a\u0000b', '\r\n\t')), resign: fc.boolean() }),
 );
+
+/** A list (or object) nested `depth` deep around 1, built without recursion. */
+function nested(depth: number, object: boolean): Json {
+  let v: Json = 1;
+  for (let i = 0; i < depth; i++) v = object ? { a: v } : [v];
+  return v;
+}
 
 function apply(m: Mutation): string {
   const all = paths(doc);
@@ -124,6 +147,31 @@ function apply(m: Mutation): string {
       const marker = '"__HUGE__"';
       const d = resign(setAt(doc, p, '__HUGE__'));
       return JSON.stringify(d).replace(marker, m.text);
+    }
+    case 'nest': {
+      const p = all[m.path % all.length];
+      if (m.depth <= 64) {
+        // Shallow enough to build and sign as a value: the field checks are reached.
+        const d = setAt(doc, p, nested(m.depth, m.object));
+        return JSON.stringify(m.resign ? resign(d) : d);
+      }
+      // Deeper: written as text (building it as a value would need a recursive writer).
+      const marker = '"__NEST__"';
+      const open = m.object ? '{"a":' : '[';
+      const close = m.object ? '}' : ']';
+      return JSON.stringify(setAt(doc, p, '__NEST__')).replace(marker, open.repeat(m.depth) + '1' + close.repeat(m.depth));
+    }
+    case 'control': {
+      // Every text field but the checksum's (which re-signing writes again) and a reason (which
+      // a run that is not excluded drops by the record checks).
+      const strings = all.filter((p) => {
+        if (p[0] === 'checksum' || p[p.length - 1] === 'reason') return false;
+        let v: Json = doc;
+        for (const k of p) v = (v as Record<string | number, Json>)[k];
+        return typeof v === 'string';
+      });
+      const d = setAt(doc, strings[m.path % strings.length], m.text);
+      return JSON.stringify(m.resign ? resign(d) : d);
     }
   }
 }
@@ -178,6 +226,55 @@ describe('fuzzed backup files', () => {
       }),
       { numRuns: 300 },
     );
+  }, 120_000);
+
+  it('nesting: deeper than 64 levels is refused with its line and column, whatever the depth, before any walk', () => {
+    fc.assert(
+      fc.property(fc.nat(), fc.integer({ min: 65, max: 300_000 }), fc.boolean(), (path, depth, object) => {
+        const text = apply({ kind: 'nest', path, depth, object, resign: false });
+        expect(() => readBackupSync(text)).toThrow(/nests lists and objects deeper than 64 levels at line 1, column \d+; .*Nothing was imported/);
+      }),
+      { numRuns: 60 },
+    );
+  }, 120_000);
+
+  it('control characters in any text field are refused clearly or kept as written', () => {
+    fc.assert(
+      fc.property(fc.nat(), controlText, (path, text) => {
+        const file = apply({ kind: 'control', path, text, resign: true });
+        let b;
+        try {
+          b = readBackupSync(file);
+        } catch (err) {
+          expectClearError(err);
+          return;
+        }
+        // Kept as written, but for the surrounding white space that operator and reason drop.
+        const kept = text.trim();
+        if (kept !== '') expect(JSON.stringify(b)).toContain(JSON.stringify(kept).slice(1, -1));
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('size: a file of exactly the limit imports; one byte more is refused, naming the size, and changes nothing', async () => {
+    const { MAX_BACKUP_BYTES } = await import('../../../src/io/backup/backup-size.ts');
+    const store = await freshStore();
+    // Trailing whitespace is allowed after a JSON text (RFC 8259 section 2), so padding keeps the file valid.
+    const extraBytes = Buffer.byteLength(original, 'utf8') - original.length; // '°C', 'µm' take two bytes
+    const atLimit = original.padEnd(MAX_BACKUP_BYTES - extraBytes, ' ');
+    expect(Buffer.byteLength(atLimit, 'utf8')).toBe(MAX_BACKUP_BYTES);
+    expect((await importBackup(store, atLimit)).revisionsAdded).toBe(doc.counts && (doc.counts as { revisions: number }).revisions);
+    const before = canonicalJson(await payloadOf(store));
+    let err: unknown;
+    try {
+      await importBackup(store, atLimit + ' ');
+    } catch (e) {
+      err = e;
+    }
+    expectClearError(err);
+    expect((err as Error).message).toMatch(/^This backup file is 128\.0 MB; Trialbook reads backups of up to 128 MB \(134,217,728 bytes\)/);
+    expect(canonicalJson(await payloadOf(store))).toBe(before);
   }, 120_000);
 
   it('markup in text is kept as text, byte for byte', async () => {
