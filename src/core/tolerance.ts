@@ -18,3 +18,8 @@ export const CONSTANT_TOLERANCE = 1e-12;
 /** Off-diagonal entries of R below this fraction of sqrt(|R_ii R_jj|) count as zero when deciding
  * whether the model columns are orthogonal (sequential = adjusted sums of squares). Common practice. */
 export const ORTHOGONALITY_TOLERANCE = 1e-9;
+
+/** An eigenvalue of the second-order matrix B, or a pivot of a linear solve, below this fraction
+ * of the largest in magnitude counts as zero (the surface has no unique stationary point along
+ * it). Common practice: far above rounding, far below any fitted curvature. */
+export const SINGULAR_TOLERANCE = 1e-10;
