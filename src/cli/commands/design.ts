@@ -14,6 +14,7 @@ import type { FactorSpec } from '../../core/factor/factor.ts';
 import { plannedColumn, runSheetCsv } from '../../io/csv/run-sheet.ts';
 import { parseCommandArgs } from '../args.ts';
 import type { Command } from '../command.ts';
+import { isSecondOrderRequest, runSecondOrderDesign, SECOND_ORDER_USAGE } from './design-second-order.ts';
 
 const USAGE = `Usage: npm run --silent cli -- design --factor SPEC [--factor SPEC ...] [options]
 
@@ -43,7 +44,9 @@ Run order:
 
 Output:
   --json                                  the plan as JSON
-  --csv                                   the run sheet as CSV (planned settings in real units)`;
+  --csv                                   the run sheet as CSV (planned settings in real units)
+
+${SECOND_ORDER_USAGE}`;
 
 const OPTIONS = {
   factor: { type: 'string', multiple: true },
@@ -265,6 +268,7 @@ export const design: Command = {
   summary: 'plan a two-level factorial or fractional factorial experiment',
   usage: USAGE,
   async run(argv: string[]): Promise<string> {
+    if (isSecondOrderRequest(argv)) return runSecondOrderDesign(argv);
     const { spec, format } = parseDesignArgs(argv);
     const d = buildDesign(spec);
     if (format === 'json') return JSON.stringify(designJson(d), null, 2);
