@@ -11,7 +11,14 @@ import { InputError } from '../../core/errors.ts';
 import { runSheetCsv } from '../../io/csv/run-sheet.ts';
 import { parseCommandArgs } from '../args.ts';
 import { num, table } from '../report/numbers.ts';
-import { designJson, parseFactorOption } from './design.ts';
+import type { Design } from '../../core/design/design.ts';
+import type { FactorSpec } from '../../core/factor/factor.ts';
+
+/** What this file takes from design.ts, handed in by it (so the two files do not import each other). */
+export interface DesignHelpers {
+  readonly parseFactorOption: (text: string) => FactorSpec;
+  readonly designJson: (d: Design) => object;
+}
 
 export const SECOND_ORDER_USAGE = `Second-order designs (numeric factors only):
   --central-composite                     factorial part (full, or --fraction of resolution V or more),
@@ -52,16 +59,16 @@ function whole(text: string, option: string): number {
  * Reads the second-order design options into a plan. Throws InputError for both design kinds,
  * options that do not apply (Box-Behnken with an axial distance, blocks or a fraction), two
  * center-run counts without --blocks 2, --seed with --standard-order, --json with --csv, and
- * whatever the core refuses. Example: secondOrderPlan(['--box-behnken', ...three factors]).
+ * whatever the core refuses. Example: secondOrderPlan(['--box-behnken', ...three factors], helpers).
  */
-export function secondOrderPlan(argv: string[]): { plan: SecondOrderPlan; format: 'text' | 'json' | 'csv' } {
+export function secondOrderPlan(argv: string[], helpers: DesignHelpers): { plan: SecondOrderPlan; format: 'text' | 'json' | 'csv' } {
   const { values, positionals } = parseCommandArgs(argv, OPTIONS);
   if (positionals.length > 0) throw new InputError(`design takes options only, got "${positionals.join(' ')}"`);
   if (values['central-composite'] && values['box-behnken']) throw new InputError('Choose one design: --central-composite or --box-behnken, not both');
   if (!values.factor || values.factor.length === 0) throw new InputError('design needs --factor options, such as --factor "Temperature (degC)=160:200"; got none');
   if (values.json && values.csv) throw new InputError('Choose one output: --json or --csv, not both');
   if (values['standard-order'] && values.seed !== undefined) throw new InputError(`--seed ${values.seed} only applies to a randomised order; drop --seed or --standard-order`);
-  const factors = values.factor.map(parseFactorOption);
+  const factors = values.factor.map(helpers.parseFactorOption);
   const seed = values.seed === undefined ? undefined : whole(values.seed, 'seed');
   const order = { randomise: !values['standard-order'], ...(seed !== undefined ? { seed } : {}) };
   const format = values.json ? 'json' : values.csv ? 'csv' : 'text';
@@ -157,9 +164,9 @@ export function secondOrderText(plan: SecondOrderPlan): string {
 }
 
 /** Runs the second-order design request: text, JSON (the plan as design --json prints it, plus secondOrder) or the CSV run sheet. */
-export function runSecondOrderDesign(argv: string[]): string {
-  const { plan, format } = secondOrderPlan(argv);
-  if (format === 'json') return JSON.stringify({ ...designJson(plan.design), secondOrder: secondOrderPropertiesJson(plan) }, null, 2);
+export function runSecondOrderDesign(argv: string[], helpers: DesignHelpers): string {
+  const { plan, format } = secondOrderPlan(argv, helpers);
+  if (format === 'json') return JSON.stringify({ ...helpers.designJson(plan.design), secondOrder: secondOrderPropertiesJson(plan) }, null, 2);
   if (format === 'csv') return runSheetCsv(plan.design);
   return secondOrderText(plan);
 }

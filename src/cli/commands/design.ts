@@ -268,7 +268,7 @@ export const design: Command = {
   summary: 'plan a two-level factorial or fractional factorial experiment',
   usage: USAGE,
   async run(argv: string[]): Promise<string> {
-    if (isSecondOrderRequest(argv)) return runSecondOrderDesign(argv);
+    if (isSecondOrderRequest(argv)) return runSecondOrderDesign(argv, { parseFactorOption, designJson });
     const { spec, format } = parseDesignArgs(argv);
     const d = buildDesign(spec);
     if (format === 'json') return JSON.stringify(designJson(d), null, 2);
