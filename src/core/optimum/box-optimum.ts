@@ -28,6 +28,9 @@ export type Goal = { readonly kind: 'max' } | { readonly kind: 'min' } | { reado
 /** Most factors for the exact face search: 3^10 = 59049 small solves (under a second). A design choice. */
 export const MAX_BOX_FACTORS = 10;
 
+/** Two fitted values within this fraction of their size are a tie, broken by the point nearest the center. Common practice (rounding). */
+export const TIE_TOLERANCE = 1e-12;
+
 export interface BoxOptimum {
   readonly coded: readonly number[];
   readonly fit: number;
@@ -97,7 +100,7 @@ function checkSurface(s: QuadraticSurface): void {
 
 /**
  * The highest ('max') or lowest ('min') value of the surface in [-1, 1]^k, exact (see the file
- * comment); among equal values (within 1e-12 relative) the point nearest the center.
+ * comment); among equal values (within TIE_TOLERANCE relative) the point nearest the center.
  * Cost O(3^k k^3). Throws InputError for no factors or more than MAX_BOX_FACTORS.
  * Example: for y = x1 - x1^2 - x2^2 the maximum is at (0.5, 0) with 0.25; for the saddle
  * y = x1^2 - x2^2 it is at (+-1, 0) with 1.
@@ -109,7 +112,7 @@ export function boxExtreme(s: QuadraticSurface, sense: 'max' | 'min'): BoxOptimu
   let bestValue = -Infinity;
   for (const x of faceCandidates(s)) {
     const v = sign * surfaceValue(s, x);
-    const tie = Math.abs(v - bestValue) <= 1e-12 * Math.max(1, Math.abs(v));
+    const tie = Math.abs(v - bestValue) <= TIE_TOLERANCE * Math.max(1, Math.abs(v));
     if ((v > bestValue && !tie) || (tie && best !== null && distance2(x) < distance2(best))) {
       best = x;
       bestValue = v;

@@ -19,6 +19,7 @@ import type { Factor } from '../factor/factor.ts';
 import type { FittedModel } from '../fit/analysis.ts';
 import { cachedPredictor } from '../predict/compiled-predictor.ts';
 import { CAUTION } from '../predict/caution.ts';
+import { TIE_TOLERANCE } from './box-optimum.ts';
 import { checkDesirability, desirability, overallDesirability, type DesirabilitySpec } from './desirability.ts';
 
 /** Starts improved by the compass search (the best of the seeds). A design choice: cheap, and more never changed the answer in the tests. */
@@ -188,7 +189,7 @@ export function maximizeDesirability(
       if (!moved) step /= 2;
     }
     const dist = (p: readonly number[]) => p.reduce((a, e) => a + e * e, 0);
-    if (v > best.v + 1e-12 || (Math.abs(v - best.v) <= 1e-12 && dist(x) < dist(best.x))) best = { x, from: start.from, v };
+    if (v > best.v + TIE_TOLERANCE || (Math.abs(v - best.v) <= TIE_TOLERANCE && dist(x) < dist(best.x))) best = { x, from: start.from, v };
   }
   const point = desirabilityAt(models, specs, best.x.map((e) => e + 0));
   const notes: string[] = [];
