@@ -12,21 +12,32 @@
  * own sub-faces, which are tried in their turn.
  * For a target T the point sought is the one with the smallest |y-hat - T|, ties broken by the
  * point nearest the center: when T lies outside the box's range of y-hat, that is the box
- * maximum (or minimum); otherwise it is the nearest point of the contour y-hat = T, found along
- * rays from the center (on each ray y-hat is a quadratic in the distance, solved exactly) and
- * refined by a compass search over the ray's direction.
+ * maximum (or minimum); otherwise it is the nearest point of the contour y-hat = T. Within
+ * radius 1 that point is a ridge point (Draper 1963), found by scanning the ridge and bisecting
+ * its first crossing; beyond radius 1 it is searched along rays from the center (on each ray
+ * y-hat is a quadratic in the distance, solved exactly) from many directions, each refined by a
+ * compass search, so there it is the best found.
  */
 import { InputError } from '../errors.ts';
 import { solveDense } from '../linalg/dense-solve.ts';
 import { symmetricEigen } from '../linalg/symmetric-eigen.ts';
 import { SETTING_TOLERANCE, SINGULAR_TOLERANCE } from '../tolerance.ts';
+import { pcg32 } from '../design/random.ts';
 import { surfaceValue, type QuadraticSurface } from './quadratic-surface.ts';
+import { ridgePoint } from './ridge-analysis.ts';
 
 /** The goal of one response: highest, lowest, or nearest a target value. */
 export type Goal = { readonly kind: 'max' } | { readonly kind: 'min' } | { readonly kind: 'target'; readonly target: number };
 
 /** Most factors for the exact face search: 3^10 = 59049 small solves (under a second). A design choice. */
 export const MAX_BOX_FACTORS = 10;
+
+/** Steps of the ridge scan out to radius 1 when seeking a target (a design choice: 0.01 coded). */
+export const RIDGE_SCAN = 100;
+/** Random directions, their PCG32 seed, and the best rays refined, when the target lies beyond radius 1 (design choices). */
+export const RAY_DIRECTIONS = 256;
+export const RAY_SEED = 2024;
+export const RAY_STARTS = 12;
 
 /** Two fitted values within this fraction of their size are a tie, broken by the point nearest the center. Common practice (rounding). */
 export const TIE_TOLERANCE = 1e-12;
@@ -160,8 +171,8 @@ function unit(v: readonly number[]): number[] | null {
 
 /**
  * The point of the box with the smallest |y-hat - T|, ties broken by the point nearest the
- * center (see the file comment). Cost O(3^k k^3) for the box range, plus O(seeds x k^3) for the
- * ray search (seeds: the axes, the corners, the gradient, the eigen-free box extremes).
+ * center (see the file comment). Cost O(3^k k^3) for the box range, O(160 k^3) for the ridge
+ * scan, and beyond radius 1 O((2k + 2^k + 261) k^2) for the rays plus their refinement.
  * Throws InputError for a target that is not finite, no factors, or more than MAX_BOX_FACTORS.
  * Example: for y = x1 and T = 0.5 the answer is (0.5, 0); for T = 2 it is (1, 0) with fit 1.
  */
@@ -173,18 +184,42 @@ export function boxTarget(s: QuadraticSurface, target: number): BoxOptimum {
   if (target <= lo.fit) return { ...lo, method: `the target ${target} is at or below the lowest fitted value in the box; ${lo.method}` };
   const k = s.b.length;
   if (s.b0 === target) return { coded: new Array<number>(k).fill(0), fit: target, method: 'the center reaches the target' };
-  // Seeds: axes, corners (up to 2^10), the gradient at the center, the box extremes.
+  // Inside the unit ball (which lies inside the box) the nearest point of the contour is a ridge
+  // point: every nearer point is on the center's side of the target, so the contour point is the
+  // lowest (or highest) point of its sphere. Scan the ridge for its first crossing, then bisect.
+  const sense = target < s.b0 ? 'min' : 'max';
+  const beyond = (r: number) => (sense === 'min' ? surfaceValue(s, ridgePoint(s, r, sense)) <= target : surfaceValue(s, ridgePoint(s, r, sense)) >= target);
+  for (let i = 1; i <= RIDGE_SCAN; i++) {
+    const r = i / RIDGE_SCAN;
+    if (!beyond(r)) continue;
+    let lo = (i - 1) / RIDGE_SCAN;
+    let hi = r;
+    for (let it = 0; it < 60; it++) {
+      const mid = (lo + hi) / 2;
+      if (beyond(mid)) hi = mid;
+      else lo = mid;
+    }
+    const x = ridgePoint(s, hi, sense).map((v) => v + 0);
+    return { coded: x, fit: surfaceValue(s, x), method: 'the nearest point to the center on the contour at the target: the first point of the ridge analysis that reaches it' };
+  }
+  // Beyond the unit ball the box cuts the spheres: search along rays from the center (exact on
+  // each ray), from many directions, each refined by a compass search over the direction.
   const seeds: number[][] = [];
   for (let i = 0; i < k; i++) for (const sgn of [-1, 1]) seeds.push(Array.from({ length: k }, (_, j) => (j === i ? sgn : 0)));
   for (let c = 0; c < 2 ** k; c++) seeds.push(Array.from({ length: k }, (_, j) => ((c >> j) & 1 ? 1 : -1)));
-  for (const v of [s.b, s.b.map((x) => -x), hi.coded, lo.coded]) {
+  for (const v of [s.b, s.b.map((x) => -x), hi.coded, lo.coded, ridgePoint(s, 1, sense)]) {
     const u = unit(v);
+    if (u) seeds.push(u);
+  }
+  const rng = pcg32(RAY_SEED);
+  for (let i = 0; i < RAY_DIRECTIONS; i++) {
+    const u = unit(Array.from({ length: k }, () => rng.next() / 2 ** 31 - 1));
     if (u) seeds.push(u);
   }
   let bestD: number[] | null = null;
   let bestT = Infinity;
   const ranked = seeds.map((d) => unit(d)!).map((d) => ({ d, t: rayDistance(s, target, d) })).filter((r) => Number.isFinite(r.t)).sort((a, b) => a.t - b.t);
-  for (const start of ranked.slice(0, 2 * k + 4)) {
+  for (const start of ranked.slice(0, RAY_STARTS)) {
     let d = start.d;
     let t = start.t;
     for (let step = 0.25; step > 1e-10; ) {
@@ -209,8 +244,12 @@ export function boxTarget(s: QuadraticSurface, target: number): BoxOptimum {
       bestD = d;
     }
   }
-  const x = bestD!.map((v) => Math.max(-1, Math.min(1, v * bestT)));
-  return { coded: x, fit: surfaceValue(s, x), method: 'the nearest point to the center on the contour at the target: exact along each ray from the center, the direction refined by a compass search' };
+  const x = bestD!.map((v) => Math.max(-1, Math.min(1, v * bestT)) + 0);
+  return {
+    coded: x,
+    fit: surfaceValue(s, x),
+    method: 'the nearest point to the center on the contour at the target found outside the unit ball: exact along each ray from the center, from many directions refined by a compass search (the best found)',
+  };
 }
 
 /**

@@ -49,16 +49,17 @@ describe('boxOptimum: properties on invented surfaces', () => {
         const r = boxExtreme(s, max ? 'max' : 'min');
         expect(r.coded.every((v) => Math.abs(v) <= 1)).toBe(true);
         const rng = pcg32(seed + 1);
+        let beyond = -Infinity; // the most any random point beats the optimum by
         for (let i = 0; i < 500; i++) {
           const x = Array.from({ length: k }, () => uniform(rng, -1, 1));
           const v = surfaceValue(s, x);
-          if (max) expect(v).toBeLessThanOrEqual(r.fit + 1e-9);
-          else expect(v).toBeGreaterThanOrEqual(r.fit - 1e-9);
+          beyond = Math.max(beyond, max ? v - r.fit : r.fit - v);
         }
+        expect(beyond).toBeLessThanOrEqual(1e-9);
       }),
       { numRuns: 150 },
     );
-  });
+  }, 60_000);
 
   it('a target inside the range is met, and no point nearer the center crosses it', () => {
     fc.assert(
@@ -72,18 +73,20 @@ describe('boxOptimum: properties on invented surfaces', () => {
         const radius = Math.sqrt(r.coded.reduce((a, v) => a + v * v, 0));
         const side = Math.sign(s.b0 - target);
         const rng = pcg32(seed + 7);
+        let crossed = 0; // random points nearer the center on the other side of the target
         for (let i = 0; i < 400; i++) {
           const dir = Array.from({ length: k }, () => uniform(rng, -1, 1));
           const n = Math.sqrt(dir.reduce((a, v) => a + v * v, 0));
           const t = uniform(rng, 0, 0.999) * radius;
           const x = dir.map((v) => (v / n) * t);
           if (x.some((v) => Math.abs(v) > 1)) continue;
-          expect(Math.sign(surfaceValue(s, x) - target) * side).toBeGreaterThanOrEqual(0);
+          if (Math.sign(surfaceValue(s, x) - target) * side < 0) crossed++;
         }
+        expect(crossed).toBe(0);
       }),
       { numRuns: 150 },
     );
-  });
+  }, 60_000);
 
   it('a target beyond the range gives the box extreme; a non-finite target is refused', () => {
     const s = surface(0, [1, 0], [[0, 0], [0, 0]]);

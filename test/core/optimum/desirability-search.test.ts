@@ -43,14 +43,13 @@ describe('maximizeDesirability', () => {
         ];
         const r = maximizeDesirability([m1, m2], specs);
         const rng = pcg32(seed + 5);
-        for (let i = 0; i < 300; i++) {
-          const x = [uniform(rng, -1, 1), uniform(rng, -1, 1)];
-          expect(desirabilityAt([m1, m2], specs, x).D).toBeLessThanOrEqual(r.D + 1e-7);
-        }
+        let top = 0;
+        for (let i = 0; i < 300; i++) top = Math.max(top, desirabilityAt([m1, m2], specs, [uniform(rng, -1, 1), uniform(rng, -1, 1)]).D);
+        expect(top).toBeLessThanOrEqual(r.D + 1e-7);
       }),
       { numRuns: 30 },
     );
-  });
+  }, 60_000);
 
   it('reports each response at the best point with fit, interval and d, how it was found, and the caution', () => {
     const data = fixtureData('montgomery-8e-ex11-2-ccd-yield.csv', { factors: ['Time', 'Temperature'], response: 'Yield', levels: { Time: ['80', '90'], Temperature: ['170', '180'] } });

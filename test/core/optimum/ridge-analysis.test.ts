@@ -42,17 +42,18 @@ describe('ridgePoint and ridgeAnalysis: properties on invented surfaces', () => 
         expect(norm(x)).toBeCloseTo(r, 9);
         const best = surfaceValue(s, x);
         const rng = pcg32(seed + 3);
+        let beyond = -Infinity; // the most any random point on the sphere beats the ridge point by
         for (let i = 0; i < 300; i++) {
           const d = Array.from({ length: k }, () => uniform(rng, -1, 1));
           const n = norm(d);
           const v = surfaceValue(s, d.map((e) => (e / n) * r));
-          if (max) expect(v).toBeLessThanOrEqual(best + 1e-9 * Math.max(1, Math.abs(best)));
-          else expect(v).toBeGreaterThanOrEqual(best - 1e-9 * Math.max(1, Math.abs(best)));
+          beyond = Math.max(beyond, max ? v - best : best - v);
         }
+        expect(beyond).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(best)));
       }),
       { numRuns: 200 },
     );
-  });
+  }, 60_000);
 
   it('the table runs 0.1, 0.2, ... up to the largest radius, with the fit and intervals of the model', () => {
     const m = syntheticModel(2, 11);
