@@ -19,6 +19,8 @@ const commands: Record<string, () => Promise<Command>> = {
   solve: async () => (await import('./commands/solve.ts')).solve,
   path: async () => (await import('./commands/path.ts')).path,
   csv: async () => (await import('./commands/csv.ts')).csv,
+  optimize: async () => (await import('./commands/optimize.ts')).optimize,
+  augment: async () => (await import('./commands/augment.ts')).augment,
 };
 
 async function usage(): Promise<string> {

@@ -100,3 +100,7 @@ export const EQUAL_VARIANCE_TOLERANCE = 1e-9;
  * a million runs (1e150^2 x 1e6 = 1e306). Files are refused above it at reading, naming the cell.
  * Common practice (overflow headroom); raise it when the fit scales the response first. */
 export const MAX_RESPONSE_MAGNITUDE = 1e150;
+/** An eigenvalue of the second-order matrix B, or a pivot of a linear solve, below this fraction
+ * of the largest in magnitude counts as zero (the surface has no unique stationary point along
+ * it). Common practice: far above rounding, far below any fitted curvature. */
+export const SINGULAR_TOLERANCE = 1e-10;

@@ -1,18 +1,45 @@
 /** `analyze FILE --factors ... --response ...`: the full analysis of one response. */
+import { readFileSync } from 'node:fs';
+import { InputError } from '../../core/errors.ts';
 import { analyze as analyzeCore } from '../../core/fit/analyze.ts';
+import { isSecondOrderModel, secondOrderAnalysis } from '../../core/optimum/second-order-analysis.ts';
+import { findResponse } from '../../core/study/run-data.ts';
+import { readBackupSync } from '../../io/backup/backup.ts';
+import { selectStudy } from '../../io/backup/select-study.ts';
 import { parseCommandArgs } from '../args.ts';
 import type { Command } from '../command.ts';
+import { goalOfResponse, parseGoal } from '../goal-option.ts';
 import { loadModelInput, modelOptionSpec, modelOptionUsage } from '../model-options.ts';
 import { analysisJson } from '../report/analysis-json.ts';
 import { analysisText } from '../report/analysis-text.ts';
+import { secondOrderJson } from '../report/second-order-json.ts';
+import { secondOrderText } from '../report/second-order-text.ts';
+
+const spec = { ...modelOptionSpec, goal: { type: 'string' } } as const;
 
 export const analyze: Command = {
   summary: 'effects, ANOVA, curvature and Lenth\'s method for one response',
-  usage: `Usage: npm run --silent cli -- analyze FILE --factors A,B,C --response NAME [options]\n\n${modelOptionUsage}`,
+  usage: `Usage: npm run --silent cli -- analyze FILE --factors A,B,C --response NAME [options]\n\n${modelOptionUsage}
+  --goal max|min|target=T
+                       with a second-order model (--terms quadratic): the goal of the best
+                       setting inside the box (default: the study's goal in a backup, else max);
+                       the report then adds the canonical analysis, the ridge and that setting`,
   async run(argv) {
-    const { values, positionals } = parseCommandArgs(argv, modelOptionSpec);
+    const { values, positionals } = parseCommandArgs(argv, spec);
     const { data, terms } = loadModelInput(positionals, values);
     const result = analyzeCore(data, { terms });
-    return values.json ? JSON.stringify(analysisJson(result), null, 2) : analysisText(result);
+    const second = isSecondOrderModel(result.model);
+    if (values.goal !== undefined && !second) {
+      throw new InputError('--goal needs a second-order model on numeric factors: squares in --terms (such as --terms quadratic) and no categorical factor');
+    }
+    let goal = values.goal !== undefined ? parseGoal(values.goal) : { kind: 'max' as const };
+    if (values.goal === undefined && second && values.study) {
+      // A backup's study says what the person wants of the response.
+      const study = selectStudy(readBackupSync(readFileSync(positionals[0], 'utf8')), values.study);
+      goal = goalOfResponse(findResponse(study, values.response!).response);
+    }
+    const so = second ? secondOrderAnalysis(result.model, data.coded, goal) : null;
+    if (values.json) return JSON.stringify({ ...analysisJson(result), ...(so ? { secondOrder: secondOrderJson(so) } : {}) }, null, 2);
+    return so ? `${analysisText(result)}\n\n${secondOrderText(so)}` : analysisText(result);
   },
 };

@@ -23,6 +23,7 @@ import { isNonFiniteNumberText, whyNotANumber } from '../../io/csv/cell-number.t
 import { runSheetCsv } from '../../io/csv/run-sheet.ts';
 import { parseCommandArgs } from '../args.ts';
 import type { Command } from '../command.ts';
+import { isSecondOrderRequest, runSecondOrderDesign, SECOND_ORDER_USAGE } from './design-second-order.ts';
 
 const USAGE = `Usage: npm run --silent cli -- design --factor SPEC [--factor SPEC ...] [options]
 
@@ -65,7 +66,9 @@ Power (a two-sided t test of one main effect in the fitted model):
 
 Output:
   --json                                  the plan as JSON
-  --csv                                   the run sheet as CSV (planned settings in real units)`;
+  --csv                                   the run sheet as CSV (planned settings in real units)
+
+${SECOND_ORDER_USAGE}`;
 
 const OPTIONS = {
   factor: { type: 'string', multiple: true },
@@ -467,6 +470,7 @@ export const design: Command = {
   summary: 'plan a two-level factorial or fractional factorial experiment',
   usage: USAGE,
   async run(argv: string[]): Promise<string> {
+    if (isSecondOrderRequest(argv)) return runSecondOrderDesign(argv, { parseFactorOption, designJson });
     const { spec, format, power } = parseDesignArgs(argv);
     const d = buildDesign(spec);
     const p = power === null ? null : designPower(d, power);

@@ -48,7 +48,23 @@ export type DesignNote =
   /** A Plackett-Burman plan: where its generating row comes from and how many of its columns the factors take. */
   | { readonly kind: 'screening-generator'; readonly source: string; readonly factors: number; readonly columns: number }
   /** The partial-aliasing caution of a Plackett-Burman plan. */
-  | { readonly kind: 'partial-aliasing' };
+  | { readonly kind: 'partial-aliasing' }
+  /** A central composite design's factorial part from the catalogue, and its source. */
+  | { readonly kind: 'factorial-part-source'; readonly source: string }
+  /** A Box-Behnken design's rows and their source. */
+  | { readonly kind: 'box-behnken-table' }
+  /** Axial runs set a factor outside its factorial range (real settings, already rounded). */
+  | {
+      readonly kind: 'axial-outside';
+      readonly name: string;
+      readonly unit?: string;
+      readonly low: number;
+      readonly high: number;
+      readonly factorialLow: number;
+      readonly factorialHigh: number;
+    }
+  /** The standing caution (core/predict/caution.ts), shown with settings beyond the tested range. */
+  | { readonly kind: 'standing-caution' };
 
 /** What the plan's summary is written from. */
 export interface SummaryInput {

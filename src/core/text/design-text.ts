@@ -16,6 +16,8 @@ import { romanResolution } from '../design/defining-relation.ts';
 import type { BlockOrigin, DesignNote, SummaryInput } from '../design/design-note.ts';
 import { formatWord, type Word } from '../design/word.ts';
 import { PARTIAL_ALIASING_NOTE } from './screening-text.ts';
+import { CAUTION } from '../predict/caution.ts';
+import { formatSetting } from '../predict/parse-settings.ts';
 
 function list(items: readonly string[]): string {
   if (items.length <= 1) return items.join('');
@@ -144,6 +146,14 @@ export function designNoteText(n: DesignNote): string {
       return `Generating row from ${n.source}; the factors take the first ${n.factors} of its ${n.columns} columns.`;
     case 'partial-aliasing':
       return PARTIAL_ALIASING_NOTE;
+    case 'factorial-part-source':
+      return `Factorial part from the minimum aberration catalogue (${n.source}).`;
+    case 'box-behnken-table':
+      return 'Rows from the table of Box and Behnken (1960), Technometrics 2, 455-475.';
+    case 'axial-outside':
+      return `Axial runs set ${n.name} to ${formatSetting(n.low, n.unit)} and ${formatSetting(n.high, n.unit)}, outside the factorial range ${formatSetting(n.factorialLow)} to ${formatSetting(n.factorialHigh, n.unit)}: check both are within the machine's rated limits before the runs are made.`;
+    case 'standing-caution':
+      return CAUTION.join(' ');
     case 'split-plot': {
       const names = n.factors.join(', ');
       const one = n.factors.length === 1;
