@@ -88,5 +88,7 @@ export function modelTerms(data: ResponseData, values: Values): Term[] {
     if (!Number.isInteger(order) || order < 1) throw new InputError(`--order needs a whole number of 1 or more, got "${values.order}"`);
     return termsUpToOrder(data.factors.length, Math.min(order, data.factors.length));
   }
+  // A Plackett-Burman study: main effects (its interactions are only partly aliased with them).
+  if (data.screening) return Array.from({ length: data.factors.length }, (_, i) => 1 << i);
   return defaultTerms(data.factors.length);
 }
