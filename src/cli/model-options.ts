@@ -45,6 +45,8 @@ type Values = { [K in keyof typeof modelOptionSpec]?: (typeof modelOptionSpec)[K
 export interface ModelInput {
   readonly data: ResponseData;
   readonly terms: Term[];
+  /** True when a plain CSV was coded without --levels: each categorical factor's first label in file order is -1. */
+  readonly codingFromFileOrder: boolean;
 }
 
 export function loadModelInput(positionals: string[], values: Values): ModelInput {
@@ -54,6 +56,7 @@ export function loadModelInput(positionals: string[], values: Values): ModelInpu
   const text = readTextFile(path);
   const factors = values.factors?.split(',').map((f) => f.trim()).filter((f) => f !== '');
   let data: ResponseData;
+  let codingFromFileOrder = false;
   if (/\.json$/i.test(path) || /^\s*\{/.test(text)) {
     // A Trialbook backup: the study's own factors and coding.
     if (!values.study) throw new InputError('A backup can hold several studies: name one with --study ID-OR-NAME');
@@ -75,9 +78,10 @@ export function loadModelInput(positionals: string[], values: Values): ModelInpu
         }
       }
       data = tableResponseData(table, { factors, response: values.response, levels, ...(values.block ? { block: values.block } : {}) });
+      codingFromFileOrder = !values.levels;
     }
   }
-  return { data, terms: modelTerms(data, values) };
+  return { data, terms: modelTerms(data, values), codingFromFileOrder };
 }
 
 export function modelTerms(data: ResponseData, values: Values): Term[] {
