@@ -144,3 +144,30 @@ for (const size of [{ width: 390, height: 844 }, { width: 360, height: 740 }]) {
     });
   });
 }
+
+test('more factors than the chosen screening design takes: the plan says so and nothing is created', async ({ page }) => {
+  await openForm(page);
+  await page.getByLabel('Title', { exact: true }).fill('Too wide a screen');
+  await page.getByLabel('Response 1 name').fill('Strength');
+  for (let i = 0; i < 11; i++) {
+    const letter = 'ABCDEFGHJKLM'[i];
+    if (i >= 2) await page.getByRole('button', { name: '+ Add a factor' }).click();
+    await page.getByLabel(`Factor ${letter} name`).fill(`Setting ${i + 1}`);
+    await page.getByLabel(`Factor ${letter} low`).fill('0');
+    await page.getByLabel(`Factor ${letter} high`).fill('1');
+  }
+  await page.getByRole('button', { name: 'Screening · 12 runs (Plackett-Burman)' }).click();
+  await expect(preview(page).locator('.plan-runs')).toHaveText('12 runs');
+  await page.getByRole('button', { name: '+ Add a factor' }).click();
+  await page.getByLabel('Factor M name').fill('Setting 12');
+  await page.getByLabel('Factor M low').fill('0');
+  await page.getByLabel('Factor M high').fill('1');
+  // Plackett and Burman (1946): a 12-run design has 11 columns.
+  await expect(page.getByText('The 12-run Plackett-Burman design is not offered for 12 factors; choose one of the above.')).toBeVisible();
+  await expect(preview(page)).toContainText('Not ready yet: A 12-run Plackett-Burman design takes up to 11 factors, got 12');
+  await expect(page.getByRole('button', { name: 'Screening · 12 runs (Plackett-Burman)' })).toHaveCount(0);
+  await page.getByRole('button', { name: 'Create study' }).click();
+  await expect(page).toHaveURL(/#\/new$/);
+  await page.goto('/');
+  await expect(page.getByText('Too wide a screen')).toHaveCount(0);
+});

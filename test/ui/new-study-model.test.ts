@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { buildDesign } from '../../src/core/design/build-design.ts';
 import { planPower } from '../../src/core/plan/power.ts';
 import { powerInWords } from '../../src/core/plan/power-words.ts';
-import { fractionOptions, plackettBurmanRunsOf, powerView } from '../../src/ui/models/new-study-model.ts';
+import { choiceName, fractionOptions, plackettBurmanRunsOf, powerView } from '../../src/ui/models/new-study-model.ts';
 
 const three = ['A1', 'B1', 'C1'].map((name) => ({ kind: 'numeric' as const, name, low: 0, high: 1 }));
 
@@ -15,6 +15,7 @@ describe('the planning form: design choices and the power of the plan', () => {
     expect(fractionOptions(19).map((o) => o.value)).toEqual(['pb-20', 'pb-24']);
     expect(plackettBurmanRunsOf('pb-20')).toBe(20);
     expect(plackettBurmanRunsOf('1/2')).toBeNull();
+    expect(['full', '1/4', 'pb-24'].map(choiceName)).toEqual(['the full factorial', 'the 1/4 fraction', 'the 24-run Plackett-Burman design']);
   });
 
   it("gives the core's sentence for a ready plan, and waits while a field is blank", () => {

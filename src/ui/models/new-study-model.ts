@@ -50,6 +50,13 @@ export type FractionChoice = string;
 /** The most factors the form takes: 23, the most a Plackett-Burman design holds (24 runs); full factorials and fractions stop at MAX_DESIGN_FACTORS. */
 export const FORM_MAX_FACTORS = 23;
 
+/** A design choice in words for a message: "the full factorial", "the 1/2 fraction", "the 12-run Plackett-Burman design". */
+export function choiceName(choice: FractionChoice): string {
+  const pb = plackettBurmanRunsOf(choice);
+  if (pb !== null) return `the ${pb}-run Plackett-Burman design`;
+  return choice === 'full' ? 'the full factorial' : `the ${choice} fraction`;
+}
+
 /** The run count of a Plackett-Burman choice ('pb-12' -> 12), or null for a factorial choice. */
 export function plackettBurmanRunsOf(choice: FractionChoice): number | null {
   const m = /^pb-(\d+)$/.exec(choice);

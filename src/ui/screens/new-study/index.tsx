@@ -12,7 +12,7 @@ import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { CountStepper } from '../../components/count-stepper/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { hrefTo } from '../../app/routes.ts';
-import { BLOCK_CHOICES, FORM_MAX_FACTORS, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
+import { BLOCK_CHOICES, choiceName, FORM_MAX_FACTORS, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
 import './style.css';
 
 export type NewStudyScreenProps = { readonly store: Store };
@@ -183,7 +183,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
         <legend>Design</legend>
         <ChoiceButtons label="Runs of the factorial" options={model.options.value.map((o) => ({ value: o.value, label: o.label }))} value={model.fraction.value} onChoose={(v) => model.chooseFraction(v)} />
         {factors.length >= 2 && factors.length < 4 && <p class="quiet field-hint">Fractions from the catalogue start at 8 runs, so they need 4 factors or more.</p>}
-        {!model.fractionOffered.value && <p class="field-error">The {model.fraction.value} fraction is not offered for {factors.length} factors; choose one of the above.</p>}
+        {!model.fractionOffered.value && <p class="field-error">{choiceName(model.fraction.value).replace(/^t/, 'T')} is not offered for {factors.length} factors; choose one of the above.</p>}
         <CountStepper id="ns-center" label="Center runs" hint="Per replicate; numeric factors at the middle of their ranges." value={model.centerRuns.value} min={0} onChange={(v) => model.setCenterRuns(v)} />
         <CountStepper id="ns-replicates" label="Replicates" hint="Times the whole design is run." value={model.replicates.value} min={1} onChange={(v) => model.setReplicates(v)} />
         <div class="choice-compact">
