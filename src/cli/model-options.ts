@@ -45,6 +45,8 @@ type Values = { [K in keyof typeof modelOptionSpec]?: (typeof modelOptionSpec)[K
 export interface ModelInput {
   readonly data: ResponseData;
   readonly terms: Term[];
+  /** True when a plain CSV was coded without --levels: each categorical factor's first label in file order is -1. */
+  readonly codingFromFileOrder: boolean;
 }
 
 export function loadModelInput(positionals: string[], values: Values): ModelInput {
@@ -55,6 +57,7 @@ export function loadModelInput(positionals: string[], values: Values): ModelInpu
   const text = readTextFile(path, { backup: /\.json$/i.test(path) });
   const factors = values.factors?.split(',').map((f) => f.trim()).filter((f) => f !== '');
   let data: ResponseData;
+  let codingFromFileOrder = false;
   if (/\.json$/i.test(path) || /^\s*\{/.test(text)) {
     // A Trialbook backup: the study's own factors and coding.
     if (!values.study) throw new InputError('A backup can hold several studies: name one with --study ID-OR-NAME');
@@ -76,9 +79,10 @@ export function loadModelInput(positionals: string[], values: Values): ModelInpu
         }
       }
       data = tableResponseData(table, { factors, response: values.response, levels, ...(values.block ? { block: values.block } : {}) });
+      codingFromFileOrder = !values.levels;
     }
   }
-  return { data, terms: modelTerms(data, values) };
+  return { data, terms: modelTerms(data, values), codingFromFileOrder };
 }
 
 export function modelTerms(data: ResponseData, values: Values): Term[] {
@@ -89,5 +93,7 @@ export function modelTerms(data: ResponseData, values: Values): Term[] {
     if (!Number.isInteger(order) || order < 1) throw new InputError(`--order needs a whole number of 1 or more, got "${values.order}"`);
     return termsUpToOrder(data.factors.length, Math.min(order, data.factors.length));
   }
+  // A Plackett-Burman study: main effects (its interactions are only partly aliased with them).
+  if (data.screening) return Array.from({ length: data.factors.length }, (_, i) => 1 << i);
   return defaultTerms(data.factors.length);
 }

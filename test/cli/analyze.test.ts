@@ -65,6 +65,28 @@ describe('analyze command', () => {
     await expect(analyze.run([backup, '--response', 'Gloss'])).rejects.toThrow(/--study/);
   });
 
+  it('--study takes a unique part of a title, ignoring case (invented demo backup)', async () => {
+    const backup = fixturePath('trialbook-demo-backup.json');
+    const whole = JSON.parse(await analyze.run([backup, '--study', 'Invented demo: powder-coating cure trial', '--response', 'Gloss', '--json']));
+    const part = JSON.parse(await analyze.run([backup, '--study', 'CURE TRIAL', '--response', 'Gloss', '--json']));
+    expect(part).toEqual(whole);
+    await expect(analyze.run([backup, '--study', 'no such words', '--response', 'Gloss'])).rejects.toThrow(/or with a title that contains it/);
+  });
+
+  it('the report says which label is -1 when a categorical coding comes from the file order, not with --levels (invented data)', async () => {
+    const { writeFileSync, mkdtempSync } = await import('node:fs');
+    const { join } = await import('node:path');
+    const { tmpdir } = await import('node:os');
+    const file = join(mkdtempSync(join(tmpdir(), 'trialbook-')), 'brands.csv');
+    // INVENTED: a 2^2 in two factors, one of them a powder brand, gloss in GU.
+    writeFileSync(file, 'Temperature,Powder,Gloss\n160,north,60\n200,north,70\n160,south,65\n200,south,78\n160,north,61\n200,south,77\n');
+    const fromOrder = await analyze.run([file, '--factors', 'Temperature,Powder', '--response', 'Gloss', '--terms', 'A+B']);
+    expect(fromOrder).toContain('Powder: north -> -1, south -> +1 (two named levels; "north" is -1 as the first label in the file: give --levels to choose)');
+    const given = await analyze.run([file, '--factors', 'Temperature,Powder', '--response', 'Gloss', '--terms', 'A+B', '--levels', 'Powder=south:north']);
+    expect(given).toContain('Powder: south -> -1, north -> +1 (two named levels)');
+    expect(given).toMatch(/Fitted equation in coded units/);
+  });
+
   it('bad input: clear messages', async () => {
     await expect(analyze.run([etch, '--factors', 'Gap,Pressure', '--response', 'Etch rate'])).rejects.toThrow(/"Pressure" is not in the file/);
     await expect(analyze.run([etch, '--factors', 'Gap', '--response', 'Etch rate', '--terms', 'A', '--order', '2'])).rejects.toThrow(/either --terms or --order/);

@@ -1,5 +1,4 @@
 /** `analyze FILE --factors ... --response ...`: the full analysis of one response. */
-import { readFileSync } from 'node:fs';
 import { InputError } from '../../core/errors.ts';
 import { analyze as analyzeCore } from '../../core/fit/analyze.ts';
 import { isSecondOrderModel, secondOrderAnalysis } from '../../core/optimum/second-order-analysis.ts';
@@ -7,6 +6,7 @@ import { findResponse } from '../../core/study/run-data.ts';
 import { readBackupSync } from '../../io/backup/backup.ts';
 import { selectStudy } from '../../io/backup/select-study.ts';
 import { parseCommandArgs } from '../args.ts';
+import { readTextFile } from '../read-text-file.ts';
 import type { Command } from '../command.ts';
 import { goalOfResponse, parseGoal } from '../goal-option.ts';
 import { loadModelInput, modelOptionSpec, modelOptionUsage } from '../model-options.ts';
@@ -26,7 +26,7 @@ export const analyze: Command = {
                        the report then adds the canonical analysis, the ridge and that setting`,
   async run(argv) {
     const { values, positionals } = parseCommandArgs(argv, spec);
-    const { data, terms } = loadModelInput(positionals, values);
+    const { data, terms, codingFromFileOrder } = loadModelInput(positionals, values);
     const result = analyzeCore(data, { terms });
     const second = isSecondOrderModel(result.model);
     if (values.goal !== undefined && !second) {
@@ -35,11 +35,12 @@ export const analyze: Command = {
     let goal = values.goal !== undefined ? parseGoal(values.goal) : { kind: 'max' as const };
     if (values.goal === undefined && second && values.study) {
       // A backup's study says what the person wants of the response.
-      const study = selectStudy(readBackupSync(readFileSync(positionals[0], 'utf8')), values.study);
+      const study = selectStudy(readBackupSync(readTextFile(positionals[0], { backup: true })), values.study);
       goal = goalOfResponse(findResponse(study, values.response!).response);
     }
     const so = second ? secondOrderAnalysis(result.model, data.coded, goal) : null;
     if (values.json) return JSON.stringify({ ...analysisJson(result), ...(so ? { secondOrder: secondOrderJson(so) } : {}) }, null, 2);
-    return so ? `${analysisText(result)}\n\n${secondOrderText(so)}` : analysisText(result);
+    const text = analysisText(result, { ...(data.unit ? { unit: data.unit } : {}), codingFromFileOrder });
+    return so ? `${text}\n\n${secondOrderText(so)}` : text;
   },
 };

@@ -1,6 +1,7 @@
 /** The analyze command's readable report, in Trialbook's own plain-words layout. */
 import type { Analysis, AnovaTable } from '../../core/fit/analysis.ts';
 import { combinationLabel } from '../../core/fit/combination-label.ts';
+import { effectWords } from '../../core/text/effect-words.ts';
 import { pValue } from '../../core/text/p-value.ts';
 import { curvatureStatement, lenthStatement, verdictText } from '../../core/text/verdict-text.ts';
 import { num, table } from './numbers.ts';
@@ -12,7 +13,51 @@ function anovaText(t: AnovaTable): string {
   );
 }
 
-export function analysisText(a: Analysis): string {
+export interface AnalysisTextOptions {
+  /** The response's unit, written beside the effects and their intervals. */
+  readonly unit?: string;
+  /** True when the coding came from the file (no --levels): a categorical factor's -1 is its first label in file order. */
+  readonly codingFromFileOrder?: boolean;
+}
+
+/**
+ * The table of effects, in Trialbook's own layout: ranked by size, largest first; for each, the
+ * effect in the response's units, its 95% interval (2 x the coefficient's t interval; with no
+ * residual df, the effect +- Lenth's margin of error), its p and the verdict in the phone's words
+ * (core/text/effect-words.ts).
+ */
+export function effectsTable(a: Analysis, unit?: string): string[] {
+  const u = unit ? ` ${unit}` : '';
+  const marks = new Map((a.lenth?.effects ?? []).map((e) => [e.letters, e.mark ?? null]));
+  const byLenth = a.df.residual === 0 && a.lenth !== null;
+  const rows = [...a.terms]
+    .sort((x, y) => Math.abs(y.effect) - Math.abs(x.effect))
+    .map((t, i) => {
+      const letters = t.estimates ?? t.letters;
+      const interval = t.ci ? [2 * t.ci[0], 2 * t.ci[1]] : byLenth ? [t.effect - a.lenth!.me, t.effect + a.lenth!.me] : null;
+      const words = effectWords(t.p, byLenth ? (marks.get(letters) ?? null) : undefined) ?? 'no test possible';
+      return [`${i + 1}. ${t.name} (${letters})`, `${num(t.effect)}${u}`, interval ? `${num(interval[0])} to ${num(interval[1])}${u}` : '-', pValue(t.p), words];
+    });
+  const how = byLenth ? "95% interval: effect +- Lenth's margin of error; verdict by Lenth's method" : "95% interval from the t distribution on the residual df; verdict by p: clear < 0.01, likely < 0.05, possible < 0.10";
+  return [
+    `Effects, largest first (effect: the change from -1 to +1 with the other factors at 0; ${how})`,
+    ...table(['effect of, by size', 'size', '95% interval', 'p', 'verdict'], rows).split('\n'),
+  ];
+}
+
+/** The coefficients in coded units as the fitted equation, one term a line, in model order. */
+export function fittedEquation(a: Analysis): string[] {
+  const out = [`Fitted equation in coded units (each letter from -1 to +1${a.blocks ? ', for an average block' : ''})`];
+  out.push(`  ${a.response} = ${num(a.intercept.coef)}`);
+  for (const t of a.terms) {
+    const c = t.coef;
+    const sign = c < 0 ? '-' : '+';
+    out.push(`      ${sign} ${num(Math.abs(c))} ${t.estimates ? `[${t.estimates}]` : t.letters}`);
+  }
+  return out;
+}
+
+export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): string {
   const out: string[] = [];
   const how = a.method === 'yates' ? "Yates' algorithm (complete, balanced factorial)" : 'least squares (Householder QR)';
   out.push(`Analysis of ${a.response}: ${a.n} runs, fitted by ${how}, in coded units`);
@@ -21,30 +66,13 @@ export function analysisText(a: Analysis): string {
   for (const c of a.coding) {
     const unit = c.unit ? ` ${c.unit}` : '';
     const log = c.scale === 'log' ? ', log scale' : '';
-    out.push(`  ${c.letter}  ${c.name}: ${c.low}${unit} -> -1, ${c.high}${unit} -> +1${c.kind === 'numeric' ? `${log}, center 0` : ' (two named levels)'}`);
+    const order = c.kind === 'categorical' && options.codingFromFileOrder ? `; "${c.low}" is -1 as the first label in the file: give --levels to choose` : '';
+    out.push(`  ${c.letter}  ${c.name}: ${c.low}${unit} -> -1, ${c.high}${unit} -> +1${c.kind === 'numeric' ? `${log}, center 0` : ` (two named levels${order})`}`);
   }
   out.push('');
-  out.push('Effects (effect = 2 x coefficient: the change from -1 to +1 with the other factors at 0)');
-  const lenthCol = a.df.residual === 0;
-  const head = ['term', 'letters', 'effect', 'coefficient', 'std error', 't', 'p', '95% CI of coefficient'];
-  if (lenthCol) head.push('Lenth t');
-  const rows = [
-    ['Intercept (fit at center)', 'I', '-', num(a.intercept.coef), num(a.intercept.se), num(a.intercept.t), pValue(a.intercept.p), '-', ...(lenthCol ? ['-'] : [])],
-    ...[...a.terms]
-      .sort((x, y) => Math.abs(y.effect) - Math.abs(x.effect))
-      .map((t) => [
-        t.name,
-        t.estimates ?? t.letters,
-        num(t.effect),
-        num(t.coef),
-        num(t.se),
-        num(t.t),
-        pValue(t.p),
-        t.ci ? `${num(t.ci[0])} to ${num(t.ci[1])}` : '-',
-        ...(lenthCol ? [num(t.lenthT)] : []),
-      ]),
-  ];
-  out.push(table(head, rows));
+  out.push(...effectsTable(a, options.unit));
+  out.push('');
+  out.push(...fittedEquation(a));
   if (a.blocks) out.push(`  block effects (sum to zero): ${a.blocks.map((b) => `block ${b.block} ${num(b.effect)}`).join(', ')}`);
   out.push('');
   out.push('How well the model fits');

@@ -1,6 +1,7 @@
 /**
- * What a planner can choose for k factors without typing generators: the full factorial and each
- * fraction the built-in catalogue holds, with its runs and resolution. The resolution is read
+ * What a planner can choose for k factors without typing generators: the full factorial, each
+ * fraction the built-in catalogue holds, with its runs and resolution, and the Plackett-Burman
+ * screening designs that take k factors. The resolution is read
  * from the catalogue entry's generator words (the shortest word of their defining relation), so
  * no design is built to learn it.
  */
@@ -10,6 +11,7 @@ import { catalogueFraction, type CatalogueEntry } from './catalogue.ts';
 import { definingRelation, resolution } from './defining-relation.ts';
 import { MAX_DESIGN_FACTORS } from './max-design-factors.ts';
 import { parseLetterWord, type Word } from './word.ts';
+import { PLACKETT_BURMAN_RUNS } from './plackett-burman.ts';
 
 export interface CatalogueChoice {
   /** 'full', or the fraction as buildDesign takes it: '1/2', '1/4', ... */
@@ -60,4 +62,22 @@ export function catalogueChoices(k: number): CatalogueChoice[] {
     out.push({ fraction: `1/${2 ** p}`, generators: p, runs: entry.runs, resolution: resolution(definingRelation(entryWords(entry))), entry });
   }
   return out;
+}
+
+export interface ScreeningChoice {
+  /** Factorial runs of the Plackett-Burman design (12, 20 or 24). */
+  readonly runs: number;
+  /** Columns the k factors leave unused (N - 1 - k), which help judge the effects. */
+  readonly unusedColumns: number;
+}
+
+/**
+ * The Plackett-Burman screening designs that take k factors: each of 12, 20 and 24 runs with at
+ * least k + 1 runs (Plackett and Burman 1946, Biometrika 33, 305-325: an N-run design has N - 1
+ * columns), smallest first. None for fewer than 2 factors or more than 23. Cost O(1).
+ * Example: plackettBurmanChoices(12) -> [{runs: 20, unusedColumns: 7}, {runs: 24, unusedColumns: 11}].
+ */
+export function plackettBurmanChoices(k: number): ScreeningChoice[] {
+  if (!Number.isInteger(k) || k < 2) return [];
+  return PLACKETT_BURMAN_RUNS.filter((n) => k <= n - 1).map((n) => ({ runs: n, unusedColumns: n - 1 - k }));
 }

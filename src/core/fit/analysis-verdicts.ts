@@ -2,7 +2,7 @@
  * The verdicts step of the analysis, written last: from the other steps' figures, what the
  * analysis concludes, as typed verdicts (verdicts.ts), in the order the warnings are read:
  * near replicates, non-orthogonal runs, curvature, lack of fit, a weak Lenth's method, no
- * residual df, terms the runs cannot separate. Significance is p < alpha (common practice:
+ * residual df, partial aliasing of a Plackett-Burman plan, terms the runs cannot separate. Significance is p < alpha (common practice:
  * 0.05); Lenth's method is weak below LENTH_MIN_CONTRASTS effects (Lenth 1989, section 4).
  * Cost O(p).
  * Example: the 2^2 with five center points (Montgomery 8th ed., section 6.8) -> one verdict,
@@ -29,6 +29,8 @@ export interface VerdictInput {
   /** Whether an inseparable term is confounded with the intercept or blocks (estimate-terms.ts). */
   readonly aliasedWithInterceptOrBlocks: boolean;
   readonly terms: readonly TermEstimate[];
+  /** A Plackett-Burman plan's runs and largest |correlation| of a main effect with a two-factor interaction; absent otherwise. */
+  readonly partialAliasing?: { readonly runs: number; readonly largestCorrelation: number } | null;
 }
 
 export function analysisVerdicts(v: VerdictInput): Verdict[] {
@@ -46,6 +48,7 @@ export function analysisVerdicts(v: VerdictInput): Verdict[] {
   }
   if (v.lenth && v.lenth.m < LENTH_MIN_CONTRASTS) out.push({ kind: 'lenth-weak', m: v.lenth.m, advised: LENTH_MIN_CONTRASTS });
   if (v.dfResidual === 0) out.push({ kind: 'no-residual-df' });
+  if (v.partialAliasing) out.push({ kind: 'partial-aliasing', ...v.partialAliasing });
   if (v.aliased.length > 0) {
     out.push({
       kind: 'aliased',

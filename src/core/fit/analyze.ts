@@ -28,12 +28,13 @@ import { curvature as curvatureTest, runKinds } from './curvature.ts';
 import { runDiagnostics } from './diagnostics.ts';
 import { estimateTerms } from './estimate-terms.ts';
 import { lenthStep, withLenthT } from './lenth-step.ts';
+import { screeningStep } from './screening-step.ts';
 import { findRepeats } from './repeats.ts';
 import { validateResponseData } from './validate-response.ts';
 import { isWarning } from './verdicts.ts';
 
 export interface AnalyzeOptions {
-  /** Model terms (bit masks); default: main effects and two-factor interactions. */
+  /** Model terms (bit masks); default: main effects and two-factor interactions (main effects only for a Plackett-Burman plan). */
   readonly terms?: readonly Term[];
   /** Significance level for warnings and marks (common practice: 0.05). */
   readonly alpha?: number;
@@ -45,14 +46,15 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
   validateResponseData(data);
   const { factors, coded, y } = data;
   const alpha = options.alpha ?? 0.05;
-  const { blockLevels, blocks, cells, fit } = chooseFit(data, options);
+  const screening = screeningStep(data);
+  const { blockLevels, blocks, cells, fit } = chooseFit(data, screening && !options.terms ? { ...options, terms: screening.terms } : options);
   const est = estimateTerms(fit, factors, blockLevels, alpha);
   const repeats = findRepeats({ coded, y, points: data.points, blocks, cells, k: factors.length });
   const pe = repeats.pure;
   const tables = anovaTables(fit, y, est.labels, est.terms.map((t) => t.p), pe);
   const kinds = runKinds(factors, coded);
   const curv = curvatureTest(kinds, y, pe);
-  const lenthOut = lenthStep({ factors, coded, y, points: data.points, blocks, kinds, groups: repeats.groups, terms: est.terms });
+  const lenthOut = lenthStep({ factors, coded, y, points: data.points, blocks, kinds, groups: repeats.groups, terms: est.terms, ...(screening ? { contrasts: screening.contrasts } : {}) });
   const terms = fit.dfResidual === 0 && lenthOut.lenth ? withLenthT(est.terms, lenthOut.lenth.pse) : est.terms;
   const diag = runDiagnostics(fit, y, data.labels, kinds, est.sigma, tables.ssTotal);
   const verdicts = analysisVerdicts({
@@ -68,6 +70,7 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     aliased: est.aliased,
     aliasedWithInterceptOrBlocks: est.aliasedWithInterceptOrBlocks,
     terms,
+    partialAliasing: screening?.partialAliasing ?? null,
   });
 
   const model: FittedModel = {

@@ -7,6 +7,8 @@
  * combination it carries). Sources: Lenth (1989), Technometrics 31, 469-473; Daniel (1959),
  * Technometrics 1, 311-341 (half-normal plot).
  * Cost O(n r T) for the saturated fit (see saturated-effects.ts) plus O(m log m).
+ * With `contrasts` (a Plackett-Burman plan) Lenth's method runs over those orthogonal columns instead
+ * (contrast-effects.ts), never over partly aliased interactions.
  * Example: the unreplicated 2^4 filtration data (Montgomery 8th ed., Example 6.2) -> m 15, PSE 2.625,
  * marked A, C, D, AC and AD.
  */
@@ -14,6 +16,7 @@ import type { Factor } from '../factor/factor.ts';
 import { isProduct, termLetters, termName } from '../model/term.ts';
 import type { EffectPoint, TermEstimate } from './analysis.ts';
 import { combinationLabel } from './combination-label.ts';
+import { contrastEffects } from './contrast-effects.ts';
 import { halfNormalQuantiles } from './half-normal.ts';
 import { lenth, type LenthResult } from './lenth.ts';
 import { labelGroups, settingGroups } from './pure-error.ts';
@@ -39,6 +42,12 @@ export interface LenthInput {
   readonly groups: Int32Array;
   /** The model's estimates, for the half-normal points when Lenth does not apply. */
   readonly terms: readonly TermEstimate[];
+  /**
+   * Orthogonal contrast columns to judge instead of the saturated set (a Plackett-Burman plan's
+   * N - 1 columns, the unused ones included): one value per run, with each column's name and
+   * letters. Absent: the saturated set of saturated-effects.ts.
+   */
+  readonly contrasts?: { readonly columns: readonly (readonly number[])[]; readonly labels: readonly { readonly name: string; readonly letters: string }[] };
 }
 
 export function lenthStep(input: LenthInput): LenthStep {
@@ -51,7 +60,17 @@ export function lenthStep(input: LenthInput): LenthStep {
   // The half-normal chart shows two-level contrasts only: products of distinct factors, never a square.
   let effects: { name: string; letters: string; effect: number }[] = terms.filter((t) => isProduct(t.term)).map((t) => ({ name: t.name, letters: t.estimates ?? t.letters, effect: t.effect }));
   let result: LenthResult | null = null;
-  if (factorialRows.length >= 2 && distinctPoints === factorialRows.length) {
+  if (factorialRows.length >= 2 && distinctPoints === factorialRows.length && input.contrasts) {
+    const { columns, labels } = input.contrasts;
+    const est = contrastEffects(
+      columns.map((c) => factorialRows.map((i) => c[i])),
+      factorialRows.map((i) => y[i]),
+    );
+    if (est.length > 0) {
+      result = lenth(est.map((e) => e.effect));
+      effects = est.map((e) => ({ ...labels[e.column], effect: e.effect }));
+    }
+  } else if (factorialRows.length >= 2 && distinctPoints === factorialRows.length) {
     const sat = saturatedEffects(
       factors.length,
       factorialRows.map((i) => coded[i]),

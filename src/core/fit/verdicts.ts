@@ -35,6 +35,8 @@ export type Verdict =
   | { readonly kind: 'lenth-weak'; readonly m: number; readonly advised: number }
   /** No residual degrees of freedom: no standard errors, t or p. */
   | { readonly kind: 'no-residual-df' }
+  /** A Plackett-Burman plan: main effects partly mixed with two-factor interactions (correlations up to `largestCorrelation`). */
+  | { readonly kind: 'partial-aliasing'; readonly runs: number; readonly largestCorrelation: number }
   /** Model terms the runs cannot separate, and what each kept estimate carries. */
   | {
       readonly kind: 'aliased';

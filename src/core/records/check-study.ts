@@ -6,6 +6,7 @@ import { InputError } from '../errors.ts';
 import { defineFactors, type Factor, type FactorSpec } from '../factor/factor.ts';
 import { MAX_FACTORS } from '../factor/letters.ts';
 import { RUN_KINDS, type DesignRun } from '../design/design.ts';
+import { PLACKETT_BURMAN_RUNS } from '../design/plackett-burman.ts';
 import type { Response } from '../study/response.ts';
 import type { StoredDesign, StudyRecord } from '../study/study.ts';
 import { MAX_PLANNED_RUNS, fail, finite, id, int, list, obj, oneOf, only, text, texts, time } from './field-checks.ts';
@@ -86,7 +87,7 @@ function responses(v: unknown, path: string): Response[] {
 
 function design(v: unknown, path: string, nFactors: number): StoredDesign {
   const o = obj(v, path);
-  only(o, path, ['runs', 'generators', 'definingRelation', 'resolution', 'wordLengths', 'aliases', 'blockWords', 'seed', 'summary', 'notes']);
+  only(o, path, ['runs', 'generators', 'definingRelation', 'resolution', 'wordLengths', 'aliases', 'blockWords', 'seed', 'summary', 'notes', 'screening']);
   const runs = list(o.runs, `${path}.runs`, MAX_PLANNED_RUNS).map((r, i): DesignRun => {
     const p = `${path}.runs[${i}]`;
     const ro = obj(r, p);
@@ -126,7 +127,26 @@ function design(v: unknown, path: string, nFactors: number): StoredDesign {
     seed: o.seed === null ? null : finite(o.seed, `${path}.seed`),
     summary: text(o.summary, `${path}.summary`),
     notes: texts(o.notes, `${path}.notes`),
+    ...(o.screening !== undefined ? { screening: screening(o.screening, `${path}.screening`, nFactors, runs) } : {}),
   };
+}
+
+/**
+ * The optional screening entry of a design: a Plackett-Burman plan of 12, 20 or 24 factorial
+ * runs per replicate, with fewer factors than runs and every factorial run's standard-order
+ * index within the table (the analysis reads its contrast columns by that index).
+ */
+function screening(v: unknown, path: string, nFactors: number, runs: readonly DesignRun[]): NonNullable<StoredDesign['screening']> {
+  const o = obj(v, path);
+  only(o, path, ['kind', 'runs', 'source']);
+  const kind = oneOf(o.kind, `${path}.kind`, ['plackett-burman'] as const);
+  const n = int(o.runs, `${path}.runs`, 12, 24);
+  if (!(PLACKETT_BURMAN_RUNS as readonly number[]).includes(n)) fail(`${path}.runs`, `one of ${PLACKETT_BURMAN_RUNS.join(', ')} runs`, n);
+  if (nFactors > n - 1) fail(path, `at most ${n - 1} factors for a ${n}-run design`, nFactors);
+  runs.forEach((r, i) => {
+    if (r.kind === 'factorial' && (r.yates === null || r.yates > n)) fail(`${path.replace(/\.screening$/, '')}.runs[${i}].yates`, `a standard-order index from 1 to ${n} (a ${n}-run Plackett-Burman design)`, r.yates);
+  });
+  return { kind, runs: n, source: text(o.source, `${path}.source`, { nonEmpty: true }) };
 }
 
 /**

@@ -22,6 +22,13 @@ export interface ResponseData {
    * run at differ slightly. Absent: runs count as repeats only at identical actual settings.
    */
   readonly points?: readonly string[] | null;
+  /**
+   * Present when the runs come from a Plackett-Burman plan: its factorial runs per replicate and
+   * the standard-order index (its row of the design's table) of each row's planned run, null for
+   * a center run. The analysis then fits main effects by default and applies Lenth's method to
+   * the design's N - 1 orthogonal columns.
+   */
+  readonly screening?: { readonly runs: number; readonly yates: readonly (number | null)[] };
   /** Run labels for reports (run numbers), aligned with the rows. */
   readonly labels: readonly string[];
   /** What was skipped and why ("2 excluded runs skipped"), for the report. */

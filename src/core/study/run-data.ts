@@ -36,6 +36,7 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
   const blocks: number[] = [];
   const labels: string[] = [];
   const points: string[] = [];
+  const yates: (number | null)[] = [];
   const seen = new Map<number, number>();
   let excluded = 0;
   let missing = 0;
@@ -58,6 +59,7 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     blocks.push(planned?.block ?? 1);
     // Runs planned at the same coded settings are repeats of one point, whatever their actuals.
     points.push(planned ? planned.coded.join(',') : `run ${run.plannedRun}`);
+    yates.push(planned && planned.kind === 'factorial' ? planned.yates : null);
     const k = (seen.get(run.plannedRun) ?? 0) + 1;
     seen.set(run.plannedRun, k);
     labels.push(k === 1 ? String(run.plannedRun) : `${run.plannedRun}#${k}`);
@@ -77,6 +79,7 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     y,
     blocks: blocked ? blocks : null,
     points,
+    ...(study.design.screening ? { screening: { runs: study.design.screening.runs, yates } } : {}),
     labels,
     notes,
   };

@@ -9,6 +9,7 @@
 import type { LenthResult } from '../fit/lenth.ts';
 import type { CurvatureVerdict, Verdict } from '../fit/verdicts.ts';
 import { shortNumber } from './number-text.ts';
+import { correlationText, PARTIAL_ALIASING_NOTE } from './screening-text.ts';
 import { pPhrase } from './p-value.ts';
 
 /** The finding of a significant curvature test, shared by the analysis, predictions and the path. */
@@ -74,6 +75,8 @@ export function verdictText(v: Verdict): string {
       return `Lenth's method has only ${v.m} effects to work from (${v.advised} or more are advised), so it is weak here.`;
     case 'no-residual-df':
       return "No runs are left over to estimate the noise, so standard errors, t and p are not available; use Lenth's method or fewer terms.";
+    case 'partial-aliasing':
+      return `This is a ${v.runs}-run Plackett-Burman screening design, so the main effects are estimated clear of each other but partly mixed with two-factor interactions (correlations up to ${correlationText(v.largestCorrelation)}). ${PARTIAL_ALIASING_NOTE}`;
     case 'aliased': {
       const parts = v.carried.map((c) => `the estimate shown for ${c.letters} is of ${c.estimates}`);
       if (v.withInterceptOrBlocks) parts.push('some terms are confounded with the intercept or blocks');

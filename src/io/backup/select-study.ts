@@ -8,23 +8,42 @@ import { responseDataFromRuns } from '../../core/study/run-data.ts';
 import { currentRun, type LoggedRun, type RunRevision, type StudyRecord } from '../../core/study/study.ts';
 import { readBackupSync, type Backup } from './backup.ts';
 
+/** Text compared as a person means it: Unicode form C (a composed and a decomposed "é" agree), surrounding spaces ignored. */
+function nfc(t: string): string {
+  return t.normalize('NFC').trim();
+}
+
+function refuseSeveral(ref: string, found: readonly StudyRecord[], how: string): never {
+  throw new InputError(`The name "${ref}" matches ${found.length} studies; give one of their ids instead: ${found.map((s) => `${s.id} ("${s.title}", made ${s.createdAt})`).join(', ')} (the name ${how} each)`);
+}
+
 /**
- * The study whose id is `ref`, else whose title is `ref` (case and surrounding spaces ignored).
- * Throws InputError when none matches (listing the studies) or when a title matches several
- * (listing their ids, so the person can give one).
+ * The study `ref` names, in this order: the study whose id is `ref`; else whose title is exactly
+ * `ref`; else whose title is `ref` ignoring case; else the one study whose title contains `ref`
+ * ignoring case. Text is compared in Unicode form C with surrounding spaces ignored.
+ * Throws InputError when none matches (listing the studies) or when two or more match at the
+ * first step that finds any (listing them with their ids, so the person can give one).
+ * Example: with studies "Oven trial May" and "Oven trial June", "june" picks the second and
+ * "oven" is refused, naming both.
  */
 export function selectStudy(backup: Pick<Backup, 'payload'>, ref: string): StudyRecord {
   const studies = backup.payload.studies;
-  const byId = studies.find((s) => s.id === ref.trim());
+  const key = nfc(ref);
+  const byId = studies.find((s) => s.id === key);
   if (byId) return byId;
-  const key = ref.trim().toLowerCase();
-  const named = studies.filter((s) => s.title.trim().toLowerCase() === key);
-  if (named.length === 1) return named[0];
-  if (named.length > 1) {
-    throw new InputError(`The name "${ref}" matches ${named.length} studies; give one of their ids instead: ${named.map((s) => `${s.id} (made ${s.createdAt})`).join(', ')}`);
+  const lower = key.toLowerCase();
+  const steps: [string, (title: string) => boolean][] = [
+    ['is the title of', (t) => t === key],
+    ['is the title, ignoring case, of', (t) => t.toLowerCase() === lower],
+    ['is part of the title of', (t) => key !== '' && t.toLowerCase().includes(lower)],
+  ];
+  for (const [how, match] of steps) {
+    const found = studies.filter((s) => match(nfc(s.title)));
+    if (found.length === 1) return found[0];
+    if (found.length > 1) refuseSeveral(ref, found, how);
   }
   const list = studies.map((s) => `"${s.title}" (${s.id})`).join(', ');
-  throw new InputError(`The backup has no study with the id or name "${ref}"; it holds ${studies.length === 0 ? 'no studies' : list}`);
+  throw new InputError(`The backup has no study with the id or name "${ref}", or with a title that contains it; it holds ${studies.length === 0 ? 'no studies' : list}`);
 }
 
 /** The current state of every logged run of a study in a backup, by planned run. Cost: linear in

@@ -6,7 +6,10 @@
  */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { buildDesign, type DesignSpec } from '../../core/design/build-design.ts';
-import { catalogueChoices } from '../../core/design/catalogue-choices.ts';
+import { catalogueChoices, plackettBurmanChoices } from '../../core/design/catalogue-choices.ts';
+import { planPower, type PlanPower } from '../../core/plan/power.ts';
+import { powerInWords } from '../../core/plan/power-words.ts';
+import { noiseSources, type NoiseSource } from './noise-sources.ts';
 import { romanResolution } from '../../core/design/defining-relation.ts';
 import { MAX_DESIGN_FACTORS } from '../../core/design/max-design-factors.ts';
 import type { Design } from '../../core/design/design.ts';
@@ -41,8 +44,24 @@ export interface ResponseDraft {
   readonly target: string;
 }
 
-/** 'full' or a catalogue fraction such as '1/2'. */
+/** 'full', a catalogue fraction such as '1/2', or a Plackett-Burman design such as 'pb-12'. */
 export type FractionChoice = string;
+
+/** The most factors the form takes: 23, the most a Plackett-Burman design holds (24 runs); full factorials and fractions stop at MAX_DESIGN_FACTORS. */
+export const FORM_MAX_FACTORS = 23;
+
+/** A design choice in words for a message: "the full factorial", "the 1/2 fraction", "the 12-run Plackett-Burman design". */
+export function choiceName(choice: FractionChoice): string {
+  const pb = plackettBurmanRunsOf(choice);
+  if (pb !== null) return `the ${pb}-run Plackett-Burman design`;
+  return choice === 'full' ? 'the full factorial' : `the ${choice} fraction`;
+}
+
+/** The run count of a Plackett-Burman choice ('pb-12' -> 12), or null for a factorial choice. */
+export function plackettBurmanRunsOf(choice: FractionChoice): number | null {
+  const m = /^pb-(\d+)$/.exec(choice);
+  return m ? Number(m[1]) : null;
+}
 
 export interface FractionOption {
   readonly value: FractionChoice;
@@ -100,14 +119,50 @@ function wholeCount(text: string, what: string, min: number): number {
   return Number(s);
 }
 
-/** What the form offers for k factors: the full factorial and each catalogue fraction, with runs and resolution (from the core's catalogueChoices). */
+/**
+ * What the form offers for k factors: the full factorial and each catalogue fraction, with runs
+ * and resolution (the core's catalogueChoices, up to MAX_DESIGN_FACTORS factors), then the
+ * Plackett-Burman screening designs that take k factors (plackettBurmanChoices).
+ */
 export function fractionOptions(k: number): FractionOption[] {
   if (k < 1) return [{ value: 'full', runs: 1, resolution: null, label: 'Full factorial · 1 runs' }];
-  return catalogueChoices(Math.min(k, MAX_DESIGN_FACTORS)).map((c) => {
-    const res = c.resolution === null ? null : romanResolution(c.resolution);
-    const label = c.fraction === 'full' ? `Full factorial · ${c.runs} runs` : `${c.fraction} · ${c.runs} runs${res ? ` · resolution ${res}` : ''}`;
-    return { value: c.fraction, runs: c.runs, resolution: res, label };
-  });
+  const factorial =
+    k > MAX_DESIGN_FACTORS
+      ? []
+      : catalogueChoices(k).map((c) => {
+          const res = c.resolution === null ? null : romanResolution(c.resolution);
+          const label = c.fraction === 'full' ? `Full factorial · ${c.runs} runs` : `${c.fraction} · ${c.runs} runs${res ? ` · resolution ${res}` : ''}`;
+          return { value: c.fraction, runs: c.runs, resolution: res, label };
+        });
+  const screening = plackettBurmanChoices(k).map((c) => ({ value: `pb-${c.runs}`, runs: c.runs, resolution: null, label: `Screening · ${c.runs} runs (Plackett-Burman)` }));
+  return [...factorial, ...screening];
+}
+
+/** What the power fields hold: the effect that matters and the noise, typed or from an earlier study. */
+export type PowerView =
+  | { readonly state: 'waiting'; readonly message: string }
+  | { readonly state: 'error'; readonly message: string }
+  | { readonly state: 'ready'; readonly power: PlanPower; readonly words: string };
+
+/**
+ * The power of the plan for the typed effect and noise, in plain words (the core's planPower and
+ * powerInWords), or what is still missing, or the core's message for a wrong entry (an effect of
+ * 0, a negative sigma), which changes nothing else on the form.
+ */
+export function powerView(design: Design | null, effectText: string, sigmaText: string): PowerView {
+  if (!design) return { state: 'waiting', message: 'The power is shown once the plan above is ready.' };
+  if (effectText.trim() === '' || sigmaText.trim() === '') {
+    return { state: 'waiting', message: 'Type the smallest effect that matters and the run-to-run noise (or take the noise from an earlier study) to see whether this plan will find it.' };
+  }
+  try {
+    const effect = readNumber(effectText, 'The effect that matters');
+    const sigma = readNumber(sigmaText, 'The run-to-run noise (sigma)');
+    const power = planPower(design, { effect, sigma });
+    return { state: 'ready', power, words: powerInWords(power) };
+  } catch (err) {
+    if (err instanceof InputError) return { state: 'error', message: err.message };
+    throw err;
+  }
 }
 
 export type Preview = { readonly design: Design; readonly error: null } | { readonly design: null; readonly error: string };
@@ -125,6 +180,12 @@ export const NewStudyModel = createModel((store: Store) => {
   const seedText = signal('');
   /** Drawn once for a blank seed box, so the preview and the created study share one run order. */
   const drawnSeed = signal(drawSeed());
+  const effectText = signal('');
+  const sigmaText = signal('');
+  /** The earlier study and response the noise was taken from, or null when it was typed. */
+  const sigmaFrom = signal<NoiseSource | null>(null);
+  /** Residual SDs of earlier studies on this device (read once when the form opens). */
+  const sources = signal<readonly NoiseSource[]>([]);
   const problem = signal<Problem | null>(null);
   const creating = signal(false);
   /** Set after a "Create study" with something wrong, so every row shows its message. */
@@ -151,9 +212,10 @@ export const NewStudyModel = createModel((store: Store) => {
     });
     const s = seed.value;
     if (s !== null && !Number.isFinite(s)) throw new InputError(`The seed must be a whole number, or left blank to draw one; got "${seedText.value.trim()}"`);
+    const pb = plackettBurmanRunsOf(fraction.value);
     return {
       factors: rows.map((f) => factorSpecOf(f)),
-      ...(fraction.value === 'full' ? {} : { fraction: fraction.value }),
+      ...(pb !== null ? { plackettBurman: pb } : fraction.value === 'full' ? {} : { fraction: fraction.value }),
       centerRuns: wholeCount(centerRuns.value, 'Center runs', 0),
       replicates: wholeCount(replicates.value, 'Replicates', 1),
       blocks: blocks.value,
@@ -180,6 +242,8 @@ export const NewStudyModel = createModel((store: Store) => {
       throw err;
     }
   });
+
+  const responseNames = computed(() => new Set(responses.value.map((r) => r.name.trim().toLowerCase()).filter((n) => n !== '')));
 
   function edit() {
     if (problem.peek()?.kind === 'input') problem.value = null;
@@ -218,6 +282,29 @@ export const NewStudyModel = createModel((store: Store) => {
     factorMessages,
     responseProblem,
     preview,
+    effectText: effectText as ReadonlySignal<string>,
+    sigmaText: sigmaText as ReadonlySignal<string>,
+    sigmaFrom: sigmaFrom as ReadonlySignal<NoiseSource | null>,
+    /** Earlier studies with an analysis of a response named as one of this form's responses, and its residual SD. */
+    noiseChoices: computed(() => sources.value.filter((s) => responseNames.value.has(s.response.trim().toLowerCase()))),
+    /** The power of the plan as it stands, in words. */
+    power: computed(() => powerView(preview.value.design, effectText.value, sigmaText.value)),
+    setEffectText(v: string) {
+      effectText.value = v;
+    },
+    setSigmaText(v: string) {
+      sigmaText.value = v;
+      sigmaFrom.value = null;
+    },
+    /** Takes the noise from an earlier study's residual SD (its figure goes into the noise field, which stays editable). */
+    takeNoiseFrom(source: NoiseSource) {
+      sigmaText.value = String(Number(source.sigma.toPrecision(3)));
+      sigmaFrom.value = source;
+    },
+    /** Reads the earlier studies' residual SDs; a study that cannot be analysed is left out. */
+    async loadNoiseSources(): Promise<void> {
+      sources.value = await noiseSources(store);
+    },
     /** True when the chosen fraction is one the catalogue offers for this many factors. */
     fractionOffered: computed(() => options.value.some((o) => o.value === fraction.value)),
 
@@ -231,7 +318,7 @@ export const NewStudyModel = createModel((store: Store) => {
     },
     setFactor,
     addFactor() {
-      if (factors.peek().length >= MAX_DESIGN_FACTORS) return;
+      if (factors.peek().length >= FORM_MAX_FACTORS) return;
       factors.value = [...factors.peek(), blankFactor()];
       edit();
     },

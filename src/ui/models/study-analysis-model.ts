@@ -37,6 +37,11 @@ export interface ResponseSettings {
 /** A response's settings before anything is chosen. */
 export const DEFAULT_SETTINGS: ResponseSettings = { model: 'two-way' };
 
+/** The settings before anything is chosen for a study: main effects for a Plackett-Burman screen (its interactions are only partly aliased). */
+export function defaultSettings(study: { readonly design: { readonly screening?: unknown } }): ResponseSettings {
+  return study.design.screening ? { model: 'main' } : DEFAULT_SETTINGS;
+}
+
 export type AnalysisResult =
   | { readonly ok: true; readonly analysis: Analysis; readonly data: ResponseData }
   | { readonly ok: false; readonly message: string };
@@ -77,10 +82,10 @@ export const StudyAnalysisModel = createModel((store: Store, studyId: string) =>
   const shownIndex = signal(0);
   let reading: Promise<void> | null = null;
 
-  function settingsOf(name: string): Signal<ResponseSettings> {
+  function settingsOf(name: string, first: ResponseSettings = DEFAULT_SETTINGS): Signal<ResponseSettings> {
     let s = settings.get(name);
     if (!s) {
-      s = signal(DEFAULT_SETTINGS);
+      s = signal(first);
       settings.set(name, s);
     }
     return s;
@@ -90,7 +95,7 @@ export const StudyAnalysisModel = createModel((store: Store, studyId: string) =>
     const d = data.value;
     if (!d) return [];
     return d.study.responses.map((response, index) => {
-      const s = settingsOf(response.name);
+      const s = settingsOf(response.name, defaultSettings(d.study));
       return { index, response, settings: s, result: computed(() => analyseResponse(d, index, s.value)) };
     });
   });
@@ -134,7 +139,7 @@ export const StudyAnalysisModel = createModel((store: Store, studyId: string) =>
     chooseModel(i: number, model: ModelChoice) {
       const r = data.peek()?.study.responses[i];
       if (!r) return;
-      const s = settingsOf(r.name);
+      const s = settingsOf(r.name, defaultSettings(data.peek()!.study));
       s.value = { ...s.peek(), model };
     },
   };

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { buildDesign } from '../../../src/core/design/build-design.ts';
-import { catalogueChoices } from '../../../src/core/design/catalogue-choices.ts';
+import { catalogueChoices, plackettBurmanChoices } from '../../../src/core/design/catalogue-choices.ts';
 import { MAX_DESIGN_FACTORS } from '../../../src/core/design/max-design-factors.ts';
 import type { FactorSpec } from '../../../src/core/factor/factor.ts';
 
@@ -34,5 +34,20 @@ describe('catalogueChoices', () => {
     expect(() => catalogueChoices(0)).toThrow('Design choices need a whole number of factors from 1 to 15, got 0');
     expect(() => catalogueChoices(MAX_DESIGN_FACTORS + 1)).toThrow('got 16');
     expect(() => catalogueChoices(2.5)).toThrow('got 2.5');
+  });
+});
+
+describe('plackettBurmanChoices', () => {
+  it('offers each of 12, 20 and 24 runs that has a column per factor (Plackett and Burman 1946: N - 1 columns)', () => {
+    expect(plackettBurmanChoices(2)).toEqual([{ runs: 12, unusedColumns: 9 }, { runs: 20, unusedColumns: 17 }, { runs: 24, unusedColumns: 21 }]);
+    expect(plackettBurmanChoices(11)).toEqual([{ runs: 12, unusedColumns: 0 }, { runs: 20, unusedColumns: 8 }, { runs: 24, unusedColumns: 12 }]);
+    expect(plackettBurmanChoices(12).map((c) => c.runs)).toEqual([20, 24]);
+    expect(plackettBurmanChoices(23)).toEqual([{ runs: 24, unusedColumns: 0 }]);
+  });
+
+  it('degenerate input: fewer than 2 factors, more than 23 or not a whole number gives no choice', () => {
+    expect(plackettBurmanChoices(1)).toEqual([]);
+    expect(plackettBurmanChoices(24)).toEqual([]);
+    expect(plackettBurmanChoices(2.5)).toEqual([]);
   });
 });

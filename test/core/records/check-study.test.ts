@@ -99,3 +99,42 @@ describe('checkStudy', () => {
     expect(() => checkStudy({}, 'study')).toThrow(InputError);
   });
 });
+
+describe('checkStudy: the screening entry of a Plackett-Burman plan', () => {
+  // A 12-run Plackett-Burman plan keeps its factorial runs' standard-order indexes 1..12 (Plackett and Burman 1946).
+  function screened(): any {
+    const s = study();
+    s.design.screening = { kind: 'plackett-burman', runs: 12, source: 'Plackett and Burman (1946)' };
+    return s;
+  }
+
+  it('keeps the optional field as it came, and leaves a plan without it unchanged', () => {
+    expect(checkStudy(screened(), 'study').design.screening).toEqual({ kind: 'plackett-burman', runs: 12, source: 'Plackett and Burman (1946)' });
+    expect('screening' in checkStudy(study(), 'study').design).toBe(false);
+  });
+
+  it('refuses a run count the paper does not give, an unknown kind, a missing source or an extra field', () => {
+    const bad: [string, (s: any) => void, string][] = [
+      ['16 runs', (s) => (s.design.screening.runs = 16), 'study.design.screening.runs: needs one of 12, 20, 24 runs, got 16'],
+      ['kind', (s) => (s.design.screening.kind = 'hadamard'), 'study.design.screening.kind: needs "plackett-burman", got "hadamard"'],
+      ['source', (s) => delete s.design.screening.source, 'study.design.screening.source: needs text, got nothing'],
+      ['extra', (s) => (s.design.screening.rows = 12), 'study.design.screening: has no field "rows" in this format'],
+    ];
+    for (const [what, change, message] of bad) {
+      const s = screened();
+      change(s);
+      expect(() => checkStudy(s, 'study'), what).toThrow(message);
+    }
+  });
+
+  it('refuses more factors than the design has columns, and a standard-order index outside its table', () => {
+    const small = screened();
+    small.design.runs[1].yates = 13;
+    expect(() => checkStudy(small, 'study')).toThrow('study.design.runs[1].yates: needs a standard-order index from 1 to 12 (a 12-run Plackett-Burman design), got 13');
+    const wide = screened();
+    wide.design.screening.runs = 12;
+    wide.factors = Array.from({ length: 12 }, (_, i) => ({ kind: 'numeric', name: `F${i}`, letter: 'ABCDEFGHJKLM'[i], low: 0, high: 1 }));
+    wide.design.runs.forEach((r: any) => (r.coded = new Array(12).fill(r.kind === 'center' ? 0 : 1)));
+    expect(() => checkStudy(wide, 'study')).toThrow('study.design.screening: needs at most 11 factors for a 12-run design, got 12');
+  });
+});

@@ -21,6 +21,10 @@ const samples: Record<VerdictKind, { verdict: Verdict; fragments: string[] }[]> 
   ],
   'lenth-weak': [{ verdict: { kind: 'lenth-weak', m: 3, advised: 7 }, fragments: ['has only 3 effects to work from (7 or more are advised)'] }],
   'no-residual-df': [{ verdict: { kind: 'no-residual-df' }, fragments: ['so standard errors, t and p are not available'] }],
+  'partial-aliasing': [
+    // 1/3 is the largest correlation of a 12-run design (Lin and Draper 1992, from memory).
+    { verdict: { kind: 'partial-aliasing', runs: 12, largestCorrelation: 1 / 3 }, fragments: ['This is a 12-run Plackett-Burman screening design', 'partly mixed with two-factor interactions (correlations up to 1/3)'] },
+  ],
   aliased: [
     {
       verdict: { kind: 'aliased', count: 1, carried: [{ letters: 'C', estimates: 'C + AB' }], withInterceptOrBlocks: false },

@@ -16,6 +16,8 @@ import { exportBackup } from '../../../src/store/files.ts';
 import { createStudy } from '../../../src/store/studies.ts';
 import { excludeRun, openNewRun, restoreRevision, saveRun, openRun } from '../../../src/store/runs.ts';
 import { brandPlan, coatingPlan, freshStore } from '../../store/helpers.ts';
+import { buildDesign } from '../../../src/core/design/build-design.ts';
+import { studyPlan } from '../../../src/core/study/study.ts';
 
 type Schema = Record<string, unknown>;
 const schema: Schema = JSON.parse(readFileSync(fileURLToPath(new URL('../../../src/io/backup/trialbook-backup.schema.json', import.meta.url)), 'utf8'));
@@ -130,6 +132,27 @@ describe('trialbook-backup.schema.json', () => {
       const resigned = await writeBackup(d.payload, { device: d.device, exportedAt: d.exportedAt, scope: d.scope }).catch((e) => e);
       if (typeof resigned === 'string') await expect(readBackup(resigned), what).rejects.toThrow();
     }
+  });
+
+  it('carries the screening entry of a Plackett-Burman study through the export and back', async () => {
+    const store = await freshStore();
+    // A 12-run Plackett-Burman plan for 4 factors (Plackett and Burman 1946), invented factor names.
+    const design = buildDesign({
+      factors: ['P', 'Q', 'R', 'S'].map((name) => ({ kind: 'numeric' as const, name, low: 0, high: 1 })),
+      plackettBurman: 12,
+      seed: 3,
+    });
+    const made = await createStudy(store, studyPlan('Invented screening plan', 'INVENTED DEMO DATA.', [{ name: 'Yield', goal: 'maximize' }], design));
+    expect(made.design.screening).toEqual(design.screening);
+    const written = await exportBackup(store);
+    expect(validate(schema, JSON.parse(written))).toEqual([]);
+    const back = await readBackup(written);
+    expect(back.payload.studies[0].design.screening).toEqual({ kind: 'plackett-burman', runs: 12, source: design.screening!.source });
+    const doc = JSON.parse(written);
+    doc.payload.studies[0].design.screening.runs = 16;
+    expect(validate(schema, doc)).toEqual(['$.payload.studies[0].design.screening.runs: enum']);
+    const resigned = await writeBackup(doc.payload, { device: doc.device, exportedAt: doc.exportedAt, scope: doc.scope }).catch((e) => e);
+    if (typeof resigned === 'string') await expect(readBackup(resigned)).rejects.toThrow('screening.runs: needs one of 12, 20, 24 runs, got 16');
   });
 
   it('the app version in backups is package.json\'s', () => {

@@ -20,6 +20,7 @@ import { ResidualChart } from '../../components/residual-chart/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { pPhrase } from '../../../core/text/p-value.ts';
+import { effectWords, LENTH_WORDS, WITHIN_NOISE } from '../../../core/text/effect-words.ts';
 import { curvatureStatement } from '../../../core/text/verdict-text.ts';
 import { num, percent, setting, signed, termLabel, withUnit } from '../../lib/format.ts';
 import { AnalysisModel, twoFactorTerms } from '../../models/analysis-model.ts';
@@ -30,12 +31,13 @@ import './style.css';
 
 export type AnalysisScreenProps = { readonly store: Store; readonly studyId: string };
 
-/** How clearly a term stands out from the run-to-run noise, in words. */
-export function strength(t: TermEstimate): { words: string; faint: boolean } {
-  if (t.p === null) return { words: 'No noise estimate from these runs, so no test', faint: false };
-  if (t.p < 0.05) return { words: `Stands out from the noise (${pPhrase(t.p)})`, faint: false };
-  if (t.p < 0.1) return { words: `Borderline (${pPhrase(t.p)})`, faint: false };
-  return { words: `Within the run-to-run noise (${pPhrase(t.p)})`, faint: true };
+/** How clearly a term stands out from the run-to-run noise, in the words the text report uses (core/text/effect-words.ts). */
+export function strength(t: TermEstimate, lenthMark?: 'likely' | 'active' | null): { words: string; faint: boolean } {
+  const words = effectWords(t.p, lenthMark);
+  if (words === null) return { words: 'No noise estimate from these runs, so no test', faint: false };
+  const said = words[0].toUpperCase() + words.slice(1);
+  if (t.p === null) return { words: `${said} of Lenth's method`, faint: words === LENTH_WORDS.none };
+  return { words: `${said} (${pPhrase(t.p)})`, faint: words === WITHIN_NOISE };
 }
 
 function levelText(f: Factor, end: 0 | 1): string {
@@ -61,7 +63,7 @@ export function meaning(t: TermEstimate, factors: readonly Factor[], response: R
 
 function effectRows(ranked: readonly TermEstimate[], a: Analysis, factors: readonly Factor[], response: Response): BarRow[] {
   return ranked.map((t) => {
-    const s = strength(t);
+    const s = strength(t, a.lenth ? (a.lenth.effects.find((e) => e.letters === (t.estimates ?? t.letters))?.mark ?? null) : undefined);
     const carries = t.estimates ? ` Carries ${t.estimates}: these runs cannot tell them apart.` : '';
     return {
       key: String(t.term),

@@ -4,7 +4,7 @@
  * stores it and opens its run sheet. A wrong entry is explained beside the form; nothing is made.
  */
 import { useModel } from '@preact/signals';
-import { useRef } from 'preact/hooks';
+import { useEffect, useRef } from 'preact/hooks';
 import { romanResolution } from '../../../core/design/defining-relation.ts';
 import { factorLetters } from '../../../core/factor/letters.ts';
 import type { Store } from '../../../store/store.ts';
@@ -12,8 +12,7 @@ import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { CountStepper } from '../../components/count-stepper/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { hrefTo } from '../../app/routes.ts';
-import { MAX_DESIGN_FACTORS } from '../../../core/design/max-design-factors.ts';
-import { BLOCK_CHOICES, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
+import { BLOCK_CHOICES, choiceName, FORM_MAX_FACTORS, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
 import './style.css';
 
 export type NewStudyScreenProps = { readonly store: Store };
@@ -81,6 +80,11 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
   const design = preview.design;
   const problem = model.problem.value;
 
+  useEffect(() => {
+    void model.loadNoiseSources();
+  }, [model]);
+  const power = model.power.value;
+
   async function create() {
     const made = await model.create();
     if (made) location.hash = hrefTo('runSheet', { studyId: made.id });
@@ -143,7 +147,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
             </div>
           );
         })}
-        <button type="button" class="btn block" disabled={factors.length >= MAX_DESIGN_FACTORS} onClick={() => model.addFactor()}>
+        <button type="button" class="btn block" disabled={factors.length >= FORM_MAX_FACTORS} onClick={() => model.addFactor()}>
           + Add a factor
         </button>
       </fieldset>
@@ -178,8 +182,8 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
       <fieldset class="group">
         <legend>Design</legend>
         <ChoiceButtons label="Runs of the factorial" options={model.options.value.map((o) => ({ value: o.value, label: o.label }))} value={model.fraction.value} onChoose={(v) => model.chooseFraction(v)} />
-        {model.options.value.length === 1 && factors.length >= 2 && <p class="quiet field-hint">Fractions from the catalogue start at 8 runs, so they need 4 factors or more.</p>}
-        {!model.fractionOffered.value && <p class="field-error">The {model.fraction.value} fraction is not offered for {factors.length} factors; choose one of the above.</p>}
+        {factors.length >= 2 && factors.length < 4 && <p class="quiet field-hint">Fractions from the catalogue start at 8 runs, so they need 4 factors or more.</p>}
+        {!model.fractionOffered.value && <p class="field-error">{choiceName(model.fraction.value).replace(/^t/, 'T')} is not offered for {factors.length} factors; choose one of the above.</p>}
         <CountStepper id="ns-center" label="Center runs" hint="Per replicate; numeric factors at the middle of their ranges." value={model.centerRuns.value} min={0} onChange={(v) => model.setCenterRuns(v)} />
         <CountStepper id="ns-replicates" label="Replicates" hint="Times the whole design is run." value={model.replicates.value} min={1} onChange={(v) => model.setReplicates(v)} />
         <div class="choice-compact">
@@ -213,6 +217,36 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
         )}
       </fieldset>
 
+      <fieldset class="group plan-power-group">
+        <legend>Will the plan find the effect?</legend>
+        <p class="quiet">The power of the plan: how often its runs show an effect of the size that matters, given the run-to-run noise.</p>
+        <div class="pair">
+          <TextField id="ns-effect" label="Effect that matters" numeric value={model.effectText.value} onInput={(v) => model.setEffectText(v)} invalid={power.state === 'error' && /effect/i.test(power.message)} />
+          <TextField id="ns-sigma" label="Run-to-run noise (SD)" numeric value={model.sigmaText.value} onInput={(v) => model.setSigmaText(v)} invalid={power.state === 'error' && /sigma/i.test(power.message)} />
+        </div>
+        <p class="quiet field-hint">The effect: the change from low to high, in the response's units. The noise: the standard deviation of repeated runs at one setting.</p>
+        {model.noiseChoices.value.length > 0 && (
+          <div class="noise-sources">
+            <p class="field-name" id="ns-noise-from">Take the noise from an earlier study</p>
+            <ul class="noise-list" aria-labelledby="ns-noise-from">
+              {model.noiseChoices.value.map((s) => {
+                const chosen = model.sigmaFrom.value?.studyId === s.studyId && model.sigmaFrom.value.response === s.response;
+                return (
+                  <li key={`${s.studyId}/${s.response}`}>
+                    <button type="button" class="btn" aria-pressed={chosen} onClick={() => model.takeNoiseFrom(s)}>
+                      {s.title} · {s.response}: {Number(s.sigma.toPrecision(3))} ({s.df} df)
+                    </button>
+                  </li>
+                );
+              })}
+            </ul>
+          </div>
+        )}
+        <p class={`plan-power plan-power-${power.state}`} role="status">
+          {power.state === 'ready' ? power.words : power.message}
+        </p>
+      </fieldset>
+
       <section class="plan-preview" aria-label="Preview of the plan" aria-live="polite">
         <h3>Preview</h3>
         {design ? (
@@ -222,7 +256,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
             <dl class="plan-facts">
               <div>
                 <dt>Resolution</dt>
-                <dd class="plan-resolution">{design.resolution === null ? 'Full factorial (no aliases)' : romanResolution(design.resolution)}</dd>
+                <dd class="plan-resolution">{design.screening ? 'Screening design: no defining relation, main effects partly mixed with interactions' : design.resolution === null ? 'Full factorial (no aliases)' : romanResolution(design.resolution)}</dd>
               </div>
               {design.definingRelation.length > 0 && (
                 <div>
@@ -266,7 +300,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
           {design ? (
             <>
               <span class="plan-bar-runs">{design.runs.length} runs</span>
-              <span class="plan-bar-res">{design.resolution === null ? 'full factorial' : `resolution ${romanResolution(design.resolution)}`}</span>
+              <span class="plan-bar-res">{design.screening ? 'screening' : design.resolution === null ? 'full factorial' : `resolution ${romanResolution(design.resolution)}`}</span>
             </>
           ) : (
             'Not ready yet'

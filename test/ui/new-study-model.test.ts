@@ -1,0 +1,41 @@
+import { describe, expect, it } from 'vitest';
+import { buildDesign } from '../../src/core/design/build-design.ts';
+import { planPower } from '../../src/core/plan/power.ts';
+import { powerInWords } from '../../src/core/plan/power-words.ts';
+import { choiceName, fractionOptions, plackettBurmanRunsOf, powerView } from '../../src/ui/models/new-study-model.ts';
+
+const three = ['A1', 'B1', 'C1'].map((name) => ({ kind: 'numeric' as const, name, low: 0, high: 1 }));
+
+describe('the planning form: design choices and the power of the plan', () => {
+  it('offers the full factorial, the catalogue fractions, then the Plackett-Burman designs that take k factors', () => {
+    expect(fractionOptions(4).map((o) => o.value)).toEqual(['full', '1/2', 'pb-12', 'pb-20', 'pb-24']);
+    // 12 factors: a 12-run design has only 11 columns (Plackett and Burman 1946).
+    expect(fractionOptions(12).map((o) => o.value).filter((v) => v.startsWith('pb-'))).toEqual(['pb-20', 'pb-24']);
+    // Over the 15 factors of the catalogue only screening designs are left.
+    expect(fractionOptions(19).map((o) => o.value)).toEqual(['pb-20', 'pb-24']);
+    expect(plackettBurmanRunsOf('pb-20')).toBe(20);
+    expect(plackettBurmanRunsOf('1/2')).toBeNull();
+    expect(['full', '1/4', 'pb-24'].map(choiceName)).toEqual(['the full factorial', 'the 1/4 fraction', 'the 24-run Plackett-Burman design']);
+  });
+
+  it("gives the core's sentence for a ready plan, and waits while a field is blank", () => {
+    // A 2^3 with 4 center runs, the default model (main effects and two-factor interactions).
+    const design = buildDesign({ factors: three, centerRuns: 4, seed: 1 });
+    const v = powerView(design, '2', '1');
+    expect(v).toEqual({ state: 'ready', power: planPower(design, { effect: 2, sigma: 1 }), words: powerInWords(planPower(design, { effect: 2, sigma: 1 })) });
+    expect(powerView(design, '', '1').state).toBe('waiting');
+    expect(powerView(null, '2', '1').state).toBe('waiting');
+  });
+
+  it('bad input: an effect of 0, a negative sigma or text gets the message and no power', () => {
+    const design = buildDesign({ factors: three, centerRuns: 4, seed: 1 });
+    expect(powerView(design, '0', '1')).toEqual({ state: 'error', message: 'The effect to detect must be a number greater than 0, got 0' });
+    expect(powerView(design, '2', '-1')).toEqual({ state: 'error', message: 'The run-to-run standard deviation (sigma) must be a number greater than 0, got -1' });
+    expect(powerView(design, 'big', '1').state).toBe('error');
+  });
+
+  it('bad input: more factors than a 12-run design takes is refused by the builder with the count it takes', () => {
+    const twelve = Array.from({ length: 12 }, (_, i) => ({ kind: 'numeric' as const, name: `F${i + 1}`, low: 0, high: 1 }));
+    expect(() => buildDesign({ factors: twelve, plackettBurman: 12 })).toThrow('A 12-run Plackett-Burman design takes up to 11 factors, got 12');
+  });
+});
