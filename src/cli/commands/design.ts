@@ -298,7 +298,7 @@ export function designJson(d: Design): object {
     ),
     runs: d.runs.map((r) => ({
       run: r.run,
-      yates: r.yates,
+      yates: r.standardOrder,
       replicate: r.replicate,
       block: r.block,
       kind: r.kind,
@@ -449,7 +449,7 @@ export function designText(d: Design): string {
   const header = ['Run', 'Std', 'Rep', 'Block', 'Kind', ...d.factors.map((f) => f.name)];
   const rows = d.runs.map((r) => [
     String(r.run),
-    r.yates === null ? '-' : String(r.yates),
+    r.standardOrder === null ? '-' : String(r.standardOrder),
     String(r.replicate),
     String(r.block),
     r.kind,

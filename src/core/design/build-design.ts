@@ -158,9 +158,9 @@ export function buildDesign(spec: DesignSpec): Design {
   // Factorial points of one replicate, then center runs spread over its blocks.
   const first = (pbPoints ?? fractionalFactorial(k, generators)).map((p) => ({ ...p, half: 0 }));
   const points: Point[] = fold === null ? first : [...first, ...foldPoints(first, fold).map((p) => ({ ...p, half: 1 }))];
-  type Draft = { yates: number | null; replicate: number; block: number; kind: 'factorial' | 'center'; coded: readonly number[] };
+  type Draft = { standardOrder: number | null; replicate: number; block: number; kind: 'factorial' | 'center'; coded: readonly number[] };
   const perReplicate: Omit<Draft, 'replicate'>[] = points.map((p) => ({
-    yates: p.yates,
+    standardOrder: p.standardOrder,
     block: blocking.generators.length > 0 || foldWord !== null ? blockOf(p.coded, blocking.generators) + p.half * 2 ** blocking.generators.length : 0,
     kind: 'factorial',
     coded: p.coded,
@@ -168,7 +168,7 @@ export function buildDesign(spec: DesignSpec): Design {
   if (centerRuns > 0) {
     const set = centerSet(factors);
     spreadOverBlocks(centerRuns, blocksPerReplicate).forEach((n, b) => {
-      for (let i = 0; i < n; i++) for (const row of set) perReplicate.push({ yates: null, block: b, kind: 'center', coded: row });
+      for (let i = 0; i < n; i++) for (const row of set) perReplicate.push({ standardOrder: null, block: b, kind: 'center', coded: row });
     });
   }
   const drafts: Draft[] = [];
@@ -179,7 +179,7 @@ export function buildDesign(spec: DesignSpec): Design {
   }
   const seed = randomise ? spec.seed ?? drawSeed() : null;
   const ordered = orderRuns(drafts, { seed, sortBy });
-  const runs: DesignRun[] = ordered.map((d, i) => ({ run: i + 1, yates: d.yates, replicate: d.replicate, block: d.block, originBlock: d.block, kind: d.kind, coded: [...d.coded] }));
+  const runs: DesignRun[] = ordered.map((d, i) => ({ run: i + 1, standardOrder: d.standardOrder, replicate: d.replicate, block: d.block, originBlock: d.block, kind: d.kind, coded: [...d.coded] }));
 
   // What the design can and cannot separate.
   const res = resolutionOf(relation);

@@ -36,7 +36,7 @@ export interface DesignRun {
   /** Position in the run order, from 1. */
   readonly run: number;
   /** Standard-order (Yates) index of its factorial point within one replicate, from 1; null for a center run. */
-  readonly yates: number | null;
+  readonly standardOrder: number | null;
   /** Replicate of the whole design, from 1. */
   readonly replicate: number;
   /** Block, from 1 (1 when unblocked). */

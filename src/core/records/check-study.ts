@@ -90,12 +90,12 @@ function design(v: unknown, path: string, nFactors: number): StoredDesign {
   const runs = list(o.runs, `${path}.runs`, MAX_PLANNED_RUNS).map((r, i): DesignRun => {
     const p = `${path}.runs[${i}]`;
     const ro = obj(r, p);
-    only(ro, p, ['run', 'yates', 'replicate', 'block', 'originBlock', 'kind', 'coded']);
+    only(ro, p, ['run', 'standardOrder', 'replicate', 'block', 'originBlock', 'kind', 'coded']);
     const coded = list(ro.coded, `${p}.coded`).map((c, j) => finite(c, `${p}.coded[${j}]`));
     if (coded.length !== nFactors) fail(`${p}.coded`, `one coded setting per factor (${nFactors})`, `${coded.length} settings`);
     return {
       run: int(ro.run, `${p}.run`, 1, MAX_PLANNED_RUNS),
-      yates: ro.yates === null ? null : int(ro.yates, `${p}.yates`, 1),
+      standardOrder: ro.standardOrder === null ? null : int(ro.standardOrder, `${p}.standardOrder`, 1),
       replicate: int(ro.replicate, `${p}.replicate`, 1),
       block: int(ro.block, `${p}.block`, 1),
       originBlock: int(ro.originBlock, `${p}.originBlock`, 1),

@@ -300,7 +300,7 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
     seenPoints.set(key, replicate);
     designRuns.push({
       run: i + 1,
-      yates: corner ? 1 + coded.reduce((s, v, j) => s + (v > 0 ? 2 ** j : 0), 0) : null,
+      standardOrder: corner ? 1 + coded.reduce((s, v, j) => s + (v > 0 ? 2 ** j : 0), 0) : null,
       replicate,
       block,
       originBlock: block,

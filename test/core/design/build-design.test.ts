@@ -62,7 +62,7 @@ describe('buildDesign: examples from the literature', () => {
 
   it('keeps standard (Yates) order when asked, with a note on why randomising matters', () => {
     const d = buildDesign({ factors: numeric(3), randomise: false });
-    expect(d.runs.map((r) => r.yates)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
+    expect(d.runs.map((r) => r.standardOrder)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
     expect(d.runs[1].coded).toEqual([1, -1, -1]);
     expect(d.seed).toBeNull();
     expect(d.notes.join(' ')).toMatch(/drift/);
@@ -83,7 +83,7 @@ describe('buildDesign: examples from the literature', () => {
     });
     const centers = d.runs.filter((r) => r.kind === 'center');
     expect(centers.length).toBe(6);
-    expect(centers.every((r) => r.yates === null && r.coded.slice(0, 3).every((x) => x === 0))).toBe(true);
+    expect(centers.every((r) => r.standardOrder === null && r.coded.slice(0, 3).every((x) => x === 0))).toBe(true);
     expect(centers.filter((r) => r.block === 1).length).toBe(4);
     expect(d.notes.join(' ')).toMatch(/Powder has no middle, so each center run is repeated at every combination of its levels/);
     expect(d.notes.join(' ')).toMatch(/do not divide evenly/);
@@ -94,7 +94,7 @@ describe('buildDesign: examples from the literature', () => {
     expect(d.runs.length).toBe(20);
     expect(new Set(d.runs.map((r) => r.block))).toEqual(new Set([1, 2, 3, 4]));
     for (const rep of [1, 2]) {
-      expect(d.runs.filter((r) => r.replicate === rep && r.kind === 'factorial').map((r) => r.yates).sort((a, b) => a! - b!)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
+      expect(d.runs.filter((r) => r.replicate === rep && r.kind === 'factorial').map((r) => r.standardOrder).sort((a, b) => a! - b!)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
     }
   });
 

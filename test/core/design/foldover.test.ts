@@ -36,7 +36,7 @@ describe('foldPoints', () => {
   it('switches signs and numbers the new points after the first fraction', () => {
     const pts = fractionalFactorial(3, parseGenerators(['C=AB'], numericFactors(3)));
     const all = foldPoints(pts, 'all');
-    expect(all.map((p) => p.yates)).toEqual([5, 6, 7, 8]);
+    expect(all.map((p) => p.standardOrder)).toEqual([5, 6, 7, 8]);
     expect(all[0].coded).toEqual(pts[0].coded.map((x) => -x));
     expect(foldPoints(pts, 0)[1].coded).toEqual([-1, -1, -1]);
   });

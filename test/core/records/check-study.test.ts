@@ -25,11 +25,11 @@ function study(): any {
     design: {
       // Standard order of a 2^2 (Montgomery, 8th ed., section 6.2): (1), a, b, ab; then a center run.
       runs: [
-        { run: 1, yates: 1, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, -1] },
-        { run: 2, yates: 2, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, -1] },
-        { run: 3, yates: 3, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, 1] },
-        { run: 4, yates: 4, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, 1] },
-        { run: 5, yates: null, replicate: 1, block: 1, originBlock: 1, kind: 'center', coded: [0, -1] },
+        { run: 1, standardOrder: 1, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, -1] },
+        { run: 2, standardOrder: 2, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, -1] },
+        { run: 3, standardOrder: 3, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, 1] },
+        { run: 4, standardOrder: 4, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, 1] },
+        { run: 5, standardOrder: null, replicate: 1, block: 1, originBlock: 1, kind: 'center', coded: [0, -1] },
       ],
       generators: [],
       definingRelation: [],
