@@ -64,7 +64,7 @@ function summarise(r: Omit<ImportReport, 'summary'>): string {
   if (r.studiesAdded + r.revisionsAdded === 0) return 'Nothing new: everything in the file was already here.';
   const parts = [`${r.studiesAdded} new ${r.studiesAdded === 1 ? 'study' : 'studies'}`, `${r.runsAdded} new logged ${r.runsAdded === 1 ? 'run' : 'runs'}`, `${r.revisionsAdded} new ${r.revisionsAdded === 1 ? 'revision' : 'revisions'}`];
   const c = r.conflicts.length;
-  return `Imported ${parts.join(', ')}.` + (c > 0 ? ` ${c} ${c === 1 ? 'run was' : 'runs were'} changed on two devices; both versions are kept in ${c === 1 ? 'its' : 'their'} history.` : '');
+  return `Imported ${parts.join(', ')}.` + (c > 0 ? ` ${c} ${c === 1 ? 'run was' : 'runs were'} changed on two devices; both revisions are kept in ${c === 1 ? 'its' : 'their'} history.` : '');
 }
 
 /** Merges a checked backup into the store in one transaction. */

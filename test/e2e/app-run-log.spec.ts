@@ -111,7 +111,7 @@ test('editing a logged run adds a version, and excluding it needs a reason', asy
   await page.getByRole('button', { name: 'Save run 1' }).click();
   await expect(page.getByRole('status')).toHaveText('Saved ✓ run 1');
   await page.reload();
-  await expect(page.getByText('2 versions kept')).toBeVisible();
+  await expect(page.getByText('2 revisions kept')).toBeVisible();
   await page.getByRole('link', { name: 'Run sheet' }).click();
   await expect(run1).toContainText('Excluded');
   await expect(run1).toContainText('panel dropped (test)');
