@@ -104,7 +104,7 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     runs: diag.runs,
     halfNormal: lenthOut.halfNormal,
     verdicts,
-    warnings: [...data.notes, ...verdicts.filter(isWarning).map(verdictText)],
+    warnings: [...data.messages, ...verdicts.filter(isWarning).map(verdictText)],
     model,
   };
 }

@@ -25,5 +25,5 @@ export interface ResponseData {
   /** Run labels for reports (run numbers), aligned with the rows. */
   readonly labels: readonly string[];
   /** What was skipped and why ("2 excluded runs skipped"), for the report. */
-  readonly notes: readonly string[];
+  readonly messages: readonly string[];
 }

@@ -1,7 +1,7 @@
 /**
  * From a study's logged runs to the data the analysis takes for one response: the coded ACTUAL
  * settings of every run used, and the mean of its readings. Excluded runs and runs without a
- * reading of the response are skipped and counted in the notes. Several readings of one run are
+ * reading of the response are skipped and counted in the messages. Several readings of one run are
  * repeat measurements: their mean is the run's value, and they are never counted as replicates
  * (true replicates are separate runs of the plan).
  * Example: a run with readings [10, 12] contributes one row with y = 11.
@@ -62,11 +62,11 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     seen.set(run.plannedRun, k);
     labels.push(k === 1 ? String(run.plannedRun) : `${run.plannedRun}#${k}`);
   }
-  const notes: string[] = [];
-  if (excluded > 0) notes.push(`${plural(excluded, 'excluded run', 'excluded runs')} skipped`);
-  if (missing > 0) notes.push(`${plural(missing, 'run', 'runs')} without a value for ${response.name} skipped`);
+  const messages: string[] = [];
+  if (excluded > 0) messages.push(`${plural(excluded, 'excluded run', 'excluded runs')} skipped`);
+  if (missing > 0) messages.push(`${plural(missing, 'run', 'runs')} without a value for ${response.name} skipped`);
   if (repeated > 0) {
-    notes.push(`${plural(repeated, 'run has', 'runs have')} several readings of ${response.name}: each run's mean is used, and repeat readings are not counted as replicates`);
+    messages.push(`${plural(repeated, 'run has', 'runs have')} several readings of ${response.name}: each run's mean is used, and repeat readings are not counted as replicates`);
   }
   const blocked = blocks.some((b) => b !== 1);
   return {
@@ -78,6 +78,6 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     blocks: blocked ? blocks : null,
     points,
     labels,
-    notes,
+    messages,
   };
 }

@@ -29,7 +29,7 @@ describe('estimateTerms', () => {
   it('names what an estimate carries when the runs cannot separate terms (C = AB in a 2^(3-1))', () => {
     const factors = defineFactors(['Speed', 'Feed', 'Depth'].map((name) => ({ kind: 'numeric' as const, name, low: 0, high: 1 })));
     const coded = [[-1, -1, 1], [1, -1, -1], [-1, 1, -1], [1, 1, 1], [0, 0, 0]];
-    const data = { factors, response: 'Finish', coded, y: [10, 14, 11, 19, 13], blocks: null, labels: ['1', '2', '3', '4', '5'], notes: [] };
+    const data = { factors, response: 'Finish', coded, y: [10, 14, 11, 19, 13], blocks: null, labels: ['1', '2', '3', '4', '5'], messages: [] };
     const f = chooseFit(data, { terms: parseTerms('A + B + C + A:B', factors) });
     const est = estimateTerms(f.fit, factors, f.blockLevels, 0.05);
     expect(est.aliased.map((a) => a.letters)).toEqual(['AB']);

@@ -173,7 +173,7 @@ describe('predict: a term the runs cannot separate is labelled with what it esti
     ]);
     const coded = [[-1, -1, 1], [1, -1, -1], [-1, 1, -1], [1, 1, 1], [0, 0, 0]];
     const a = analyze(
-      { factors, response: 'Finish', coded, y: [10, 14, 11, 19, 13], blocks: null, labels: ['1', '2', '3', '4', '5'], notes: [] },
+      { factors, response: 'Finish', coded, y: [10, 14, 11, 19, 13], blocks: null, labels: ['1', '2', '3', '4', '5'], messages: [] },
       { terms: parseTerms('A + B + C + A:B', factors) },
     );
     const p = predict(a.model, { Speed: 20, Feed: 2, Depth: 1 });

@@ -103,7 +103,7 @@ describe('CSV of runs made elsewhere: names and numbers the other commands can u
   it('reads a European export (semicolons, decimal commas) and records that it did', () => {
     const eu = CSV.replaceAll(',', ';').replace(/(\d)\.(\d)/g, '$1,$2').replace('"flash on edge; trimmed"', '"flash on edge, trimmed"');
     const ins = inspectRunsCsv(eu);
-    expect(ins.notes).toEqual(['Read as a file separated by semicolons with decimal commas in the column "Shrinkage (%)"']);
+    expect(ins.messages).toEqual(['Read as a file separated by semicolons with decimal commas in the column "Shrinkage (%)"']);
     const mapped = mapRunsCsv(eu, { ...ins.suggestion, title: 'x', responses: [{ column: 'Shrinkage (%)', goal: 'minimize' }] });
     const ref = mapRunsCsv(CSV, { ...inspectRunsCsv(CSV).suggestion, title: 'x', responses: [{ column: 'Shrinkage (%)', goal: 'minimize' }] });
     expect(mapped.runs).toEqual(ref.runs);
