@@ -45,7 +45,7 @@ export function analysisText(a: Analysis): string {
       ]),
   ];
   out.push(table(head, rows));
-  if (a.blocks) out.push(`  block effects (sum to zero): ${a.blocks.map((b) => `block ${b.block} ${num(b.effect)}`).join(', ')}`);
+  if (a.blocks) out.push(`  block offsets (sum to zero): ${a.blocks.map((b) => `block ${b.block} ${num(b.offset)}`).join(', ')}`);
   out.push('');
   out.push('How well the model fits');
   out.push(`  noise (residual SD)               ${num(a.sigma)}   on ${a.df.residual} residual df`);
