@@ -60,7 +60,7 @@ export interface ImportReport {
   readonly summary: string;
 }
 
-function summarise(r: Omit<ImportReport, 'summary'>): string {
+function summarize(r: Omit<ImportReport, 'summary'>): string {
   if (r.studiesAdded + r.revisionsAdded === 0) return 'Nothing new: everything in the file was already here.';
   const parts = [`${r.studiesAdded} new ${r.studiesAdded === 1 ? 'study' : 'studies'}`, `${r.runsAdded} new logged ${r.runsAdded === 1 ? 'run' : 'runs'}`, `${r.revisionsAdded} new ${r.revisionsAdded === 1 ? 'revision' : 'revisions'}`];
   const c = r.conflicts.length;
@@ -99,7 +99,7 @@ export async function mergeBackup(store: Store, backup: Pick<Backup, 'payload'>)
         revisionsUnchanged: plan.unchangedRevisions,
         conflicts: plan.conflicts,
       };
-      return { ...report, summary: summarise(report) };
+      return { ...report, summary: summarize(report) };
     }),
   );
 }

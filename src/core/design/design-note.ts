@@ -20,8 +20,8 @@ export type BlockOrigin =
   | { readonly kind: 'search'; readonly stopped: boolean; readonly budget: number };
 
 export type DesignNote =
-  /** Generators from the minimum aberration catalogue and its source. */
-  | { readonly kind: 'catalogue-generators'; readonly source: string }
+  /** Generators from the minimum aberration catalog and its source. */
+  | { readonly kind: 'catalog-generators'; readonly source: string }
   | { readonly kind: 'block-words'; readonly words: readonly string[]; readonly origin: BlockOrigin }
   | {
       readonly kind: 'foldover';

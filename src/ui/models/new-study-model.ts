@@ -1,12 +1,12 @@
 /**
  * Planning a new study on the phone: title and purpose, factors, responses and the design
- * (full factorial or a catalogue fraction, center runs, replicates, blocks, run order and seed).
+ * (full factorial or a catalog fraction, center runs, replicates, blocks, run order and seed).
  * The plan is built by the core's buildDesign on every change, so the preview shows exactly what
  * "Create study" will store. A wrong entry gets a message and nothing is created.
  */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { buildDesign, type DesignSpec } from '../../core/design/build-design.ts';
-import { catalogueChoices } from '../../core/design/catalogue-choices.ts';
+import { catalogChoices } from '../../core/design/catalog-choices.ts';
 import { romanResolution } from '../../core/design/defining-relation.ts';
 import { MAX_DESIGN_FACTORS } from '../../core/design/max-design-factors.ts';
 import type { Design } from '../../core/design/design.ts';
@@ -41,7 +41,7 @@ export interface ResponseDraft {
   readonly target: string;
 }
 
-/** 'full' or a catalogue fraction such as '1/2'. */
+/** 'full' or a catalog fraction such as '1/2'. */
 export type FractionChoice = string;
 
 export interface FractionOption {
@@ -100,10 +100,10 @@ function wholeCount(text: string, what: string, min: number): number {
   return Number(s);
 }
 
-/** What the form offers for k factors: the full factorial and each catalogue fraction, with runs and resolution (from the core's catalogueChoices). */
+/** What the form offers for k factors: the full factorial and each catalog fraction, with runs and resolution (from the core's catalogChoices). */
 export function fractionOptions(k: number): FractionOption[] {
   if (k < 1) return [{ value: 'full', runs: 1, resolution: null, label: 'Full factorial · 1 runs' }];
-  return catalogueChoices(Math.min(k, MAX_DESIGN_FACTORS)).map((c) => {
+  return catalogChoices(Math.min(k, MAX_DESIGN_FACTORS)).map((c) => {
     const res = c.resolution === null ? null : romanResolution(c.resolution);
     const label = c.fraction === 'full' ? `Full factorial · ${c.runs} runs` : `${c.fraction} · ${c.runs} runs${res ? ` · resolution ${res}` : ''}`;
     return { value: c.fraction, runs: c.runs, resolution: res, label };
@@ -121,7 +121,7 @@ export const NewStudyModel = createModel((store: Store) => {
   const centerRuns = signal('0');
   const replicates = signal('1');
   const blocks = signal<number>(1);
-  const randomise = signal(true);
+  const randomize = signal(true);
   const seedText = signal('');
   /** Drawn once for a blank seed box, so the preview and the created study share one run order. */
   const drawnSeed = signal(drawSeed());
@@ -134,7 +134,7 @@ export const NewStudyModel = createModel((store: Store) => {
 
   /** The seed the plan uses: the typed one, else the drawn one; null in standard order. */
   const seed = computed<number | null>(() => {
-    if (!randomise.value) return null;
+    if (!randomize.value) return null;
     const s = seedText.value.trim();
     if (s === '') return drawnSeed.value;
     return /^\d+$/.test(s) && Number.isSafeInteger(Number(s)) ? Number(s) : Number.NaN;
@@ -157,7 +157,7 @@ export const NewStudyModel = createModel((store: Store) => {
       centerRuns: wholeCount(centerRuns.value, 'Center runs', 0),
       replicates: wholeCount(replicates.value, 'Replicates', 1),
       blocks: blocks.value,
-      randomise: randomise.value,
+      randomize: randomize.value,
       ...(s !== null ? { seed: s } : {}),
     };
   }
@@ -206,7 +206,7 @@ export const NewStudyModel = createModel((store: Store) => {
     centerRuns: centerRuns as ReadonlySignal<string>,
     replicates: replicates as ReadonlySignal<string>,
     blocks: blocks as ReadonlySignal<number>,
-    randomise: randomise as ReadonlySignal<boolean>,
+    randomize: randomize as ReadonlySignal<boolean>,
     seedText: seedText as ReadonlySignal<string>,
     problem: problem as ReadonlySignal<Problem | null>,
     creating: creating as ReadonlySignal<boolean>,
@@ -214,11 +214,11 @@ export const NewStudyModel = createModel((store: Store) => {
     options,
     seed,
     /** True when the seed in use was drawn here (the box is blank). */
-    seedDrawn: computed(() => randomise.value && seedText.value.trim() === ''),
+    seedDrawn: computed(() => randomize.value && seedText.value.trim() === ''),
     factorMessages,
     responseProblem,
     preview,
-    /** True when the chosen fraction is one the catalogue offers for this many factors. */
+    /** True when the chosen fraction is one the catalog offers for this many factors. */
     fractionOffered: computed(() => options.value.some((o) => o.value === fraction.value)),
 
     setTitle(v: string) {
@@ -264,8 +264,8 @@ export const NewStudyModel = createModel((store: Store) => {
       blocks.value = n;
       edit();
     },
-    setRandomise(on: boolean) {
-      randomise.value = on;
+    setRandomize(on: boolean) {
+      randomize.value = on;
       edit();
     },
     setSeedText(v: string) {

@@ -44,7 +44,7 @@ export type AnalysisResult =
 /** The analysis of one response with the chosen settings, or the reason there is none. */
 export function analyseResponse(d: StudyData, responseIndex: number, settings: ResponseSettings): AnalysisResult {
   const response = d.study.responses[responseIndex];
-  if (!response) return { ok: false, message: 'This study has no response to analyse.' };
+  if (!response) return { ok: false, message: 'This study has no response to analyze.' };
   try {
     const data = responseDataFromRuns(d.study, d.runs, response.name);
     const k = d.study.factors.length;

@@ -22,7 +22,7 @@ describe('analysisJson', () => {
     const d = fixtureData('montgomery-8e-ex6-1-plasma-etch-2x3.csv', { factors: ['Gap', 'Flow', 'Power'], response: 'Etch rate' });
     const blocks = d.y.map((_, i) => (i % 2) + 1); // the file lists the two replicates of each treatment in turn
     const out = JSON.parse(JSON.stringify(analysisJson(analyze({ ...d, blocks }))));
-    const mean = (xs: number[]) => xs.reduce((s, x) => s + x, 0) / xs.length;
+    const mean = (xs: readonly number[]) => xs.reduce((s, x) => s + x, 0) / xs.length;
     const grand = mean(d.y);
     expect(out.blocks.map((b: { block: number }) => b.block)).toEqual([1, 2]);
     for (const b of out.blocks) {

@@ -120,7 +120,7 @@ describe('Plackett-Burman plans from buildDesign', () => {
   });
 
   it('takes up to 23 factors in 24 runs, in standard order when asked', () => {
-    const d = buildDesign({ factors: numeric(23), plackettBurman: 24, randomise: false });
+    const d = buildDesign({ factors: numeric(23), plackettBurman: 24, randomize: false });
     expect(d.runs.map((r) => r.standardOrder)).toEqual(Array.from({ length: 24 }, (_, i) => i + 1));
     expect(d.summary).toMatch(/for 23 factors: .*interactions \(correlations up to/);
     expect(d.summary).not.toMatch(/left unused/);

@@ -164,7 +164,7 @@ describe('predict: residual df 0, blocks and curvature notes', () => {
   });
 });
 
-describe('predict: a term the runs cannot separate is labelled with what it estimates', () => {
+describe('predict: a term the runs cannot separate is labeled with what it estimates', () => {
   it('C carries C + AB in a half fraction with C = AB (defining relation I = ABC; Montgomery 8th ed., section 8.2)', () => {
     const factors = defineFactors([
       { kind: 'numeric', name: 'Speed', low: 10, high: 20 },

@@ -11,8 +11,8 @@ const CSV = [
   'Run,Melt temperature (°C),Mould,Hold time (s),Shrinkage (%),Notes',
   '1,220,steel,4,1.82,',
   '2,250,steel,4,1.61,"flash on edge, trimmed"',
-  '3,220,aluminium,8,1.75 1.77,',
-  '4,250,aluminium,8,1.50,',
+  '3,220,aluminum,8,1.75 1.77,',
+  '4,250,aluminum,8,1.50,',
   '5,235,steel,6,1.69,center',
 ].join('\r\n');
 
@@ -41,15 +41,15 @@ describe('CSV of runs made elsewhere', () => {
     const store = await freshStore();
     const { study, runs } = await importRunsCsv(store, mapped);
     expect(runs).toBe(5);
-    expect((await listRuns(store, study.id)).map((r) => r.actual)).toEqual([[220, 'steel', 4], [250, 'steel', 4], [220, 'aluminium', 8], [250, 'aluminium', 8], [235, 'steel', 6]]);
+    expect((await listRuns(store, study.id)).map((r) => r.actual)).toEqual([[220, 'steel', 4], [250, 'steel', 4], [220, 'aluminum', 8], [250, 'aluminum', 8], [235, 'steel', 6]]);
   });
 
   it('names row and column of a bad cell, and makes nothing', async () => {
     const bad = CSV.replace('1.50', '"1,50"');
     const mapping = { ...inspectRunsCsv(CSV).suggestion, title: 'x' };
     expect(() => mapRunsCsv(bad, mapping)).toThrow(/Row 5, column 5 \("Shrinkage \(%\)"\): Shrinkage: reading 1 needs a number, got "1,50"/);
-    expect(() => mapRunsCsv(CSV.replace('aluminium,8,1.50', 'brass,8,1.50'), mapping)).toThrow(/Row \d, column 3 \("Mould"\): Mould needs numbers in every row, or exactly two level labels, got 3 labels/);
-    expect(() => mapRunsCsv(CSV.replace('250,aluminium', 'hot,aluminium'), mapping)).toThrow(/Row 5, column 2 \("Melt temperature \(°C\)"\)/);
+    expect(() => mapRunsCsv(CSV.replace('aluminum,8,1.50', 'brass,8,1.50'), mapping)).toThrow(/Row \d, column 3 \("Mould"\): Mould needs numbers in every row, or exactly two level labels, got 3 labels/);
+    expect(() => mapRunsCsv(CSV.replace('250,aluminum', 'hot,aluminum'), mapping)).toThrow(/Row 5, column 2 \("Melt temperature \(°C\)"\)/);
     expect(() => mapRunsCsv(CSV, { ...mapping, factors: [...mapping.factors, { column: 'Notes' }] })).toThrow(/mapped twice/);
     expect(() => mapRunsCsv(CSV, { ...mapping, factors: [{ column: 'Pressure' }] })).toThrow(/The factor column "Pressure" is not in the file/);
     expect(() => mapRunsCsv('a,b\r\n1,2,3\r\n', mapping)).toThrow(/Row 2 of the CSV file has 3 cells but the header has 2 columns/);
