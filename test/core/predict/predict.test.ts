@@ -101,7 +101,7 @@ describe('predict with interactions and a categorical factor (invented data)', (
   });
 
   it('refuses a level the factor does not have, a value between its levels, and a missing categorical factor', () => {
-    expect(() => predict(glossModel, { A: 185, B: 'silk' })).toThrow(/Powder has the levels "matte" and "gloss", got "silk"/);
+    expect(() => predict(glossModel, { A: 185, B: 'silk' })).toThrow(/Powder needs "matte" or "gloss", got "silk"/);
     expect(() => predict(glossModel, { A: 185, B: 0.5 })).toThrow(/no setting between them/);
     expect(() => predict(glossModel, { A: 185 })).toThrow(/Powder is categorical and has no center/);
   });
