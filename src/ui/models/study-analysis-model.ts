@@ -42,7 +42,7 @@ export type AnalysisResult =
   | { readonly ok: false; readonly message: string };
 
 /** The analysis of one response with the chosen settings, or the reason there is none. */
-export function analyseResponse(d: StudyData, responseIndex: number, settings: ResponseSettings): AnalysisResult {
+export function analyzeResponse(d: StudyData, responseIndex: number, settings: ResponseSettings): AnalysisResult {
   const response = d.study.responses[responseIndex];
   if (!response) return { ok: false, message: 'This study has no response to analyze.' };
   try {
@@ -91,7 +91,7 @@ export const StudyAnalysisModel = createModel((store: Store, studyId: string) =>
     if (!d) return [];
     return d.study.responses.map((response, index) => {
       const s = settingsOf(response.name);
-      return { index, response, settings: s, result: computed(() => analyseResponse(d, index, s.value)) };
+      return { index, response, settings: s, result: computed(() => analyzeResponse(d, index, s.value)) };
     });
   });
 
