@@ -158,8 +158,8 @@ export function buildDesign(spec: DesignSpec): Design {
   // Factorial points of one replicate, then center runs spread over its blocks.
   const first = (pbPoints ?? fractionalFactorial(k, generators)).map((p) => ({ ...p, half: 0 }));
   const points: Point[] = fold === null ? first : [...first, ...foldPoints(first, fold).map((p) => ({ ...p, half: 1 }))];
-  type Draft = { standardOrder: number | null; replicate: number; block: number; kind: 'factorial' | 'center'; coded: readonly number[] };
-  const perReplicate: Omit<Draft, 'replicate'>[] = points.map((p) => ({
+  type UnorderedRun = { standardOrder: number | null; replicate: number; block: number; kind: 'factorial' | 'center'; coded: readonly number[] };
+  const perReplicate: Omit<UnorderedRun, 'replicate'>[] = points.map((p) => ({
     standardOrder: p.standardOrder,
     block: blocking.generators.length > 0 || foldWord !== null ? blockOf(p.coded, blocking.generators) + p.half * 2 ** blocking.generators.length : 0,
     kind: 'factorial',
@@ -171,14 +171,14 @@ export function buildDesign(spec: DesignSpec): Design {
       for (let i = 0; i < n; i++) for (const row of set) perReplicate.push({ standardOrder: null, block: b, kind: 'center', coded: row });
     });
   }
-  const drafts: Draft[] = [];
+  const unordered: UnorderedRun[] = [];
   for (let r = 1; r <= replicates; r++) {
     for (const d of perReplicate) {
-      drafts.push({ ...d, replicate: r, block: blocksPerReplicate > 1 ? (r - 1) * blocksPerReplicate + d.block + 1 : 1 });
+      unordered.push({ ...d, replicate: r, block: blocksPerReplicate > 1 ? (r - 1) * blocksPerReplicate + d.block + 1 : 1 });
     }
   }
   const seed = randomize ? spec.seed ?? drawSeed() : null;
-  const ordered = orderRuns(drafts, { seed, sortBy });
+  const ordered = orderRuns(unordered, { seed, sortBy });
   const runs: DesignRun[] = ordered.map((d, i) => ({ run: i + 1, standardOrder: d.standardOrder, replicate: d.replicate, block: d.block, originBlock: d.block, kind: d.kind, coded: [...d.coded] }));
 
   // What the design can and cannot separate.
