@@ -26,7 +26,7 @@ const commands: Record<string, () => Promise<Command>> = {
 async function usage(): Promise<string> {
   const rows = await Promise.all(Object.entries(commands).map(async ([name, load]) => `  ${name.padEnd(9)}${(await load()).summary}`));
   return [
-    'Trialbook command line: plan and analyse two-level experiments, and read exported files.',
+    'Trialbook command line: plan and analyze two-level experiments, and read exported files.',
     '',
     'Usage: npm run --silent cli -- COMMAND [options]   (COMMAND --help for its options)',
     '',

@@ -34,7 +34,7 @@ export const modelOptionUsage = `  FILE                 a CSV with a header row 
                        A^2 is the square of a numeric factor, quadratic the full second-order model)
   --order N            or: all terms up to order N (default: main effects and two-factor interactions)
   --block COLUMN       a column holding each run's block, fitted as a fixed effect
-  --study ID-OR-NAME   with a Trialbook backup (.json): the study to analyse; its own factors,
+  --study ID-OR-NAME   with a Trialbook backup (.json): the study to analyze; its own factors,
                        coding and blocks are used. A Trialbook CSV export needs no --factors:
                        its actual settings and coding are read from its columns; excluded runs
                        are skipped and the report says how many
@@ -50,7 +50,7 @@ export interface ModelInput {
 }
 
 export function loadModelInput(positionals: string[], values: Values): ModelInput {
-  if (positionals.length !== 1) throw new InputError(`Give one file to analyse, got ${positionals.length === 0 ? 'none' : positionals.join(', ')}`);
+  if (positionals.length !== 1) throw new InputError(`Give one file to analyze, got ${positionals.length === 0 ? 'none' : positionals.join(', ')}`);
   const [path] = positionals;
   if (!values.response) throw new InputError('Name the response with --response NAME');
   // A .json file is a backup, measured before it is read; other text is sniffed after reading.

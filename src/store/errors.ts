@@ -1,6 +1,6 @@
 /**
  * What goes wrong when writing, told so a person can act: the storage is full, the browser
- * cancelled the write, or the database was closed for an upgrade in another tab. Every such
+ * canceled the write, or the database was closed for an upgrade in another tab. Every such
  * failure leaves nothing half written (each write is one transaction) and keeps the draft.
  */
 import { InputError } from '../core/errors.ts';

@@ -66,7 +66,7 @@ export interface ImportReport {
   readonly summary: string;
 }
 
-function summarise(r: Omit<ImportReport, 'summary'>): string {
+function summarize(r: Omit<ImportReport, 'summary'>): string {
   const n = r.setAside.length;
   const clashes = r.setAside.filter((s) => s.field !== null);
   const named = clashes
@@ -80,7 +80,7 @@ function summarise(r: Omit<ImportReport, 'summary'>): string {
   if (r.studiesAdded + r.revisionsAdded === 0) return (n === 0 ? 'Nothing new: everything in the file was already here.' : 'Nothing new was merged.') + aside;
   const parts = [`${r.studiesAdded} new ${r.studiesAdded === 1 ? 'study' : 'studies'}`, `${r.runsAdded} new logged ${r.runsAdded === 1 ? 'run' : 'runs'}`, `${r.revisionsAdded} new ${r.revisionsAdded === 1 ? 'revision' : 'revisions'}`];
   const c = r.conflicts.length;
-  return `Imported ${parts.join(', ')}.` + (c > 0 ? ` ${c} ${c === 1 ? 'run was' : 'runs were'} changed on two devices; both versions are kept in ${c === 1 ? 'its' : 'their'} history.` : '') + aside;
+  return `Imported ${parts.join(', ')}.` + (c > 0 ? ` ${c} ${c === 1 ? 'run was' : 'runs were'} changed on two devices; both revisions are kept in ${c === 1 ? 'its' : 'their'} history.` : '') + aside;
 }
 
 /**
@@ -125,7 +125,7 @@ export async function mergeBackup(store: Store, backup: Pick<Backup, 'payload'> 
         setAside: plan.setAside,
         setAsideNew,
       };
-      return { ...report, summary: summarise(report) };
+      return { ...report, summary: summarize(report) };
     }),
   );
 }

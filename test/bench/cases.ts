@@ -29,7 +29,7 @@ export function case1(): { data: ResponseData; terms: number[] } {
   const coded = [...full(7), ...full(7), ...Array.from({ length: 4 }, () => Array(7).fill(0))];
   const y = response(coded, rnd);
   return {
-    data: { factors: factors(7), response: 'y', coded, y, blocks: null, labels: coded.map((_, i) => String(i + 1)), notes: [] },
+    data: { factors: factors(7), response: 'y', coded, y, blocks: null, labels: coded.map((_, i) => String(i + 1)), messages: [] },
     terms: termsUpToOrder(7, 7),
   };
 }
@@ -42,7 +42,7 @@ export function case2(): { data: ResponseData; terms: number[] } {
     .map((row) => row.map((v) => v + (rnd() - 0.5) * 0.1));
   const y = response(coded, rnd);
   return {
-    data: { factors: factors(6), response: 'y', coded, y, blocks: null, labels: coded.map((_, i) => String(i + 1)), notes: [] },
+    data: { factors: factors(6), response: 'y', coded, y, blocks: null, labels: coded.map((_, i) => String(i + 1)), messages: [] },
     terms: termsUpToOrder(6, 2),
   };
 }

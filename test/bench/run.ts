@@ -69,7 +69,7 @@ console.log(lines.join('\n'));
     const full = medianMs(() => predict(model, settings), { batch: 2000, rounds: 11, warmup: 5 });
     out3.push(
       `  ${name}${p.diagonal ? ' (diagonal covariance)' : ''}: compiled predictor ${fmtMs(ours)} median;  reference library ${fmtMs(ref)};  ratio ${(ref / ours).toFixed(1)}x;  full predict() with contributions and messages ${fmtMs(full)}` +
-        (sink === 0.5 ? ' ' : ''), // uses the results, so no loop can be optimised away
+        (sink === 0.5 ? ' ' : ''), // uses the results, so no loop can be optimized away
     );
   }
   console.log(out3.join('\n'));

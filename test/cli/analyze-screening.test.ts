@@ -1,6 +1,6 @@
 /**
  * The whole path of a Plackett-Burman study: planned by the core, stored, logged, exported as a
- * backup and analysed by the command line, which fits main effects by default, applies Lenth's
+ * backup and analyzed by the command line, which fits main effects by default, applies Lenth's
  * method over the design's 11 orthogonal columns and warns of partial aliasing. The responses
  * are INVENTED; the expected contrasts are x_j . y / 6 for the 12-run table (Plackett and Burman 1946).
  */
@@ -32,8 +32,8 @@ describe('analyze: a Plackett-Burman study from a backup', () => {
     const yOf = (row: number[], i: number) => 40 + 3 * row[0] - 2 * row[3] + 0.3 * Math.sin(i + 1); // INVENTED
     for (const r of design.runs) {
       const state = await openNewRun(store, study.id, r.run);
-      const row = table[r.yates! - 1];
-      const form = { ...state.form, actual: r.coded.map((c) => String(5 + 5 * c)), readings: [String(yOf(row, r.yates! - 1))], loggedAt: '2024-05-02T09:30:00Z' };
+      const row = table[r.standardOrder! - 1];
+      const form = { ...state.form, actual: r.coded.map((c) => String(5 + 5 * c)), readings: [String(yOf(row, r.standardOrder! - 1))], loggedAt: '2024-05-02T09:30:00Z' };
       await saveRun(store, { ...state, studyId: study.id, values: parseRunForm(study, form) });
     }
     const file = join(mkdtempSync(join(tmpdir(), 'trialbook-')), 'screen.json');

@@ -51,7 +51,7 @@ describe('design command: JSON', () => {
     expect(d.runs.filter((r: any) => r.kind === 'center').every((r: any) => r.yates === null && r.real.A === 1.5)).toBe(true);
     expect(new Set(d.runs.map((r: any) => r.block))).toEqual(new Set([1, 2, 3, 4]));
     const f = await json(['--factor', 'A=1:2', '--factor', 'B=1:2', '--factor', 'C=1:2', '--fraction', '1/2', '--foldover', '--seed', '1']).catch((e) => e);
-    expect(f).toBeInstanceOf(InputError); // a 4-run fraction is outside the catalogue
+    expect(f).toBeInstanceOf(InputError); // a 4-run fraction is outside the catalog
     const g = await json(['--factor', 'A=1:2', '--factor', 'B=1:2', '--factor', 'C=1:2', '--factor', 'D=1:2', '--factor', 'E=1:2', '--fraction', '1/4', '--foldover', 'A', '--seed', '1']);
     expect(g.runs).toHaveLength(16);
     expect(g.definingRelation.every((w: string) => !w.includes('A'))).toBe(true);
@@ -94,7 +94,7 @@ describe('design command: bad input', () => {
     await bad([...SEVEN, '--replicates', '100'], /over the limit of 1024 runs/);
     await bad([...SEVEN, '--fraction', '1/8', '--generators', 'E=ABC'], /not both/);
     await bad([...SEVEN, '--json', '--csv'], /--json or --csv/);
-    await bad([...SEVEN, '--seed', '1', '--standard-order'], /only applies to a randomised order/);
+    await bad([...SEVEN, '--seed', '1', '--standard-order'], /only applies to a randomized order/);
     await bad([...SEVEN, '--block-words', 'ABC'], /--block-words needs --blocks/);
     await bad([...SEVEN, '--seed', 'seven'], /--seed needs a whole number/);
     await bad([...SEVEN, '--bogus'], /Unknown option/);

@@ -26,7 +26,7 @@ function write(name: string, bytes: Uint8Array | string): string {
 }
 
 describe('files from other spreadsheets and locales, through the command line', () => {
-  it('a UTF-16LE file with semicolons and decimal commas analyses as the original, and the report says how it was read', async () => {
+  it('a UTF-16LE file with semicolons and decimal commas analyzes as the original, and the report says how it was read', async () => {
     const utf16 = write('eu-utf16.csv', new Uint8Array(Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from(european, 'utf16le')])));
     expect(readTextFile(utf16)).toBe(european);
     const ref = JSON.parse(await analyze.run([original, ...args]));

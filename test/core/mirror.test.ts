@@ -3,10 +3,17 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { root, sourceFiles, withoutComments } from '../helpers/source-files.ts';
 
-/** Folders whose every module with code has its unit test beside its path (house style, habit 3). */
-const FOLDERS = ['src/core/fit', 'src/core/linalg', 'src/core/text'];
-/** Tested through analyze for now; their own tests come with the change of term representation under way there. */
-const NOT_YET = ['src/core/fit/columns.ts', 'src/core/fit/half-normal.ts', 'src/core/fit/saturated-effects.ts'];
+/** Every module of the core with code has its unit test at the mirrored path (house style, habit 3). */
+const FOLDER = 'src/core';
+/**
+ * The few exceptions, each with its reason. Modules with types only (no exported function,
+ * constant or class) need none and are not listed.
+ */
+const EXCEPTIONS: Record<string, string> = {
+  'src/core/fit/columns.ts': 'tested through analyze and the fit tests; its own test comes with the fit work under way in that folder',
+  'src/core/fit/half-normal.ts': 'tested through analyze (the half-normal points of Lenth\'s step); own test with the fit work under way',
+  'src/core/fit/saturated-effects.ts': 'tested through lenth-step and analyze; own test with the fit work under way',
+};
 
 const hasCode = (text: string) => /\bexport\s+(?:function|const|class)\b/.test(withoutComments(text));
 
@@ -17,13 +24,21 @@ describe('tests mirror the sources', () => {
     expect(hasCode('export function a() {}')).toBe(true);
   });
 
-  for (const folder of FOLDERS) {
-    it(`every module of ${folder} with code has test/${folder.slice(4)}/<name>.test.ts`, () => {
-      const missing = sourceFiles(folder)
-        .filter((f) => hasCode(f.text) && !NOT_YET.includes(f.path))
-        .map((f) => `test/${f.path.slice(4).replace(/\.tsx?$/, '.test.ts')}`)
-        .filter((t) => !existsSync(join(root, t)));
-      expect(missing).toEqual([]);
-    });
-  }
+  it('every module of src/core with code has test/core/<path>/<name>.test.ts', () => {
+    const missing = sourceFiles(FOLDER)
+      .filter((f) => hasCode(f.text) && !(f.path in EXCEPTIONS))
+      .map((f) => `test/${f.path.slice(4).replace(/\.tsx?$/, '.test.ts')}`)
+      .filter((t) => !existsSync(join(root, t)));
+    expect(missing).toEqual([]);
+  });
+
+  it('every exception names a module that exists, has code and still has no test of its own', () => {
+    for (const [path, reason] of Object.entries(EXCEPTIONS)) {
+      expect(reason.length, path).toBeGreaterThan(0);
+      const file = sourceFiles(FOLDER).find((f) => f.path === path);
+      expect(file, path).toBeDefined();
+      expect(hasCode(file!.text), path).toBe(true);
+      expect(existsSync(join(root, `test/${path.slice(4).replace(/\.ts$/, '.test.ts')}`)), `${path} has a test now: drop the exception`).toBe(false);
+    }
+  });
 });

@@ -4,7 +4,7 @@ import { join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 // Closed and honest: the deployed folder holds the app and nothing else; the page's content
-// security policy is in force; a whole working session (plan, log, analyse, predict, export,
+// security policy is in force; a whole working session (plan, log, analyze, predict, export,
 // import) asks nothing of any other origin and breaks no rule of the policy.
 const dist = fileURLToPath(new URL('../../dist/', import.meta.url));
 
@@ -82,10 +82,10 @@ test('the policy is in force: an injected inline script, an inline style and a r
     box.innerHTML = '<p id="styled" style="color: rgb(255, 0, 0)">x</p>';
     document.body.append(box);
     await new Promise((r) => setTimeout(r, 50));
-    return { inline: w.inlineRan === true, colour: getComputedStyle(document.getElementById('styled')!).color };
+    return { inline: w.inlineRan === true, color: getComputedStyle(document.getElementById('styled')!).color };
   });
   expect(ran.inline).toBe(false);
-  expect(ran.colour).not.toBe('rgb(255, 0, 0)');
+  expect(ran.color).not.toBe('rgb(255, 0, 0)');
   // Another origin: the same server under another address, so only the policy can refuse it.
   const other = baseURL!.replace('127.0.0.1', 'localhost');
   const fetched = await page.evaluate((url) => fetch(url).then(() => 'answered', () => 'refused'), `${other}/manifest.webmanifest`);
@@ -111,7 +111,7 @@ async function phoneSession(page: Page) {
   await page.getByRole('textbox', { name: 'Thickness reading' }).fill('70.5');
   await page.getByRole('button', { name: 'Save run 1' }).click();
   await expect(page.getByRole('status')).toHaveText('Saved ✓ run 1');
-  // Analyse the demo study, with its charts.
+  // Analyze the demo study, with its charts.
   await page.goto('/');
   await page.getByRole('link', { name: 'Open Invented demo: powder-coating cure trial' }).click();
   const studyUrl = page.url();
@@ -131,7 +131,7 @@ async function phoneSession(page: Page) {
   await expect(page.getByRole('status')).toContainText('Nothing new');
 }
 
-test('a whole session (plan, log, analyse, predict, export, import) stays on the origin', async ({ page, context, baseURL }) => {
+test('a whole session (plan, log, analyze, predict, export, import) stays on the origin', async ({ page, context, baseURL }) => {
   const origin = new URL(baseURL!).origin;
   const requests: string[] = [];
   // Every request of the context: the page's, and the service worker's own fetches.

@@ -39,7 +39,7 @@ test('the run sheet lists the planned runs in run order with planned settings in
   const runs = page.locator('.run-card');
   await expect(runs).toHaveCount(study.design.runs.length);
   await expect(runs.locator('.run-no')).toHaveText(study.design.runs.map((_, i) => `Run ${i + 1}`));
-  // Run 1 is planned at A low, B low, C high (the demo's randomised order): 160 °C, 2 m/min, 50 g/min.
+  // Run 1 is planned at A low, B low, C high (the demo's randomized order): 160 °C, 2 m/min, 50 g/min.
   const first = runs.first();
   await expect(first.locator('.setting', { hasText: 'Oven temperature' })).toContainText('160 °C');
   await expect(first.locator('.setting', { hasText: 'Line speed' })).toContainText('2 m/min');

@@ -1,7 +1,7 @@
 import { test, expect } from '@playwright/test';
 
 // The built web app manifest has what an installed app needs on Android and iPhone: names,
-// colours, standalone display, start URL inside the scope, PNG icons of the sizes Android asks
+// colors, standalone display, start URL inside the scope, PNG icons of the sizes Android asks
 // for (192 and 512 px, W3C Web App Manifest and Chrome's install criteria; from memory) with a
 // maskable one, and the iPhone's own tags (apple-touch-icon of 180 px, Apple's Safari web
 // content guide; from memory).
@@ -15,7 +15,7 @@ function pngSize(bytes: Buffer): [number, number] {
 
 type Icon = { src: string; sizes: string; type: string; purpose?: string };
 
-test('the manifest names the app, its colours, display, start URL, scope and icons', async ({ page, request, baseURL }) => {
+test('the manifest names the app, its colors, display, start URL, scope and icons', async ({ page, request, baseURL }) => {
   await page.goto('/');
   const href = await page.locator('link[rel="manifest"]').getAttribute('href');
   const manifestUrl = new URL(href!, baseURL).href;

@@ -41,7 +41,7 @@ test('a half fraction of four factors with two center runs is planned, created a
   await page.getByLabel('Response 1 name').fill('Seam strength');
   await page.getByLabel('Response 1 unit').fill('kN');
 
-  // Four factors: full factorial of 16 runs, or the catalogue's 1/2 (8 runs, resolution IV).
+  // Four factors: full factorial of 16 runs, or the catalog's 1/2 (8 runs, resolution IV).
   await expect(preview(page).locator('.plan-runs')).toHaveText('16 runs');
   await expect(preview(page).locator('.plan-resolution')).toContainText('Full factorial');
   await page.getByRole('button', { name: /^1\/2 · 8 runs · resolution IV$/ }).click();

@@ -95,12 +95,12 @@ test('a reading that is not a number is refused with a message and nothing is sa
   await expect(run10(page)).toContainText('Not logged');
 });
 
-test('editing a logged run adds a version, and excluding it needs a reason', async ({ page }) => {
+test('editing a logged run adds a revision, and excluding it needs a reason', async ({ page }) => {
   await openSheet(page);
   const run1 = page.locator('.run-card[data-run="1"]');
   await expect(run1).toContainText('Gloss 73.8 GU');
   await run1.getByRole('link', { name: 'Review run 1' }).click();
-  await expect(page.getByText('1 version kept')).toBeVisible();
+  await expect(page.getByText('1 revision kept')).toBeVisible();
   await expect(page.getByRole('button', { name: 'Save run 1' })).toBeDisabled();
   await page.getByRole('textbox', { name: 'Gloss reading' }).fill('74.4');
   await page.getByRole('button', { name: 'Exclude it' }).click();
@@ -111,7 +111,7 @@ test('editing a logged run adds a version, and excluding it needs a reason', asy
   await page.getByRole('button', { name: 'Save run 1' }).click();
   await expect(page.getByRole('status')).toHaveText('Saved ✓ run 1');
   await page.reload();
-  await expect(page.getByText('2 versions kept')).toBeVisible();
+  await expect(page.getByText('2 revisions kept')).toBeVisible();
   await page.getByRole('link', { name: 'Run sheet' }).click();
   await expect(run1).toContainText('Excluded');
   await expect(run1).toContainText('panel dropped (test)');

@@ -13,7 +13,7 @@ import { openNewRun, saveRun } from '../../src/store/runs.ts';
 import { openStore } from '../../src/store/store.ts';
 
 // A Plackett-Burman study on the phone: made by the app's own store code in Node (an in-memory
-// IndexedDB), exported as a backup, imported through the Export screen, then analysed: main
+// IndexedDB), exported as a backup, imported through the Export screen, then analyzed: main
 // effects by default, Lenth's method over the design's 11 columns, the partial-aliasing note.
 // The responses are INVENTED (Heat and Gap made to matter).
 
@@ -32,9 +32,9 @@ test.beforeAll(async () => {
   studyId = study.id;
   const table = plackettBurmanTable(12);
   for (const r of design.runs) {
-    const row = table[r.yates! - 1];
+    const row = table[r.standardOrder! - 1];
     const state = await openNewRun(store, study.id, r.run);
-    const y = 40 + 3 * row[0] - 2 * row[3] + 0.3 * Math.sin(r.yates!);
+    const y = 40 + 3 * row[0] - 2 * row[3] + 0.3 * Math.sin(r.standardOrder!);
     const form = { ...state.form, actual: r.coded.map((c) => String(5 + 5 * c)), readings: [String(y)], loggedAt: '2024-05-02T09:30:00Z' };
     await saveRun(store, { ...state, studyId: study.id, values: parseRunForm(study, form) });
   }

@@ -41,7 +41,7 @@ test('a save that finds the storage full says so, offers an export, and loses no
     await page.getByRole('button', { name: 'Save run 3' }).click();
     await expect(page.getByRole('status')).toHaveText('Saved ✓ run 3');
     await page.reload();
-    await expect(page.getByText('2 versions kept')).toBeVisible();
+    await expect(page.getByText('2 revisions kept')).toBeVisible();
     await expect(page.getByRole('textbox', { name: 'Gloss reading' })).toHaveValue('75.1');
   } finally {
     await context.close();

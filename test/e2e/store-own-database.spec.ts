@@ -14,7 +14,7 @@ test('the store test page opens its own database, never the app one', async ({ p
   expect(names).toContain(HARNESS_DB);
   expect(names).not.toContain('trialbook');
 
-  // The app, opened next in the same browser, has its own records (the seeded demo only).
+  // The app, opened next in the same browser, has its own records (the demo study only).
   await page.goto('/');
   await expect(page.getByText('Invented demo: powder-coating cure trial')).toBeVisible();
   await expect(page.getByText('Invented demo: test page study')).toHaveCount(0);

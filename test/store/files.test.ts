@@ -82,7 +82,7 @@ describe('backup export and import', () => {
     expect(await dump(ab)).toBe(await dump(ba));
     expect(r.conflicts).toHaveLength(1);
     expect(r.conflicts[0]).toMatchObject({ runId: shared.run.id, plannedRun: 1 });
-    expect(r.summary).toMatch(/1 run was changed on two devices; both versions are kept/);
+    expect(r.summary).toMatch(/1 run was changed on two devices; both revisions are kept/);
     const merged = await getRun(ab, shared.run.id);
     expect(merged.heads).toHaveLength(2);
     expect(merged.revisions).toBe(3);

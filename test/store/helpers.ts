@@ -22,10 +22,10 @@ export function factorialRuns(k: number, replicates = 1, centers = 0): DesignRun
   const runs: DesignRun[] = [];
   for (let rep = 1; rep <= replicates; rep++) {
     for (let i = 0; i < 2 ** k; i++) {
-      runs.push({ run: runs.length + 1, yates: i + 1, replicate: rep, block: 1, originBlock: 1, kind: 'factorial', coded: Array.from({ length: k }, (_, j) => ((i >> j) & 1 ? 1 : -1)) });
+      runs.push({ run: runs.length + 1, standardOrder: i + 1, replicate: rep, block: 1, originBlock: 1, kind: 'factorial', coded: Array.from({ length: k }, (_, j) => ((i >> j) & 1 ? 1 : -1)) });
     }
   }
-  for (let c = 0; c < centers; c++) runs.push({ run: runs.length + 1, yates: null, replicate: 1, block: 1, originBlock: 1, kind: 'center', coded: Array.from({ length: k }, () => 0) });
+  for (let c = 0; c < centers; c++) runs.push({ run: runs.length + 1, standardOrder: null, replicate: 1, block: 1, originBlock: 1, kind: 'center', coded: Array.from({ length: k }, () => 0) });
   return runs;
 }
 

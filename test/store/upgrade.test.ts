@@ -34,7 +34,8 @@ type Row = { [k: string]: unknown };
 /**
  * How a record of an older version looks after the upgrades, written out here rather than taken
  * from the upgrade code (db.ts), so that a wrong upgrade fails. Version 2: a study's planned runs
- * gain originBlock = block, its responses lowerBound = null; every other table is unchanged.
+ * gain originBlock = block and their field yates becomes standardOrder, its responses
+ * lowerBound = null; every other table is unchanged.
  */
 function upgraded(fromVersion: number, table: string, record: Row): Row {
   if (fromVersion >= 2 || table !== 'studies') return record;
@@ -42,7 +43,10 @@ function upgraded(fromVersion: number, table: string, record: Row): Row {
   return {
     ...record,
     responses: (record.responses as Row[]).map((r) => ({ ...r, lowerBound: null })),
-    design: { ...design, runs: design.runs.map((run) => ({ ...run, originBlock: run.block })) },
+    design: {
+      ...design,
+      runs: design.runs.map(({ yates, ...run }) => ({ ...run, standardOrder: yates, originBlock: run.block })),
+    },
   };
 }
 

@@ -48,7 +48,7 @@ export function drawIcon(size, bleed) {
         }
       }
       const o = (j * size + i) * 4;
-      // Colour averaged over covered samples (no dark fringe at transparent edges), alpha = coverage.
+      // Color averaged over covered samples (no dark fringe at transparent edges), alpha = coverage.
       px[o] = a ? Math.round(r / a) : 0;
       px[o + 1] = a ? Math.round(g / a) : 0;
       px[o + 2] = a ? Math.round(b / a) : 0;
@@ -85,7 +85,7 @@ export function encodePng(size, rgba) {
   ihdr.writeUInt32BE(size, 0);
   ihdr.writeUInt32BE(size, 4);
   ihdr[8] = 8; // bit depth
-  ihdr[9] = 6; // colour type: RGBA
+  ihdr[9] = 6; // color type: RGBA
   const raw = Buffer.alloc(size * (size * 4 + 1));
   for (let j = 0; j < size; j++) {
     raw[j * (size * 4 + 1)] = 0; // filter: none

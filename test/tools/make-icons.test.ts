@@ -9,7 +9,7 @@ type Icon = { file: string; size: number; bleed: boolean };
 const icons = ICONS as Icon[];
 const read = (file: string) => readFileSync(fileURLToPath(new URL(`../../public/icons/${file}`, import.meta.url)));
 
-/** Width, height, bit depth, colour type and the unfiltered pixels of an 8-bit RGBA PNG (PNG specification, sections 5 and 11.2.2). */
+/** Width, height, bit depth, color type and the unfiltered pixels of an 8-bit RGBA PNG (PNG specification, sections 5 and 11.2.2). */
 function decode(png: Buffer) {
   expect([...png.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]); // PNG signature
   expect(png.toString('ascii', 12, 16)).toBe('IHDR');
@@ -36,7 +36,7 @@ function decode(png: Buffer) {
     for (let y = 0; y < h; y++) for (let x = 0; x < w; x++) if (raw[y * (w * 4 + 1) + 1 + x * 4 + 3] !== 255) n++;
     return n;
   };
-  return { w, h, depth: png[24], colourType: png[25], px, translucent };
+  return { w, h, depth: png[24], colorType: png[25], px, translucent };
 }
 
 // Redrawing five icons takes about a second on an idle machine; the limit leaves room for a busy one.
@@ -46,8 +46,8 @@ describe('app icons', { timeout: 30_000 }, () => {
       const committed = read(icon.file);
       expect(committed.equals(encodePng(icon.size, drawIcon(icon.size, icon.bleed)))).toBe(true);
       const d = decode(committed);
-      expect([d.w, d.h, d.depth, d.colourType]).toEqual([icon.size, icon.size, 8, 6]);
-      // Navy #1d3a5f background; the centre of the top-left square is #f7f8fa (public/icon.svg).
+      expect([d.w, d.h, d.depth, d.colorType]).toEqual([icon.size, icon.size, 8, 6]);
+      // Navy #1d3a5f background; the center of the top-left square is #f7f8fa (public/icon.svg).
       expect(d.px(Math.floor(icon.size / 2), Math.floor(icon.size * 0.05))).toEqual([0x1d, 0x3a, 0x5f, 255]);
       expect(d.px(Math.floor((icon.size * 176) / 512), Math.floor((icon.size * 176) / 512))).toEqual([0xf7, 0xf8, 0xfa, 255]);
       // A maskable or iPhone icon fills its square (the platform cuts the shape); the plain one has rounded, transparent corners.
@@ -55,7 +55,7 @@ describe('app icons', { timeout: 30_000 }, () => {
     });
   }
 
-  it('the grid stays inside the maskable safe zone (a centred circle of radius 40% of the size: W3C Web App Manifest, "icon masks"; from memory)', () => {
+  it('the grid stays inside the maskable safe zone (a centered circle of radius 40% of the size: W3C Web App Manifest, "icon masks"; from memory)', () => {
     const d = decode(read('maskable-512.png'));
     // Outside the circle of radius 0.4 x 512 = 204.8 px only the navy background shows.
     const off: string[] = [];

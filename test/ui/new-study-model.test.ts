@@ -7,11 +7,11 @@ import { choiceName, fractionOptions, plackettBurmanRunsOf, powerView } from '..
 const three = ['A1', 'B1', 'C1'].map((name) => ({ kind: 'numeric' as const, name, low: 0, high: 1 }));
 
 describe('the planning form: design choices and the power of the plan', () => {
-  it('offers the full factorial, the catalogue fractions, then the Plackett-Burman designs that take k factors', () => {
+  it('offers the full factorial, the catalog fractions, then the Plackett-Burman designs that take k factors', () => {
     expect(fractionOptions(4).map((o) => o.value)).toEqual(['full', '1/2', 'pb-12', 'pb-20', 'pb-24']);
     // 12 factors: a 12-run design has only 11 columns (Plackett and Burman 1946).
     expect(fractionOptions(12).map((o) => o.value).filter((v) => v.startsWith('pb-'))).toEqual(['pb-20', 'pb-24']);
-    // Over the 15 factors of the catalogue only screening designs are left.
+    // Over the 15 factors of the catalog only screening designs are left.
     expect(fractionOptions(19).map((o) => o.value)).toEqual(['pb-20', 'pb-24']);
     expect(plackettBurmanRunsOf('pb-20')).toBe(20);
     expect(plackettBurmanRunsOf('1/2')).toBeNull();

@@ -25,7 +25,7 @@ describe('run history entries', () => {
     expect(describeChanges(study, b, a)).toEqual(['Gloss 88.9 -> 88.6', 'used in the analysis again']);
   });
 
-  it('lists newest first by revision counter, marks current, restores and versions made from the same one', () => {
+  it('lists newest first by revision counter, marks current, restores and revisions made from the same one', () => {
     const a = rev('a', 1, []);
     const b = rev('b', 2, ['a'], { notes: 'tab one', device: 'dev-a' });
     const c = rev('c', 2, ['a'], { notes: 'tab two', device: 'dev-b' });
@@ -37,7 +37,7 @@ describe('run history entries', () => {
     expect(entries.map((e) => e.sharesParent)).toEqual([false, true, true, false]);
     expect(entries[1].changes).toEqual(['notes: "tab two"']);
     expect(entries[3].first).toBe(true);
-    // The restore is described from the latest version it was made from.
+    // The restore is described from the latest revision it was made from.
     expect(entries[0].changes).toEqual(['notes removed']);
   });
 });

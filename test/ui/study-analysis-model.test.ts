@@ -39,7 +39,7 @@ describe('the shared study analysis', () => {
     expect(openStudyAnalysis(await freshStore(), studyId)).not.toBe(shared);
   });
 
-  it('analyses each response as the command line does, with its own model choice', async () => {
+  it('analyzes each response as the command line does, with its own model choice', async () => {
     const { shared } = await opened();
     const [film, gloss] = shared.responses.value;
     const r = film.result.value;

@@ -3,7 +3,7 @@ import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative, resolve, dirname } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
-// House rules for the stylesheets (common practice for a token-based stylesheet): colours live in
+// House rules for the stylesheets (common practice for a token-based stylesheet): colors live in
 // the tokens file only, and no selector sets a property twice, so no later rule patches an earlier one.
 const ui = resolve(dirname(fileURLToPath(import.meta.url)), '../../src/ui');
 
@@ -29,7 +29,7 @@ describe('stylesheets', () => {
     expect(files.map((f) => relative(ui, f))).toContain(join('app', 'tokens.css'));
     expect(files.length).toBeGreaterThan(10);
   });
-  it('name colours only in the tokens file', () => {
+  it('name colors only in the tokens file', () => {
     for (const f of files) {
       if (f.endsWith('tokens.css')) continue;
       const text = readFileSync(f, 'utf8').replace(/\/\*[\s\S]*?\*\//g, '');

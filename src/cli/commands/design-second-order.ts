@@ -67,10 +67,10 @@ export function secondOrderPlan(argv: string[], helpers: DesignHelpers): { plan:
   if (values['central-composite'] && values['box-behnken']) throw new InputError('Choose one design: --central-composite or --box-behnken, not both');
   if (!values.factor || values.factor.length === 0) throw new InputError('design needs --factor options, such as --factor "Temperature (degC)=160:200"; got none');
   if (values.json && values.csv) throw new InputError('Choose one output: --json or --csv, not both');
-  if (values['standard-order'] && values.seed !== undefined) throw new InputError(`--seed ${values.seed} only applies to a randomised order; drop --seed or --standard-order`);
+  if (values['standard-order'] && values.seed !== undefined) throw new InputError(`--seed ${values.seed} only applies to a randomized order; drop --seed or --standard-order`);
   const factors = values.factor.map(helpers.parseFactorOption);
   const seed = values.seed === undefined ? undefined : whole(values.seed, 'seed');
-  const order = { randomise: !values['standard-order'], ...(seed !== undefined ? { seed } : {}) };
+  const order = { randomize: !values['standard-order'], ...(seed !== undefined ? { seed } : {}) };
   const format = values.json ? 'json' : values.csv ? 'csv' : 'text';
   if (values['box-behnken']) {
     for (const o of ['axial-distance', 'blocks', 'fraction'] as const) {

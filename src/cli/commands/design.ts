@@ -28,8 +28,8 @@ import { isSecondOrderRequest, runSecondOrderDesign, SECOND_ORDER_USAGE } from '
 const USAGE = `Usage: npm run --silent cli -- design --factor SPEC [--factor SPEC ...] [options]
 
 Plans a two-level factorial experiment: a full factorial, a fraction from the built-in
-minimum aberration catalogue or from your generators, or a Plackett-Burman screening design;
-with center runs, replicates, blocks, a foldover, and a randomised run order; and, given the
+minimum aberration catalog or from your generators, or a Plackett-Burman screening design;
+with center runs, replicates, blocks, a foldover, and a randomized run order; and, given the
 effect that matters and the noise, the power of the plan.
 
 Factors (in the order given; they get the letters A, B, C, ... skipping I):
@@ -38,7 +38,7 @@ Factors (in the order given; they get the letters A, B, C, ... skipping I):
   --factor "Powder=matte:gloss"           categorical: two named levels, the first coded -1
 
 Design:
-  --fraction 1/2 | 1/4 | ...              minimum aberration fraction from the catalogue (8 to 128 runs)
+  --fraction 1/2 | 1/4 | ...              minimum aberration fraction from the catalog (8 to 128 runs)
   --generators "E=ABCD,F=-ABC"            your generators (letters, or names joined by ':')
   --center-runs N                         center runs per replicate (numeric factors at mid-range)
   --replicates N                          replicates of the whole design
@@ -50,8 +50,8 @@ Design:
                                           factors; fewer factors take its first columns)
 
 Run order:
-  --seed N                                seed of the randomised order (drawn and shown when absent)
-  --standard-order                        keep standard (Yates) order instead of randomising
+  --seed N                                seed of the randomized order (drawn and shown when absent)
+  --standard-order                        keep standard (Yates) order instead of randomizing
   --sort-by FACTOR                        keep a hard-to-change factor sorted within blocks (repeatable)
 
 Power (a two-sided t test of one main effect in the fitted model):
@@ -198,7 +198,7 @@ export function parseDesignArgs(argv: string[]): { spec: DesignSpec; format: 'te
     throw new InputError('--block-words needs --blocks (2, 4 or 8) to say how many blocks');
   }
   if (values['standard-order'] && values.seed !== undefined) {
-    throw new InputError(`--seed ${values.seed} only applies to a randomised order; drop --seed or --standard-order`);
+    throw new InputError(`--seed ${values.seed} only applies to a randomized order; drop --seed or --standard-order`);
   }
   const fold = values.foldover === undefined ? undefined : values.foldover === FOLD_ALL ? 'all' : values.foldover.trim();
   if (fold === '') throw new InputError('--foldover takes a factor name or letter, or nothing for the mirror image');
@@ -235,7 +235,7 @@ export function parseDesignArgs(argv: string[]): { spec: DesignSpec; format: 'te
     ...(values.blocks !== undefined ? { blocks: wholeNumber(values.blocks, 'blocks') } : {}),
     ...(values['block-words'] !== undefined ? { blockWords: splitList(values['block-words']) } : {}),
     ...(fold !== undefined ? { foldover: fold } : {}),
-    randomise: !values['standard-order'],
+    randomize: !values['standard-order'],
     ...(seed !== undefined ? { seed } : {}),
     ...(values['sort-by'] ? { sortBy: values['sort-by'] } : {}),
     ...(pb !== undefined ? { plackettBurman: pb } : {}),
@@ -301,7 +301,7 @@ export function designJson(d: Design): object {
     ),
     runs: d.runs.map((r) => ({
       run: r.run,
-      yates: r.yates,
+      yates: r.standardOrder,
       replicate: r.replicate,
       block: r.block,
       kind: r.kind,
@@ -435,7 +435,7 @@ export function designText(d: Design): string {
       .join(' = '),
   );
   facts.push(['Blocks', blocks > 1 ? `${blocks}; confounded with blocks: ${blocked.join('; ')}` : 'none']);
-  facts.push(['Run order', d.seed === null ? 'standard (Yates) order' : `randomised${blocks > 1 ? ' within blocks' : ''}, seed ${d.seed} (PCG32 and a Fisher-Yates shuffle)`]);
+  facts.push(['Run order', d.seed === null ? 'standard (Yates) order' : `randomized${blocks > 1 ? ' within blocks' : ''}, seed ${d.seed} (PCG32 and a Fisher-Yates shuffle)`]);
   const w = Math.max(...facts.map(([a]) => a.length));
   out.push(...facts.map(([a, b]) => `${a.padEnd(w)}  ${b}`));
   out.push('');
@@ -452,7 +452,7 @@ export function designText(d: Design): string {
   const header = ['Run', 'Std', 'Rep', 'Block', 'Kind', ...d.factors.map((f) => f.name)];
   const rows = d.runs.map((r) => [
     String(r.run),
-    r.yates === null ? '-' : String(r.yates),
+    r.standardOrder === null ? '-' : String(r.standardOrder),
     String(r.replicate),
     String(r.block),
     r.kind,

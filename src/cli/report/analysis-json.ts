@@ -21,7 +21,8 @@ export function analysisJson(a: Analysis): Record<string, unknown> {
       ...(residualDfZero ? { lenthT: t.lenthT ?? null } : {}),
       ...(t.estimates ? { estimates: t.estimates } : {}),
     })),
-    blocks: a.blocks,
+    // The published key of a block's offset is `effect` (kept for the command line's readers; the glossary calls it a block offset).
+    blocks: a.blocks === null ? null : a.blocks.map((b) => ({ block: b.block, effect: b.offset })),
     df: { model: a.df.model, blocks: a.df.blocks, residual: a.df.residual, pureError: a.df.pureError, lackOfFit: a.df.lackOfFit },
     sigma: a.sigma,
     r2: a.r2,

@@ -73,7 +73,7 @@ export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): st
   out.push(...effectsTable(a, options.unit));
   out.push('');
   out.push(...fittedEquation(a));
-  if (a.blocks) out.push(`  block effects (sum to zero): ${a.blocks.map((b) => `block ${b.block} ${num(b.effect)}`).join(', ')}`);
+  if (a.blocks) out.push(`  block offsets (sum to zero): ${a.blocks.map((b) => `block ${b.block} ${num(b.offset)}`).join(', ')}`);
   out.push('');
   out.push('How well the model fits');
   out.push(`  noise (residual SD)               ${num(a.sigma)}   on ${a.df.residual} residual df`);

@@ -1,11 +1,11 @@
 /** The path command's readable report: the direction, then one row per step. */
 import type { SteepestPath } from '../../core/predict/steepest-path.ts';
 import { num, table } from './numbers.ts';
-import { interval, notesAndCaution, signedNum } from './prediction-text.ts';
+import { interval, messagesAndCaution, signedNum } from './prediction-text.ts';
 
 /**
  * The readable path report: each factor's coefficient and step (coded and real), then one row per
- * step with the real settings, the prediction, its interval and the outside mark; notes, caution.
+ * step with the real settings, the prediction, its interval and the outside mark; messages, caution.
  * Example: pathText(p) starts with 'Path of steepest ascent for Yield'.
  */
 export function pathText(p: SteepestPath): string {
@@ -43,6 +43,6 @@ export function pathText(p: SteepestPath): string {
       .map((l) => '  ' + l)
       .join('\n'),
   );
-  out.push(...notesAndCaution(p.messages, p.caution));
+  out.push(...messagesAndCaution(p.messages, p.caution));
   return out.join('\n');
 }

@@ -8,7 +8,7 @@ import type { FactorSetting } from '../../core/predict/parse-settings.ts';
 
 /**
  * The readable prediction report: settings table, fit, se, CI and PI, then the make-up of the
- * fit (baseline and contributions, largest first), notes and the caution. Nulls print as '-'.
+ * fit (baseline and contributions, largest first), messages and the caution. Nulls print as '-'.
  * Example: predictionText(p) starts with 'Prediction of Yield'.
  */
 export function predictionText(p: Prediction): string {
@@ -35,7 +35,7 @@ export function predictionText(p: Prediction): string {
       .map((l) => '  ' + l)
       .join('\n'),
   );
-  out.push(...notesAndCaution(p.messages, p.caution));
+  out.push(...messagesAndCaution(p.messages, p.caution));
   return out.join('\n');
 }
 
@@ -62,7 +62,7 @@ export function settingsTable(settings: readonly FactorSetting[]): string {
 }
 
 /** The 'Notes' block (only when there are messages) and the 'Caution' block, as lines. */
-export function notesAndCaution(messages: readonly string[], caution: readonly string[]): string[] {
+export function messagesAndCaution(messages: readonly string[], caution: readonly string[]): string[] {
   const out: string[] = [];
   if (messages.length > 0) {
     out.push('', 'Notes');

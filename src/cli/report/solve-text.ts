@@ -2,11 +2,11 @@
 import { formatSetting } from '../../core/predict/parse-settings.ts';
 import type { Solution } from '../../core/predict/solve-for-target.ts';
 import { num } from './numbers.ts';
-import { interval, notesAndCaution, settingsTable, signedNum } from './prediction-text.ts';
+import { interval, messagesAndCaution, settingsTable, signedNum } from './prediction-text.ts';
 
 /**
  * The readable solve report: the answer (or the nearest setting and what would be needed), the
- * span the range reaches, the settings, the fit and its intervals, notes and the caution.
+ * span the range reaches, the settings, the fit and its intervals, messages and the caution.
  * Example: solveText(s) starts with 'Setting of Time for Yield = 41'.
  */
 export function solveText(s: Solution): string {
@@ -31,6 +31,6 @@ export function solveText(s: Solution): string {
   out.push(`  standard error of the fit    ${num(s.se)}`);
   out.push(`  ${pct} confidence interval      ${interval(s.ci)}   (for the mean response)`);
   out.push(`  ${pct} prediction interval      ${interval(s.pi)}   (for one new run)`);
-  out.push(...notesAndCaution(s.messages, s.caution));
+  out.push(...messagesAndCaution(s.messages, s.caution));
   return out.join('\n');
 }

@@ -80,7 +80,7 @@ export function augmentStudy(study: StudyPlan, logged: readonly LoggedRun[], opt
   for (let i = 0; i < ns0; i++) drafts.push({ kind: 'center', block, coded: new Array<number>(k).fill(0) });
   const seed = options.seed ?? drawSeed();
   const first = Math.max(...runs.map((r) => r.run)) + 1;
-  const added: DesignRun[] = orderRuns(drafts, { seed }).map((d, i) => ({ run: first + i, yates: null, replicate: 1, block, originBlock: block, kind: d.kind, coded: [...d.coded] }));
+  const added: DesignRun[] = orderRuns(drafts, { seed }).map((d, i) => ({ run: first + i, standardOrder: null, replicate: 1, block, originBlock: block, kind: d.kind, coded: [...d.coded] }));
   const all = [...runs, ...added];
   const properties = secondOrderProperties('central composite', study.factors, all, alpha);
 

@@ -41,7 +41,7 @@ export const MONTGOMERY_TABLE_7_8: Readonly<Record<number, Readonly<Record<numbe
 /**
  * Most candidate block words the search for a fraction looks at before it settles for the best
  * found so far (a design choice: it keeps a plan of up to 1024 runs quick to make on a phone; the
- * catalogue fractions, up to 128 runs, are searched exhaustively well within it).
+ * catalog fractions, up to 128 runs, are searched exhaustively well within it).
  */
 export const BLOCK_SEARCH_BUDGET = 200_000;
 

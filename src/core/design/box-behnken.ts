@@ -38,7 +38,7 @@ export const DEFAULT_BOX_BEHNKEN_CENTER_RUNS: Readonly<Record<number, number>> =
 export interface BoxBehnkenSpec {
   readonly factors: readonly FactorSpec[];
   readonly centerRuns?: number;
-  readonly randomise?: boolean;
+  readonly randomize?: boolean;
   readonly seed?: number;
 }
 
@@ -59,28 +59,28 @@ export function boxBehnken(spec: BoxBehnkenSpec): SecondOrderPlan {
   if (cats.length > 0) throw new InputError(`A Box-Behnken design needs numeric factors (three levels each); ${cats.map((f) => f.name).join(', ')} ${cats.length === 1 ? 'is' : 'are'} categorical`);
   const centers = spec.centerRuns ?? DEFAULT_BOX_BEHNKEN_CENTER_RUNS[k];
   if (!Number.isInteger(centers) || centers < 0) throw new InputError(`Center runs must be a whole number, 0 or more, got ${centers}`);
-  const randomise = spec.randomise ?? true;
-  if (!randomise && spec.seed !== undefined) throw new InputError(`A seed only applies to a randomised run order; got seed ${spec.seed} with standard order`);
+  const randomize = spec.randomize ?? true;
+  if (!randomize && spec.seed !== undefined) throw new InputError(`A seed only applies to a randomized run order; got seed ${spec.seed} with standard order`);
   if (spec.seed !== undefined && (!Number.isSafeInteger(spec.seed) || spec.seed < 0)) throw new InputError(`A seed must be a whole number from 0 to ${MAX_SEED}, got ${spec.seed}`);
 
-  type Draft = { yates: number | null; block: number; kind: RunKind; coded: readonly number[] };
+  type Draft = { standardOrder: number | null; block: number; kind: RunKind; coded: readonly number[] };
   const drafts: Draft[] = [];
   for (const row of rows) {
     for (const signs of fullFactorial(row.length)) {
       const coded = new Array<number>(k).fill(0);
       row.forEach((f, j) => (coded[f] = signs[j]));
-      drafts.push({ yates: drafts.length + 1, block: 1, kind: 'factorial', coded });
+      drafts.push({ standardOrder: drafts.length + 1, block: 1, kind: 'factorial', coded });
     }
   }
   const tableRuns = drafts.length;
-  for (let i = 0; i < centers; i++) drafts.push({ yates: null, block: 1, kind: 'center', coded: new Array<number>(k).fill(0) });
-  const seed = randomise ? spec.seed ?? drawSeed() : null;
-  const runs: DesignRun[] = orderRuns(drafts, { seed }).map((d, i) => ({ run: i + 1, yates: d.yates, replicate: 1, block: 1, originBlock: 1, kind: d.kind, coded: [...d.coded] }));
+  for (let i = 0; i < centers; i++) drafts.push({ standardOrder: null, block: 1, kind: 'center', coded: new Array<number>(k).fill(0) });
+  const seed = randomize ? spec.seed ?? drawSeed() : null;
+  const runs: DesignRun[] = orderRuns(drafts, { seed }).map((d, i) => ({ run: i + 1, standardOrder: d.standardOrder, replicate: 1, block: 1, originBlock: 1, kind: d.kind, coded: [...d.coded] }));
   const properties = secondOrderProperties('Box-Behnken', factors, runs, null);
   const summary =
     `${runs.length} runs (${tableRuns} + ${centers} center), a Box-Behnken design: every factor at three levels (low, center, high) and no run on a corner of the cube; ` +
     `it ${properties.fullQuadratic ? 'estimates' : 'cannot estimate'} the full second-order model${properties.rotatable ? ' and is rotatable' : ''}. ` +
-    (seed === null ? 'Standard order kept.' : `Run order randomised (seed ${seed}).`);
+    (seed === null ? 'Standard order kept.' : `Run order randomized (seed ${seed}).`);
   const noteFacts: DesignNote[] = [{ kind: 'box-behnken-table' }];
   if (seed !== null && spec.seed === undefined) noteFacts.push({ kind: 'seed-drawn', seed });
   const notes = noteFacts.map(designNoteText);

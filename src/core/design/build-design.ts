@@ -1,7 +1,7 @@
 /**
- * The one entry point from what a person asks for to a Design: a full factorial, a catalogue
+ * The one entry point from what a person asks for to a Design: a full factorial, a catalog
  * fraction or a fraction from typed generators; optionally folded over, blocked, with center runs
- * and replicates; in randomised or standard order; with its defining relation, resolution,
+ * and replicates; in randomized or standard order; with its defining relation, resolution,
  * word-length pattern, alias chains, block words, a plain-words summary and notes. Nothing is
  * built unless the whole request is valid.
  */
@@ -10,7 +10,7 @@ import { defineFactors, findFactor, type Factor, type FactorSpec } from '../fact
 import { termOrder } from '../model/term.ts';
 import { defaultAliasOrder, designAliasChains } from './alias-structure.ts';
 import { blockConfounded, blockOf, defaultBlocking, parseBlockWords } from './blocking.ts';
-import { catalogueFraction } from './catalogue.ts';
+import { catalogFraction } from './catalog.ts';
 import { centerSet, spreadOverBlocks } from './center-runs.ts';
 import { definingRelation, resolution as resolutionOf, wordLengthPattern } from './defining-relation.ts';
 import type { Design, DesignRun } from './design.ts';
@@ -30,7 +30,7 @@ import { designNoteText, designSummary } from '../text/design-text.ts';
 
 export interface DesignSpec {
   readonly factors: readonly FactorSpec[];
-  /** A fraction from the built-in catalogue: "1/2", "1/4", ... (not with `generators`). */
+  /** A fraction from the built-in catalog: "1/2", "1/4", ... (not with `generators`). */
   readonly fraction?: string;
   /** Typed generators, e.g. ["E=ABCD", "F=-ABC"] (not with `fraction`). */
   readonly generators?: readonly string[];
@@ -45,8 +45,8 @@ export interface DesignSpec {
   /** 'all' for the mirror image, or a factor (name or letter) whose signs are switched. */
   readonly foldover?: string;
   /** false keeps standard order; default true. */
-  readonly randomise?: boolean;
-  /** Seed of the randomised order; drawn and recorded when absent. */
+  readonly randomize?: boolean;
+  /** Seed of the randomized order; drawn and recorded when absent. */
   readonly seed?: number;
   /** Hard-to-change factors (names or letters) kept sorted within blocks. */
   readonly sortBy?: readonly string[];
@@ -77,7 +77,7 @@ interface Point extends FactorialPoint {
  * fractions, a search over block words (under a second).
  * Throws InputError, with what was needed and what came, for: bad factors (see defineFactors);
  * one factor; both a fraction and generators; a full factorial of more than 10 factors or any
- * plan over 1024 runs; a fraction outside the catalogue; bad generators (see parseGenerators);
+ * plan over 1024 runs; a fraction outside the catalog; bad generators (see parseGenerators);
  * bad block counts or words (see parseBlockWords); center runs with only categorical factors; a
  * foldover of a full factorial; a seed with standard order; an unknown factor to sort by.
  * Example: buildDesign({factors: four numeric factors, fraction: '1/2', seed: 7}) -> 8 runs,
@@ -89,15 +89,15 @@ export function buildDesign(spec: DesignSpec): Design {
   const letters = lettersOf(factors);
   if (k < 2) throw new InputError(`A factorial design needs at least 2 factors, got ${k}`);
   if (spec.fraction !== undefined && spec.generators !== undefined) {
-    throw new InputError('Give either a fraction (from the catalogue) or generators, not both');
+    throw new InputError('Give either a fraction (from the catalog) or generators, not both');
   }
   const replicates = wholeAtLeast(spec.replicates, 1, 'Replicates', 1);
   const centerRuns = wholeAtLeast(spec.centerRuns, 0, 'Center runs', 0);
   const blocks = spec.blocks ?? (spec.blockWords && spec.blockWords.length > 0 ? 2 ** spec.blockWords.length : 1);
   if (![1, 2, 4, 8].includes(blocks)) throw new InputError(`Blocks come in 1, 2, 4 or 8, got ${blocks}`);
   if (spec.blockWords && spec.blockWords.length > 0 && blocks === 1) throw new InputError('Block words need 2, 4 or 8 blocks; got 1 block');
-  const randomise = spec.randomise ?? true;
-  if (!randomise && spec.seed !== undefined) throw new InputError(`A seed only applies to a randomised run order; got seed ${spec.seed} with standard order`);
+  const randomize = spec.randomize ?? true;
+  if (!randomize && spec.seed !== undefined) throw new InputError(`A seed only applies to a randomized run order; got seed ${spec.seed} with standard order`);
   if (spec.seed !== undefined && (!Number.isSafeInteger(spec.seed) || spec.seed < 0)) {
     throw new InputError(`A seed must be a whole number from 0 to ${MAX_SEED}, got ${spec.seed}`);
   }
@@ -112,16 +112,16 @@ export function buildDesign(spec: DesignSpec): Design {
   }
   const pbPoints = pb === undefined ? null : plackettBurmanPoints(pb, k);
 
-  // Generators: typed, from the catalogue, or none (full factorial).
+  // Generators: typed, from the catalog, or none (full factorial).
   const notes: DesignNote[] = [];
   let generators: Generator[] = [];
   if (spec.generators !== undefined) {
     generators = parseGenerators(spec.generators, factors);
   } else if (spec.fraction !== undefined) {
     const p = parseFraction(spec.fraction);
-    const entry = catalogueFraction(k, p);
+    const entry = catalogFraction(k, p);
     generators = parseGenerators(entry.generators, factors);
-    notes.push({ kind: 'catalogue-generators', source: entry.source });
+    notes.push({ kind: 'catalog-generators', source: entry.source });
   } else if (pbPoints === null && k > MAX_FULL_FACTORIAL_FACTORS) {
     checkRunLimit(2 ** k, `A full factorial of ${k} factors: 2^${k} factorial runs`);
   }
@@ -158,9 +158,9 @@ export function buildDesign(spec: DesignSpec): Design {
   // Factorial points of one replicate, then center runs spread over its blocks.
   const first = (pbPoints ?? fractionalFactorial(k, generators)).map((p) => ({ ...p, half: 0 }));
   const points: Point[] = fold === null ? first : [...first, ...foldPoints(first, fold).map((p) => ({ ...p, half: 1 }))];
-  type Draft = { yates: number | null; replicate: number; block: number; kind: 'factorial' | 'center'; coded: readonly number[] };
-  const perReplicate: Omit<Draft, 'replicate'>[] = points.map((p) => ({
-    yates: p.yates,
+  type UnorderedRun = { standardOrder: number | null; replicate: number; block: number; kind: 'factorial' | 'center'; coded: readonly number[] };
+  const perReplicate: Omit<UnorderedRun, 'replicate'>[] = points.map((p) => ({
+    standardOrder: p.standardOrder,
     block: blocking.generators.length > 0 || foldWord !== null ? blockOf(p.coded, blocking.generators) + p.half * 2 ** blocking.generators.length : 0,
     kind: 'factorial',
     coded: p.coded,
@@ -168,18 +168,18 @@ export function buildDesign(spec: DesignSpec): Design {
   if (centerRuns > 0) {
     const set = centerSet(factors);
     spreadOverBlocks(centerRuns, blocksPerReplicate).forEach((n, b) => {
-      for (let i = 0; i < n; i++) for (const row of set) perReplicate.push({ yates: null, block: b, kind: 'center', coded: row });
+      for (let i = 0; i < n; i++) for (const row of set) perReplicate.push({ standardOrder: null, block: b, kind: 'center', coded: row });
     });
   }
-  const drafts: Draft[] = [];
+  const unordered: UnorderedRun[] = [];
   for (let r = 1; r <= replicates; r++) {
     for (const d of perReplicate) {
-      drafts.push({ ...d, replicate: r, block: blocksPerReplicate > 1 ? (r - 1) * blocksPerReplicate + d.block + 1 : 1 });
+      unordered.push({ ...d, replicate: r, block: blocksPerReplicate > 1 ? (r - 1) * blocksPerReplicate + d.block + 1 : 1 });
     }
   }
-  const seed = randomise ? spec.seed ?? drawSeed() : null;
-  const ordered = orderRuns(drafts, { seed, sortBy });
-  const runs: DesignRun[] = ordered.map((d, i) => ({ run: i + 1, yates: d.yates, replicate: d.replicate, block: d.block, originBlock: d.block, kind: d.kind, coded: [...d.coded] }));
+  const seed = randomize ? spec.seed ?? drawSeed() : null;
+  const ordered = orderRuns(unordered, { seed, sortBy });
+  const runs: DesignRun[] = ordered.map((d, i) => ({ run: i + 1, standardOrder: d.standardOrder, replicate: d.replicate, block: d.block, originBlock: d.block, kind: d.kind, coded: [...d.coded] }));
 
   // What the design can and cannot separate.
   const res = resolutionOf(relation);

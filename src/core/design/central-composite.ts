@@ -1,7 +1,7 @@
 /**
  * Central composite designs (Box and Wilson 1951, Journal of the Royal Statistical Society B 13,
  * 1-45; Montgomery, Design and Analysis of Experiments, 8th ed., section 11.4.1) for 2 to 8
- * numeric factors: a two-level factorial part (a full factorial, or a catalogue fraction of
+ * numeric factors: a two-level factorial part (a full factorial, or a catalog fraction of
  * resolution V or more, so that every two-factor interaction is clear of every other), 2k axial
  * runs at plus and minus alpha on each axis, and center runs. With two blocks the factorial part
  * and the axial part are separate blocks, each with its own center runs.
@@ -11,7 +11,7 @@ import { designNoteText } from '../text/design-text.ts';
 import { InputError } from '../errors.ts';
 import { defineFactors, type FactorSpec, type NumericFactor } from '../factor/factor.ts';
 import { axialDistance, type AxialDistance } from './axial-distance.ts';
-import { catalogueFraction } from './catalogue.ts';
+import { catalogFraction } from './catalog.ts';
 import { definingRelation, resolution as resolutionOf, romanResolution, wordLengthPattern } from './defining-relation.ts';
 import type { Design, DesignRun, RunKind } from './design.ts';
 import { fractionalFactorial, parseFraction } from './fractional.ts';
@@ -29,7 +29,7 @@ export const DEFAULT_CCD_CENTER_RUNS = { unblocked: 5, perBlock: 3 } as const;
 
 export interface CentralCompositeSpec {
   readonly factors: readonly FactorSpec[];
-  /** Fraction of the factorial part from the catalogue ("1/2", ...); default: a full factorial up to 4 factors, else the smallest catalogue fraction of resolution V or more. */
+  /** Fraction of the factorial part from the catalog ("1/2", ...); default: a full factorial up to 4 factors, else the smallest catalog fraction of resolution V or more. */
   readonly fraction?: string;
   /** Default 'rotatable'. */
   readonly axialDistance?: AxialDistance;
@@ -38,7 +38,7 @@ export interface CentralCompositeSpec {
   /** Center runs: one number (all of them unblocked, or in each block), or [factorial block, axial block]. */
   readonly centerRuns?: number | readonly [number, number];
   /** false keeps standard order; default true. */
-  readonly randomise?: boolean;
+  readonly randomize?: boolean;
   readonly seed?: number;
 }
 
@@ -51,14 +51,14 @@ function whole(v: number, what: string): number {
 function factorialGenerators(k: number, fraction: string | undefined, factors: readonly NumericFactor[]): { generators: Generator[]; source: string | null } {
   if (fraction !== undefined) {
     const p = parseFraction(fraction);
-    const entry = catalogueFraction(k, p);
+    const entry = catalogFraction(k, p);
     return { generators: parseGenerators(entry.generators, factors), source: entry.source };
   }
   if (k <= 4) return { generators: [], source: null };
   for (let p = 3; p >= 1; p--) {
     if (k - p < 3) continue;
     try {
-      const entry = catalogueFraction(k, p);
+      const entry = catalogFraction(k, p);
       const gens = parseGenerators(entry.generators, factors);
       const r = resolutionOf(definingRelation(gens.map(generatorWord)));
       if (r !== null && r >= 5) return { generators: gens, source: entry.source };
@@ -104,8 +104,8 @@ export function centralComposite(spec: CentralCompositeSpec): SecondOrderPlan {
     nc0 = whole((spec.centerRuns as number | undefined) ?? DEFAULT_CCD_CENTER_RUNS.unblocked, 'Center runs');
     ns0 = 0;
   }
-  const randomise = spec.randomise ?? true;
-  if (!randomise && spec.seed !== undefined) throw new InputError(`A seed only applies to a randomised run order; got seed ${spec.seed} with standard order`);
+  const randomize = spec.randomize ?? true;
+  if (!randomize && spec.seed !== undefined) throw new InputError(`A seed only applies to a randomized run order; got seed ${spec.seed} with standard order`);
   if (spec.seed !== undefined && (!Number.isSafeInteger(spec.seed) || spec.seed < 0)) throw new InputError(`A seed must be a whole number from 0 to ${MAX_SEED}, got ${spec.seed}`);
 
   const { generators, source } = factorialGenerators(k, spec.fraction, numeric);
@@ -122,16 +122,16 @@ export function centralComposite(spec: CentralCompositeSpec): SecondOrderPlan {
   const ns = 2 * k;
   const alpha = axialDistance(spec.axialDistance ?? 'rotatable', k, F, blocks === 2 ? { nc: F, nc0, ns, ns0 } : undefined);
 
-  type Draft = { yates: number | null; block: number; kind: RunKind; coded: readonly number[] };
+  type Draft = { standardOrder: number | null; block: number; kind: RunKind; coded: readonly number[] };
   const axialBlock = blocks === 2 ? 2 : 1;
-  const drafts: Draft[] = cube.map((p) => ({ yates: p.yates, block: 1, kind: 'factorial', coded: p.coded }));
-  for (let i = 0; i < nc0; i++) drafts.push({ yates: null, block: 1, kind: 'center', coded: new Array<number>(k).fill(0) });
+  const drafts: Draft[] = cube.map((p) => ({ standardOrder: p.standardOrder, block: 1, kind: 'factorial', coded: p.coded }));
+  for (let i = 0; i < nc0; i++) drafts.push({ standardOrder: null, block: 1, kind: 'center', coded: new Array<number>(k).fill(0) });
   for (let i = 0; i < k; i++) {
-    for (const sgn of [-1, 1]) drafts.push({ yates: null, block: axialBlock, kind: 'axial', coded: Array.from({ length: k }, (_, j) => (j === i ? sgn * alpha : 0)) });
+    for (const sgn of [-1, 1]) drafts.push({ standardOrder: null, block: axialBlock, kind: 'axial', coded: Array.from({ length: k }, (_, j) => (j === i ? sgn * alpha : 0)) });
   }
-  for (let i = 0; i < ns0; i++) drafts.push({ yates: null, block: 2, kind: 'center', coded: new Array<number>(k).fill(0) });
-  const seed = randomise ? spec.seed ?? drawSeed() : null;
-  const runs: DesignRun[] = orderRuns(drafts, { seed }).map((d, i) => ({ run: i + 1, yates: d.yates, replicate: 1, block: d.block, originBlock: d.block, kind: d.kind, coded: [...d.coded] }));
+  for (let i = 0; i < ns0; i++) drafts.push({ standardOrder: null, block: 2, kind: 'center', coded: new Array<number>(k).fill(0) });
+  const seed = randomize ? spec.seed ?? drawSeed() : null;
+  const runs: DesignRun[] = orderRuns(drafts, { seed }).map((d, i) => ({ run: i + 1, standardOrder: d.standardOrder, replicate: 1, block: d.block, originBlock: d.block, kind: d.kind, coded: [...d.coded] }));
 
   const properties = secondOrderProperties('central composite', factors, runs, alpha);
   const alphaText = `${Number(alpha.toPrecision(4))}${spec.axialDistance === undefined || spec.axialDistance === 'rotatable' ? ' (rotatable)' : spec.axialDistance === 'face' ? ' (face-centred)' : spec.axialDistance === 'orthogonal' ? ' (orthogonal blocks)' : ''}`;
@@ -141,7 +141,7 @@ export function centralComposite(spec: CentralCompositeSpec): SecondOrderPlan {
     `${runs.length} runs (${F} factorial + ${ns} axial + ${centers}), a central composite design: a ${part}, axial distance ${alphaText}` +
     `${blocks === 2 ? ', in 2 blocks (factorial, axial)' : ''}; it estimates the full second-order model` +
     `${properties.rotatable ? ' and is rotatable' : ''}${properties.blocksOrthogonal === true ? '; its blocks are orthogonal to the model' : properties.blocksOrthogonal === false ? '; its blocks are not orthogonal to the model' : ''}. ` +
-    (seed === null ? 'Standard order kept.' : `Run order randomised${blocks === 2 ? ' within blocks' : ''} (seed ${seed}).`);
+    (seed === null ? 'Standard order kept.' : `Run order randomized${blocks === 2 ? ' within blocks' : ''} (seed ${seed}).`);
   const noteFacts: DesignNote[] = [];
   if (source) noteFacts.push({ kind: 'factorial-part-source', source });
   noteFacts.push(...properties.warningFacts);

@@ -20,8 +20,8 @@ export type BlockOrigin =
   | { readonly kind: 'search'; readonly stopped: boolean; readonly budget: number };
 
 export type DesignNote =
-  /** Generators from the minimum aberration catalogue and its source. */
-  | { readonly kind: 'catalogue-generators'; readonly source: string }
+  /** Generators from the minimum aberration catalog and its source. */
+  | { readonly kind: 'catalog-generators'; readonly source: string }
   | { readonly kind: 'block-words'; readonly words: readonly string[]; readonly origin: BlockOrigin }
   | {
       readonly kind: 'foldover';
@@ -49,7 +49,7 @@ export type DesignNote =
   | { readonly kind: 'screening-generator'; readonly source: string; readonly factors: number; readonly columns: number }
   /** The partial-aliasing caution of a Plackett-Burman plan. */
   | { readonly kind: 'partial-aliasing' }
-  /** A central composite design's factorial part from the catalogue, and its source. */
+  /** A central composite design's factorial part from the catalog, and its source. */
   | { readonly kind: 'factorial-part-source'; readonly source: string }
   /** A Box-Behnken design's rows and their source. */
   | { readonly kind: 'box-behnken-table' }

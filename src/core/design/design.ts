@@ -36,7 +36,7 @@ export interface DesignRun {
   /** Position in the run order, from 1. */
   readonly run: number;
   /** Standard-order (Yates) index of its factorial point within one replicate, from 1; null for a center run. */
-  readonly yates: number | null;
+  readonly standardOrder: number | null;
   /** Replicate of the whole design, from 1. */
   readonly replicate: number;
   /** Block, from 1 (1 when unblocked). */
@@ -57,7 +57,7 @@ export interface DesignRun {
 export interface Design {
   readonly factors: readonly Factor[];
   readonly runs: readonly DesignRun[];
-  /** Generators as typed or from the catalogue, e.g. "E=ABCD", "F=-ABC"; empty for a full factorial. */
+  /** Generators as typed or from the catalog, e.g. "E=ABCD", "F=-ABC"; empty for a full factorial. */
   readonly generators: readonly string[];
   /** Every word of the defining relation with its sign, e.g. ["ABCE", "-ABDF", ...]. */
   readonly definingRelation: readonly string[];
@@ -69,7 +69,7 @@ export interface Design {
   readonly aliases: readonly (readonly string[])[];
   /** Interaction words confounded with blocks (the generators and all their products). */
   readonly blockWords: readonly string[];
-  /** Seed of the randomised run order; null when standard order was kept. */
+  /** Seed of the randomized run order; null when standard order was kept. */
   readonly seed: number | null;
   /** Plain-words summary shown before the person commits. */
   readonly summary: string;

@@ -29,7 +29,7 @@ function checkFold(fold: Foldover, k: number): void {
 /**
  * The folded points: each point with the chosen signs switched, numbered after the originals
  * (standard-order index N + i). Throws InputError for an unknown factor or no points.
- * Example: foldPoints([{yates:1, coded:[-1,-1,1]}], 'all') -> [{yates:2, coded:[1,1,-1]}].
+ * Example: foldPoints([{standardOrder:1, coded:[-1,-1,1]}], 'all') -> [{standardOrder:2, coded:[1,1,-1]}].
  */
 export function foldPoints(points: readonly FactorialPoint[], fold: Foldover): FactorialPoint[] {
   if (points.length === 0) throw new InputError('A foldover needs the runs of a first fraction, got none');
@@ -37,7 +37,7 @@ export function foldPoints(points: readonly FactorialPoint[], fold: Foldover): F
   checkFold(fold, k);
   const n = points.length;
   return points.map((p) => ({
-    yates: n + p.yates,
+    standardOrder: n + p.standardOrder,
     coded: p.coded.map((x, i) => (fold === 'all' || i === fold ? -x : x)),
   }));
 }

@@ -12,7 +12,7 @@ import type { Generator } from './generators.ts';
 
 /** A factorial point: its standard-order index (from 1) and coded settings in declared order. */
 export interface FactorialPoint {
-  readonly yates: number;
+  readonly standardOrder: number;
   readonly coded: readonly number[];
 }
 
@@ -47,7 +47,7 @@ export function fractionalFactorial(k: number, generators: readonly Generator[])
       for (const f of termFactors(g.product.mask)) v *= coded[f];
       coded[g.factor] = v;
     }
-    return { yates: i + 1, coded };
+    return { standardOrder: i + 1, coded };
   });
 }
 

@@ -3,13 +3,13 @@
  * Technometrics 22, 601-608: of two designs, the one with fewer words of the shortest length
  * where their word-length patterns first differ has less aberration).
  *
- * Method: every regular 2^(k-p) of resolution III or more is, after relabelling factors, one
+ * Method: every regular 2^(k-p) of resolution III or more is, after relabeling factors, one
  * whose first k-p factors are basic and whose p generated factors take distinct columns that are
  * products of two or more basic factors. The search runs through all p-subsets of those
  * 2^(k-p) - 1 - (k-p) columns (branch and bound): adding a generator only adds words, so every
  * count of the word-length pattern can only grow, and a partial design whose pattern already
  * exceeds the best found (lexicographically, from length 1 up) is cut off with all its
- * extensions. Relabelling the basic factors does not change the pattern, so the lightest
+ * extensions. Relabeling the basic factors does not change the pattern, so the lightest
  * generator column may be taken as AB, ABC, ABCD, ... (the first columns of each weight). Cost: at
  * worst C(columns, p) leaves of 2^p words each; 16- and 32-run sizes take well under a second,
  * the largest 64- and 128-run sizes minutes.
@@ -68,7 +68,7 @@ export function minimumAberration(k: number, p: number, bound?: readonly number[
   }
   const m = k - p;
   if (k > 2 ** m - 1) throw new InputError(`${2 ** m} runs carry at most ${2 ** m - 1} factors, got ${k}`);
-  // Candidates by weight, then value. Relabelling the basic factors maps a design to one with
+  // Candidates by weight, then value. Relabeling the basic factors maps a design to one with
   // the same pattern, and can bring its lightest generator column to the lowest-lettered column of
   // that weight (AB, ABC, ABCD, ...): so the first generator need only be one of those.
   const candidates: number[] = [];

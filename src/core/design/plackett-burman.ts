@@ -60,16 +60,16 @@ export function plackettBurmanTable(runs: number): number[][] {
 
 /**
  * The factorial points of an N-run Plackett-Burman design for k factors: the first k columns of
- * plackettBurmanTable(N), with standard-order index yates = row number from 1.
+ * plackettBurmanTable(N), with standard-order index standardOrder = row number from 1.
  * Throws InputError for a run count other than 12, 20 or 24, fewer than 2 factors, or more
  * factors than N - 1 (saying how many the design takes).
- * Example: plackettBurmanPoints(12, 3)[0] -> {yates: 1, coded: [1, 1, -1]}.
+ * Example: plackettBurmanPoints(12, 3)[0] -> {standardOrder: 1, coded: [1, 1, -1]}.
  */
 export function plackettBurmanPoints(runs: number, k: number): FactorialPoint[] {
   checkRuns(runs);
   if (!Number.isInteger(k) || k < 2) throw new InputError(`A Plackett-Burman design needs at least 2 factors, got ${k}`);
   if (k > runs - 1) throw new InputError(`A ${runs}-run Plackett-Burman design takes up to ${runs - 1} factors, got ${k}`);
-  return plackettBurmanTable(runs).map((row, i) => ({ yates: i + 1, coded: row.slice(0, k) }));
+  return plackettBurmanTable(runs).map((row, i) => ({ standardOrder: i + 1, coded: row.slice(0, k) }));
 }
 
 export interface PartialAlias {
@@ -120,7 +120,7 @@ export interface PlackettBurmanContrasts {
 /**
  * The N - 1 orthogonal contrast columns of a planned Plackett-Burman design, over its runs in
  * run order: column j at a factorial run is entry j of the table row of its standard-order index
- * (yates), and 0 at a center run. The first k columns are the factors' planned coded settings;
+ * (standardOrder), and 0 at a center run. The first k columns are the factors' planned coded settings;
  * the other N - 1 - k are the unused columns, which with the factors' give the N - 1 effects
  * Lenth's method is applied to in a saturated Plackett-Burman study (Lenth 1989, Technometrics
  * 31, 469-473, section 2: the method needs the contrasts to be orthogonal and of equal variance).
@@ -131,7 +131,7 @@ export interface PlackettBurmanContrasts {
  */
 export function plackettBurmanContrasts(design: {
   readonly factors: readonly unknown[];
-  readonly runs: readonly { readonly yates: number | null; readonly kind: string }[];
+  readonly runs: readonly { readonly standardOrder: number | null; readonly kind: string }[];
   readonly screening?: { readonly kind: 'plackett-burman'; readonly runs: number };
 }): PlackettBurmanContrasts {
   if (design.screening?.kind !== 'plackett-burman') throw new InputError('Contrast columns of a Plackett-Burman design need a Plackett-Burman plan; this plan is not one');
@@ -140,9 +140,9 @@ export function plackettBurmanContrasts(design: {
   const k = design.factors.length;
   const columns: number[][] = Array.from({ length: n - 1 }, () => new Array<number>(design.runs.length).fill(0));
   design.runs.forEach((r, i) => {
-    if (r.yates === null) return;
-    if (!Number.isInteger(r.yates) || r.yates < 1 || r.yates > n) throw new InputError(`Run ${i + 1} of the plan has standard-order index ${r.yates}, outside 1 to ${n}`);
-    const row = table[r.yates - 1];
+    if (r.standardOrder === null) return;
+    if (!Number.isInteger(r.standardOrder) || r.standardOrder < 1 || r.standardOrder > n) throw new InputError(`Run ${i + 1} of the plan has standard-order index ${r.standardOrder}, outside 1 to ${n}`);
+    const row = table[r.standardOrder - 1];
     for (let j = 0; j < n - 1; j++) columns[j][i] = row[j];
   });
   return { columns, factorColumns: k, aliasing: plackettBurmanAliasing(n, k) };

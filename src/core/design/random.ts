@@ -1,5 +1,5 @@
 /**
- * The pseudo-random generator behind randomised run orders: PCG32, the XSH-RR member of the PCG
+ * The pseudo-random generator behind randomized run orders: PCG32, the XSH-RR member of the PCG
  * family (O'Neill 2014, "PCG: A Family of Simple Fast Space-Efficient Statistically Good
  * Algorithms for Random Number Generation", Harvey Mudd College report HMC-CS-2014-0905), exactly
  * as in the minimal reference implementation `pcg32_random_r` / `pcg32_srandom_r` /

@@ -1,6 +1,6 @@
 /**
  * The largest plan Trialbook makes: 1024 runs in all, replicates and center runs included. A plan
- * is run, recorded and analysed by hand on a phone on the production floor; past a thousand runs
+ * is run, recorded and analyzed by hand on a phone on the production floor; past a thousand runs
  * it no longer fits a shift's work or a screen, and a mistake in it costs more than splitting the
  * work into several studies. (A design choice of this project, not a published limit.)
  */

@@ -1,5 +1,5 @@
 /**
- * Run order. Randomising the order protects the effect estimates from whatever drifts during the
+ * Run order. Randomizing the order protects the effect estimates from whatever drifts during the
  * experiment (tool wear, ambient temperature, a new batch of material, an operator's learning):
  * in standard order such a drift is mixed into the effects of the factors that change least
  * often. The order is shuffled with the Fisher-Yates shuffle (Fisher and Yates 1938, Statistical

@@ -116,7 +116,7 @@ export interface Analysis {
   readonly coding: readonly CodingRow[];
   readonly intercept: Estimate;
   readonly terms: readonly TermEstimate[];
-  readonly blocks: readonly { readonly block: number; readonly effect: number }[] | null;
+  readonly blocks: readonly { readonly block: number; readonly offset: number }[] | null;
   readonly df: {
     readonly model: number;
     readonly blocks: number;

@@ -93,7 +93,7 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     coding: codingRows(factors),
     intercept: est.intercept,
     terms,
-    blocks: est.blockEffects,
+    blocks: est.blockOffsets,
     df: { model: tables.dfModel, blocks: tables.dfBlocks, residual: fit.dfResidual, pureError: pe.df > 0 ? pe.df : null, lackOfFit: tables.dfLackOfFit },
     sigma: est.sigma,
     r2: diag.r2,
@@ -107,7 +107,7 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     runs: diag.runs,
     halfNormal: lenthOut.halfNormal,
     verdicts,
-    warnings: [...data.notes, ...verdicts.filter(isWarning).map(verdictText)],
+    warnings: [...data.messages, ...verdicts.filter(isWarning).map(verdictText)],
     model,
   };
 }

@@ -4,7 +4,7 @@
  * see model/term.ts). Blocks use effect (sum-to-zero) coding: for B blocks, B-1 columns,
  * column b is +1 in block b, -1 in the last block, 0 elsewhere, so the intercept stays the
  * average over blocks and a prediction is for an average block (Montgomery, Design and Analysis
- * of Experiments, 8th ed., section 7.2; the coding is common practice for fixed block effects).
+ * of Experiments, 8th ed., section 7.2; the coding is common practice for blocks as fixed offsets).
  */
 import { termValue, type Term } from '../model/term.ts';
 

@@ -1,7 +1,7 @@
 /**
  * The estimates step of the analysis: each kept column's coefficient with its standard error,
  * t, two-sided p and confidence interval; effect = 2 x coefficient; the terms the runs cannot
- * separate, with the combination each kept estimate carries ("C + AB"); the block effects,
+ * separate, with the combination each kept estimate carries ("C + AB"); the block offsets,
  * which sum to zero (the last is minus the sum of the others).
  * Formulas: sigma^2 = RSS / df_res; se_j = sigma sqrt((X'X)^-1_jj); t = b_j / se_j on df_res;
  * CI = b_j +- t(1 - alpha/2; df_res) se_j. Source: Montgomery, Design and Analysis of
@@ -22,8 +22,8 @@ export interface TermEstimates {
   /** One per kept term column, in model order. */
   readonly terms: readonly TermEstimate[];
   readonly aliased: readonly AliasedTerm[];
-  /** Block effects in ascending block order (summing to zero), or null when unblocked. */
-  readonly blockEffects: readonly { readonly block: number; readonly effect: number }[] | null;
+  /** Block offsets in ascending block order (summing to zero), or null when unblocked. */
+  readonly blockOffsets: readonly { readonly block: number; readonly offset: number }[] | null;
   /** Residual standard deviation, null when df_res = 0. */
   readonly sigma: number | null;
   /** Name and letters of every column of the fit. */
@@ -32,7 +32,7 @@ export interface TermEstimates {
   readonly aliasedWithInterceptOrBlocks: boolean;
 }
 
-/** `blockLevels`: the block labels in ascending order when blocked (the last one's effect is implied), else empty. */
+/** `blockLevels`: the block labels in ascending order when blocked (the last one's offset is implied), else empty. */
 export function estimateTerms(fit: LinearFit, factors: readonly Factor[], blockLevels: readonly number[], alpha: number): TermEstimates {
   const m = fit.kept.length;
   const dfRes = fit.dfResidual;
@@ -64,12 +64,12 @@ export function estimateTerms(fit: LinearFit, factors: readonly Factor[], blockL
   }
 
   const terms: TermEstimate[] = [];
-  const blockEffects: { block: number; effect: number }[] = [];
+  const blockOffsets: { block: number; offset: number }[] = [];
   let blockSum = 0;
   for (let j = 0; j < m; j++) {
     const c = fit.columns[fit.kept[j]];
     if (c.kind === 'block') {
-      blockEffects.push({ block: c.block, effect: fit.coef[j] });
+      blockOffsets.push({ block: c.block, offset: fit.coef[j] });
       blockSum += fit.coef[j];
     }
     if (c.kind !== 'term') continue;
@@ -81,6 +81,6 @@ export function estimateTerms(fit: LinearFit, factors: readonly Factor[], blockL
     terms.push(extra ? { ...base, estimates: combinationLabel([{ letters: label.letters, weight: 1 }, ...extra]) } : base);
   }
   const blocked = blockLevels.length > 1;
-  if (blocked) blockEffects.push({ block: blockLevels[blockLevels.length - 1], effect: -blockSum });
-  return { intercept: estimate(0), terms, aliased, blockEffects: blocked ? blockEffects : null, sigma, labels, aliasedWithInterceptOrBlocks: withInterceptOrBlocks };
+  if (blocked) blockOffsets.push({ block: blockLevels[blockLevels.length - 1], offset: -blockSum });
+  return { intercept: estimate(0), terms, aliased, blockOffsets: blocked ? blockOffsets : null, sigma, labels, aliasedWithInterceptOrBlocks: withInterceptOrBlocks };
 }

@@ -40,9 +40,9 @@ export function screeningStep(data: Pick<ResponseData, 'factors' | 'y' | 'screen
   const k = factors.length;
   const table = plackettBurmanTable(s.runs);
   if (k > s.runs - 1) throw new InputError(`A ${s.runs}-run Plackett-Burman plan takes up to ${s.runs - 1} factors, got ${k}`);
-  if (s.yates.length !== data.y.length) throw new InputError(`The screening plan needs one standard-order index per run (${data.y.length}), got ${s.yates.length}`);
+  if (s.standardOrder.length !== data.y.length) throw new InputError(`The screening plan needs one standard-order index per run (${data.y.length}), got ${s.standardOrder.length}`);
   const columns = Array.from({ length: s.runs - 1 }, () => new Array<number>(data.y.length).fill(0));
-  s.yates.forEach((row, i) => {
+  s.standardOrder.forEach((row, i) => {
     if (row === null) return;
     if (!Number.isInteger(row) || row < 1 || row > s.runs) throw new InputError(`Run ${i + 1} has standard-order index ${row}, outside 1 to ${s.runs} of its Plackett-Burman plan`);
     for (let j = 0; j < s.runs - 1; j++) columns[j][i] = table[row - 1][j];

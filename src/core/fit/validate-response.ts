@@ -42,6 +42,6 @@ export function validateResponseData(data: ResponseData): void {
   let hi = -Infinity;
   for (const v of y) (lo = Math.min(lo, v)), (hi = Math.max(hi, v));
   if (hi - lo <= CONSTANT_TOLERANCE * Math.max(1, Math.abs(hi))) {
-    throw new InputError(`${response} is the same (${shortNumber(lo)}) in every run: there is no variation to analyse`);
+    throw new InputError(`${response} is the same (${shortNumber(lo)}) in every run: there is no variation to analyze`);
   }
 }

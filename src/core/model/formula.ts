@@ -35,7 +35,7 @@ function tokenize(text: string): Tok[] {
 }
 
 /** Sorted, de-duplicated terms. */
-function normalise(set: Set<Term>): Term[] {
+function normalize(set: Set<Term>): Term[] {
   return [...set].filter((t) => t !== 0).sort(compareTerms);
 }
 
@@ -182,7 +182,7 @@ export function parseTerms(text: string, factors: readonly Factor[]): Term[] {
   if (toks.length === 0) throw new InputError('Model terms: the formula is empty');
   const result = sum();
   if (i < toks.length) fail('unexpected text');
-  const terms = normalise(result);
+  const terms = normalize(result);
   if (terms.length === 0) throw new InputError(`Model terms "${text}": no terms are left`);
   return terms;
 }

@@ -33,7 +33,7 @@ export function quadraticSurface(model: FittedModel): QuadraticSurface {
   const cats = model.factors.filter((f) => f.kind !== 'numeric');
   if (cats.length > 0) {
     throw new InputError(
-      `A response surface needs numeric factors only; ${cats.map((f) => f.name).join(', ')} ${cats.length === 1 ? 'is' : 'are'} categorical (analyse each level on its own, or leave ${cats.length === 1 ? 'it' : 'them'} out)`,
+      `A response surface needs numeric factors only; ${cats.map((f) => f.name).join(', ')} ${cats.length === 1 ? 'is' : 'are'} categorical (analyze each level on its own, or leave ${cats.length === 1 ? 'it' : 'them'} out)`,
     );
   }
   const high = model.terms.filter((t) => termOrder(t) > 2);

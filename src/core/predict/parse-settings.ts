@@ -5,6 +5,7 @@
 import { InputError } from '../errors.ts';
 import { parseNumber, toCoded, toReal } from '../factor/coding.ts';
 import { findFactor, type CategoricalFactor, type Factor } from '../factor/factor.ts';
+import { readSetting } from '../factor/read-setting.ts';
 
 export type SettingValue = number | string;
 
@@ -60,6 +61,14 @@ function entries(input: SettingsInput): (readonly [string, SettingValue])[] {
   return Object.entries(input as Readonly<Record<string, SettingValue>>);
 }
 
+/**
+ * The coded value of one given setting. Text goes through the one reader of typed settings
+ * (readSetting in factor/read-setting.ts: strict numbers, a positive number on a log scale, a
+ * categorical factor's level by name), so a setting typed on a screen and one given to the
+ * command line are checked by the same rule in the same words; a number is coded as it is.
+ * Two checks are this function's own: an empty setting, and a number for a categorical factor
+ * (it has nothing between its levels), which would otherwise read as an unknown level.
+ */
 function codeOne(f: Factor, value: SettingValue): number {
   if (typeof value === 'string' && value.trim() === '') throw new InputError(`${f.name} needs a setting, got an empty one`);
   if (f.kind === 'categorical') {
@@ -70,9 +79,9 @@ function codeOne(f: Factor, value: SettingValue): number {
         `${f.name} is categorical: it has the two levels "${f.levels[0]}" and "${f.levels[1]}" and no setting between them, got ${value}`,
       );
     }
-    return toCoded(f, value);
   }
-  if (typeof value === 'number' && !Number.isFinite(value)) throw new InputError(`${f.name} needs a finite number, got ${value}`);
+  if (typeof value === 'string') return toCoded(f, readSetting(f, value));
+  if (!Number.isFinite(value)) throw new InputError(`${f.name} needs a finite number, got ${value}`);
   return toCoded(f, value);
 }
 
@@ -109,7 +118,7 @@ export function parseSettings(factors: readonly Factor[], input: SettingsInput, 
     if (options.free?.includes(i)) return makeSetting(f, f.kind === 'numeric' ? (toReal(f, 0) as number) : f.levels[0], 0, 'free');
     if (g) {
       const coded = codeOne(f, g.value);
-      const real = f.kind === 'categorical' ? toReal(f, coded) : typeof g.value === 'number' ? g.value : parseNumber(g.value);
+      const real = f.kind === 'categorical' ? toReal(f, coded) : typeof g.value === 'number' ? g.value : parseNumber(g.value.trim());
       return makeSetting(f, real, coded, 'given');
     }
     if (f.kind === 'numeric') return makeSetting(f, toReal(f, 0) as number, 0, 'center');

@@ -91,12 +91,12 @@ function design(v: unknown, path: string, nFactors: number): StoredDesign {
   const runs = list(o.runs, `${path}.runs`, MAX_PLANNED_RUNS).map((r, i): DesignRun => {
     const p = `${path}.runs[${i}]`;
     const ro = obj(r, p);
-    only(ro, p, ['run', 'yates', 'replicate', 'block', 'originBlock', 'kind', 'coded']);
+    only(ro, p, ['run', 'standardOrder', 'replicate', 'block', 'originBlock', 'kind', 'coded']);
     const coded = list(ro.coded, `${p}.coded`).map((c, j) => finite(c, `${p}.coded[${j}]`));
     if (coded.length !== nFactors) fail(`${p}.coded`, `one coded setting per factor (${nFactors})`, `${coded.length} settings`);
     return {
       run: int(ro.run, `${p}.run`, 1, MAX_PLANNED_RUNS),
-      yates: ro.yates === null ? null : int(ro.yates, `${p}.yates`, 1),
+      standardOrder: ro.standardOrder === null ? null : int(ro.standardOrder, `${p}.standardOrder`, 1),
       replicate: int(ro.replicate, `${p}.replicate`, 1),
       block: int(ro.block, `${p}.block`, 1),
       originBlock: int(ro.originBlock, `${p}.originBlock`, 1),
@@ -144,7 +144,7 @@ function screening(v: unknown, path: string, nFactors: number, runs: readonly De
   if (!(PLACKETT_BURMAN_RUNS as readonly number[]).includes(n)) fail(`${path}.runs`, `one of ${PLACKETT_BURMAN_RUNS.join(', ')} runs`, n);
   if (nFactors > n - 1) fail(path, `at most ${n - 1} factors for a ${n}-run design`, nFactors);
   runs.forEach((r, i) => {
-    if (r.kind === 'factorial' && (r.yates === null || r.yates > n)) fail(`${path.replace(/\.screening$/, '')}.runs[${i}].yates`, `a standard-order index from 1 to ${n} (a ${n}-run Plackett-Burman design)`, r.yates);
+    if (r.kind === 'factorial' && (r.standardOrder === null || r.standardOrder > n)) fail(`${path.replace(/\.screening$/, '')}.runs[${i}].standardOrder`, `a standard-order index from 1 to ${n} (a ${n}-run Plackett-Burman design)`, r.standardOrder);
   });
   return { kind, runs: n, source: text(o.source, `${path}.source`, { nonEmpty: true }) };
 }

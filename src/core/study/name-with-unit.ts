@@ -1,5 +1,5 @@
 /**
- * A name with its unit, the one way Trialbook writes a labelled quantity in headings, chart axes
+ * A name with its unit, the one way Trialbook writes a labeled quantity in headings, chart axes
  * and CSV headers: "Film thickness (µm)", or the bare name when there is no unit. A categorical
  * factor has no unit (its levels are names). Common practice for column headers.
  */

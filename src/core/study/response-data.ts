@@ -28,9 +28,9 @@ export interface ResponseData {
    * a center run. The analysis then fits main effects by default and applies Lenth's method to
    * the design's N - 1 orthogonal columns.
    */
-  readonly screening?: { readonly runs: number; readonly yates: readonly (number | null)[] };
+  readonly screening?: { readonly runs: number; readonly standardOrder: readonly (number | null)[] };
   /** Run labels for reports (run numbers), aligned with the rows. */
   readonly labels: readonly string[];
   /** What was skipped and why ("2 excluded runs skipped"), for the report. */
-  readonly notes: readonly string[];
+  readonly messages: readonly string[];
 }

@@ -1,7 +1,7 @@
 /**
  * From a study's logged runs to the data the analysis takes for one response: the coded ACTUAL
  * settings of every run used, and the mean of its readings. Excluded runs and runs without a
- * reading of the response are skipped and counted in the notes. Several readings of one run are
+ * reading of the response are skipped and counted in the messages. Several readings of one run are
  * repeat measurements: their mean is the run's value, and they are never counted as replicates
  * (true replicates are separate runs of the plan).
  * Example: a run with readings [10, 12] contributes one row with y = 11.
@@ -36,7 +36,7 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
   const blocks: number[] = [];
   const labels: string[] = [];
   const points: string[] = [];
-  const yates: (number | null)[] = [];
+  const standardOrder: (number | null)[] = [];
   const seen = new Map<number, number>();
   let excluded = 0;
   let missing = 0;
@@ -59,16 +59,16 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     blocks.push(planned?.block ?? 1);
     // Runs planned at the same coded settings are repeats of one point, whatever their actuals.
     points.push(planned ? planned.coded.join(',') : `run ${run.plannedRun}`);
-    yates.push(planned && planned.kind === 'factorial' ? planned.yates : null);
+    standardOrder.push(planned && planned.kind === 'factorial' ? planned.standardOrder : null);
     const k = (seen.get(run.plannedRun) ?? 0) + 1;
     seen.set(run.plannedRun, k);
     labels.push(k === 1 ? String(run.plannedRun) : `${run.plannedRun}#${k}`);
   }
-  const notes: string[] = [];
-  if (excluded > 0) notes.push(`${plural(excluded, 'excluded run', 'excluded runs')} skipped`);
-  if (missing > 0) notes.push(`${plural(missing, 'run', 'runs')} without a value for ${response.name} skipped`);
+  const messages: string[] = [];
+  if (excluded > 0) messages.push(`${plural(excluded, 'excluded run', 'excluded runs')} skipped`);
+  if (missing > 0) messages.push(`${plural(missing, 'run', 'runs')} without a value for ${response.name} skipped`);
   if (repeated > 0) {
-    notes.push(`${plural(repeated, 'run has', 'runs have')} several readings of ${response.name}: each run's mean is used, and repeat readings are not counted as replicates`);
+    messages.push(`${plural(repeated, 'run has', 'runs have')} several readings of ${response.name}: each run's mean is used, and repeat readings are not counted as replicates`);
   }
   const blocked = blocks.some((b) => b !== 1);
   return {
@@ -79,8 +79,8 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     y,
     blocks: blocked ? blocks : null,
     points,
-    ...(study.design.screening ? { screening: { runs: study.design.screening.runs, yates } } : {}),
+    ...(study.design.screening ? { screening: { runs: study.design.screening.runs, standardOrder } } : {}),
     labels,
-    notes,
+    messages,
   };
 }

@@ -41,7 +41,7 @@ function aliasExamples(chains: readonly (readonly Word[])[], order: number, lett
  * The summary text. Throws InputError for a run count below 1.
  * Example: a 2^(4-1) with I = ABCD, 8 runs, seed 7 ->
  * "8 runs, resolution IV: main effects are clear of two-factor interactions; AB is aliased with
- * CD; AC with BD; AD with BC. Run order randomised (seed 7)."
+ * CD; AC with BD; AD with BC. Run order randomized (seed 7)."
  */
 export function designSummary(s: SummaryInput): string {
   if (!(s.totalRuns >= 1)) throw new InputError(`A plan needs at least one run, got ${s.totalRuns}`);
@@ -73,7 +73,7 @@ export function designSummary(s: SummaryInput): string {
     const lowOrder = s.blockWords.filter((w) => termOrder(w) <= 2);
     if (lowOrder.length > 0) text += ` The two-factor interaction${lowOrder.length === 1 ? '' : 's'} ${list(lowOrder.map((w) => formatWord(w, s.letters)))} cannot be told from the block differences.`;
   }
-  text += s.seed === null ? ' Standard order kept.' : ` Run order randomised${s.blocks > 1 ? ' within blocks' : ''} (seed ${s.seed}).`;
+  text += s.seed === null ? ' Standard order kept.' : ` Run order randomized${s.blocks > 1 ? ' within blocks' : ''} (seed ${s.seed}).`;
   return text;
 }
 
@@ -115,8 +115,8 @@ const plural = (n: number, one: string, many: string) => (n === 1 ? one : many);
  */
 export function designNoteText(n: DesignNote): string {
   switch (n.kind) {
-    case 'catalogue-generators':
-      return `Generators from the minimum aberration catalogue (${n.source}).`;
+    case 'catalog-generators':
+      return `Generators from the minimum aberration catalog (${n.source}).`;
     case 'block-words':
       return `Block words: ${n.words.join(', ')}, from ${blockOriginText(n.origin)}.`;
     case 'foldover': {
@@ -139,7 +139,7 @@ export function designNoteText(n: DesignNote): string {
     case 'blocked-two-factor':
       return `Warning: the two-factor interaction${plural(n.words.length, '', 's')} ${n.words.join(', ')} ${plural(n.words.length, 'is', 'are')} confounded with blocks.`;
     case 'standard-order':
-      return 'Standard order kept. Randomising the run order protects the effects from drifts during the experiment (tool wear, room temperature, a new batch of material): in standard order a drift is mistaken for the effect of the factors that change least often.';
+      return 'Standard order kept. Randomizing the run order protects the effects from drifts during the experiment (tool wear, room temperature, a new batch of material): in standard order a drift is mistaken for the effect of the factors that change least often.';
     case 'seed-drawn':
       return `Seed ${n.seed} was drawn for this plan and is recorded with it: the same seed gives the same run order on any device.`;
     case 'screening-generator':
@@ -147,7 +147,7 @@ export function designNoteText(n: DesignNote): string {
     case 'partial-aliasing':
       return PARTIAL_ALIASING_NOTE;
     case 'factorial-part-source':
-      return `Factorial part from the minimum aberration catalogue (${n.source}).`;
+      return `Factorial part from the minimum aberration catalog (${n.source}).`;
     case 'box-behnken-table':
       return 'Rows from the table of Box and Behnken (1960), Technometrics 2, 455-475.';
     case 'axial-outside':
@@ -158,8 +158,8 @@ export function designNoteText(n: DesignNote): string {
       const names = n.factors.join(', ');
       const one = n.factors.length === 1;
       return (
-        `Warning: ${names} ${one ? 'is' : 'are'} kept sorted (hard to change), so the runs are not fully randomised and the design has become a split-plot. ` +
-        `An analysis that treats it as completely randomised understates the error for ${names} (and ${one ? 'its' : 'their'} interactions), so ${one ? 'its effect looks' : 'their effects look'} more certain than ${one ? 'it is' : 'they are'}.`
+        `Warning: ${names} ${one ? 'is' : 'are'} kept sorted (hard to change), so the runs are not fully randomized and the design has become a split-plot. ` +
+        `An analysis that treats it as completely randomized understates the error for ${names} (and ${one ? 'its' : 'their'} interactions), so ${one ? 'its effect looks' : 'their effects look'} more certain than ${one ? 'it is' : 'they are'}.`
       );
     }
   }

@@ -46,7 +46,7 @@ export function correlationText(r: number): string {
  * largestCorrelation: 1/3, seed: 7} -> "12 runs, a Plackett-Burman screening design for 7
  * factors: main effects are estimated clear of each other but partly mixed with two-factor
  * interactions (correlations up to 1/3); 4 columns are left unused and help judge the effects.
- * Run order randomised (seed 7)."
+ * Run order randomized (seed 7)."
  */
 export function plackettBurmanSummary(s: ScreeningSummaryInput): string {
   if (!(s.totalRuns >= 1)) throw new InputError(`A plan needs at least one run, got ${s.totalRuns}`);
@@ -59,6 +59,6 @@ export function plackettBurmanSummary(s: ScreeningSummaryInput): string {
   text += s.largestCorrelation === null || s.largestCorrelation === 0 ? '' : ` (correlations up to ${correlationText(s.largestCorrelation)})`;
   const unused = s.factorialRuns - 1 - s.factors;
   text += unused > 0 ? `; ${unused} column${unused === 1 ? ' is' : 's are'} left unused and help${unused === 1 ? 's' : ''} judge the effects.` : '.';
-  text += s.seed === null ? ' Standard order kept.' : ` Run order randomised (seed ${s.seed}).`;
+  text += s.seed === null ? ' Standard order kept.' : ` Run order randomized (seed ${s.seed}).`;
   return text;
 }

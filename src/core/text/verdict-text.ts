@@ -18,7 +18,7 @@ function curvedFinding(p: number | null): string {
 }
 
 /** The same finding when the model holds squares, which allow for the curvature. */
-function curvatureModelled(p: number | null, squares: readonly string[]): string {
+function curvatureModeled(p: number | null, squares: readonly string[]): string {
   return `Curvature is significant (${pPhrase(p)}): the center runs differ from the factorial average; the model's square terms (${squares.join(', ')}) allow for it.`;
 }
 
@@ -42,7 +42,7 @@ export function curvatureStatement(v: CurvatureVerdict): string {
  * Cost O(1). Example: curvatureNote(0.001, 'prediction') starts "Curvature is significant (p = 0.0010)".
  */
 export function curvatureNote(p: number, use: 'prediction' | 'path', squares: readonly string[] = []): string {
-  if (squares.length > 0) return curvatureModelled(p, squares);
+  if (squares.length > 0) return curvatureModeled(p, squares);
   return (
     curvedFinding(p) +
     (use === 'prediction'
@@ -63,7 +63,7 @@ export function verdictText(v: Verdict): string {
     case 'not-orthogonal':
       return 'The runs are not orthogonal (missing runs, off-target settings or unequal blocks), so sequential sums of squares depend on the order of terms; the adjusted table gives each term after all others.';
     case 'curvature':
-      if (v.outcome === 'curved' && (v.squares ?? []).length > 0) return curvatureModelled(v.p, v.squares!);
+      if (v.outcome === 'curved' && (v.squares ?? []).length > 0) return curvatureModeled(v.p, v.squares!);
       return v.outcome === 'curved'
         ? `${curvedFinding(v.p)} Add axial runs for a second-order design before relying on predictions inside the range.`
         : curvatureStatement(v);

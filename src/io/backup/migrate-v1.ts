@@ -1,7 +1,8 @@
 /**
  * Backup format version 1 to version 2, a pure step on the parsed document (after its checksum
  * was verified against the version-1 payload). Version 2 adds, in each study, the block of
- * origin of every planned run (equal to its block) and the lower bound of every response (null),
+ * origin of every planned run (equal to its block), its standard-order index renamed from
+ * `yates` to `standardOrder`, and the lower bound of every response (null),
  * by the same record upgrade the store's schema version 2 applies (upgradeStudyRecord in core).
  * Run kinds stay as they were; revisions do not change. The document's formatVersion is set by
  * migrateBackup, and every field is checked after the last step.

@@ -62,7 +62,7 @@ export function studyRuns(backup: Pick<Backup, 'payload'>, studyId: string): Log
 /**
  * The analysis data of one response of one study in a backup file: the study chosen by id or
  * name (an ambiguous name is refused listing the ids), the current state of each logged run,
- * coded ACTUAL settings, excluded runs and runs without a value skipped and counted in the notes,
+ * coded ACTUAL settings, excluded runs and runs without a value skipped and counted in the messages,
  * several readings of one run averaged. Reads and checks the whole file first (readBackupSync).
  * Example: backupResponseData(text, 'Invented demo: coating line trial', 'Gloss').y -> [..].
  */

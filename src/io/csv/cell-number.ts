@@ -44,7 +44,7 @@ export function whyNotANumber(text: string, delimiter = ','): string {
 }
 
 /**
- * Why a response value cannot be analysed although it is a number, as a message part, or '' when
+ * Why a response value cannot be analyzed although it is a number, as a message part, or '' when
  * it can: a magnitude above MAX_RESPONSE_MAGNITUDE, whose square would overflow.
  * Example: responseMagnitudeProblem(1e200) -> 'is 1e+200, beyond what the analysis can carry ...'.
  */

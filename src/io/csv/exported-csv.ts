@@ -3,7 +3,7 @@
  * needed: the factors are the "<name> coded" columns; each factor's coding (low and high, linear
  * or log scale, or its two level names) is recovered exactly from its actual settings and their
  * coded values; the actual settings are used, excluded runs skipped, runs without a value for the
- * response skipped, and the notes say how many. Factor and response columns are matched by name
+ * response skipped, and the messages say how many. Factor and response columns are matched by name
  * with a unit in parentheses ignored.
  * Example: exportedCsvResponseData(studyCsv(study, runs), 'Gloss').y -> the Gloss means of the runs used.
  */
@@ -164,9 +164,9 @@ export function exportedCsvResponseData(csvText: string, responseName: string, f
   if (blocks) blocks.forEach((b, i) => {
     if (!Number.isInteger(b) || b < 1) throw new InputError(`${where(table, used[i], layout.block)}: the block needs a whole number from 1, got "${table.rows[used[i]][layout.block]}"`);
   });
-  const notes: string[] = [...(table.notes ?? [])];
-  if (excluded > 0) notes.push(`${excluded} excluded run${excluded === 1 ? '' : 's'} skipped`);
-  if (missing > 0) notes.push(`${missing} run${missing === 1 ? '' : 's'} without a value for ${response.name} skipped`);
+  const messages: string[] = [...(table.messages ?? [])];
+  if (excluded > 0) messages.push(`${excluded} excluded run${excluded === 1 ? '' : 's'} skipped`);
+  if (missing > 0) messages.push(`${missing} run${missing === 1 ? '' : 's'} without a value for ${response.name} skipped`);
   const unit = columnUnit(table.header[response.value]);
   return {
     factors,
@@ -178,6 +178,6 @@ export function exportedCsvResponseData(csvText: string, responseName: string, f
     // Runs planned at the same settings are repeats of one point (pure error), whatever their actuals.
     points: chosen.every((f) => f.planned >= 0) ? used.map((r) => chosen.map((f) => cell(table, r, f.planned)).join('|')) : null,
     labels: used.map((r) => cell(table, r, layout.run)),
-    notes,
+    messages,
   };
 }

@@ -8,9 +8,9 @@
  *   it, so a Trialbook export reads back as it was written.
  * - In a file separated by ";" or tabs (a European spreadsheet's export), a column whose every
  *   filled cell is a number or numbers with a decimal comma ("12,5" or readings "12,5 13,1") and
- *   none with a point is read with decimal points; `notes` says which columns.
+ *   none with a point is read with decimal points; `messages` says which columns.
  * Throws InputError naming the row for a malformed file, an empty file or duplicate column names.
- * Example: readTable('a,b\n\n1,2\n') -> { header: ['a','b'], rows: [['1','2']], rowNumbers: [3], delimiter: ',', notes: [] }.
+ * Example: readTable('a,b\n\n1,2\n') -> { header: ['a','b'], rows: [['1','2']], rowNumbers: [3], delimiter: ',', messages: [] }.
  */
 import Papa from 'papaparse';
 import { InputError } from '../../core/errors.ts';
@@ -25,7 +25,7 @@ export interface Table {
   /** The separator between cells, for messages. */
   readonly delimiter?: string;
   /** What reading did that a person should know (decimal commas read), for the report. */
-  readonly notes?: readonly string[];
+  readonly messages?: readonly string[];
 }
 
 /** The file's row number of data row r, for messages. */
@@ -156,14 +156,14 @@ export function readTable(text: string): Table {
       throw new InputError(`Row ${rowNumbers[i]} of the CSV file has ${r.length} cells but the header has ${names.length} columns${hint}`);
     }
   });
-  const notes: string[] = [];
+  const messages: string[] = [];
   if (delimiter === ';' || delimiter === '\t') {
     const converted = readDecimalCommas(names, rows);
     if (converted.length > 0) {
-      notes.push(`Read as a file separated by ${delimiter === ';' ? 'semicolons' : 'tabs'} with decimal commas in ${converted.length === 1 ? 'the column' : 'the columns'} ${converted.join(', ')}`);
+      messages.push(`Read as a file separated by ${delimiter === ';' ? 'semicolons' : 'tabs'} with decimal commas in ${converted.length === 1 ? 'the column' : 'the columns'} ${converted.join(', ')}`);
     }
   }
-  return { header: names, rows, rowNumbers, delimiter, notes };
+  return { header: names, rows, rowNumbers, delimiter, messages };
 }
 
 /**

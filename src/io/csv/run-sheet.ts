@@ -44,7 +44,7 @@ export function runCells(run: DesignRun, factors: readonly Factor[]): Cell[] {
   if (run.coded.length !== factors.length) {
     throw new InputError(`Run ${run.run} has ${run.coded.length} settings for ${factors.length} factors`);
   }
-  return [run.run, run.yates ?? '', run.replicate, run.block, run.kind, ...factors.map((f, i) => plannedSetting(f, run.coded[i]))];
+  return [run.run, run.standardOrder ?? '', run.replicate, run.block, run.kind, ...factors.map((f, i) => plannedSetting(f, run.coded[i]))];
 }
 
 /**

@@ -79,7 +79,7 @@ export interface CsvInspection {
   /** A mapping from the guessed roles, to show and let the person change. */
   readonly suggestion: CsvMapping;
   /** What reading did that the person should know (decimal commas read as points). */
-  readonly notes: readonly string[];
+  readonly messages: readonly string[];
 }
 
 export interface CsvRunsImport {
@@ -149,7 +149,7 @@ export function inspectRunsCsv(text: string, title = 'Imported runs'): CsvInspec
     ...(pick('operator') ? { operator: pick('operator') } : {}),
     ...(pick('time') ? { time: pick('time') } : {}),
   };
-  return { rows: n, columns: guessed, suggestion, notes: table.notes ?? [] };
+  return { rows: n, columns: guessed, suggestion, messages: table.messages ?? [] };
 }
 
 function columnIndex(table: Table, name: string, what: string): number {
@@ -300,7 +300,7 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
     seenPoints.set(key, replicate);
     designRuns.push({
       run: i + 1,
-      yates: corner ? 1 + coded.reduce((s, v, j) => s + (v > 0 ? 2 ** j : 0), 0) : null,
+      standardOrder: corner ? 1 + coded.reduce((s, v, j) => s + (v > 0 ? 2 ** j : 0), 0) : null,
       replicate,
       block,
       originBlock: block,
@@ -334,7 +334,7 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
       blockWords: [],
       seed: null,
       summary: `Imported from a CSV file of ${table.rows.length} runs; the planned settings are the settings in the file.`,
-      notes: ['The runs were made elsewhere: their order and settings are as the file gives them, not a plan made here.', ...(table.notes ?? [])],
+      notes: ['The runs were made elsewhere: their order and settings are as the file gives them, not a plan made here.', ...(table.messages ?? [])],
     },
   };
   return { plan, runs };

@@ -5,7 +5,7 @@
  * order as -1. Columns are matched by name with any unit in parentheses ignored; where an
  * "<name> actual" column exists (a Trialbook export), the actual settings are used, and a
  * "<name> planned" column (a filled-in run sheet) is used when nothing else matches. Runs whose
- * response cell is empty are skipped, and so are runs marked excluded; the notes say how many.
+ * response cell is empty are skipped, and so are runs marked excluded; the messages say how many.
  * Throws InputError naming row and column for a value that cannot be read (a number beyond what
  * a calculation carries, NaN or Infinity included), and listing both columns when a name matches
  * two ("Temp (C)" and "Temp (F)").
@@ -52,7 +52,7 @@ export function tableResponseData(table: Table, cols: TableColumns): ResponseDat
   const bIdx = cols.block ? findColumn(table, cols.block, 'block') : -1;
   const exIdx = table.header.findIndex((h) => bareColumnName(h) === 'excluded');
   const runIdx = table.header.findIndex((h) => bareColumnName(h) === 'run');
-  const notes: string[] = [...(table.notes ?? [])];
+  const messages: string[] = [...(table.messages ?? [])];
 
   // Rows used: a response value present and not excluded.
   const used: number[] = [];
@@ -63,8 +63,8 @@ export function tableResponseData(table: Table, cols: TableColumns): ResponseDat
     if (row[yIdx].trim() === '') return void missing++;
     used.push(r);
   });
-  if (excluded > 0) notes.push(`${excluded} excluded run${excluded > 1 ? 's' : ''} skipped`);
-  if (missing > 0) notes.push(`${missing} run${missing > 1 ? 's' : ''} without a value for ${cols.response} skipped`);
+  if (excluded > 0) messages.push(`${excluded} excluded run${excluded > 1 ? 's' : ''} skipped`);
+  if (missing > 0) messages.push(`${missing} run${missing > 1 ? 's' : ''} without a value for ${cols.response} skipped`);
 
   const specs: FactorSpec[] = cols.factors.map((_name, j) => {
     const c = fIdx[j];
@@ -145,6 +145,6 @@ export function tableResponseData(table: Table, cols: TableColumns): ResponseDat
     y,
     blocks: bIdx >= 0 ? blocks : null,
     labels,
-    notes,
+    messages,
   };
 }

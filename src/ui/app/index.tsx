@@ -42,7 +42,7 @@ export function App(_props: AppProps) {
           {app.blocked.value}
         </p>
       )}
-      {app.seedProblem.value && <p class="warning">{app.seedProblem.value}</p>}
+      {app.demoProblem.value && <p class="warning">{app.demoProblem.value}</p>}
       {app.problem.value && <ProblemBox problem={app.problem.value} />}
       {!store && !app.problem.value && <p class="quiet">Opening the records on this device…</p>}
       {store && <RouteScreen key={router.key.value} route={router.route.value} store={store} />}

@@ -125,7 +125,7 @@ async function save(ev: Event) {
     const values = parseRunForm(form.study, currentForm());
     const result = await saveRun(store, { ...form, studyId: form.study.id, values });
     if (result.duplicate) taps.duplicates++;
-    $('save-state').textContent = result.changedSince ? 'Saved (the run had changed since it was opened; both versions are kept)' : 'Saved';
+    $('save-state').textContent = result.changedSince ? 'Saved (the run had changed since it was opened; both revisions are kept)' : 'Saved';
     form = { ...form, current: result.run, parents: result.run.heads, revisionId: newId() };
     await refreshCounts();
   } catch (err) {

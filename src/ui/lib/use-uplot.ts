@@ -19,20 +19,20 @@ export function useUplot(
   const state = useSignal<ChartState>('loading');
   useEffect(() => {
     let chart: UPlotType | null = null;
-    let cancelled = false;
+    let canceled = false;
     import('uplot').then(
       ({ default: UPlot }) => {
         const el = box.current;
-        if (cancelled || !el) return;
+        if (canceled || !el) return;
         chart = draw(UPlot, el);
         state.value = 'ready';
       },
       () => {
-        if (!cancelled) state.value = 'failed';
+        if (!canceled) state.value = 'failed';
       },
     );
     return () => {
-      cancelled = true;
+      canceled = true;
       chart?.destroy();
     };
   }, deps);

@@ -1,18 +1,18 @@
 /**
- * The app's store: opened once, the demo study seeded on first start, and what the store says
+ * The app's store: opened once, the demo study added on first start, and what the store says
  * about other tabs (closed for an upgrade, blocked by an older tab).
  */
 import { createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { openStore, type Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
-import { seedDemoIfEmpty } from '../seed/demo-seed.ts';
+import { addDemoIfEmpty } from '../demo/demo-study.ts';
 
 export const AppModel = createModel(() => {
   const store = signal<Store | null>(null);
   const problem = signal<Problem | null>(null);
   const closed = signal<string | null>(null);
   const blocked = signal<string | null>(null);
-  const seedProblem = signal<string | null>(null);
+  const demoProblem = signal<string | null>(null);
   let started = false;
 
   return {
@@ -25,7 +25,7 @@ export const AppModel = createModel(() => {
     /** Set while opening waits for another tab. */
     blocked: blocked as ReadonlySignal<string | null>,
     /** Set when the demo study could not be added (the app still works). */
-    seedProblem: seedProblem as ReadonlySignal<string | null>,
+    demoProblem: demoProblem as ReadonlySignal<string | null>,
 
     async start() {
       if (started) return;
@@ -37,9 +37,9 @@ export const AppModel = createModel(() => {
         });
         blocked.value = null;
         try {
-          await seedDemoIfEmpty(s);
+          await addDemoIfEmpty(s);
         } catch (err) {
-          seedProblem.value = `The invented demo study could not be added: ${problemOf(err).message}`;
+          demoProblem.value = `The invented demo study could not be added: ${problemOf(err).message}`;
         }
         store.value = s;
       } catch (err) {

@@ -102,7 +102,7 @@ export const ExportModel = createModel((store: Store, studyId: string | null) =>
       return run(async () => {
         const f = await fileOf(id, kind);
         const shared = await shareText(f.text, f.name, mimeOf(kind), `Trialbook: ${f.title}`);
-        return shared ? `${f.name} was handed to the share sheet.` : 'Sharing was cancelled; nothing was sent.';
+        return shared ? `${f.name} was handed to the share sheet.` : 'Sharing was canceled; nothing was sent.';
       });
     },
     importFile(file: File) {

@@ -1,12 +1,12 @@
 /**
  * Planning a new study on the phone: title and purpose, factors, responses and the design
- * (full factorial or a catalogue fraction, center runs, replicates, blocks, run order and seed).
+ * (full factorial or a catalog fraction, center runs, replicates, blocks, run order and seed).
  * The plan is built by the core's buildDesign on every change, so the preview shows exactly what
  * "Create study" will store. A wrong entry gets a message and nothing is created.
  */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { buildDesign, type DesignSpec } from '../../core/design/build-design.ts';
-import { catalogueChoices, plackettBurmanChoices } from '../../core/design/catalogue-choices.ts';
+import { catalogChoices, plackettBurmanChoices } from '../../core/design/catalog-choices.ts';
 import { planPower, type PlanPower } from '../../core/plan/power.ts';
 import { powerInWords } from '../../core/plan/power-words.ts';
 import { noiseSources, type NoiseSource } from './noise-sources.ts';
@@ -44,7 +44,7 @@ export interface ResponseDraft {
   readonly target: string;
 }
 
-/** 'full', a catalogue fraction such as '1/2', or a Plackett-Burman design such as 'pb-12'. */
+/** 'full', a catalog fraction such as '1/2', or a Plackett-Burman design such as 'pb-12'. */
 export type FractionChoice = string;
 
 /** The most factors the form takes: 23, the most a Plackett-Burman design holds (24 runs); full factorials and fractions stop at MAX_DESIGN_FACTORS. */
@@ -120,8 +120,8 @@ function wholeCount(text: string, what: string, min: number): number {
 }
 
 /**
- * What the form offers for k factors: the full factorial and each catalogue fraction, with runs
- * and resolution (the core's catalogueChoices, up to MAX_DESIGN_FACTORS factors), then the
+ * What the form offers for k factors: the full factorial and each catalog fraction, with runs
+ * and resolution (the core's catalogChoices, up to MAX_DESIGN_FACTORS factors), then the
  * Plackett-Burman screening designs that take k factors (plackettBurmanChoices).
  */
 export function fractionOptions(k: number): FractionOption[] {
@@ -129,7 +129,7 @@ export function fractionOptions(k: number): FractionOption[] {
   const factorial =
     k > MAX_DESIGN_FACTORS
       ? []
-      : catalogueChoices(k).map((c) => {
+      : catalogChoices(k).map((c) => {
           const res = c.resolution === null ? null : romanResolution(c.resolution);
           const label = c.fraction === 'full' ? `Full factorial · ${c.runs} runs` : `${c.fraction} · ${c.runs} runs${res ? ` · resolution ${res}` : ''}`;
           return { value: c.fraction, runs: c.runs, resolution: res, label };
@@ -176,7 +176,7 @@ export const NewStudyModel = createModel((store: Store) => {
   const centerRuns = signal('0');
   const replicates = signal('1');
   const blocks = signal<number>(1);
-  const randomise = signal(true);
+  const randomize = signal(true);
   const seedText = signal('');
   /** Drawn once for a blank seed box, so the preview and the created study share one run order. */
   const drawnSeed = signal(drawSeed());
@@ -195,7 +195,7 @@ export const NewStudyModel = createModel((store: Store) => {
 
   /** The seed the plan uses: the typed one, else the drawn one; null in standard order. */
   const seed = computed<number | null>(() => {
-    if (!randomise.value) return null;
+    if (!randomize.value) return null;
     const s = seedText.value.trim();
     if (s === '') return drawnSeed.value;
     return /^\d+$/.test(s) && Number.isSafeInteger(Number(s)) ? Number(s) : Number.NaN;
@@ -219,7 +219,7 @@ export const NewStudyModel = createModel((store: Store) => {
       centerRuns: wholeCount(centerRuns.value, 'Center runs', 0),
       replicates: wholeCount(replicates.value, 'Replicates', 1),
       blocks: blocks.value,
-      randomise: randomise.value,
+      randomize: randomize.value,
       ...(s !== null ? { seed: s } : {}),
     };
   }
@@ -270,7 +270,7 @@ export const NewStudyModel = createModel((store: Store) => {
     centerRuns: centerRuns as ReadonlySignal<string>,
     replicates: replicates as ReadonlySignal<string>,
     blocks: blocks as ReadonlySignal<number>,
-    randomise: randomise as ReadonlySignal<boolean>,
+    randomize: randomize as ReadonlySignal<boolean>,
     seedText: seedText as ReadonlySignal<string>,
     problem: problem as ReadonlySignal<Problem | null>,
     creating: creating as ReadonlySignal<boolean>,
@@ -278,7 +278,7 @@ export const NewStudyModel = createModel((store: Store) => {
     options,
     seed,
     /** True when the seed in use was drawn here (the box is blank). */
-    seedDrawn: computed(() => randomise.value && seedText.value.trim() === ''),
+    seedDrawn: computed(() => randomize.value && seedText.value.trim() === ''),
     factorMessages,
     responseProblem,
     preview,
@@ -301,11 +301,11 @@ export const NewStudyModel = createModel((store: Store) => {
       sigmaText.value = String(Number(source.sigma.toPrecision(3)));
       sigmaFrom.value = source;
     },
-    /** Reads the earlier studies' residual SDs; a study that cannot be analysed is left out. */
+    /** Reads the earlier studies' residual SDs; a study that cannot be analyzed is left out. */
     async loadNoiseSources(): Promise<void> {
       sources.value = await noiseSources(store);
     },
-    /** True when the chosen fraction is one the catalogue offers for this many factors. */
+    /** True when the chosen fraction is one the catalog offers for this many factors. */
     fractionOffered: computed(() => options.value.some((o) => o.value === fraction.value)),
 
     setTitle(v: string) {
@@ -351,8 +351,8 @@ export const NewStudyModel = createModel((store: Store) => {
       blocks.value = n;
       edit();
     },
-    setRandomise(on: boolean) {
-      randomise.value = on;
+    setRandomize(on: boolean) {
+      randomize.value = on;
       edit();
     },
     setSeedText(v: string) {

@@ -7,7 +7,7 @@
 import { listRuns } from '../../store/runs.ts';
 import { listStudies } from '../../store/studies.ts';
 import type { Store } from '../../store/store.ts';
-import { analyseResponse, defaultSettings } from './study-analysis-model.ts';
+import { analyzeResponse, defaultSettings } from './study-analysis-model.ts';
 
 export interface NoiseSource {
   readonly studyId: string;
@@ -27,7 +27,7 @@ export async function noiseSources(store: Store): Promise<NoiseSource[]> {
     const runs = await listRuns(store, study.id);
     if (runs.length === 0) continue;
     study.responses.forEach((r, i) => {
-      const res = analyseResponse({ study, runs }, i, defaultSettings(study));
+      const res = analyzeResponse({ study, runs }, i, defaultSettings(study));
       if (res.ok && res.analysis.sigma !== null && res.analysis.sigma > 0 && res.analysis.df.residual > 0) {
         out.push({ studyId: study.id, title: study.title, response: r.name, sigma: res.analysis.sigma, df: res.analysis.df.residual });
       }

@@ -157,7 +157,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     return () => markTyping(formKey, 'none');
   });
 
-  /** Reopens the form from the stored run (after a restore wrote a new current version). */
+  /** Reopens the form from the stored run (after a restore wrote a new current revision). */
   async function reload() {
     await drafts;
     const s = state.peek();

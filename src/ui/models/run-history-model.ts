@@ -1,7 +1,7 @@
 /**
  * The history of one logged run, for the phone: every revision, newest first, with what changed
- * from the version it was made from, in plain words. Order is the revision order of the store
- * (the revision counter, then device, then id), never the clock. Restoring an earlier version
+ * from the revision it was made from, in plain words. Order is the revision order of the store
+ * (the revision counter, then device, then id), never the clock. Restoring an earlier revision
  * adds a new revision; nothing is deleted. A restore that fails changes nothing and says why.
  */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
@@ -11,19 +11,19 @@ import type { Store } from '../../store/store.ts';
 import { num, setting, when } from '../lib/format.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
 
-/** One version as the history list shows it. */
+/** One revision as the history list shows it. */
 export interface HistoryEntry {
   readonly revision: RunRevision;
   /** 1 for the oldest, in revision order. */
   readonly number: number;
   readonly isCurrent: boolean;
-  /** The version number this one restored, or null. */
+  /** The revision number this one restored, or null. */
   readonly restoredFromNumber: number | null;
-  /** True when another version was made from the same version as this one (diverged edits). */
+  /** True when another revision was made from the same revision as this one (diverged edits). */
   readonly sharesParent: boolean;
-  /** What changed from the version it was made from, one phrase each; empty when nothing did. */
+  /** What changed from the revision it was made from, one phrase each; empty when nothing did. */
   readonly changes: readonly string[];
-  /** True for the first version (there is nothing before it). */
+  /** True for the first revision (there is nothing before it). */
   readonly first: boolean;
 }
 
@@ -60,7 +60,7 @@ export function historyEntries(study: Pick<StudyRecord, 'factors' | 'responses'>
   const sorted = [...revisions].sort(compareRevisions);
   const numberOf = new Map(sorted.map((r, i) => [r.id, i + 1]));
   const byId = new Map(sorted.map((r) => [r.id, r]));
-  // How many versions were made from each starting point ('' for "from nothing").
+  // How many revisions were made from each starting point ('' for "from nothing").
   const starts = new Map<string, number>();
   for (const r of sorted) {
     const keys = r.parents.length === 0 ? [''] : r.parents;
@@ -91,7 +91,7 @@ export const RunHistoryModel = createModel((store: Store, study: StudyRecord, ru
   /** The revision whose restore is waiting for a yes, or null. */
   const confirming = signal<string | null>(null);
   const restoreState = signal<RestoreState>('idle');
-  /** The version number of the last restore's new version, and the one it brought back. */
+  /** The revision number of the last restore's new revision, and the one it brought back. */
   const lastRestore = signal<{ from: number; to: number } | null>(null);
 
   async function load() {
@@ -114,7 +114,7 @@ export const RunHistoryModel = createModel((store: Store, study: StudyRecord, ru
       confirming.value = revisionId;
       if (revisionId) lastRestore.value = null;
     },
-    /** Restores the revision waiting for a yes; true when a new version was written. */
+    /** Restores the revision waiting for a yes; true when a new revision was written. */
     async restore(): Promise<boolean> {
       const from = confirming.peek();
       if (!from || restoreState.peek() === 'restoring') return false;

@@ -5,7 +5,7 @@ import { listRuns } from '../../store/runs.ts';
 import { listStudies } from '../../store/studies.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
-import { isDemo } from '../seed/demo-seed.ts';
+import { isDemo } from '../demo/demo-study.ts';
 
 export interface StudySummary {
   readonly study: StudyRecord;

@@ -47,9 +47,9 @@ export type AnalysisResult =
   | { readonly ok: false; readonly message: string };
 
 /** The analysis of one response with the chosen settings, or the reason there is none. */
-export function analyseResponse(d: StudyData, responseIndex: number, settings: ResponseSettings): AnalysisResult {
+export function analyzeResponse(d: StudyData, responseIndex: number, settings: ResponseSettings): AnalysisResult {
   const response = d.study.responses[responseIndex];
-  if (!response) return { ok: false, message: 'This study has no response to analyse.' };
+  if (!response) return { ok: false, message: 'This study has no response to analyze.' };
   try {
     const data = responseDataFromRuns(d.study, d.runs, response.name);
     const k = d.study.factors.length;
@@ -96,7 +96,7 @@ export const StudyAnalysisModel = createModel((store: Store, studyId: string) =>
     if (!d) return [];
     return d.study.responses.map((response, index) => {
       const s = settingsOf(response.name, defaultSettings(d.study));
-      return { index, response, settings: s, result: computed(() => analyseResponse(d, index, s.value)) };
+      return { index, response, settings: s, result: computed(() => analyzeResponse(d, index, s.value)) };
     });
   });
 

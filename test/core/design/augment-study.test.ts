@@ -42,7 +42,7 @@ describe('augmentStudy', () => {
     expect(a.alpha).toBeCloseTo(Math.SQRT2, 12); // sqrt(2 (1 + 3/4) / (1 + 3/4)), Box and Hunter 1957
     expect(a.added.map((r) => r.kind).sort()).toEqual(['axial', 'axial', 'axial', 'axial', 'center', 'center', 'center']);
     expect(a.added.map((r) => r.run)).toEqual([8, 9, 10, 11, 12, 13, 14]);
-    expect(a.added.every((r) => r.block === 2 && r.originBlock === 2 && r.yates === null)).toBe(true);
+    expect(a.added.every((r) => r.block === 2 && r.originBlock === 2 && r.standardOrder === null)).toBe(true);
     expect(a.plan.design.runs.slice(0, 7)).toEqual(plan2.design.runs);
     expect(a.properties.blocksOrthogonal).toBe(true);
     expect(a.properties.rotatable).toBe(true);

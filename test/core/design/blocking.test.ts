@@ -9,7 +9,7 @@ import {
   defaultBlocking,
   parseBlockWords,
 } from '../../../src/core/design/blocking.ts';
-import { catalogueFraction } from '../../../src/core/design/catalogue.ts';
+import { catalogFraction } from '../../../src/core/design/catalog.ts';
 import { blockOriginText } from '../../../src/core/text/design-text.ts';
 import { definingRelation } from '../../../src/core/design/defining-relation.ts';
 import { basicFactors } from '../../../src/core/design/fractional.ts';
@@ -66,7 +66,7 @@ describe('defaultBlocking for full factorials', () => {
 describe('defaultBlocking for fractions', () => {
   it('blocks the 2^(7-3) in 2 blocks without confounding a main effect or a two-factor interaction', () => {
     const f = numericFactors(7);
-    const gens = parseGenerators(catalogueFraction(7, 3).generators, f);
+    const gens = parseGenerators(catalogFraction(7, 3).generators, f);
     const rel = definingRelation(gens.map(generatorWord));
     const b = defaultBlocking(7, rel, basicFactors(7, gens), 2);
     const confounded = blockConfounded(b.generators, rel);
@@ -76,7 +76,7 @@ describe('defaultBlocking for fractions', () => {
   });
   it('refuses when every choice confounds a main effect (the 2^(7-4) in 4 blocks)', () => {
     const f = numericFactors(7);
-    const gens = parseGenerators(catalogueFraction(7, 4).generators, f);
+    const gens = parseGenerators(catalogFraction(7, 4).generators, f);
     const rel = definingRelation(gens.map(generatorWord));
     expect(() => defaultBlocking(7, rel, basicFactors(7, gens), 4)).toThrow(/would confound a main effect with blocks whatever words/);
   });

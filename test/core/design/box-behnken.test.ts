@@ -34,7 +34,7 @@ describe('boxBehnken: the published table (Box and Behnken 1960, Technometrics 2
 
   it('the 3-factor design is the NIST/SEMATECH e-Handbook table (section 5.3.3.6.2): the 12 edge midpoints of the cube', () => {
     // e-Handbook, Box-Behnken design for 3 factors (from memory): (+-1, +-1, 0), (+-1, 0, +-1), (0, +-1, +-1)
-    const p = boxBehnken({ factors: numeric(3), centerRuns: 0, randomise: false });
+    const p = boxBehnken({ factors: numeric(3), centerRuns: 0, randomize: false });
     const got = p.design.runs.map((r) => r.coded.join(',')).sort();
     const want: string[] = [];
     for (const a of [-1, 1]) for (const b of [-1, 1]) want.push(`${a},${b},0`, `${a},0,${b}`, `0,${a},${b}`);
@@ -60,6 +60,6 @@ describe('boxBehnken: the published table (Box and Behnken 1960, Technometrics 2
     expect(() => boxBehnken({ factors: numeric(8) })).toThrow(/got 8/);
     expect(() => boxBehnken({ factors: [...numeric(2), { kind: 'categorical', name: 'Die', levels: ['old', 'new'] }] })).toThrow(/Die is categorical/);
     expect(() => boxBehnken({ factors: numeric(3), centerRuns: -1 })).toThrow(/got -1/);
-    expect(() => boxBehnken({ factors: numeric(3), randomise: false, seed: 1 })).toThrow(/seed only applies/);
+    expect(() => boxBehnken({ factors: numeric(3), randomize: false, seed: 1 })).toThrow(/seed only applies/);
   });
 });

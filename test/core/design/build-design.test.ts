@@ -30,7 +30,7 @@ function constantWords(d: Design): Map<number, number> {
 }
 
 describe('buildDesign: examples from the literature', () => {
-  it('2^(7-3) from the catalogue: resolution IV, seven words of length 4, AB = CE = DF (Chen, Sun and Wu 1993 design 7-3.1, from memory)', () => {
+  it('2^(7-3) from the catalog: resolution IV, seven words of length 4, AB = CE = DF (Chen, Sun and Wu 1993 design 7-3.1, from memory)', () => {
     const d = buildDesign({ factors: numeric(7), fraction: '1/8', seed: 7 });
     expect(d.runs.length).toBe(16);
     expect(d.generators).toEqual(['E=ABC', 'F=ABD', 'G=ACD']);
@@ -44,7 +44,7 @@ describe('buildDesign: examples from the literature', () => {
   });
 
   it('2^(5-2) from typed generators D=AB, E=-AC: I = ABD = -ACE = -BCDE (Montgomery, 8th ed., section 8.3, sign-reversed generator)', () => {
-    const d = buildDesign({ factors: numeric(5), generators: ['D=AB', 'E=-AC'], randomise: false });
+    const d = buildDesign({ factors: numeric(5), generators: ['D=AB', 'E=-AC'], randomize: false });
     expect(d.definingRelation).toEqual(['ABD', '-ACE', '-BCDE']);
     expect(d.resolution).toBe(3);
     expect(d.wordLengths).toEqual({ 3: 2, 4: 1 });
@@ -60,9 +60,9 @@ describe('buildDesign: examples from the literature', () => {
     expect(d.notes.join(' ')).toMatch(/Table 7\.8/);
   });
 
-  it('keeps standard (Yates) order when asked, with a note on why randomising matters', () => {
-    const d = buildDesign({ factors: numeric(3), randomise: false });
-    expect(d.runs.map((r) => r.yates)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
+  it('keeps standard (Yates) order when asked, with a note on why randomizing matters', () => {
+    const d = buildDesign({ factors: numeric(3), randomize: false });
+    expect(d.runs.map((r) => r.standardOrder)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
     expect(d.runs[1].coded).toEqual([1, -1, -1]);
     expect(d.seed).toBeNull();
     expect(d.notes.join(' ')).toMatch(/drift/);
@@ -83,7 +83,7 @@ describe('buildDesign: examples from the literature', () => {
     });
     const centers = d.runs.filter((r) => r.kind === 'center');
     expect(centers.length).toBe(6);
-    expect(centers.every((r) => r.yates === null && r.coded.slice(0, 3).every((x) => x === 0))).toBe(true);
+    expect(centers.every((r) => r.standardOrder === null && r.coded.slice(0, 3).every((x) => x === 0))).toBe(true);
     expect(centers.filter((r) => r.block === 1).length).toBe(4);
     expect(d.notes.join(' ')).toMatch(/Powder has no middle, so each center run is repeated at every combination of its levels/);
     expect(d.notes.join(' ')).toMatch(/do not divide evenly/);
@@ -94,7 +94,7 @@ describe('buildDesign: examples from the literature', () => {
     expect(d.runs.length).toBe(20);
     expect(new Set(d.runs.map((r) => r.block))).toEqual(new Set([1, 2, 3, 4]));
     for (const rep of [1, 2]) {
-      expect(d.runs.filter((r) => r.replicate === rep && r.kind === 'factorial').map((r) => r.yates).sort((a, b) => a! - b!)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
+      expect(d.runs.filter((r) => r.replicate === rep && r.kind === 'factorial').map((r) => r.standardOrder).sort((a, b) => a! - b!)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
     }
   });
 
@@ -147,7 +147,7 @@ describe('buildDesign: bad input', () => {
     expect(() => buildDesign({ factors: numeric(3), centerRuns: -2 })).toThrow(/Center runs/);
   });
   it('refuses a seed with standard order, a foldover of a full factorial, center runs with categorical factors only, an unknown sort factor', () => {
-    expect(() => buildDesign({ factors: numeric(3), randomise: false, seed: 1 })).toThrow(/seed only applies/);
+    expect(() => buildDesign({ factors: numeric(3), randomize: false, seed: 1 })).toThrow(/seed only applies/);
     expect(() => buildDesign({ factors: numeric(3), foldover: 'all' })).toThrow(/no aliases to break/);
     const cats: FactorSpec[] = [
       { kind: 'categorical', name: 'P', levels: ['a', 'b'] },
@@ -161,11 +161,11 @@ describe('buildDesign: bad input', () => {
   });
 });
 
-/** A random valid spec: full factorial, catalogue fraction or random typed generators; folds, blocks, centers, replicates. */
+/** A random valid spec: full factorial, catalog fraction or random typed generators; folds, blocks, centers, replicates. */
 const specArb: fc.Arbitrary<DesignSpec> = fc
   .record({
     k: fc.integer({ min: 3, max: 7 }),
-    mode: fc.constantFrom('full', 'catalogue', 'typed'),
+    mode: fc.constantFrom('full', 'catalog', 'typed'),
     m: fc.integer({ min: 3, max: 6 }),
     pick: fc.array(fc.nat(), { minLength: 7, maxLength: 7 }),
     signs: fc.array(fc.boolean(), { minLength: 7, maxLength: 7 }),
@@ -178,7 +178,7 @@ const specArb: fc.Arbitrary<DesignSpec> = fc
   .map(({ k, mode, m, pick, signs, blocks, centers, replicates, fold, seed }) => {
     const spec: { -readonly [K in keyof DesignSpec]: DesignSpec[K] } = { factors: numeric(k), centerRuns: centers, replicates, seed, blocks };
     let fraction = false;
-    if (mode === 'catalogue' && k >= 4) {
+    if (mode === 'catalog' && k >= 4) {
       spec.fraction = `1/${2 ** Math.min(k - 3, 1 + (pick[0] % (k - 3)))}`;
       fraction = true;
     } else if (mode === 'typed') {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { catalogueFraction } from '../../../src/core/design/catalogue.ts';
+import { catalogFraction } from '../../../src/core/design/catalog.ts';
 import { definingRelation, resolution } from '../../../src/core/design/defining-relation.ts';
 import { foldPoints, foldRelation, separatedPairs } from '../../../src/core/design/foldover.ts';
 import { fractionalFactorial } from '../../../src/core/design/fractional.ts';
@@ -13,14 +13,14 @@ const relationOf = (k: number, gens: string[]) => definingRelation(parseGenerato
 
 describe('foldRelation', () => {
   it('the mirror image of a resolution III fraction gives resolution IV (Box, Hunter and Hunter, 2nd ed., section 6.8: the 2^(7-4) folds to a 2^(7-3)_IV)', () => {
-    const rel = relationOf(7, [...catalogueFraction(7, 4).generators]);
+    const rel = relationOf(7, [...catalogFraction(7, 4).generators]);
     const { kept, dropped } = foldRelation(rel, 'all', 7);
     expect(resolution(kept)).toBe(4);
     expect(kept.length).toBe(7);
     expect(dropped.every((w) => formatWord(w, L).replace('-', '').length % 2 === 1)).toBe(true);
   });
   it('switching one factor drops every word containing it (Montgomery, 8th ed., section 8.6)', () => {
-    const rel = relationOf(7, [...catalogueFraction(7, 4).generators]);
+    const rel = relationOf(7, [...catalogFraction(7, 4).generators]);
     const { kept } = foldRelation(rel, 3, 7);
     expect(kept.every((w) => (w.mask & mask('D')) === 0)).toBe(true);
     expect(kept.length).toBe(7);
@@ -36,7 +36,7 @@ describe('foldPoints', () => {
   it('switches signs and numbers the new points after the first fraction', () => {
     const pts = fractionalFactorial(3, parseGenerators(['C=AB'], numericFactors(3)));
     const all = foldPoints(pts, 'all');
-    expect(all.map((p) => p.yates)).toEqual([5, 6, 7, 8]);
+    expect(all.map((p) => p.standardOrder)).toEqual([5, 6, 7, 8]);
     expect(all[0].coded).toEqual(pts[0].coded.map((x) => -x));
     expect(foldPoints(pts, 0)[1].coded).toEqual([-1, -1, -1]);
   });

@@ -10,7 +10,7 @@ describe('fractionalFactorial', () => {
     const runs = fractionalFactorial(4, parseGenerators(['D=ABC'], f));
     const names = runs.map((r) => r.coded.map((x, j) => (x > 0 ? 'abcd'[j] : '')).join('') || '(1)');
     expect(names).toEqual(['(1)', 'ad', 'bd', 'ab', 'cd', 'ac', 'bc', 'abcd']);
-    expect(runs.map((r) => r.yates)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
+    expect(runs.map((r) => r.standardOrder)).toEqual([1, 2, 3, 4, 5, 6, 7, 8]);
   });
   it('switches signs of a sign-reversed generator (D = -ABC, the alternate fraction)', () => {
     const f = numericFactors(4);

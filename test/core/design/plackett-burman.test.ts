@@ -55,7 +55,7 @@ describe('plackettBurmanPoints', () => {
   it('takes the first k columns, standard order = table row', () => {
     const p = plackettBurmanPoints(20, 4);
     expect(p).toHaveLength(20);
-    expect(p[0]).toEqual({ yates: 1, coded: signs('++--') });
+    expect(p[0]).toEqual({ standardOrder: 1, coded: signs('++--') });
     expect(p[19].coded).toEqual([-1, -1, -1, -1]);
   });
 
@@ -110,18 +110,18 @@ describe('Plackett-Burman plans from buildDesign', () => {
     expect(d.notes.some((n) => n.startsWith('Partial aliasing:'))).toBe(true);
     // Each replicate holds every row of the table once.
     for (const rep of [1, 2]) {
-      const ys = d.runs.filter((r) => r.replicate === rep && r.kind === 'factorial').map((r) => r.yates).sort((a, b) => a! - b!);
+      const ys = d.runs.filter((r) => r.replicate === rep && r.kind === 'factorial').map((r) => r.standardOrder).sort((a, b) => a! - b!);
       expect(ys).toEqual(Array.from({ length: 12 }, (_, i) => i + 1));
     }
     const table = plackettBurmanTable(12);
-    for (const r of d.runs) if (r.yates !== null) expect(r.coded).toEqual(table[r.yates - 1].slice(0, 7));
+    for (const r of d.runs) if (r.standardOrder !== null) expect(r.coded).toEqual(table[r.standardOrder - 1].slice(0, 7));
     // The same seed gives the same order.
     expect(buildDesign({ factors: numeric(7), plackettBurman: 12, centerRuns: 2, replicates: 2, seed: 5 }).runs).toEqual(d.runs);
   });
 
   it('takes up to 23 factors in 24 runs, in standard order when asked', () => {
-    const d = buildDesign({ factors: numeric(23), plackettBurman: 24, randomise: false });
-    expect(d.runs.map((r) => r.yates)).toEqual(Array.from({ length: 24 }, (_, i) => i + 1));
+    const d = buildDesign({ factors: numeric(23), plackettBurman: 24, randomize: false });
+    expect(d.runs.map((r) => r.standardOrder)).toEqual(Array.from({ length: 24 }, (_, i) => i + 1));
     expect(d.summary).toMatch(/for 23 factors: .*interactions \(correlations up to/);
     expect(d.summary).not.toMatch(/left unused/);
   });

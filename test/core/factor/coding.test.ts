@@ -19,7 +19,7 @@ describe('coding', () => {
     expect(toCoded(temp, 190)).toBe(0.5);
     expect(toReal(temp, 0.5)).toBe(190);
   });
-  it('a log scale centres on the geometric mean (common practice)', () => {
+  it('a log scale centers on the geometric mean (common practice)', () => {
     expect(toCoded(speed, 200)).toBeCloseTo(0, 12); // sqrt(100 * 400) = 200
     expect(toReal(speed, 0) as number).toBeCloseTo(200, 10);
     expect(toCoded(speed, 400)).toBeCloseTo(1, 12);

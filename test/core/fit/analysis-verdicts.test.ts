@@ -57,9 +57,9 @@ describe('analysisVerdicts', () => {
     expect(analysisVerdicts({ ...quiet, curvature: { ...curv, se: 0, t: null, p: null }, pureErrorDf: 4 })[0]).toMatchObject({ outcome: 'untestable', reason: 'no-spread' });
   });
 
-  it("analyze's warnings are its notes, then its warning verdicts in words (the section 6.8 example with five center runs: a flat curvature)", () => {
+  it("analyze's warnings are its messages, then its warning verdicts in words (the section 6.8 example with five center runs: a flat curvature)", () => {
     const d = fixtureData('montgomery-8e-ex6-6-center-points.csv', { factors: ['Time', 'Temperature'], response: 'Yield' });
-    const a = analyze({ ...d, notes: ['1 excluded run skipped'] });
+    const a = analyze({ ...d, messages: ['1 excluded run skipped'] });
     expect(a.verdicts.find((v) => v.kind === 'curvature')).toMatchObject({ outcome: 'flat', nCenter: 5 });
     expect(a.warnings).toEqual(['1 excluded run skipped', ...a.verdicts.filter(isWarning).map(verdictText)]);
     const f = fixtureData('montgomery-8e-ex6-2-filtration-2x4.csv', { factors: ['Temperature', 'Pressure', 'Concentration', 'Stirring'], response: 'Filtration rate' });

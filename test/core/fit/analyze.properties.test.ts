@@ -16,7 +16,7 @@ function fullFactorial(k: number): number[][] {
 }
 
 function data(k: number, coded: number[][], y: number[]): ResponseData {
-  return { factors: factorsOf(k), response: 'y', coded, y, blocks: null, labels: y.map((_, i) => String(i + 1)), notes: [] };
+  return { factors: factorsOf(k), response: 'y', coded, y, blocks: null, labels: y.map((_, i) => String(i + 1)), messages: [] };
 }
 
 /** A complete balanced 2^k with r replicates and c center runs, and a response. */

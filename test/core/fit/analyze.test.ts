@@ -218,7 +218,7 @@ describe('analyze: terms the runs cannot separate', () => {
     [0, 0, 0],
   ];
   const y = [10, 14, 11, 19, 13];
-  const data = { factors, response: 'Finish', coded, y, blocks: null, labels: ['1', '2', '3', '4', '5'], notes: [] };
+  const data = { factors, response: 'Finish', coded, y, blocks: null, labels: ['1', '2', '3', '4', '5'], messages: [] };
 
   it('reports AB as the same column as C and estimates their sum', () => {
     const a = analyze(data, { terms: parseTerms('A + B + C + A:B', factors) });
@@ -243,7 +243,7 @@ describe('analyze: bad input gets a clear message', () => {
     [-1, 1],
     [1, 1],
   ];
-  const base = { factors, response: 'Gloss', coded, y: [1, 2, 3, 5], blocks: null, labels: ['1', '2', '3', '4'], notes: [] };
+  const base = { factors, response: 'Gloss', coded, y: [1, 2, 3, 5], blocks: null, labels: ['1', '2', '3', '4'], messages: [] };
 
   it('NaN response', () => {
     expect(() => analyze({ ...base, y: [1, Number.NaN, 3, 4] })).toThrow(/Gloss, run 2: needs a number/);

@@ -23,13 +23,13 @@ describe('estimateTerms', () => {
     expect(byLetters.A.p).toBeCloseTo(2 * (1 - jStat.studentt.cdf(Math.abs(byLetters.A.t!), 8)), 10);
     expect(byLetters.A.ci![1] - byLetters.A.coef).toBeCloseTo(jStat.studentt.inv(0.975, 8) * (sigma / 4), 6); // jstat's inverse is good to about 1e-9 relative
     expect(e.labels[0]).toEqual({ name: 'Intercept', letters: 'I' });
-    expect(e.blockEffects).toBeNull();
+    expect(e.blockOffsets).toBeNull();
   });
 
   it('names what an estimate carries when the runs cannot separate terms (C = AB in a 2^(3-1))', () => {
     const factors = defineFactors(['Speed', 'Feed', 'Depth'].map((name) => ({ kind: 'numeric' as const, name, low: 0, high: 1 })));
     const coded = [[-1, -1, 1], [1, -1, -1], [-1, 1, -1], [1, 1, 1], [0, 0, 0]];
-    const data = { factors, response: 'Finish', coded, y: [10, 14, 11, 19, 13], blocks: null, labels: ['1', '2', '3', '4', '5'], notes: [] };
+    const data = { factors, response: 'Finish', coded, y: [10, 14, 11, 19, 13], blocks: null, labels: ['1', '2', '3', '4', '5'], messages: [] };
     const f = chooseFit(data, { terms: parseTerms('A + B + C + A:B', factors) });
     const est = estimateTerms(f.fit, factors, f.blockLevels, 0.05);
     expect(est.aliased.map((a) => a.letters)).toEqual(['AB']);
@@ -37,12 +37,12 @@ describe('estimateTerms', () => {
     expect(est.aliasedWithInterceptOrBlocks).toBe(false);
   });
 
-  it('block effects sum to zero, the last one implied', () => {
+  it('block offsets sum to zero, the last one implied', () => {
     const blocked = { ...d, blocks: d.y.map((_, i) => (i < 8 ? 1 : 2)) };
     const f = chooseFit(blocked);
     const est = estimateTerms(f.fit, d.factors, f.blockLevels, 0.05);
-    expect(est.blockEffects!.map((b) => b.block)).toEqual([1, 2]);
-    expect(est.blockEffects![0].effect + est.blockEffects![1].effect).toBeCloseTo(0, 12);
+    expect(est.blockOffsets!.map((b) => b.block)).toEqual([1, 2]);
+    expect(est.blockOffsets![0].offset + est.blockOffsets![1].offset).toBeCloseTo(0, 12);
   });
 
   it('degenerate input: with no residual df every se, t, p and interval is null, never NaN', () => {

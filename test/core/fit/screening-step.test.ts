@@ -20,8 +20,8 @@ function data(k: number, rows = table, ys = y, extra: Partial<ResponseData> = {}
     y: ys,
     blocks: null,
     labels: rows.map((_, i) => String(i + 1)),
-    notes: [],
-    screening: { runs: 12, yates: rows.map((_, i) => i + 1) },
+    messages: [],
+    screening: { runs: 12, standardOrder: rows.map((_, i) => i + 1) },
     ...extra,
   };
 }
@@ -43,11 +43,11 @@ describe('screeningStep', () => {
 
   it('a center run gets 0 in every column; bad indexes and too many factors are refused', () => {
     const rows = [...table, table[0].map(() => 0)];
-    const s = screeningStep(data(5, rows, [...y, 50], { screening: { runs: 12, yates: [...table.map((_, i) => i + 1), null] } }))!;
+    const s = screeningStep(data(5, rows, [...y, 50], { screening: { runs: 12, standardOrder: [...table.map((_, i) => i + 1), null] } }))!;
     expect(s.contrasts.columns.every((c) => c[12] === 0)).toBe(true);
-    expect(() => screeningStep(data(5, table, y, { screening: { runs: 12, yates: table.map((_, i) => i + 2) } }))).toThrow('Run 12 has standard-order index 13, outside 1 to 12');
-    expect(() => screeningStep(data(5, table, y, { screening: { runs: 12, yates: [1, 2] } }))).toThrow(InputError);
-    expect(() => screeningStep(data(5, table, y, { screening: { runs: 16, yates: table.map((_, i) => i + 1) } }))).toThrow('comes in 12, 20, 24 runs, got 16');
+    expect(() => screeningStep(data(5, table, y, { screening: { runs: 12, standardOrder: table.map((_, i) => i + 2) } }))).toThrow('Run 12 has standard-order index 13, outside 1 to 12');
+    expect(() => screeningStep(data(5, table, y, { screening: { runs: 12, standardOrder: [1, 2] } }))).toThrow(InputError);
+    expect(() => screeningStep(data(5, table, y, { screening: { runs: 16, standardOrder: table.map((_, i) => i + 1) } }))).toThrow('comes in 12, 20, 24 runs, got 16');
   });
 });
 

@@ -8,7 +8,7 @@ const factors = defineFactors([
   { kind: 'categorical', name: 'Powder', levels: ['matte', 'gloss'] },
 ]);
 const coded = [[-1, -1], [1, -1], [-1, 1], [1, 1]];
-const base = { factors, response: 'Gloss', coded, y: [1, 2, 3, 5], blocks: null, labels: ['1', '2', '3', '4'], notes: [] };
+const base = { factors, response: 'Gloss', coded, y: [1, 2, 3, 5], blocks: null, labels: ['1', '2', '3', '4'], messages: [] };
 
 describe('validateResponseData', () => {
   it('passes good runs and changes nothing', () => {

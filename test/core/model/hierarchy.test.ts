@@ -10,7 +10,7 @@ describe('model hierarchy', () => {
     expect(subterms(ABC).sort((a, b) => a - b)).toEqual([A, B, AB, C, AC, BC].sort((a, b) => a - b));
     expect(subterms(A)).toEqual([]);
   });
-  it('recognises hierarchical models', () => {
+  it('recognizes hierarchical models', () => {
     expect(isHierarchical([A, B, AB])).toBe(true);
     expect(isHierarchical([A, AB])).toBe(false);
     expect(isHierarchical([])).toBe(true);

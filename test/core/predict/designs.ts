@@ -19,7 +19,7 @@ export function lcg(seed: number) {
 }
 
 export function responseData(specs: FactorSpec[], coded: number[][], y: number[], blocks: number[] | null = null): ResponseData {
-  return { factors: defineFactors(specs), response: 'y', coded, y, blocks, labels: y.map((_, i) => String(i + 1)), notes: [] };
+  return { factors: defineFactors(specs), response: 'y', coded, y, blocks, labels: y.map((_, i) => String(i + 1)), messages: [] };
 }
 
 export const numeric = (name: string, low = 100, high = 200, unit?: string): FactorSpec => ({ kind: 'numeric', name, low, high, ...(unit ? { unit } : {}) });

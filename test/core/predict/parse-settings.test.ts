@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../../src/core/errors.ts';
 import { defineFactors } from '../../../src/core/factor/factor.ts';
+import { readSetting } from '../../../src/core/factor/read-setting.ts';
 import { formatSetting, parseSettings } from '../../../src/core/predict/parse-settings.ts';
 
 const factors = defineFactors([
@@ -25,6 +26,26 @@ describe('parseSettings', () => {
     expect(s[1].coded).toBe(-1);
   });
 
+  it('reads typed settings by the rule of readSetting, in its words (one domain rule for screens and command line)', () => {
+    const message = (f: () => unknown) => {
+      try {
+        f();
+      } catch (e) {
+        return (e as Error).message;
+      }
+      return 'no error';
+    };
+    for (const [i, text] of [[0, '18,5'], [0, '12abc'], [1, 'silk'], [2, '-5'], [2, '0']] as const) {
+      const key = factors[i].letter;
+      const given = { A: '170', B: 'matte', [key]: text };
+      const expected = message(() => readSetting(factors[i], text));
+      expect(expected).not.toBe('no error');
+      expect(message(() => parseSettings(factors, given))).toBe(expected);
+    }
+    // Surrounding spaces are ignored by both, and the level comes back as declared.
+    expect(parseSettings(factors, { A: ' 190 ', B: ' GLOSS ' }).slice(0, 2).map((x) => x.real)).toEqual([190, 'gloss']);
+  });
+
   it('holds a numeric factor not given at its center (the geometric mean on a log scale)', () => {
     const s = parseSettings(factors, { Powder: 'matte' });
     expect(s[0]).toMatchObject({ real: 180, coded: 0, source: 'center' });
@@ -39,7 +60,7 @@ describe('parseSettings', () => {
   });
 
   it('refuses a level a categorical factor does not have, and a value between its two levels', () => {
-    expect(() => parseSettings(factors, { Powder: 'silk' })).toThrow(/levels "matte" and "gloss", got "silk"/);
+    expect(() => parseSettings(factors, { Powder: 'silk' })).toThrow(/Powder needs "matte" or "gloss", got "silk"/);
     expect(() => parseSettings(factors, { Powder: 0 })).toThrow(/no setting between them, got 0/);
     expect(() => parseSettings(factors, { Powder: '0.5' })).toThrow(/no setting between them, got 0.5/);
   });
@@ -55,7 +76,7 @@ describe('parseSettings', () => {
     expect(() => parseSettings(factors, { Pressure: 3, Powder: 'gloss' })).toThrow(/No factor is named or lettered "Pressure"; the factors are A \(Temperature\)/);
     expect(() => parseSettings(factors, { A: 170, Temperature: 180, Powder: 'gloss' })).toThrow(/given twice \(as "A" and "Temperature"\)/);
     expect(() => parseSettings(factors, { A: '', Powder: 'gloss' })).toThrow(/Temperature needs a setting, got an empty one/);
-    expect(() => parseSettings(factors, { A: '18O', Powder: 'gloss' })).toThrow(/Temperature needs a number, got "18O"/);
+    expect(() => parseSettings(factors, { A: '18O', Powder: 'gloss' })).toThrow(/Temperature needs a number \(use a point for decimals\), got "18O"/);
     expect(() => parseSettings(factors, { A: Number.NaN, Powder: 'gloss' })).toThrow(/finite number/);
     expect(() => parseSettings(factors, { C: -5, Powder: 'gloss' })).toThrow(/log scale and needs a positive setting/);
   });

@@ -101,7 +101,7 @@ describe('predict with interactions and a categorical factor (invented data)', (
   });
 
   it('refuses a level the factor does not have, a value between its levels, and a missing categorical factor', () => {
-    expect(() => predict(glossModel, { A: 185, B: 'silk' })).toThrow(/Powder has the levels "matte" and "gloss", got "silk"/);
+    expect(() => predict(glossModel, { A: 185, B: 'silk' })).toThrow(/Powder needs "matte" or "gloss", got "silk"/);
     expect(() => predict(glossModel, { A: 185, B: 0.5 })).toThrow(/no setting between them/);
     expect(() => predict(glossModel, { A: 185 })).toThrow(/Powder is categorical and has no center/);
   });
@@ -164,7 +164,7 @@ describe('predict: residual df 0, blocks and curvature notes', () => {
   });
 });
 
-describe('predict: a term the runs cannot separate is labelled with what it estimates', () => {
+describe('predict: a term the runs cannot separate is labeled with what it estimates', () => {
   it('C carries C + AB in a half fraction with C = AB (defining relation I = ABC; Montgomery 8th ed., section 8.2)', () => {
     const factors = defineFactors([
       { kind: 'numeric', name: 'Speed', low: 10, high: 20 },
@@ -173,7 +173,7 @@ describe('predict: a term the runs cannot separate is labelled with what it esti
     ]);
     const coded = [[-1, -1, 1], [1, -1, -1], [-1, 1, -1], [1, 1, 1], [0, 0, 0]];
     const a = analyze(
-      { factors, response: 'Finish', coded, y: [10, 14, 11, 19, 13], blocks: null, labels: ['1', '2', '3', '4', '5'], notes: [] },
+      { factors, response: 'Finish', coded, y: [10, 14, 11, 19, 13], blocks: null, labels: ['1', '2', '3', '4', '5'], messages: [] },
       { terms: parseTerms('A + B + C + A:B', factors) },
     );
     const p = predict(a.model, { Speed: 20, Feed: 2, Depth: 1 });

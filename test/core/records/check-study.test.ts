@@ -25,11 +25,11 @@ function study(): any {
     design: {
       // Standard order of a 2^2 (Montgomery, 8th ed., section 6.2): (1), a, b, ab; then a center run.
       runs: [
-        { run: 1, yates: 1, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, -1] },
-        { run: 2, yates: 2, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, -1] },
-        { run: 3, yates: 3, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, 1] },
-        { run: 4, yates: 4, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, 1] },
-        { run: 5, yates: null, replicate: 1, block: 1, originBlock: 1, kind: 'center', coded: [0, -1] },
+        { run: 1, standardOrder: 1, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, -1] },
+        { run: 2, standardOrder: 2, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, -1] },
+        { run: 3, standardOrder: 3, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, 1] },
+        { run: 4, standardOrder: 4, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, 1] },
+        { run: 5, standardOrder: null, replicate: 1, block: 1, originBlock: 1, kind: 'center', coded: [0, -1] },
       ],
       generators: [],
       definingRelation: [],
@@ -129,8 +129,8 @@ describe('checkStudy: the screening entry of a Plackett-Burman plan', () => {
 
   it('refuses more factors than the design has columns, and a standard-order index outside its table', () => {
     const small = screened();
-    small.design.runs[1].yates = 13;
-    expect(() => checkStudy(small, 'study')).toThrow('study.design.runs[1].yates: needs a standard-order index from 1 to 12 (a 12-run Plackett-Burman design), got 13');
+    small.design.runs[1].standardOrder = 13;
+    expect(() => checkStudy(small, 'study')).toThrow('study.design.runs[1].standardOrder: needs a standard-order index from 1 to 12 (a 12-run Plackett-Burman design), got 13');
     const wide = screened();
     wide.design.screening.runs = 12;
     wide.factors = Array.from({ length: 12 }, (_, i) => ({ kind: 'numeric', name: `F${i}`, letter: 'ABCDEFGHJKLM'[i], low: 0, high: 1 }));

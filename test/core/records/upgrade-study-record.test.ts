@@ -15,14 +15,14 @@ const v1 = {
 };
 
 describe('upgradeStudyRecord', () => {
-  it('adds each run\'s origin block (its block) and each response\'s lower bound (null); kinds stay', () => {
+  it('adds each run\'s origin block (its block), renames yates to standardOrder and adds each response\'s lower bound (null); kinds stay', () => {
     expect(upgradeStudyRecord(v1)).toEqual({
       id: 's-1',
       responses: [{ name: 'Gloss', goal: 'maximize', lowerBound: null }],
       design: {
         runs: [
-          { run: 1, yates: 1, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1] },
-          { run: 2, yates: null, replicate: 1, block: 2, originBlock: 2, kind: 'center', coded: [0] },
+          { run: 1, standardOrder: 1, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1] },
+          { run: 2, standardOrder: null, replicate: 1, block: 2, originBlock: 2, kind: 'center', coded: [0] },
         ],
         seed: 7,
       },

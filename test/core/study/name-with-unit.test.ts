@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { defineFactors } from '../../../src/core/factor/factor.ts';
 import { factorLabel, nameWithUnit } from '../../../src/core/study/name-with-unit.ts';
 
-// "Name (unit)" is the common practice for labelled columns and axes.
+// "Name (unit)" is the common practice for labeled columns and axes.
 describe('nameWithUnit', () => {
   it('puts a unit in parentheses after the name', () => {
     expect(nameWithUnit('Film thickness', 'µm')).toBe('Film thickness (µm)');

@@ -29,7 +29,7 @@ describe('designSummary', () => {
   it('reads a resolution IV fraction: main effects clear, two-factor interactions aliased (Box, Hunter and Hunter, 2nd ed., section 6.3)', () => {
     const rel = [w('ABCD')];
     const text = designSummary(base({ resolution: 4, chains: designAliasChains(rel, 4, 3) }));
-    expect(text).toBe('8 runs, resolution IV: main effects are clear of two-factor interactions; AB is aliased with CD; AC with BD; AD with BC. Run order randomised (seed 7).');
+    expect(text).toBe('8 runs, resolution IV: main effects are clear of two-factor interactions; AB is aliased with CD; AC with BD; AD with BC. Run order randomized (seed 7).');
   });
   it('reads a resolution III fraction: main effects aliased with two-factor interactions', () => {
     const rel = definingRelation([w('ABD'), w('ACE')]);

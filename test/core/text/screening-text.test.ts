@@ -6,7 +6,7 @@ import { correlationText, plackettBurmanSummary } from '../../../src/core/text/s
 describe('plackettBurmanSummary', () => {
   it('says main effects are clear of each other but partly mixed with interactions', () => {
     expect(plackettBurmanSummary({ factorialRuns: 12, factors: 7, totalRuns: 12, centerRuns: 0, replicates: 1, largestCorrelation: 1 / 3, seed: 7 })).toBe(
-      '12 runs, a Plackett-Burman screening design for 7 factors: main effects are estimated clear of each other but partly mixed with two-factor interactions (correlations up to 1/3); 4 columns are left unused and help judge the effects. Run order randomised (seed 7).',
+      '12 runs, a Plackett-Burman screening design for 7 factors: main effects are estimated clear of each other but partly mixed with two-factor interactions (correlations up to 1/3); 4 columns are left unused and help judge the effects. Run order randomized (seed 7).',
     );
     expect(plackettBurmanSummary({ factorialRuns: 12, factors: 2, totalRuns: 15, centerRuns: 3, replicates: 1, largestCorrelation: null, seed: null })).toBe(
       '15 runs (12 factorial + 3 center), a Plackett-Burman screening design for 2 factors: main effects are estimated clear of each other but partly mixed with two-factor interactions; 9 columns are left unused and help judge the effects. Standard order kept.',

@@ -78,12 +78,12 @@ describe('verdictText: one sentence per verdict', () => {
 
 /** Fragments of the design builder's sentences (core/text/design-text.ts). */
 const designFragments = [
-  'Generators from the minimum aberration catalogue',
+  'Generators from the minimum aberration catalog',
   'in standard order are',
   'It separates no pair of main effects',
   'is repeated at every combination of',
   'do not divide evenly over',
-  'Randomising the run order protects the effects from drifts',
+  'Randomizing the run order protects the effects from drifts',
   'was drawn for this plan and is recorded with it',
   'has become a split-plot',
   'the highest-order effect (Montgomery',

@@ -47,7 +47,9 @@ describe('backup format version 1', () => {
           const o = oldRuns[j];
           expect(run.originBlock, `run ${j + 1}`).toBe(o.block);
           expect(run.kind, `run ${j + 1}`).toBe(o.kind);
-          expect(run).toEqual({ ...o, originBlock: o.block });
+          const { yates, ...rest } = o as typeof o & { yates: number | null };
+          expect(run.standardOrder, `run ${j + 1}`).toBe(yates);
+          expect(run).toEqual({ ...rest, standardOrder: yates, originBlock: o.block });
         });
       });
       // Revisions are unchanged by the migration.

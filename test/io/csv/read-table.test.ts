@@ -56,13 +56,13 @@ describe('readTable: files from other programs and locales', () => {
       ['160', '82.5', '82.1 82.9', 'a,b'],
       ['200', '91', '-1.5e2 .5', '3,5'],
     ]);
-    expect(t.notes).toEqual(['Read as a file separated by semicolons with decimal commas in the columns "Glanz", "Messwerte"']);
+    expect(t.messages).toEqual(['Read as a file separated by semicolons with decimal commas in the columns "Glanz", "Messwerte"']);
     const tab = readTable('x\ty\n1,5\t2\n');
     expect(tab.rows).toEqual([['1.5', '2']]);
     // A column mixing decimal commas and points (perhaps thousands points) is left as it is.
     expect(readTable('x;y\n1,5;1\n1.234,5;2\n').rows[1][0]).toBe('1.234,5');
     expect(readTable('x,y\n"1,5",2\n').rows[0][0]).toBe('1,5');
-    expect(readTable('x,y\n"1,5",2\n').notes).toEqual([]);
+    expect(readTable('x,y\n"1,5",2\n').messages).toEqual([]);
   });
   it('suggests a semicolon when decimal commas split a comma-separated row', () => {
     expect(() => readTable('Temp,Gloss\n160,82,5\n')).toThrow(/Row 2 of the CSV file has 3 cells but the header has 2 columns; if its numbers have decimal commas, save the file with ";"/);

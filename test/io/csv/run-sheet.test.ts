@@ -12,7 +12,7 @@ const design = buildDesign({
     { kind: 'numeric', name: 'Time', low: -5, high: 5 },
   ],
   centerRuns: 1,
-  randomise: false,
+  randomize: false,
 });
 
 describe('plannedColumn', () => {

@@ -120,13 +120,13 @@ describe('study CSV export', () => {
       expect(fromCsv.labels).toEqual(fromStore.labels);
       fromCsv.coded.forEach((row, i) => row.forEach((c, j) => expect(c).toBeCloseTo(fromStore.coded[i][j], 12)));
       expect(fromCsv.factors.map((f) => f.kind === 'numeric' && [f.name, f.low, f.high, f.unit])).toEqual(study.factors.map((f) => f.kind === 'numeric' && [f.name, f.low, f.high, f.unit]));
-      expect(fromCsv.notes.filter((n) => !/several readings/.test(n))).toEqual(fromStore.notes.filter((n) => !/several readings/.test(n)));
+      expect(fromCsv.messages.filter((n) => !/several readings/.test(n))).toEqual(fromStore.messages.filter((n) => !/several readings/.test(n)));
       // The command line's general CSV reader finds the actual-settings columns by factor name too.
       const general = tableResponseData(readTable(csv), { factors: ['Oven temperature', 'Line speed', 'Powder flow'], response, levels: { 'Oven temperature': ['160', '200'], 'Line speed': ['2', '4'], 'Powder flow': ['30', '50'] } });
       expect(general.y).toEqual(fromStore.y);
       general.coded.forEach((row, i) => row.forEach((c, j) => expect(c).toBeCloseTo(fromStore.coded[i][j], 12)));
     }
-    expect(responseDataFromRuns(study, runs, 'Gloss').notes).toEqual(['1 excluded run skipped', '1 run without a value for Gloss skipped']);
+    expect(responseDataFromRuns(study, runs, 'Gloss').messages).toEqual(['1 excluded run skipped', '1 run without a value for Gloss skipped']);
     expect(() => exportedCsvResponseData('a,b\n1,2\n', 'Gloss')).toThrow(/not a Trialbook export/);
   });
 });
@@ -154,10 +154,10 @@ describe('backups on the command line', () => {
     expect(backupResponseData(text, ' INVENTED demo: powder-coating cure trial ', 'Film thickness')).toEqual(d);
     const runs = studyRuns(backup, study.id);
     expect(d.y.length).toBe(runs.filter((r) => !r.excluded).length);
-    expect(d.notes).toContain('1 excluded run skipped');
+    expect(d.messages).toContain('1 excluded run skipped');
     const repeated = runs.filter((r) => !r.excluded && r.readings[0].length > 1).length;
     expect(repeated).toBeGreaterThan(1);
-    expect(d.notes).toContain(`${repeated} runs have several readings of Film thickness: each run's mean is used, and repeat readings are not counted as replicates`);
+    expect(d.messages).toContain(`${repeated} runs have several readings of Film thickness: each run's mean is used, and repeat readings are not counted as replicates`);
     const center = runs.find((r) => r.readings[0].length === 3)!;
     const i = d.labels.indexOf(String(center.plannedRun));
     expect(d.y[i]).toBeCloseTo(center.readings[0].reduce((a, b) => a + b) / 3, 12);

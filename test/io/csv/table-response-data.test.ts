@@ -14,7 +14,7 @@ describe('tableResponseData', () => {
     const t = readTable('A,y,Excluded\n1,5,no\n2,,no\n1,6,yes\n2,8,no\n');
     const d = tableResponseData(t, { factors: ['A'], response: 'y' });
     expect(d.y).toEqual([5, 8]);
-    expect(d.notes).toEqual(['1 excluded run skipped', '1 run without a value for y skipped']);
+    expect(d.messages).toEqual(['1 excluded run skipped', '1 run without a value for y skipped']);
   });
   it('codes a categorical column by its first label in file order, or by --levels', () => {
     const t = readTable('Powder,y\ngloss,5\nmatte,7\n');
@@ -55,7 +55,7 @@ describe('tableResponseData: hand-edited and foreign files', () => {
     const d = tableResponseData(semi, { factors: ['A'], response: 'y' });
     expect(d.y).toEqual([5.5, 6]);
     expect(d.factors[0]).toMatchObject({ low: 1.5, high: 2.5 });
-    expect(d.notes).toEqual(['Read as a file separated by semicolons with decimal commas in the columns "A", "y"']);
+    expect(d.messages).toEqual(['Read as a file separated by semicolons with decimal commas in the columns "A", "y"']);
   });
 });
 

@@ -1,6 +1,6 @@
 /**
  * Signed values as horizontal bars drawn from a middle line: positive to the right, negative to
- * the left, the length proportional to the size. The sign is also written, so the colour is
+ * the left, the length proportional to the size. The sign is also written, so the color is
  * never the only cue.
  */
 import './style.css';

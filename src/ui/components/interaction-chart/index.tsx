@@ -3,7 +3,7 @@
  * factor at its low and its high setting (across), one line with the second factor low and one
  * with it high. Parallel lines: the effect of the first factor does not depend on the second;
  * lines that are not parallel: it does. The lines differ in dash and point shape as well as in
- * colour, and the table below the chart carries the same four values for a screen reader. Drawn
+ * color, and the table below the chart carries the same four values for a screen reader. Drawn
  * with uPlot, loaded only when the chart is first shown.
  */
 import { useUplot } from '../../lib/use-uplot.ts';

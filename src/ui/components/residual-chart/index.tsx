@@ -28,7 +28,7 @@ export type ResidualChartProps = {
   readonly xColumn: string;
   /** One line on what to look for. */
   readonly caption: string;
-  /** When x is the place in the run order (1, 2, ...): ticks at whole places, labelled with the run. */
+  /** When x is the place in the run order (1, 2, ...): ticks at whole places, labeled with the run. */
   readonly order?: boolean;
 };
 

@@ -1,7 +1,7 @@
 /**
- * A logged run's versions, newest first: when and where each was saved, its values, what changed
- * from the version before it, and a large button to bring an earlier one back (asked in the
- * page, never in a pop-up). Restoring adds a new version; nothing is deleted.
+ * A logged run's revisions, newest first: when and where each was saved, its values, what changed
+ * from the revision before it, and a large button to bring an earlier one back (asked in the
+ * page, never in a pop-up). Restoring adds a new revision; nothing is deleted.
  */
 import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
@@ -18,7 +18,7 @@ export type RunHistoryProps = {
   readonly runId: string;
   /** True while the form holds typing that is not saved: restoring waits. */
   readonly unsaved: boolean;
-  /** Called after a restore wrote a new version (the form reopens from it). */
+  /** Called after a restore wrote a new revision (the form reopens from it). */
   readonly onRestored: () => void;
   /** The person chose to save the typing first (the form is shown again). */
   readonly onSaveFirst: () => void;
@@ -45,16 +45,16 @@ export function RunHistory({ store, study, runId, unsaved, onRestored, onSaveFir
     <section class="run-history" aria-labelledby="history-title">
       <div class="history-head">
         <h3 id="history-title" class="group-title">
-          History ({entries.length} {entries.length === 1 ? 'version' : 'versions'})
+          History ({entries.length} {entries.length === 1 ? 'revision' : 'revisions'})
         </h3>
         <button type="button" class="btn" onClick={onClose}>
           Back to the form
         </button>
       </div>
-      <p class="quiet">Newest first. Restoring brings an earlier version back as a new version; nothing is deleted.</p>
+      <p class="quiet">Newest first. Restoring brings an earlier revision back as a new revision; nothing is deleted.</p>
       {last && (
         <p class="notice" role="status">
-          Version {last.from} restored as version {last.to}. The form shows it now.
+          Revision {last.from} restored as revision {last.to}. The form shows it now.
         </p>
       )}
       {model.problem.value && <ProblemBox problem={model.problem.value} />}
@@ -64,19 +64,19 @@ export function RunHistory({ store, study, runId, unsaved, onRestored, onSaveFir
           const r = e.revision;
           const asking = confirming === r.id;
           return (
-            <li key={r.id} class={e.isCurrent ? 'history-item current' : 'history-item'} data-version={e.number}>
+            <li key={r.id} class={e.isCurrent ? 'history-item current' : 'history-item'} data-revision={e.number}>
               <div class="history-item-head">
-                <span class="history-no">Version {e.number}</span>
+                <span class="history-no">Revision {e.number}</span>
                 {e.isCurrent && <span class="mark current-mark">Current</span>}
-                {e.restoredFromNumber !== null && <span class="mark restored-mark">Restored from version {e.restoredFromNumber}</span>}
+                {e.restoredFromNumber !== null && <span class="mark restored-mark">Restored from revision {e.restoredFromNumber}</span>}
               </div>
               <p class="history-when">
                 Saved {when(r.savedAt)} · device {shortId(r.device)}
                 {r.device === store.device ? ' (this one)' : ''}
               </p>
-              {e.sharesParent && <p class="history-fork">Changed on two devices from the same version; both kept.</p>}
+              {e.sharesParent && <p class="history-fork">Changed on two devices from the same revision; both kept.</p>}
               <p class="history-changes">
-                {e.first ? 'First version.' : e.changes.length === 0 ? 'No values changed.' : `Changed: ${e.changes.join(', ')}`}
+                {e.first ? 'First revision.' : e.changes.length === 0 ? 'No values changed.' : `Changed: ${e.changes.join(', ')}`}
               </p>
               <dl class="history-values">
                 {study.factors.map((f, i) => (
@@ -116,8 +116,8 @@ export function RunHistory({ store, study, runId, unsaved, onRestored, onSaveFir
                       </button>
                     </div>
                   ) : (
-                    <div class="history-confirm" role="group" aria-label={`Restore version ${e.number}?`}>
-                      <p>Restore version {e.number}? Its values become a new current version; every version stays kept.</p>
+                    <div class="history-confirm" role="group" aria-label={`Restore revision ${e.number}?`}>
+                      <p>Restore revision {e.number}? Its values become a new current revision; every revision stays kept.</p>
                       <button
                         type="button"
                         class="btn primary big block"
@@ -126,12 +126,12 @@ export function RunHistory({ store, study, runId, unsaved, onRestored, onSaveFir
                           void model.restore().then((ok) => {
                             if (!ok) return;
                             onRestored();
-                            // Show the new current version, at the top of the list.
+                            // Show the new current revision, at the top of the list.
                             document.getElementById('history-title')?.scrollIntoView({ block: 'start' });
                           })
                         }
                       >
-                        {busy ? 'Restoring…' : `Yes, restore version ${e.number}`}
+                        {busy ? 'Restoring…' : `Yes, restore revision ${e.number}`}
                       </button>
                       <button type="button" class="btn ghost block" disabled={busy} onClick={() => model.ask(null)}>
                         Cancel
@@ -140,7 +140,7 @@ export function RunHistory({ store, study, runId, unsaved, onRestored, onSaveFir
                   )
                 ) : (
                   <button type="button" class="btn big block" disabled={busy} onClick={() => model.ask(r.id)}>
-                    Restore this version
+                    Restore this revision
                   </button>
                 ))}
             </li>

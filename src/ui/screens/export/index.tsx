@@ -12,7 +12,7 @@ import { StudyHeader } from '../../components/study-header/index.tsx';
 import { when } from '../../lib/format.ts';
 import { ExportModel } from '../../models/export-model.ts';
 import { hrefTo } from '../../app/routes.ts';
-import { isDemo } from '../../seed/demo-seed.ts';
+import { isDemo } from '../../demo/demo-study.ts';
 import './style.css';
 
 /** Without a study id: every study on this device. */
@@ -68,7 +68,7 @@ export function ExportScreen({ store, studyId }: ExportScreenProps) {
         </button>
       )}
       <h3>Import a backup</h3>
-      <p class="quiet">A backup file from another phone or tab is merged in: new runs and versions are added, and nothing here is overwritten.</p>
+      <p class="quiet">A backup file from another phone or tab is merged in: new runs and revisions are added, and nothing here is overwritten.</p>
       <label class="btn block file-pick">
         Choose a backup file
         <input

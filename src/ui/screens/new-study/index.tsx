@@ -27,7 +27,7 @@ const GOAL_CHOICES = [
   { value: 'target' as const, label: 'Hit a target' },
 ];
 const ORDER_CHOICES = [
-  { value: 'random' as const, label: 'Randomised' },
+  { value: 'random' as const, label: 'Randomized' },
   { value: 'standard' as const, label: 'Standard order' },
 ];
 
@@ -182,15 +182,15 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
       <fieldset class="group">
         <legend>Design</legend>
         <ChoiceButtons label="Runs of the factorial" options={model.options.value.map((o) => ({ value: o.value, label: o.label }))} value={model.fraction.value} onChoose={(v) => model.chooseFraction(v)} />
-        {factors.length >= 2 && factors.length < 4 && <p class="quiet field-hint">Fractions from the catalogue start at 8 runs, so they need 4 factors or more.</p>}
+        {factors.length >= 2 && factors.length < 4 && <p class="quiet field-hint">Fractions from the catalog start at 8 runs, so they need 4 factors or more.</p>}
         {!model.fractionOffered.value && <p class="field-error">{choiceName(model.fraction.value).replace(/^t/, 'T')} is not offered for {factors.length} factors; choose one of the above.</p>}
         <CountStepper id="ns-center" label="Center runs" hint="Per replicate; numeric factors at the middle of their ranges." value={model.centerRuns.value} min={0} onChange={(v) => model.setCenterRuns(v)} />
         <CountStepper id="ns-replicates" label="Replicates" hint="Times the whole design is run." value={model.replicates.value} min={1} onChange={(v) => model.setReplicates(v)} />
         <div class="choice-compact">
           <ChoiceButtons label="Blocks per replicate" options={BLOCK_CHOICES.map((n) => ({ value: n, label: String(n) }))} value={model.blocks.value} onChoose={(n) => model.chooseBlocks(n)} />
         </div>
-        <ChoiceButtons label="Run order" options={ORDER_CHOICES} value={model.randomise.value ? 'random' : 'standard'} onChoose={(v) => model.setRandomise(v === 'random')} />
-        {model.randomise.value && (
+        <ChoiceButtons label="Run order" options={ORDER_CHOICES} value={model.randomize.value ? 'random' : 'standard'} onChoose={(v) => model.setRandomize(v === 'random')} />
+        {model.randomize.value && (
           <div class="field">
             <label for="ns-seed" class="field-name">
               Seed of the run order
@@ -278,7 +278,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
               )}
               <div>
                 <dt>Run order</dt>
-                <dd>{design.seed === null ? 'Standard order' : `Randomised, seed ${design.seed}`}</dd>
+                <dd>{design.seed === null ? 'Standard order' : `Randomized, seed ${design.seed}`}</dd>
               </div>
             </dl>
             {design.notes.length > 0 && (

@@ -68,12 +68,12 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
       </h2>
       {state.current && (
         <p class="quiet">
-          Logged {when(state.current.savedAt)} · {state.current.revisions} {state.current.revisions === 1 ? 'version' : 'versions'} kept. Saving adds a new version; nothing is overwritten.
+          Logged {when(state.current.savedAt)} · {state.current.revisions} {state.current.revisions === 1 ? 'revision' : 'revisions'} kept. Saving adds a new revision; nothing is overwritten.
         </p>
       )}
       {state.current && !showHistory.value && (
         <button type="button" class="btn block history-open" disabled={busy} onClick={() => (showHistory.value = true)}>
-          History ({state.current.revisions} {state.current.revisions === 1 ? 'version' : 'versions'})
+          History ({state.current.revisions} {state.current.revisions === 1 ? 'revision' : 'revisions'})
         </button>
       )}
       {state.current && showHistory.value && (
@@ -237,7 +237,7 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
         </div>
       </form>
       {!showHistory.value && saveState === 'saved' && model.lastSave.value?.changedSince && (
-        <p class="notice">This run was changed elsewhere after the form opened. Both versions are kept in its history.</p>
+        <p class="notice">This run was changed elsewhere after the form opened. Both revisions are kept in its history.</p>
       )}
       {!showHistory.value && saveState === 'saved' && (
         <a class="btn block" href={hrefTo('runSheet', { studyId: study.id })}>

@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import {
-  CATALOGUE_RUN_SIZES,
+  CATALOG_RUN_SIZES,
   CHEN_SUN_WU_1993,
   XU_2009,
-  catalogueEntries,
-  catalogueFraction,
-} from '../../../src/core/design/catalogue.ts';
+  catalogEntries,
+  catalogFraction,
+} from '../../../src/core/design/catalog.ts';
 import { MAX_DESIGN_FACTORS } from '../../../src/core/design/max-design-factors.ts';
 import { definingRelation, resolution, wordLengthPattern } from '../../../src/core/design/defining-relation.ts';
 import { generatorWord, parseGenerators } from '../../../src/core/design/generators.ts';
@@ -15,7 +15,7 @@ import { mask, numericFactors } from './helpers.ts';
 
 /**
  * Word-length patterns (A3, A4, A5, ...) of the minimum aberration designs as the sources tabulate
- * them: Chen, Sun and Wu (1993), International Statistical Review 61, 131-145, catalogue tables (8,
+ * them: Chen, Sun and Wu (1993), International Statistical Review 61, 131-145, catalog tables (8,
  * 16, 32 and 64 runs) and Xu (2009), Technometrics 51, 262-277 (128 runs). From memory; the
  * exhaustive searches below confirm every value: 8 to 32 runs and 64 and 128 runs up to 14 and
  * 13 factors in every run, the rest (64 runs with 15 factors, 128 runs with 14 and 15; about ten
@@ -84,11 +84,11 @@ function fromThree(pattern: readonly number[]): number[] {
 
 const slow = process.env.TRIALBOOK_SLOW_TESTS === '1';
 
-describe('catalogue', () => {
+describe('catalog', () => {
   it('covers 8 to 128 runs, every factor count up to 15, one source per run size', () => {
-    expect([...CATALOGUE_RUN_SIZES]).toEqual([8, 16, 32, 64, 128]);
-    const entries = catalogueEntries();
-    for (const runs of CATALOGUE_RUN_SIZES) {
+    expect([...CATALOG_RUN_SIZES]).toEqual([8, 16, 32, 64, 128]);
+    const entries = catalogEntries();
+    for (const runs of CATALOG_RUN_SIZES) {
       const ks = entries.filter((e) => e.runs === runs).map((e) => e.factors);
       const m = Math.log2(runs);
       expect(ks).toEqual(Array.from({ length: Math.min(runs - 1, MAX_DESIGN_FACTORS) - m }, (_, i) => m + 1 + i));
@@ -96,7 +96,7 @@ describe('catalogue', () => {
     }
   });
 
-  for (const e of catalogueEntries()) {
+  for (const e of catalogEntries()) {
     const label = `${e.runs} runs, ${e.factors} factors (${e.generators.join(', ')})`;
     it(`${label}: word lengths and resolution as tabulated by ${e.runs === 128 ? 'Xu (2009)' : 'Chen, Sun and Wu (1993)'}`, () => {
       const f = numericFactors(e.factors);
@@ -118,20 +118,20 @@ describe('catalogue', () => {
   }
 });
 
-describe('catalogueFraction', () => {
+describe('catalogFraction', () => {
   it('gives the 2^(7-3) of Chen, Sun and Wu (1993) in our letters', () => {
-    const e = catalogueFraction(7, 3);
+    const e = catalogFraction(7, 3);
     expect(e.runs).toBe(16);
     expect(e.generators).toEqual(['E=ABC', 'F=ABD', 'G=ACD']);
   });
   it('letters skip I: the 10th factor of the 2^(10-6) is K', () => {
-    expect(catalogueFraction(10, 6).generators.at(-1)).toBe('K=AB');
+    expect(catalogFraction(10, 6).generators.at(-1)).toBe('K=AB');
   });
-  it('refuses sizes outside the catalogue with what it covers', () => {
-    expect(() => catalogueFraction(3, 1)).toThrow(/4 runs; the built-in catalogue covers 8 to 128 runs/);
-    expect(() => catalogueFraction(9, 1)).toThrow(/256 runs; the built-in catalogue covers 8 to 128 runs/);
-    expect(() => catalogueFraction(16, 11)).toThrow(/up to 15 factors/);
-    expect(() => catalogueFraction(8, 5)).toThrow(/8 runs, which carry at most 7 factors/);
-    expect(() => catalogueFraction(5, 0)).toThrow(InputError);
+  it('refuses sizes outside the catalog with what it covers', () => {
+    expect(() => catalogFraction(3, 1)).toThrow(/4 runs; the built-in catalog covers 8 to 128 runs/);
+    expect(() => catalogFraction(9, 1)).toThrow(/256 runs; the built-in catalog covers 8 to 128 runs/);
+    expect(() => catalogFraction(16, 11)).toThrow(/up to 15 factors/);
+    expect(() => catalogFraction(8, 5)).toThrow(/8 runs, which carry at most 7 factors/);
+    expect(() => catalogFraction(5, 0)).toThrow(InputError);
   });
 });

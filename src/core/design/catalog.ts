@@ -1,8 +1,8 @@
 /**
- * Built-in catalogue of minimum aberration two-level fractions 2^(k-p), 8 to 128 runs, up to 15
+ * Built-in catalog of minimum aberration two-level fractions 2^(k-p), 8 to 128 runs, up to 15
  * factors: one design for each run size and factor count, from one named source per run size.
  *
- * - 8, 16, 32 and 64 runs: Chen, Sun and Wu (1993), "A catalogue of two-level and three-level
+ * - 8, 16, 32 and 64 runs: Chen, Sun and Wu (1993), "A catalog of two-level and three-level
  *   fractional factorial designs with small runs", International Statistical Review 61, 131-145
  *   (their designs k-p.1, the minimum aberration design of each size).
  * - 128 runs: Xu (2009), "Algorithmic construction of efficient fractional factorial designs with
@@ -11,7 +11,7 @@
  * Each entry is written in our letters: the basic factors are the first k-p factors (A, B, C, ...
  * skipping I) and the generated factors follow in declared order. The generator columns are as
  * we recall the tables (from memory: a published design may be written with other columns that
- * give an isomorphic design, i.e. the same design after relabelling factors). What the tests pin
+ * give an isomorphic design, i.e. the same design after relabeling factors). What the tests pin
  * down instead is the property the sources tabulate: each entry's word-length pattern is the
  * smallest of all regular fractions of its size, confirmed for every entry by the exhaustive
  * search of minimum-aberration.ts (in the regular tests for 8 to 32 runs and most 64- and
@@ -21,7 +21,7 @@ import { InputError } from '../errors.ts';
 import { factorLetters } from '../factor/letters.ts';
 import { MAX_DESIGN_FACTORS } from './max-design-factors.ts';
 
-export interface CatalogueEntry {
+export interface CatalogEntry {
   readonly runs: number;
   readonly factors: number;
   /** Generators in letters, basic factors first, e.g. ["E=ABC", "F=ABD"]. */
@@ -91,10 +91,10 @@ const PRODUCTS: Readonly<Record<number, Readonly<Record<number, readonly string[
   },
 };
 
-/** Run sizes the catalogue covers. */
-export const CATALOGUE_RUN_SIZES = [8, 16, 32, 64, 128] as const;
+/** Run sizes the catalog covers. */
+export const CATALOG_RUN_SIZES = [8, 16, 32, 64, 128] as const;
 
-function entryFor(runs: number, k: number): CatalogueEntry | undefined {
+function entryFor(runs: number, k: number): CatalogEntry | undefined {
   const products = PRODUCTS[runs]?.[k];
   if (!products) return undefined;
   const letters = factorLetters(k);
@@ -107,10 +107,10 @@ function entryFor(runs: number, k: number): CatalogueEntry | undefined {
   };
 }
 
-/** Every catalogue entry, by run size then factor count. */
-export function catalogueEntries(): CatalogueEntry[] {
-  const out: CatalogueEntry[] = [];
-  for (const runs of CATALOGUE_RUN_SIZES) {
+/** Every catalog entry, by run size then factor count. */
+export function catalogEntries(): CatalogEntry[] {
+  const out: CatalogEntry[] = [];
+  for (const runs of CATALOG_RUN_SIZES) {
     for (let k = 2; k <= MAX_DESIGN_FACTORS; k++) {
       const e = entryFor(runs, k);
       if (e) out.push(e);
@@ -120,30 +120,30 @@ export function catalogueEntries(): CatalogueEntry[] {
 }
 
 /**
- * The catalogue's minimum aberration 2^(k-p) for k factors and p generators (a 1/2^p fraction).
+ * The catalog's minimum aberration 2^(k-p) for k factors and p generators (a 1/2^p fraction).
  * Throws InputError, saying what is covered, when k-p basic factors give fewer than 8 or more than
  * 128 runs, when k exceeds 15, or when the fraction is too small to carry k factors.
- * Example: catalogueFraction(7, 3).generators -> ["E=ABC", "F=ABD", "G=ACD"].
+ * Example: catalogFraction(7, 3).generators -> ["E=ABC", "F=ABD", "G=ACD"].
  */
-export function catalogueFraction(k: number, p: number): CatalogueEntry {
+export function catalogFraction(k: number, p: number): CatalogEntry {
   if (!Number.isInteger(k) || !Number.isInteger(p) || k < 1 || p < 1) {
-    throw new InputError(`A catalogue fraction needs whole numbers of factors and generators, 1 or more, got ${k} and ${p}`);
+    throw new InputError(`A catalog fraction needs whole numbers of factors and generators, 1 or more, got ${k} and ${p}`);
   }
   const runs = 2 ** (k - p);
   const frac = `1/${2 ** p}`;
   if (k > MAX_DESIGN_FACTORS) {
-    throw new InputError(`The built-in catalogue covers fractions of up to ${MAX_DESIGN_FACTORS} factors, got ${k}; type generators instead`);
+    throw new InputError(`The built-in catalog covers fractions of up to ${MAX_DESIGN_FACTORS} factors, got ${k}; type generators instead`);
   }
   if (k - p < 3 || runs < 8) {
-    throw new InputError(`A ${frac} fraction of ${k} factors has ${k - p < 0 ? 'no' : runs} runs; the built-in catalogue covers 8 to 128 runs (type generators for a smaller fraction)`);
+    throw new InputError(`A ${frac} fraction of ${k} factors has ${k - p < 0 ? 'no' : runs} runs; the built-in catalog covers 8 to 128 runs (type generators for a smaller fraction)`);
   }
   if (runs > 128) {
-    throw new InputError(`A ${frac} fraction of ${k} factors has ${runs} runs; the built-in catalogue covers 8 to 128 runs (choose a smaller fraction, or type generators)`);
+    throw new InputError(`A ${frac} fraction of ${k} factors has ${runs} runs; the built-in catalog covers 8 to 128 runs (choose a smaller fraction, or type generators)`);
   }
   if (k > runs - 1) {
     throw new InputError(`A ${frac} fraction of ${k} factors has ${runs} runs, which carry at most ${runs - 1} factors; choose a larger fraction`);
   }
   const e = entryFor(runs, k);
-  if (!e) throw new InputError(`The built-in catalogue has no ${runs}-run design for ${k} factors; type generators instead`);
+  if (!e) throw new InputError(`The built-in catalog has no ${runs}-run design for ${k} factors; type generators instead`);
   return e;
 }

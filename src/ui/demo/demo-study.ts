@@ -18,7 +18,7 @@ export function isDemo(study: Pick<StudyPlan, 'title' | 'purpose'>): boolean {
 }
 
 /** Imports the demo study when the store holds no study; returns the import report, or null when nothing was done. */
-export async function seedDemoIfEmpty(store: Store, fetchText: (url: string) => Promise<string> = fetchDemo): Promise<ImportReport | null> {
+export async function addDemoIfEmpty(store: Store, fetchText: (url: string) => Promise<string> = fetchDemo): Promise<ImportReport | null> {
   const studies = await listStudies(store);
   if (studies.length > 0) return null;
   const text = await fetchText(new URL(DEMO_FILE, document.baseURI).href);
