@@ -104,3 +104,72 @@ export const MAX_RESPONSE_MAGNITUDE = 1e150;
  * of the largest in magnitude counts as zero (the surface has no unique stationary point along
  * it). Common practice: far above rounding, far below any fitted curvature. */
 export const SINGULAR_TOLERANCE = 1e-10;
+
+// Second-order designs and the optimum (src/core/design, src/core/linalg, src/core/optimum).
+
+/** The least scale a relative test multiplies by, so that an all-zero matrix or column still gets
+ * a defined comparison instead of 0 <= 0 (a guard against a zero scale, like Numerical Recipes'
+ * FPMIN in Lentz's method, section 5.2; far above the smallest normal double, 2.2e-308). */
+export const TINY_SCALE = 1e-300;
+
+/** Column sums of a blocked design agree when they differ by less than this fraction of the
+ * column's largest absolute sum (block orthogonality). Common practice (rounding). */
+export const BLOCK_SUM_TOLERANCE = 1e-9;
+
+/** Design moments are equal when they differ by less than this fraction of the largest second
+ * moment (rotatability). Common practice (rounding of the axial distance). */
+export const MOMENT_TOLERANCE = 1e-9;
+
+/** Cyclic Jacobi stops when the off-diagonal Frobenius norm is below this fraction of the whole
+ * matrix's Frobenius norm. Common practice: a few units of double precision epsilon (Golub and
+ * Van Loan, 4th ed., section 8.5.3, the test off(A) <= tol ||A||_F). */
+export const JACOBI_TOLERANCE = 1e-14;
+
+/** Entries within this fraction of the largest magnitude count as tied when the sign of an
+ * eigenvector is chosen; the first tied entry is made positive. Common practice (rounding). */
+export const SIGN_TIE = 1e-9;
+
+/** A matrix given to the eigen-decomposition is symmetric when |A_ij - A_ji| is at most this
+ * fraction of its largest entry. Common practice (rounding of a matrix built from fitted terms). */
+export const SYMMETRY_TOLERANCE = 1e-12;
+
+/** Two fitted values (or desirabilities) within this fraction of their size, or of 1 when
+ * smaller, are a tie, broken by the point nearest the center. Common practice (rounding). */
+export const TIE_TOLERANCE = 1e-12;
+
+/** A singular symmetric system is consistent when the right-hand side's component along each
+ * null direction is at most this fraction of the system's scale; otherwise it has no solution
+ * (the face of the box has no stationary point). Common practice (rounding of a few products). */
+export const INCONSISTENCY_TOLERANCE = 1e-9;
+
+/** A quadratic a + b t + c t^2 is solved as linear when |c| is at most this fraction of
+ * |a| + |b|: the root from c would be rounding noise (common practice: a few units of double
+ * precision epsilon). */
+export const NEGLIGIBLE_QUADRATIC = 1e-15;
+
+/** A compass search takes a step only when it improves its score (a desirability, or a distance
+ * in coded units, both of order 1) by more than this: smaller gains are rounding, and taking them
+ * could cycle on a flat stretch. Common practice (a few units of double precision epsilon). */
+export const COMPASS_GAIN_MIN = 1e-15;
+
+/** The compass search over ray directions (the target beyond radius 1) stops when its step falls
+ * below this, in units of a unit direction (our own choice: far below any gauge). */
+export const RAY_STEP_MIN = 1e-10;
+
+/** The desirability compass search stops when its step falls below this, in coded units.
+ * Common practice: far below any gauge. */
+export const SEARCH_STEP_MIN = 1e-7;
+
+/** A response with desirability exactly 0 on its acceptable limit has a shortfall of 0; this is
+ * added to every such shortfall so that it still counts as short (our own choice: far below any
+ * real shortfall, which is in units of the acceptable range). */
+export const SHORTFALL_FLOOR = 1e-12;
+
+/** The compiled predictor and the quadratic surface, read from the same coefficients, must agree
+ * at the stationary point to this fraction of the fit (of 1 when the fit is smaller): rounding of
+ * two sums of the same terms (our own choice). */
+export const SURFACE_AGREEMENT_TOLERANCE = 1e-9;
+
+/** Added to a quotient before it is rounded down, so that a quotient whole up to rounding
+ * (1 / 0.1 = 9.999999999999998) counts as whole (common practice). */
+export const FLOOR_ROUNDING = 1e-9;

@@ -9,9 +9,7 @@
  */
 import { InputError } from '../errors.ts';
 import { termValue, type Term } from '../model/term.ts';
-
-/** Column sums agree when they differ by less than this fraction of the column's largest absolute sum. Common practice (rounding). */
-export const BLOCK_SUM_TOLERANCE = 1e-9;
+import { BLOCK_SUM_TOLERANCE, TINY_SCALE } from '../tolerance.ts';
 
 /**
  * True when the blocks of the coded design points are orthogonal to the model with these terms
@@ -29,7 +27,7 @@ export function blocksOrthogonal(points: readonly (readonly number[])[], blocks:
   for (const t of terms) {
     const z = points.map((p) => termValue(t, p));
     const total = z.reduce((s, v) => s + v, 0);
-    const scale = Math.max(1e-300, z.reduce((s, v) => s + Math.abs(v), 0));
+    const scale = Math.max(TINY_SCALE, z.reduce((s, v) => s + Math.abs(v), 0));
     for (const b of levels) {
       let sum = 0;
       let nb = 0;

@@ -6,9 +6,7 @@
  * section 4, from memory; Montgomery, Design and Analysis of Experiments, 8th ed., section 11.4.1).
  */
 import { InputError } from '../errors.ts';
-
-/** Moments are equal when they differ by less than this fraction of the largest second moment. Common practice (rounding of the axial distance). */
-export const MOMENT_TOLERANCE = 1e-9;
+import { MOMENT_TOLERANCE, TINY_SCALE } from '../tolerance.ts';
 
 /**
  * True when the coded design points satisfy the moment conditions of rotatability (see the file
@@ -24,7 +22,7 @@ export function isRotatable(points: readonly (readonly number[])[]): boolean {
   if (points.some((p) => p.length !== k)) throw new InputError(`Every run needs ${k} settings`);
   const moment = (idx: number[]) => points.reduce((s, p) => s + idx.reduce((m, i) => m * p[i], 1), 0) / n;
   const second = moment([0, 0]);
-  const scale = Math.max(second, ...Array.from({ length: k }, (_, i) => moment([i, i])), 1e-300);
+  const scale = Math.max(second, ...Array.from({ length: k }, (_, i) => moment([i, i])), TINY_SCALE);
   const tol = MOMENT_TOLERANCE * Math.max(scale, scale * scale);
   const lambda4 = k > 1 ? moment([0, 0, 1, 1]) : moment([0, 0, 0, 0]) / 3;
   // Every multi-index of degree 1..4 with indices non-decreasing.

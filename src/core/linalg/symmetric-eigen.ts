@@ -6,22 +6,14 @@
  * V <- V J, until the off-diagonal norm is negligible beside the whole matrix.
  * Source: Golub and Van Loan, Matrix Computations, 4th ed., section 8.5.2 (the 2-by-2 symmetric
  * Schur decomposition, Algorithm 8.5.1) and section 8.5.3 (cyclic Jacobi, Algorithm 8.5.3); the
- * sweep converges quadratically, so a handful of sweeps suffice for the matrices of a response
+ * sweep converges quadratically (it stops at JACOBI_TOLERANCE, src/core/tolerance.ts), so a handful of sweeps suffice for the matrices of a response
  * surface (k <= 25).
  */
 import { InputError } from '../errors.ts';
-
-/** Stop when the off-diagonal Frobenius norm is below this fraction of the whole matrix's
- * Frobenius norm. Common practice: a few units of double precision (Golub and Van Loan, 4th ed.,
- * section 8.5.3, the test off(A) <= tol ||A||_F). */
-export const JACOBI_TOLERANCE = 1e-14;
+import { JACOBI_TOLERANCE, SIGN_TIE, SYMMETRY_TOLERANCE, TINY_SCALE } from '../tolerance.ts';
 
 /** Most sweeps before giving up. Common practice: convergence is quadratic, so 50 is far more than needed. */
 export const JACOBI_MAX_SWEEPS = 50;
-
-/** Entries within this fraction of the largest magnitude count as tied when the sign of an
- * eigenvector is chosen; the first tied entry is made positive. Common practice (rounding). */
-export const SIGN_TIE = 1e-9;
 
 export interface SymmetricEigen {
   /** Eigenvalues, largest first (signed). */
@@ -39,7 +31,7 @@ export interface SymmetricEigen {
  * tie within SIGN_TIE), so the answer is the same whatever the order of the rotations.
  * Cost O(n^3) per sweep, a few sweeps.
  * Throws InputError for an empty or non-square matrix, a non-finite entry, or one that is not
- * symmetric (|A_ij - A_ji| above 1e-12 of the largest entry).
+ * symmetric (|A_ij - A_ji| above SYMMETRY_TOLERANCE of the largest entry).
  * Example: symmetricEigen([[2, 1], [1, 2]]) -> values [3, 1], vectors [[0.7071, 0.7071],
  * [0.7071, -0.7071]].
  */
@@ -56,7 +48,7 @@ export function symmetricEigen(a: readonly (readonly number[])[]): SymmetricEige
   }
   for (let i = 0; i < n; i++) {
     for (let j = i + 1; j < n; j++) {
-      if (Math.abs(a[i][j] - a[j][i]) > 1e-12 * Math.max(scale, 1e-300)) {
+      if (Math.abs(a[i][j] - a[j][i]) > SYMMETRY_TOLERANCE * Math.max(scale, TINY_SCALE)) {
         throw new InputError(`The matrix must be symmetric: entry (${i + 1}, ${j + 1}) is ${a[i][j]} but (${j + 1}, ${i + 1}) is ${a[j][i]}`);
       }
     }

@@ -21,7 +21,16 @@
 import { InputError } from '../errors.ts';
 import { solveDense } from '../linalg/dense-solve.ts';
 import { symmetricEigen } from '../linalg/symmetric-eigen.ts';
-import { SETTING_TOLERANCE, SINGULAR_TOLERANCE } from '../tolerance.ts';
+import {
+  COMPASS_GAIN_MIN,
+  INCONSISTENCY_TOLERANCE,
+  NEGLIGIBLE_QUADRATIC,
+  RAY_STEP_MIN,
+  SETTING_TOLERANCE,
+  SINGULAR_TOLERANCE,
+  TIE_TOLERANCE,
+  TINY_SCALE,
+} from '../tolerance.ts';
 import { pcg32 } from '../design/random.ts';
 import { surfaceValue, type QuadraticSurface } from './quadratic-surface.ts';
 import { ridgePoint } from './ridge-analysis.ts';
@@ -38,9 +47,6 @@ export const RIDGE_SCAN = 100;
 export const RAY_DIRECTIONS = 256;
 export const RAY_SEED = 2024;
 export const RAY_STARTS = 12;
-
-/** Two fitted values within this fraction of their size are a tie, broken by the point nearest the center. Common practice (rounding). */
-export const TIE_TOLERANCE = 1e-12;
 
 export interface BoxOptimum {
   readonly coded: readonly number[];
@@ -61,12 +67,12 @@ function distance2(x: readonly number[]): number {
 function minimumNormSolution(a: number[][], rhs: number[]): number[] | null {
   const { values, vectors } = symmetricEigen(a);
   const most = Math.max(...values.map(Math.abs));
-  const scale = Math.max(1e-300, most, ...rhs.map(Math.abs));
+  const scale = Math.max(TINY_SCALE, most, ...rhs.map(Math.abs));
   const x = new Array<number>(rhs.length).fill(0);
   for (let i = 0; i < values.length; i++) {
     const proj = vectors[i].reduce((acc, v, j) => acc + v * rhs[j], 0);
-    if (Math.abs(values[i]) <= SINGULAR_TOLERANCE * Math.max(most, 1e-300)) {
-      if (Math.abs(proj) > 1e-9 * scale) return null; // inconsistent: the face has no stationary point
+    if (Math.abs(values[i]) <= SINGULAR_TOLERANCE * Math.max(most, TINY_SCALE)) {
+      if (Math.abs(proj) > INCONSISTENCY_TOLERANCE * scale) return null; // inconsistent: the face has no stationary point
       continue;
     }
     for (let j = 0; j < x.length; j++) x[j] += (proj / values[i]) * vectors[i][j];
@@ -136,7 +142,7 @@ export function boxExtreme(s: QuadraticSurface, sense: 'max' | 'min'): BoxOptimu
 function firstRoot(a: number, b: number, c: number, tMax: number): number | null {
   if (a === 0) return 0;
   const roots: number[] = [];
-  if (Math.abs(c) <= 1e-15 * (Math.abs(a) + Math.abs(b))) {
+  if (Math.abs(c) <= NEGLIGIBLE_QUADRATIC * (Math.abs(a) + Math.abs(b))) {
     if (b !== 0) roots.push(-a / b);
   } else {
     const disc = b * b - 4 * a * c;
@@ -222,14 +228,14 @@ export function boxTarget(s: QuadraticSurface, target: number): BoxOptimum {
   for (const start of ranked.slice(0, RAY_STARTS)) {
     let d = start.d;
     let t = start.t;
-    for (let step = 0.25; step > 1e-10; ) {
+    for (let step = 0.25; step > RAY_STEP_MIN; ) {
       let moved = false;
       for (let i = 0; i < k && !moved; i++) {
         for (const sgn of [-1, 1]) {
           const trial = unit(d.map((v, j) => (j === i ? v + sgn * step : v)));
           if (!trial) continue;
           const tt = rayDistance(s, target, trial);
-          if (tt < t - 1e-15) {
+          if (tt < t - COMPASS_GAIN_MIN) {
             d = trial;
             t = tt;
             moved = true;

@@ -13,7 +13,7 @@ import { toReal } from '../factor/coding.ts';
 import type { FittedModel } from '../fit/analysis.ts';
 import { symmetricEigen } from '../linalg/symmetric-eigen.ts';
 import { cachedPredictor } from '../predict/compiled-predictor.ts';
-import { SETTING_TOLERANCE, SINGULAR_TOLERANCE } from '../tolerance.ts';
+import { SETTING_TOLERANCE, SINGULAR_TOLERANCE, SURFACE_AGREEMENT_TOLERANCE } from '../tolerance.ts';
 import { quadraticSurface, surfaceValue, type QuadraticSurface } from './quadratic-surface.ts';
 
 /**
@@ -97,7 +97,7 @@ export function canonicalAnalysis(model: FittedModel): CanonicalAnalysis {
       fit,
       inside: x.every((c) => Math.abs(c) <= 1 + SETTING_TOLERANCE),
     };
-    if (Math.abs(fit - surfaceValue(surface, x)) > 1e-9 * Math.max(1, Math.abs(fit))) {
+    if (Math.abs(fit - surfaceValue(surface, x)) > SURFACE_AGREEMENT_TOLERANCE * Math.max(1, Math.abs(fit))) {
       throw new InputError('The model and its quadratic surface disagree at the stationary point; the model is inconsistent');
     }
     if (!stationary.inside) notes.push('The stationary point lies outside the factorial box [-1, 1] on some factor: the prediction there is an extrapolation.');

@@ -19,14 +19,11 @@ import type { Factor } from '../factor/factor.ts';
 import type { FittedModel } from '../fit/analysis.ts';
 import { cachedPredictor } from '../predict/compiled-predictor.ts';
 import { CAUTION } from '../predict/caution.ts';
-import { TIE_TOLERANCE } from './box-optimum.ts';
+import { COMPASS_GAIN_MIN, SEARCH_STEP_MIN, SHORTFALL_FLOOR, TIE_TOLERANCE } from '../tolerance.ts';
 import { checkDesirability, desirability, overallDesirability, type DesirabilitySpec } from './desirability.ts';
 
 /** Starts improved by the compass search (the best of the seeds). A design choice: cheap, and more never changed the answer in the tests. */
 export const SEARCH_STARTS = 12;
-
-/** The compass search stops when its step falls below this, in coded units (common practice: far below any gauge). */
-export const SEARCH_STEP_MIN = 1e-7;
 
 /** Most factors for the corner seeds (2^10 corners). A design choice. */
 export const MAX_SEARCH_FACTORS = 10;
@@ -130,7 +127,7 @@ export function maximizeDesirability(
     for (let i = 0; i < predictors.length; i++) {
       const y = predictors[i].fit(x);
       const d = desirability(specs[i], y);
-      if (d === 0) short += shortfall(specs[i], y) + 1e-12;
+      if (d === 0) short += shortfall(specs[i], y) + SHORTFALL_FLOOR;
       else logSum += weights[i] * Math.log(d);
       sumW += weights[i];
     }
@@ -178,7 +175,7 @@ export function maximizeDesirability(
           if (nx === old) continue;
           x[j] = nx;
           const nv = score(x);
-          if (nv > v + 1e-15) {
+          if (nv > v + COMPASS_GAIN_MIN) {
             v = nv;
             moved = true;
             break;

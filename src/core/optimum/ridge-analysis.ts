@@ -15,7 +15,7 @@ import { toReal } from '../factor/coding.ts';
 import type { FittedModel } from '../fit/analysis.ts';
 import { symmetricEigen } from '../linalg/symmetric-eigen.ts';
 import { cachedPredictor } from '../predict/compiled-predictor.ts';
-import { SINGULAR_TOLERANCE } from '../tolerance.ts';
+import { FLOOR_ROUNDING, SINGULAR_TOLERANCE, TINY_SCALE } from '../tolerance.ts';
 import { quadraticSurface, type QuadraticSurface } from './quadratic-surface.ts';
 
 /** Highest or lowest fitted response. */
@@ -52,7 +52,7 @@ export function ridgePoint(surface: QuadraticSurface, radius: number, sense: Sen
   const { values, vectors } = symmetricEigen(surface.B.map((row) => row.map((v) => s * v)));
   const g = vectors.map((v) => (s * v.reduce((acc, vj, j) => acc + vj * surface.b[j], 0)) / 2);
   const top = values[0];
-  const scale = Math.max(1e-300, ...values.map(Math.abs), ...g.map(Math.abs));
+  const scale = Math.max(TINY_SCALE, ...values.map(Math.abs), ...g.map(Math.abs));
   const atTop = values.map((l) => Math.abs(l - top) <= SINGULAR_TOLERANCE * scale);
   const gTop = g.reduce((acc, gi, i) => acc + (atTop[i] ? gi * gi : 0), 0);
   const point = (mu: number) => {
@@ -100,7 +100,7 @@ export function ridgePoint(surface: QuadraticSurface, radius: number, sense: Sen
  */
 export function ridgeAnalysis(model: FittedModel, sense: Sense, maxRadius: number): RidgePoint[] {
   if (!Number.isFinite(maxRadius) || maxRadius <= 0) throw new InputError(`A ridge analysis needs a largest radius above 0, got ${maxRadius}`);
-  const count = Math.floor(maxRadius / RIDGE_STEP + 1e-9);
+  const count = Math.floor(maxRadius / RIDGE_STEP + FLOOR_ROUNDING);
   if (count > 1000) throw new InputError(`A ridge analysis takes up to 1000 radii of ${RIDGE_STEP}, got a largest radius of ${maxRadius}`);
   const surface = quadraticSurface(model);
   const predictor = cachedPredictor(model);
