@@ -45,14 +45,16 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
   validateResponseData(data);
   const { factors, coded, y } = data;
   const alpha = options.alpha ?? 0.05;
-  const { blockLevels, blocks, cells, fit } = chooseFit(data, options);
+  const { blockLevels, blocks, cells, fit, nominal: plan } = chooseFit(data, options);
+  // The nominal plan decides repeats, center runs and Lenth's set (nominal-settings.ts).
+  const nominal = plan.exact ? null : plan.nominal;
   const est = estimateTerms(fit, factors, blockLevels, alpha);
-  const repeats = findRepeats({ coded, y, points: data.points, blocks, cells, k: factors.length });
+  const repeats = findRepeats({ coded, y, points: data.points, blocks, cells, k: factors.length, nominal });
   const pe = repeats.pure;
   const tables = anovaTables(fit, y, est.labels, est.terms.map((t) => t.p), pe);
-  const kinds = runKinds(factors, coded);
+  const kinds = runKinds(factors, nominal ?? coded);
   const curv = curvatureTest(kinds, y, pe);
-  const lenthOut = lenthStep({ factors, coded, y, points: data.points, blocks, kinds, groups: repeats.groups, terms: est.terms });
+  const lenthOut = lenthStep({ factors, coded, y, points: data.points, blocks, kinds, groups: repeats.groups, terms: est.terms, nominal });
   const terms = fit.dfResidual === 0 && lenthOut.lenth ? withLenthT(est.terms, lenthOut.lenth.pse) : est.terms;
   const diag = runDiagnostics(fit, y, data.labels, kinds, est.sigma, tables.ssTotal);
   const verdicts = analysisVerdicts({

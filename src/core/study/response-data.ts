@@ -22,6 +22,12 @@ export interface ResponseData {
    * run at differ slightly. Absent: runs count as repeats only at identical actual settings.
    */
   readonly points?: readonly string[] | null;
+  /**
+   * The planned coded settings of each run (null for a run the plan does not hold), when the runs
+   * come from a plan: the nominal plan that decides what can be estimated (fit/nominal-settings.ts).
+   * Absent: the plan is inferred from the actual settings (-1, 0, +1 within 0.1 coded).
+   */
+  readonly planned?: readonly (readonly number[] | null)[] | null;
   /** Run labels for reports (run numbers), aligned with the rows. */
   readonly labels: readonly string[];
   /** What was skipped and why ("2 excluded runs skipped"), for the report. */

@@ -58,7 +58,7 @@ export function curvatureNote(p: number, use: 'prediction' | 'path', squares: re
 export function verdictText(v: Verdict): string {
   switch (v.kind) {
     case 'near-replicates':
-      return `Pure error comes from repeats of the same planned point; in ${v.groups} of them the actual settings differ slightly, so pure error and lack of fit are approximate (each group is treated as runs at one point).`;
+      return `Pure error comes from repeats of the same planned point; in ${v.groups} of them the actual settings differ slightly, so pure error and lack of fit are approximate (each group is treated as runs at one point), and the residual sum of squares may then fall below pure error.`;
     case 'not-orthogonal':
       return 'The runs are not orthogonal (missing runs, off-target settings or unequal blocks), so sequential sums of squares depend on the order of terms; the adjusted table gives each term after all others.';
     case 'curvature':
