@@ -28,8 +28,9 @@ export const modelOptionUsage = `  FILE                 a CSV with a header row 
   --factors A,B,C      the factor columns, in the order that gives their letters A, B, C ...
   --response NAME      the response column
   --levels A=low:high,B=labelLow:labelHigh
-                       the coding; without it a numeric factor runs from the column's min to max
-                       and a categorical factor's first label in the file is -1
+                       the coding; without it a numeric factor's low and high are its most frequent
+                       values below and above the column's mid-range (ties: the more extreme), and
+                       a categorical factor's first label in the file is -1
   --terms "A*B*C"      model terms in Wilkinson-Rogers notation (A + B + A:B, A*B*C, (A+B+C)^2;
                        A^2 is the square of a numeric factor, quadratic the full second-order model)
   --order N            or: all terms up to order N (default: main effects and two-factor interactions)

@@ -63,7 +63,7 @@ export function analysisText(a: Analysis): string {
   if (a.curvature) {
     const c = a.curvature;
     out.push('');
-    out.push(`Curvature from ${c.nCenter} center runs: factorial mean - center mean = ${num(c.estimate)}, std error ${num(c.se)}, t ${num(c.t)}, p ${pValue(c.p)}`);
+    out.push(`Curvature from ${c.nCenter} center runs: factorial minus center, adjusted for the model terms = ${num(c.estimate)}, std error ${num(c.se)}, t ${num(c.t)}, p ${pValue(c.p)}`);
     const v = a.verdicts.find((x) => x.kind === 'curvature');
     if (v && v.kind === 'curvature') out.push(`  ${curvatureStatement(v)}`);
   }

@@ -24,7 +24,7 @@ import { analysisVerdicts } from './analysis-verdicts.ts';
 import { anovaTables } from './anova-tables.ts';
 import { chooseFit } from './choose-fit.ts';
 import { codingRows } from './coding-rows.ts';
-import { curvature as curvatureTest, runKinds } from './curvature.ts';
+import { adjustedCurvature, runKinds } from './curvature.ts';
 import { runDiagnostics } from './diagnostics.ts';
 import { estimateTerms } from './estimate-terms.ts';
 import { lenthStep, withLenthT } from './lenth-step.ts';
@@ -53,13 +53,14 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
   const pe = repeats.pure;
   const tables = anovaTables(fit, y, est.labels, est.terms.map((t) => t.p), pe);
   const kinds = runKinds(factors, nominal ?? coded);
-  const curv = curvatureTest(kinds, y, pe);
+  const curv = adjustedCurvature(Array.from(fit.kept, (j) => fit.columns[j]), coded, blocks, kinds, y, pe);
   const lenthOut = lenthStep({ factors, coded, y, points: data.points, blocks, kinds, groups: repeats.groups, terms: est.terms, nominal });
   const terms = fit.dfResidual === 0 && lenthOut.lenth ? withLenthT(est.terms, lenthOut.lenth.pse) : est.terms;
   const diag = runDiagnostics(fit, y, data.labels, kinds, est.sigma, tables.ssTotal);
   const verdicts = analysisVerdicts({
     alpha,
     nearReplicates: repeats.nearReplicates,
+    offLevels: { runs: plan.away, planned: Boolean(data.planned) },
     orthogonal: fit.orthogonal,
     curvature: curv,
     squares: est.terms.filter((t) => isSquare(t.term)).map((t) => t.letters),

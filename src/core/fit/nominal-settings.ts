@@ -20,7 +20,11 @@ export interface NominalSettings {
   readonly nominal: readonly (readonly number[])[];
   /** Number of settings moved to their nominal level (actual off it by more than rounding, within 0.1). */
   readonly moved: number;
-  /** Number of runs with a setting more than 0.1 coded from every level (planned, or -1, 0, +1). */
+  /**
+   * Number of runs with a setting more than 0.1 coded from its planned level, or, without a plan,
+   * from every one of -1, 0, +1 while inside the range (a setting beyond +-1.1 is taken as an
+   * axial point of a second-order plan, not as a setting error).
+   */
   readonly away: number;
   /** True when every nominal setting equals its actual one (up to SETTING_TOLERANCE). */
   readonly exact: boolean;
@@ -50,7 +54,7 @@ export function nominalSettings(
         for (const l of LEVELS) if (Math.abs(v - l) <= tol) level = l;
       }
       if (level === null) {
-        runAway = true;
+        if (plan || Math.abs(v) < 1) runAway = true;
         return v;
       }
       if (Math.abs(v - level) > SETTING_TOLERANCE) moved++;

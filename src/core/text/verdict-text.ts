@@ -57,6 +57,10 @@ export function curvatureNote(p: number, use: 'prediction' | 'path', squares: re
  */
 export function verdictText(v: Verdict): string {
   switch (v.kind) {
+    case 'off-levels':
+      return v.planned
+        ? `${v.runs} run${v.runs === 1 ? ' has a setting' : 's have settings'} more than 0.1 coded from the planned level: ${v.runs === 1 ? 'it counts' : 'each counts'} as a point of its own, not as a repeat of the plan.`
+        : `${v.runs} run${v.runs === 1 ? ' has a setting' : 's have settings'} more than 0.1 coded from every level (-1, 0, +1 in the coding shown): ${v.runs === 1 ? 'it counts' : 'each counts'} as a point of its own; check the coding.`;
     case 'near-replicates':
       return `Pure error comes from repeats of the same planned point; in ${v.groups} of them the actual settings differ slightly, so pure error and lack of fit are approximate (each group is treated as runs at one point), and the residual sum of squares may then fall below pure error.`;
     case 'not-orthogonal':

@@ -7,7 +7,7 @@ describe('nominalSettings', () => {
     const n = nominalSettings([[0.98, -1], [0.5, 1], [0.05, -0.93], [1.2, 1]]);
     expect(n.nominal).toEqual([[1, -1], [0.5, 1], [0, -1], [1.2, 1]]);
     expect(n.moved).toBe(3);
-    expect(n.away).toBe(2);
+    expect(n.away).toBe(1); // 0.5 is off every level; 1.2 lies beyond the range (an axial point)
     expect(n.exact).toBe(false);
   });
   it('with a plan, the planned value when the actual is within 0.1 of it, else the actual (a different point)', () => {
