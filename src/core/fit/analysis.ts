@@ -38,6 +38,8 @@ export interface TermEstimate extends Estimate {
   readonly lenthT?: number;
   /** When the runs cannot separate this term from others, the combination it estimates ("A + BCD"). */
   readonly estimates?: string;
+  /** Variance inflation factor 1 / (1 - R^2) of its column (fit/vif.ts); null when undefined. Set by analyze. */
+  readonly vif?: number | null;
 }
 
 export interface AnovaRow {

@@ -3,7 +3,7 @@
  * take and return plain data: check the runs (validate-response.ts), fit (choose-fit.ts),
  * estimates and aliases (estimate-terms.ts), repeats and pure error (repeats.ts), the ANOVA
  * tables (anova-tables.ts), curvature from center points (curvature.ts), Lenth's method and the
- * half-normal points (lenth-step.ts), per-run diagnostics (diagnostics.ts), and last the verdicts
+ * half-normal points (lenth-step.ts), variance inflation factors (vif.ts), per-run diagnostics (diagnostics.ts), and last the verdicts
  * (analysis-verdicts.ts), from which the warnings are written (core/text/verdict-text.ts).
  * Conventions (stated in the README): the fit uses every run, center points included, with the
  * model's terms only, so the intercept is the fitted value at the center; effect = 2 x coef;
@@ -30,6 +30,7 @@ import { estimateTerms } from './estimate-terms.ts';
 import { lenthStep, withLenthT } from './lenth-step.ts';
 import { findRepeats } from './repeats.ts';
 import { validateResponseData } from './validate-response.ts';
+import { columnVifs, VIF_LIMIT, vifDrivers } from './vif.ts';
 import { isWarning } from './verdicts.ts';
 
 export interface AnalyzeOptions {
@@ -48,12 +49,17 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
   const { blockLevels, blocks, cells, fit, nominal: plan } = chooseFit(data, options);
   // The nominal plan decides repeats, center runs and Lenth's set (nominal-settings.ts).
   const nominal = plan.exact ? null : plan.nominal;
-  const est = estimateTerms(fit, factors, blockLevels, alpha);
+  const vifs = columnVifs(fit, coded, blocks);
+  const est = estimateTerms(fit, factors, blockLevels, alpha, vifs);
+  const keptColumns = Array.from(fit.kept, (j) => fit.columns[j]);
+  const collinear = est.terms.flatMap((t) =>
+    t.vif != null && t.vif > VIF_LIMIT ? [{ letters: t.estimates ?? t.letters, vif: t.vif, runs: vifDrivers(keptColumns, coded, blocks, y, keptColumns.findIndex((c) => c.kind === 'term' && c.term === t.term), data.labels) }] : [],
+  );
   const repeats = findRepeats({ coded, y, points: data.points, blocks, cells, k: factors.length, nominal });
   const pe = repeats.pure;
   const tables = anovaTables(fit, y, est.labels, est.terms.map((t) => t.p), pe);
   const kinds = runKinds(factors, nominal ?? coded);
-  const curv = adjustedCurvature(Array.from(fit.kept, (j) => fit.columns[j]), coded, blocks, kinds, y, pe);
+  const curv = adjustedCurvature(keptColumns, coded, blocks, kinds, y, pe);
   const lenthOut = lenthStep({ factors, coded, y, points: data.points, blocks, kinds, groups: repeats.groups, terms: est.terms, nominal });
   const terms = fit.dfResidual === 0 && lenthOut.lenth ? withLenthT(est.terms, lenthOut.lenth.pse) : est.terms;
   const diag = runDiagnostics(fit, y, data.labels, kinds, est.sigma, tables.ssTotal);
@@ -62,6 +68,7 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     nearReplicates: repeats.nearReplicates,
     offLevels: { runs: plan.away, planned: Boolean(data.planned) },
     orthogonal: fit.orthogonal,
+    collinear: { limit: VIF_LIMIT, terms: collinear },
     curvature: curv,
     squares: est.terms.filter((t) => isSquare(t.term)).map((t) => t.letters),
     pureErrorDf: pe.df,

@@ -31,6 +31,8 @@ export type Verdict =
    * -1, 0, +1 (no plan): each counts as a point of its own.
    */
   | { readonly kind: 'off-levels'; readonly runs: number; readonly planned: boolean }
+  /** Terms whose VIF is above the limit, each with up to three runs whose removal lowers it most. */
+  | { readonly kind: 'collinear'; readonly limit: number; readonly terms: readonly { readonly letters: string; readonly vif: number; readonly runs: readonly string[] }[] }
   /** Columns not orthogonal: sequential and adjusted sums of squares differ. */
   | { readonly kind: 'not-orthogonal' }
   | CurvatureVerdict
