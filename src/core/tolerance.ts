@@ -100,3 +100,7 @@ export const EQUAL_VARIANCE_TOLERANCE = 1e-9;
  * a million runs (1e150^2 x 1e6 = 1e306). Files are refused above it at reading, naming the cell.
  * Common practice (overflow headroom); raise it when the fit scales the response first. */
 export const MAX_RESPONSE_MAGNITUDE = 1e150;
+
+/** The Box-Cox lambda and the ends of its interval are found to within this (fit/box-cox.ts;
+ * far finer than any choice of power needs; our own choice). */
+export const BOX_COX_PRECISION = 1e-6;
