@@ -5,6 +5,8 @@
  * tables (anova-tables.ts), curvature from center points (curvature.ts), Lenth's method and the
  * half-normal points (lenth-step.ts), variance inflation factors (vif.ts), per-run diagnostics (diagnostics.ts), and last the verdicts
  * (analysis-verdicts.ts), from which the warnings are written (core/text/verdict-text.ts).
+ * With a transform (response-transform.ts) every figure is on the transformed scale of y - L
+ * (L the response's lower bound); `boxCox` is always about the untransformed y - L (box-cox.ts).
  * Conventions (stated in the README): the fit uses every run, center points included, with the
  * model's terms only, so the intercept is the fitted value at the center; effect = 2 x coef;
  * each ANOVA table names its type.
@@ -29,6 +31,9 @@ import { runDiagnostics } from './diagnostics.ts';
 import { estimateTerms } from './estimate-terms.ts';
 import { lenthStep, withLenthT } from './lenth-step.ts';
 import { findRepeats } from './repeats.ts';
+import { boxCox } from './box-cox.ts';
+import { modelMatrix } from './columns.ts';
+import { NO_TRANSFORM, transformResponses, type ResponseTransform } from './response-transform.ts';
 import { validateResponseData } from './validate-response.ts';
 import { columnVifs, VIF_LIMIT, vifDrivers } from './vif.ts';
 import { isWarning } from './verdicts.ts';
@@ -40,10 +45,17 @@ export interface AnalyzeOptions {
   readonly alpha?: number;
   /** Force the general QR path (tests compare it with the Yates path). */
   readonly forceQr?: boolean;
+  /** Transform of the response minus its lower bound (response-transform.ts); default none. */
+  readonly transform?: ResponseTransform;
 }
 
-export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analysis {
-  validateResponseData(data);
+export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analysis {
+  validateResponseData(raw);
+  const transform = options.transform ?? NO_TRANSFORM;
+  const bound = raw.lowerBound ?? null;
+  // The fit is made on (y'^lambda - 1) / lambda, y' = y - L (response-transform.ts); none leaves y as it is.
+  const data = transform.lambda === 1 ? raw : { ...raw, y: transformResponses(raw.y, transform.lambda, bound ?? 0, raw.response) };
+  if (data !== raw) validateResponseData(data);
   const { factors, coded, y } = data;
   const alpha = options.alpha ?? 0.05;
   const { blockLevels, blocks, cells, fit, nominal: plan } = chooseFit(data, options);
@@ -92,7 +104,10 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     dfResidual: fit.dfResidual,
     pValues: new Map<Term, number | null>(terms.map((t) => [t.term, t.p ?? null])),
     curvatureP: curv?.p ?? null,
+    transform: { token: transform.token, lambda: transform.lambda, lowerBound: bound },
   };
+  const yp = bound === null ? raw.y : raw.y.map((v) => v - bound);
+  const bc = boxCox(modelMatrix(keptColumns, coded, blocks), y.length, keptColumns.length, yp);
   return {
     response: data.response,
     n: y.length,
@@ -115,6 +130,8 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     halfNormal: lenthOut.halfNormal,
     verdicts,
     warnings: [...data.notes, ...verdicts.filter(isWarning).map(verdictText)],
+    transform: model.transform!,
+    boxCox: bc,
     model,
   };
 }

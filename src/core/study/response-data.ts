@@ -10,6 +10,8 @@ export interface ResponseData {
   /** Response name (with its unit, if any, kept apart). */
   readonly response: string;
   readonly unit?: string;
+  /** The lowest value the response can take (0 for "cannot be negative"), or null/absent for none. */
+  readonly lowerBound?: number | null;
   /** Coded actual settings, one row per run used, one value per factor in declared order. */
   readonly coded: readonly (readonly number[])[];
   /** The response at each run (the mean of its readings when a run has several). */

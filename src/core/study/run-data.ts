@@ -76,6 +76,7 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     factors: study.factors,
     response: response.name,
     ...(response.unit ? { unit: response.unit } : {}),
+    lowerBound: response.lowerBound ?? null,
     coded,
     y,
     blocks: blocked ? blocks : null,
