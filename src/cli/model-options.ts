@@ -5,6 +5,7 @@
 import { InputError } from '../core/errors.ts';
 import { parseTerms, termsUpToOrder, defaultTerms } from '../core/model/formula.ts';
 import type { Term } from '../core/model/term.ts';
+import { parseTransform, type ResponseTransform } from '../core/fit/response-transform.ts';
 import type { ResponseData } from '../core/study/response-data.ts';
 import { readTable } from '../io/csv/read-table.ts';
 import { tableResponseData } from '../io/csv/table-response-data.ts';
@@ -20,6 +21,7 @@ export const modelOptionSpec = {
   terms: { type: 'string' },
   order: { type: 'string' },
   block: { type: 'string' },
+  transform: { type: 'string' },
   study: { type: 'string' },
   json: { type: 'boolean' },
 } as const satisfies OptionSpec;
@@ -35,6 +37,9 @@ export const modelOptionUsage = `  FILE                 a CSV with a header row 
                        A^2 is the square of a numeric factor, quadratic the full second-order model)
   --order N            or: all terms up to order N (default: main effects and two-factor interactions)
   --block COLUMN       a column holding each run's block, fitted as a fixed effect
+  --transform none|log|sqrt|inverse|power=L
+                       fit (y'^L - 1)/L, y' = the response minus its lower bound (log at L = 0;
+                       default none); predictions come back in the response's units (the median)
   --study ID-OR-NAME   with a Trialbook backup (.json): the study to analyse; its own factors,
                        coding and blocks are used. A Trialbook CSV export needs no --factors:
                        its actual settings and coding are read from its columns; excluded runs
@@ -46,6 +51,7 @@ type Values = { [K in keyof typeof modelOptionSpec]?: (typeof modelOptionSpec)[K
 export interface ModelInput {
   readonly data: ResponseData;
   readonly terms: Term[];
+  readonly transform: ResponseTransform;
 }
 
 export function loadModelInput(positionals: string[], values: Values): ModelInput {
@@ -78,7 +84,7 @@ export function loadModelInput(positionals: string[], values: Values): ModelInpu
       data = tableResponseData(table, { factors, response: values.response, levels, ...(values.block ? { block: values.block } : {}) });
     }
   }
-  return { data, terms: modelTerms(data, values) };
+  return { data, terms: modelTerms(data, values), transform: parseTransform(values.transform) };
 }
 
 export function modelTerms(data: ResponseData, values: Values): Term[] {

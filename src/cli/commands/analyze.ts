@@ -11,8 +11,8 @@ export const analyze: Command = {
   usage: `Usage: npm run --silent cli -- analyze FILE --factors A,B,C --response NAME [options]\n\n${modelOptionUsage}`,
   async run(argv) {
     const { values, positionals } = parseCommandArgs(argv, modelOptionSpec);
-    const { data, terms } = loadModelInput(positionals, values);
-    const result = analyzeCore(data, { terms });
+    const { data, terms, transform } = loadModelInput(positionals, values);
+    const result = analyzeCore(data, { terms, transform });
     return values.json ? JSON.stringify(analysisJson(result), null, 2) : analysisText(result);
   },
 };

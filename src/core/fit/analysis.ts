@@ -124,6 +124,8 @@ export interface FitTransform {
   readonly lambda: number;
   /** The response's lower bound L, or null when it has none. */
   readonly lowerBound: number | null;
+  /** The Box-Cox suggestion for the untransformed response (a transform token), or null. */
+  readonly suggestion?: string | null;
 }
 
 export interface Analysis {

@@ -92,6 +92,8 @@ export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analys
     terms,
   });
 
+  const yp = bound === null ? raw.y : raw.y.map((v) => v - bound);
+  const bc = boxCox(modelMatrix(keptColumns, coded, blocks), y.length, keptColumns.length, yp);
   const model: FittedModel = {
     factors,
     response: data.response,
@@ -104,10 +106,8 @@ export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analys
     dfResidual: fit.dfResidual,
     pValues: new Map<Term, number | null>(terms.map((t) => [t.term, t.p ?? null])),
     curvatureP: curv?.p ?? null,
-    transform: { token: transform.token, lambda: transform.lambda, lowerBound: bound },
+    transform: { token: transform.token, lambda: transform.lambda, lowerBound: bound, suggestion: bc?.suggestion ?? null },
   };
-  const yp = bound === null ? raw.y : raw.y.map((v) => v - bound);
-  const bc = boxCox(modelMatrix(keptColumns, coded, blocks), y.length, keptColumns.length, yp);
   return {
     response: data.response,
     n: y.length,
