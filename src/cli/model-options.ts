@@ -5,6 +5,7 @@
 import { InputError } from '../core/errors.ts';
 import { parseTerms, termsUpToOrder, defaultTerms } from '../core/model/formula.ts';
 import type { Term } from '../core/model/term.ts';
+import { parseTransform, type ResponseTransform } from '../core/fit/response-transform.ts';
 import type { ResponseData } from '../core/study/response-data.ts';
 import { readTable } from '../io/csv/read-table.ts';
 import { tableResponseData } from '../io/csv/table-response-data.ts';
@@ -20,6 +21,7 @@ export const modelOptionSpec = {
   terms: { type: 'string' },
   order: { type: 'string' },
   block: { type: 'string' },
+  transform: { type: 'string' },
   study: { type: 'string' },
   json: { type: 'boolean' },
 } as const satisfies OptionSpec;
@@ -28,12 +30,16 @@ export const modelOptionUsage = `  FILE                 a CSV with a header row 
   --factors A,B,C      the factor columns, in the order that gives their letters A, B, C ...
   --response NAME      the response column
   --levels A=low:high,B=labelLow:labelHigh
-                       the coding; without it a numeric factor runs from the column's min to max
-                       and a categorical factor's first label in the file is -1
+                       the coding; without it a numeric factor's low and high are its most frequent
+                       values below and above the column's mid-range (ties: the more extreme), and
+                       a categorical factor's first label in the file is -1
   --terms "A*B*C"      model terms in Wilkinson-Rogers notation (A + B + A:B, A*B*C, (A+B+C)^2;
                        A^2 is the square of a numeric factor, quadratic the full second-order model)
   --order N            or: all terms up to order N (default: main effects and two-factor interactions)
   --block COLUMN       a column holding each run's block, fitted as a fixed effect
+  --transform none|log|sqrt|inverse|power=L
+                       fit (y'^L - 1)/L, y' = the response minus its lower bound (log at L = 0;
+                       default none); predictions come back in the response's units (the median)
   --study ID-OR-NAME   with a Trialbook backup (.json): the study to analyze; its own factors,
                        coding and blocks are used. A Trialbook CSV export needs no --factors:
                        its actual settings and coding are read from its columns; excluded runs
@@ -47,6 +53,7 @@ export interface ModelInput {
   readonly terms: Term[];
   /** True when a plain CSV was coded without --levels: each categorical factor's first label in file order is -1. */
   readonly codingFromFileOrder: boolean;
+  readonly transform: ResponseTransform;
 }
 
 export function loadModelInput(positionals: string[], values: Values): ModelInput {
@@ -82,7 +89,7 @@ export function loadModelInput(positionals: string[], values: Values): ModelInpu
       codingFromFileOrder = !values.levels;
     }
   }
-  return { data, terms: modelTerms(data, values), codingFromFileOrder };
+  return { data, terms: modelTerms(data, values), codingFromFileOrder, transform: parseTransform(values.transform) };
 }
 
 export function modelTerms(data: ResponseData, values: Values): Term[] {

@@ -173,3 +173,7 @@ export const SURFACE_AGREEMENT_TOLERANCE = 1e-9;
 /** Added to a quotient before it is rounded down, so that a quotient whole up to rounding
  * (1 / 0.1 = 9.999999999999998) counts as whole (common practice). */
 export const FLOOR_ROUNDING = 1e-9;
+
+/** The Box-Cox lambda and the ends of its interval are found to within this (fit/box-cox.ts;
+ * far finer than any choice of power needs; our own choice). */
+export const BOX_COX_PRECISION = 1e-6;

@@ -104,3 +104,21 @@ describe('analyze command', () => {
     expect(bad.stdout).toBe('');
   }, 60_000);
 });
+
+describe('analyze command: floor data keys (vif, boxCox, transform)', () => {
+  it('every term carries vif (1 in the orthogonal Example 6.1 design; Montgomery, Peck and Vining, 5th ed., section 9.4), boxCox and transform are given', async () => {
+    const out = JSON.parse(await analyze.run([etch, '--factors', 'Gap,Flow,Power', '--response', 'Etch rate', '--json']));
+    expect(out.intercept.vif).toBeNull();
+    for (const t of out.terms) expect(t.vif).toBeCloseTo(1, 10);
+    expect(out.transform).toBe('none');
+    expect(out.boxCox).toMatchObject({ suggestion: expect.any(String) });
+    expect(out.boxCox.ci).toHaveLength(2);
+    const logged = JSON.parse(await analyze.run([etch, '--factors', 'Gap,Flow,Power', '--response', 'Etch rate', '--transform', 'log', '--json']));
+    expect(logged.transform).toBe('log');
+    // Box-Cox is always about the untransformed response: the same figures under any transform
+    expect(logged.boxCox.lambda).toBeCloseTo(out.boxCox.lambda, 9);
+  });
+  it('a transform token it does not know is refused, saying what it needs', async () => {
+    await expect(analyze.run([etch, '--factors', 'Gap,Flow,Power', '--response', 'Etch rate', '--transform', 'cube'])).rejects.toThrow('A transform needs none, log, sqrt, inverse or power=L');
+  });
+});

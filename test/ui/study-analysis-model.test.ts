@@ -71,6 +71,20 @@ describe('the shared study analysis', () => {
     expect(pg?.ok && pg.prediction.fit).toBeCloseTo(predict(reference('Gloss', 2).model, at).fit, 12);
   });
 
+  it('the transform chosen on the Effects screen is the one the quick card predicts from (fit back in the response units)', async () => {
+    const { shared } = await opened();
+    const card = new QuickCardModel(shared);
+    const at = { 'Oven temperature': 180, 'Line speed': 3, 'Powder flow': 40 };
+    shared.chooseTransform(shared.shownIndex.value, 'log');
+    const data = backupResponseData(text, studyId, 'Film thickness');
+    const ref = predict(analyze(data, { terms: termsUpToOrder(data.factors.length, 2), transform: { token: 'log', lambda: 0 } }).model, at);
+    const p = card.prediction.value;
+    expect(p?.ok && p.prediction.fit).toBeCloseTo(ref.fit, 12);
+    expect(p?.ok && p.prediction.transformed?.fit).toBeCloseTo(Math.log(ref.fit - (data.lowerBound ?? 0)), 9); // log of the median
+    const r = shared.shown.value!.result.value;
+    expect(r.ok && r.analysis.transform.token).toBe('log');
+  });
+
   it('re-reads the runs when a screen opens, and works the analysis out again only when a run changed', async () => {
     const { store, shared } = await opened();
     const before = shared.data.value;

@@ -26,8 +26,8 @@ export const analyze: Command = {
                        the report then adds the canonical analysis, the ridge and that setting`,
   async run(argv) {
     const { values, positionals } = parseCommandArgs(argv, spec);
-    const { data, terms, codingFromFileOrder } = loadModelInput(positionals, values);
-    const result = analyzeCore(data, { terms });
+    const { data, terms, codingFromFileOrder, transform } = loadModelInput(positionals, values);
+    const result = analyzeCore(data, { terms, transform });
     const second = isSecondOrderModel(result.model);
     if (values.goal !== undefined && !second) {
       throw new InputError('--goal needs a second-order model on numeric factors: squares in --terms (such as --terms quadratic) and no categorical factor');

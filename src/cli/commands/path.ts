@@ -43,9 +43,9 @@ ${modelOptionUsage}`,
     if (!Number.isFinite(step)) throw new InputError(`--step needs a number, got "${values.step}"`);
     const steps = values.steps === undefined ? DEFAULT_STEPS : parseNumber(values.steps);
     if (!Number.isInteger(steps)) throw new InputError(`--steps needs a whole number, got "${values.steps}"`);
-    const { data, terms } = loadModelInput(positionals, values);
+    const { data, terms, transform } = loadModelInput(positionals, values);
     const at = values.at === undefined ? [] : parseAssignments(values.at, '--at');
-    const result = steepestPath(analyze(data, { terms }).model, { base: values.base, step, steps, sense: values.descent ? 'descent' : 'ascent', at });
+    const result = steepestPath(analyze(data, { terms, transform }).model, { base: values.base, step, steps, sense: values.descent ? 'descent' : 'ascent', at });
     return values.json ? JSON.stringify(pathJson(result), null, 2) : pathText(result);
   },
 };

@@ -23,9 +23,9 @@ ${atUsage}
 ${modelOptionUsage}`,
   async run(argv) {
     const { values, positionals } = parseCommandArgs(argv, spec);
-    const { data, terms } = loadModelInput(positionals, values);
+    const { data, terms, transform } = loadModelInput(positionals, values);
     const at = values.at === undefined ? [] : parseAssignments(values.at, '--at');
-    const result = predictCore(analyze(data, { terms }).model, at);
+    const result = predictCore(analyze(data, { terms, transform }).model, at);
     return values.json ? JSON.stringify(predictionJson(result), null, 2) : predictionText(result);
   },
 };

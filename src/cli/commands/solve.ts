@@ -26,9 +26,9 @@ ${modelOptionUsage}`,
     const target = parseNumber(values.target);
     if (!Number.isFinite(target)) throw new InputError(`--target needs a number, got "${values.target}"`);
     if (values.for === undefined || values.for.trim() === '') throw new InputError('Name the factor to solve for with --for FACTOR');
-    const { data, terms } = loadModelInput(positionals, values);
+    const { data, terms, transform } = loadModelInput(positionals, values);
     const at = values.at === undefined ? [] : parseAssignments(values.at, '--at');
-    const result = solveForTarget(analyze(data, { terms }).model, { factor: values.for, target, at });
+    const result = solveForTarget(analyze(data, { terms, transform }).model, { factor: values.for, target, at });
     return values.json ? JSON.stringify(solveJson(result), null, 2) : solveText(result);
   },
 };

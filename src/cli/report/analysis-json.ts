@@ -8,7 +8,7 @@ export function analysisJson(a: Analysis): Record<string, unknown> {
     n: a.n,
     method: a.method,
     coding: Object.fromEntries(a.coding.map((c) => [c.name, { letter: c.letter, kind: c.kind, low: c.low, high: c.high, scale: c.scale, ...(c.unit ? { unit: c.unit } : {}) }])),
-    intercept: { coef: a.intercept.coef, se: a.intercept.se, t: a.intercept.t, p: a.intercept.p },
+    intercept: { coef: a.intercept.coef, se: a.intercept.se, t: a.intercept.t, p: a.intercept.p, vif: null },
     terms: a.terms.map((t) => ({
       name: t.name,
       letters: t.letters,
@@ -18,6 +18,7 @@ export function analysisJson(a: Analysis): Record<string, unknown> {
       t: t.t,
       p: t.p,
       ci: t.ci,
+      vif: t.vif ?? null,
       ...(residualDfZero ? { lenthT: t.lenthT ?? null } : {}),
       ...(t.estimates ? { estimates: t.estimates } : {}),
     })),
@@ -35,6 +36,8 @@ export function analysisJson(a: Analysis): Record<string, unknown> {
     ...(a.aliased.length > 0 ? { aliased: a.aliased } : {}),
     runs: a.runs.map((r) => ({ run: r.label, y: r.y, fitted: r.fitted, residual: r.residual, leverage: r.leverage, studentized: r.studentized, deleted: r.deleted, kind: r.kind })),
     halfNormal: a.halfNormal,
+    transform: a.transform.token,
+    boxCox: a.boxCox ? { lambda: a.boxCox.lambda, ci: a.boxCox.ci, suggestion: a.boxCox.suggestion } : null,
     warnings: a.warnings,
     // The same conclusions as typed data (kind and figures), for programs that read the JSON.
     verdicts: a.verdicts,

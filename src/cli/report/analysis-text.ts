@@ -61,6 +61,14 @@ export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): st
   const out: string[] = [];
   const how = a.method === 'yates' ? "Yates' algorithm (complete, balanced factorial)" : 'least squares (Householder QR)';
   out.push(`Analysis of ${a.response}: ${a.n} runs, fitted by ${how}, in coded units`);
+  if (a.transform.lambda !== 1) {
+    const minus = a.transform.lowerBound !== null ? ` minus its lower bound ${a.transform.lowerBound}` : '';
+    out.push(`Fitted on the ${a.transform.token} scale of ${a.response}${minus}: (y'^L - 1)/L with L = ${a.transform.lambda} (log at 0); effects and tables are on that scale`);
+  }
+  if (a.boxCox) {
+    const [lo, hi] = a.boxCox.ci;
+    out.push(`Box-Cox power for ${a.response}${a.transform.lowerBound !== null ? ' minus its bound' : ''}: ${num(a.boxCox.lambda)} (95% interval ${lo === null ? 'below -3' : num(lo)} to ${hi === null ? 'above 3' : num(hi)}); suggested transform: ${a.boxCox.suggestion}`);
+  }
   out.push('');
   out.push('Coding used (real setting -> coded value)');
   for (const c of a.coding) {
@@ -91,7 +99,7 @@ export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): st
   if (a.curvature) {
     const c = a.curvature;
     out.push('');
-    out.push(`Curvature from ${c.nCenter} center runs: factorial mean - center mean = ${num(c.estimate)}, std error ${num(c.se)}, t ${num(c.t)}, p ${pValue(c.p)}`);
+    out.push(`Curvature from ${c.nCenter} center runs: factorial minus center, adjusted for the model terms = ${num(c.estimate)}, std error ${num(c.se)}, t ${num(c.t)}, p ${pValue(c.p)}`);
     const v = a.verdicts.find((x) => x.kind === 'curvature');
     if (v && v.kind === 'curvature') out.push(`  ${curvatureStatement(v)}`);
   }

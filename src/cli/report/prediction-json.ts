@@ -22,5 +22,6 @@ export function predictionJson(p: Prediction) {
     outsideFactors: p.outsideFactors.map((o) => ({ factor: o.name, real: o.real, coded: o.coded, beyond: o.beyond, end: o.end })),
     messages: p.messages,
     caution: p.caution,
+    ...(p.transformed ? { transformed: p.transformed } : {}),
   };
 }

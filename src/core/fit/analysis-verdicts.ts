@@ -1,7 +1,7 @@
 /**
  * The verdicts step of the analysis, written last: from the other steps' figures, what the
  * analysis concludes, as typed verdicts (verdicts.ts), in the order the warnings are read:
- * near replicates, non-orthogonal runs, curvature, lack of fit, a weak Lenth's method, no
+ * runs off every level, near replicates, non-orthogonal runs, collinear terms, curvature, lack of fit, a weak Lenth's method, no
  * residual df, partial aliasing of a Plackett-Burman plan, terms the runs cannot separate. Significance is p < alpha (common practice:
  * 0.05); Lenth's method is weak below LENTH_MIN_CONTRASTS effects (Lenth 1989, section 4).
  * Cost O(p).
@@ -16,6 +16,10 @@ import type { Verdict } from './verdicts.ts';
 export interface VerdictInput {
   readonly alpha: number;
   readonly nearReplicates: number;
+  /** Terms whose VIF is above VIF_LIMIT (vif.ts), with the runs that drive it. */
+  readonly collinear?: { readonly limit: number; readonly terms: readonly { readonly letters: string; readonly vif: number; readonly runs: readonly string[] }[] };
+  /** Runs with a setting more than 0.1 coded from every level (nominal-settings.ts `away`), and whether a plan gave the levels. */
+  readonly offLevels?: { readonly runs: number; readonly planned: boolean };
   readonly orthogonal: boolean;
   readonly curvature: Curvature | null;
   /** Letters of the model's square terms, if any. */
@@ -35,8 +39,10 @@ export interface VerdictInput {
 
 export function analysisVerdicts(v: VerdictInput): Verdict[] {
   const out: Verdict[] = [];
+  if (v.offLevels && v.offLevels.runs > 0) out.push({ kind: 'off-levels', runs: v.offLevels.runs, planned: v.offLevels.planned });
   if (v.nearReplicates > 0) out.push({ kind: 'near-replicates', groups: v.nearReplicates });
   if (!v.orthogonal) out.push({ kind: 'not-orthogonal' });
+  if (v.collinear && v.collinear.terms.length > 0) out.push({ kind: 'collinear', limit: v.collinear.limit, terms: v.collinear.terms });
   const c = v.curvature;
   if (c) {
     const base = { kind: 'curvature', p: c.p, alpha: v.alpha, estimate: c.estimate, nCenter: c.nCenter, nFactorial: c.nFactorial, squares: v.squares ?? [] } as const;

@@ -5,6 +5,7 @@
  */
 import type { Factor } from '../factor/factor.ts';
 import type { Term } from '../model/term.ts';
+import type { BoxCox } from './box-cox.ts';
 import type { LenthResult } from './lenth.ts';
 import type { Verdict } from './verdicts.ts';
 
@@ -38,6 +39,8 @@ export interface TermEstimate extends Estimate {
   readonly lenthT?: number;
   /** When the runs cannot separate this term from others, the combination it estimates ("A + BCD"). */
   readonly estimates?: string;
+  /** Variance inflation factor 1 / (1 - R^2) of its column (fit/vif.ts); null when undefined. Set by analyze. */
+  readonly vif?: number | null;
 }
 
 export interface AnovaRow {
@@ -107,6 +110,22 @@ export interface FittedModel {
   /** Main-effect and interaction significance, for the path's warnings. */
   readonly pValues: ReadonlyMap<Term, number | null>;
   readonly curvatureP: number | null;
+  /**
+   * The transform the fit was made on: coefficients are on the scale (y'^lambda - 1) / lambda,
+   * y' = y - lowerBound (fit/response-transform.ts); lambda 1 (none) is the response itself.
+   * Absent means none.
+   */
+  readonly transform?: FitTransform;
+}
+
+export interface FitTransform {
+  /** none, log, sqrt, inverse or power=L. */
+  readonly token: string;
+  readonly lambda: number;
+  /** The response's lower bound L, or null when it has none. */
+  readonly lowerBound: number | null;
+  /** The Box-Cox suggestion for the untransformed response (a transform token), or null. */
+  readonly suggestion?: string | null;
 }
 
 export interface Analysis {
@@ -147,5 +166,9 @@ export interface Analysis {
   readonly verdicts: readonly Verdict[];
   /** The notes that came with the runs, then the verdicts that are warnings, in words (core/text/verdict-text.ts). */
   readonly warnings: readonly string[];
+  /** The transform the figures are on (none when the response itself). */
+  readonly transform: FitTransform;
+  /** The Box-Cox power for the untransformed response minus its bound (fit/box-cox.ts), or null. */
+  readonly boxCox: BoxCox | null;
   readonly model: FittedModel;
 }

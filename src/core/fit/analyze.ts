@@ -3,8 +3,10 @@
  * take and return plain data: check the runs (validate-response.ts), fit (choose-fit.ts),
  * estimates and aliases (estimate-terms.ts), repeats and pure error (repeats.ts), the ANOVA
  * tables (anova-tables.ts), curvature from center points (curvature.ts), Lenth's method and the
- * half-normal points (lenth-step.ts), per-run diagnostics (diagnostics.ts), and last the verdicts
+ * half-normal points (lenth-step.ts), variance inflation factors (vif.ts), per-run diagnostics (diagnostics.ts), and last the verdicts
  * (analysis-verdicts.ts), from which the warnings are written (core/text/verdict-text.ts).
+ * With a transform (response-transform.ts) every figure is on the transformed scale of y - L
+ * (L the response's lower bound); `boxCox` is always about the untransformed y - L (box-cox.ts).
  * Conventions (stated in the README): the fit uses every run, center points included, with the
  * model's terms only, so the intercept is the fitted value at the center; effect = 2 x coef;
  * each ANOVA table names its type.
@@ -24,13 +26,17 @@ import { analysisVerdicts } from './analysis-verdicts.ts';
 import { anovaTables } from './anova-tables.ts';
 import { chooseFit } from './choose-fit.ts';
 import { codingRows } from './coding-rows.ts';
-import { curvature as curvatureTest, runKinds } from './curvature.ts';
+import { adjustedCurvature, runKinds } from './curvature.ts';
 import { runDiagnostics } from './diagnostics.ts';
 import { estimateTerms } from './estimate-terms.ts';
 import { lenthStep, withLenthT } from './lenth-step.ts';
 import { screeningStep } from './screening-step.ts';
 import { findRepeats } from './repeats.ts';
+import { boxCox } from './box-cox.ts';
+import { modelMatrix } from './columns.ts';
+import { NO_TRANSFORM, transformResponses, type ResponseTransform } from './response-transform.ts';
 import { validateResponseData } from './validate-response.ts';
+import { columnVifs, VIF_LIMIT, vifDrivers } from './vif.ts';
 import { isWarning } from './verdicts.ts';
 
 export interface AnalyzeOptions {
@@ -40,27 +46,43 @@ export interface AnalyzeOptions {
   readonly alpha?: number;
   /** Force the general QR path (tests compare it with the Yates path). */
   readonly forceQr?: boolean;
+  /** Transform of the response minus its lower bound (response-transform.ts); default none. */
+  readonly transform?: ResponseTransform;
 }
 
-export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analysis {
-  validateResponseData(data);
+export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analysis {
+  validateResponseData(raw);
+  const transform = options.transform ?? NO_TRANSFORM;
+  const bound = raw.lowerBound ?? null;
+  // The fit is made on (y'^lambda - 1) / lambda, y' = y - L (response-transform.ts); none leaves y as it is.
+  const data = transform.lambda === 1 ? raw : { ...raw, y: transformResponses(raw.y, transform.lambda, bound ?? 0, raw.response) };
+  if (data !== raw) validateResponseData(data);
   const { factors, coded, y } = data;
   const alpha = options.alpha ?? 0.05;
   const screening = screeningStep(data);
-  const { blockLevels, blocks, cells, fit } = chooseFit(data, screening && !options.terms ? { ...options, terms: screening.terms } : options);
-  const est = estimateTerms(fit, factors, blockLevels, alpha);
-  const repeats = findRepeats({ coded, y, points: data.points, blocks, cells, k: factors.length });
+  const { blockLevels, blocks, cells, fit, nominal: plan } = chooseFit(data, screening && !options.terms ? { ...options, terms: screening.terms } : options);
+  // The nominal plan decides repeats, center runs and Lenth's set (nominal-settings.ts).
+  const nominal = plan.exact ? null : plan.nominal;
+  const vifs = columnVifs(fit, coded, blocks);
+  const est = estimateTerms(fit, factors, blockLevels, alpha, vifs);
+  const keptColumns = Array.from(fit.kept, (j) => fit.columns[j]);
+  const collinear = est.terms.flatMap((t) =>
+    t.vif != null && t.vif > VIF_LIMIT ? [{ letters: t.estimates ?? t.letters, vif: t.vif, runs: vifDrivers(keptColumns, coded, blocks, y, keptColumns.findIndex((c) => c.kind === 'term' && c.term === t.term), data.labels) }] : [],
+  );
+  const repeats = findRepeats({ coded, y, points: data.points, blocks, cells, k: factors.length, nominal });
   const pe = repeats.pure;
   const tables = anovaTables(fit, y, est.labels, est.terms.map((t) => t.p), pe);
-  const kinds = runKinds(factors, coded);
-  const curv = curvatureTest(kinds, y, pe);
-  const lenthOut = lenthStep({ factors, coded, y, points: data.points, blocks, kinds, groups: repeats.groups, terms: est.terms, ...(screening ? { contrasts: screening.contrasts } : {}) });
+  const kinds = runKinds(factors, nominal ?? coded);
+  const curv = adjustedCurvature(keptColumns, coded, blocks, kinds, y, pe);
+  const lenthOut = lenthStep({ factors, coded, y, points: data.points, blocks, kinds, groups: repeats.groups, terms: est.terms, nominal, ...(screening ? { contrasts: screening.contrasts } : {}) });
   const terms = fit.dfResidual === 0 && lenthOut.lenth ? withLenthT(est.terms, lenthOut.lenth.pse) : est.terms;
   const diag = runDiagnostics(fit, y, data.labels, kinds, est.sigma, tables.ssTotal);
   const verdicts = analysisVerdicts({
     alpha,
     nearReplicates: repeats.nearReplicates,
+    offLevels: { runs: plan.away, planned: Boolean(data.planned) },
     orthogonal: fit.orthogonal,
+    collinear: { limit: VIF_LIMIT, terms: collinear },
     curvature: curv,
     squares: est.terms.filter((t) => isSquare(t.term)).map((t) => t.letters),
     pureErrorDf: pe.df,
@@ -73,6 +95,8 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     partialAliasing: screening?.partialAliasing ?? null,
   });
 
+  const yp = bound === null ? raw.y : raw.y.map((v) => v - bound);
+  const bc = boxCox(modelMatrix(keptColumns, coded, blocks), y.length, keptColumns.length, yp);
   const model: FittedModel = {
     factors,
     response: data.response,
@@ -85,6 +109,7 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     dfResidual: fit.dfResidual,
     pValues: new Map<Term, number | null>(terms.map((t) => [t.term, t.p ?? null])),
     curvatureP: curv?.p ?? null,
+    transform: { token: transform.token, lambda: transform.lambda, lowerBound: bound, suggestion: bc?.suggestion ?? null },
   };
   return {
     response: data.response,
@@ -108,6 +133,8 @@ export function analyze(data: ResponseData, options: AnalyzeOptions = {}): Analy
     halfNormal: lenthOut.halfNormal,
     verdicts,
     warnings: [...data.messages, ...verdicts.filter(isWarning).map(verdictText)],
+    transform: model.transform!,
+    boxCox: bc,
     model,
   };
 }

@@ -5,6 +5,11 @@
  * otherwise (fit-qr.ts); both give one LinearFit. Blocks count only when there are two or more.
  * Terms are de-duplicated and sorted into model order (model/term.ts compareTerms); the default
  * is main effects and two-factor interactions (model/formula.ts defaultTerms).
+ * The nominal plan decides what can be estimated (nominal-settings.ts): when actual settings
+ * are off their nominal levels, the rank and the alias chains come from a fit on the nominal
+ * settings; each chain is estimated through its first term in model order, and the kept
+ * columns are then fitted on the ACTUAL settings, so an off-target setting adjusts the
+ * estimates but never makes separable what the plan confounds (common practice).
  * Cost: O(k 2^k + n) on the Yates path, O(n p^2) on the QR path.
  * Throws InputError for a term that names a factor the study does not have.
  * Example: chooseFit(the 2^2 yield data of Montgomery 8th ed. section 6.2, {}) -> method 'yates', terms [A, B, AB].
@@ -13,9 +18,11 @@ import { defaultTerms } from '../model/formula.ts';
 import { checkTerms, compareTerms, isSquare, type Term } from '../model/term.ts';
 import type { ResponseData } from '../study/response-data.ts';
 import { blockLevels, modelColumns, modelMatrix } from './columns.ts';
+import { fitOnPlan } from './fit-on-plan.ts';
 import { fitQr } from './fit-qr.ts';
 import { fitYates, yatesCells } from './fit-yates.ts';
 import type { LinearFit } from './linear-fit.ts';
+import { nominalSettings, type NominalSettings } from './nominal-settings.ts';
 
 export interface FitChoice {
   /** Model terms in model order. */
@@ -27,6 +34,8 @@ export interface FitChoice {
   /** Yates cell of each run (-1 for a center run) on the Yates path, else null. */
   readonly cells: Int32Array | null;
   readonly fit: LinearFit;
+  /** The nominal plan of the runs (nominal-settings.ts). */
+  readonly nominal: NominalSettings;
 }
 
 export function chooseFit(data: ResponseData, options: { readonly terms?: readonly Term[]; readonly forceQr?: boolean } = {}): FitChoice {
@@ -38,6 +47,12 @@ export function chooseFit(data: ResponseData, options: { readonly terms?: readon
   const columns = modelColumns(blocks ? levels : [], terms);
   // Yates' algorithm holds for products of two-level columns only: any square takes the QR path.
   const cells = !blocks && !options.forceQr && !terms.some(isSquare) ? yatesCells(data.coded, k) : null;
-  const fit = cells ? fitYates(columns, terms, cells, k, data.y) : fitQr(columns, modelMatrix(columns, data.coded, blocks), data.y);
-  return { terms, blockLevels: blocks ? levels : [], blocks, cells, fit };
+  const nominal = nominalSettings(data.coded, data.planned);
+  const fit = cells
+    ? fitYates(columns, terms, cells, k, data.y)
+    : nominal.exact
+      ? fitQr(columns, modelMatrix(columns, data.coded, blocks), data.y)
+      : fitOnPlan(columns, modelMatrix(columns, nominal.nominal, blocks), modelMatrix(columns, data.coded, blocks), data.y);
+  return { terms, blockLevels: blocks ? levels : [], blocks, cells, fit, nominal };
 }
+

@@ -33,7 +33,8 @@ export interface TermEstimates {
 }
 
 /** `blockLevels`: the block labels in ascending order when blocked (the last one's offset is implied), else empty. */
-export function estimateTerms(fit: LinearFit, factors: readonly Factor[], blockLevels: readonly number[], alpha: number): TermEstimates {
+/** `vifs`: per kept column its VIF (vif.ts), carried into each term when given. */
+export function estimateTerms(fit: LinearFit, factors: readonly Factor[], blockLevels: readonly number[], alpha: number, vifs?: readonly (number | null)[]): TermEstimates {
   const m = fit.kept.length;
   const dfRes = fit.dfResidual;
   const sigma = dfRes > 0 ? Math.sqrt(fit.rss / dfRes) : null;
@@ -77,7 +78,9 @@ export function estimateTerms(fit: LinearFit, factors: readonly Factor[], blockL
     const extra = carried.get(fit.kept[j]);
     const est = estimate(j);
     // Built field by field: object spreads are slow on this hot path (see test/bench).
-    const base = { term: c.term, name: label.name, letters: label.letters, coef: est.coef, se: est.se, t: est.t, p: est.p, ci: est.ci, effect: 2 * est.coef };
+    const base: TermEstimate = vifs
+      ? { term: c.term, name: label.name, letters: label.letters, coef: est.coef, se: est.se, t: est.t, p: est.p, ci: est.ci, effect: 2 * est.coef, vif: vifs[j] ?? null }
+      : { term: c.term, name: label.name, letters: label.letters, coef: est.coef, se: est.se, t: est.t, p: est.p, ci: est.ci, effect: 2 * est.coef };
     terms.push(extra ? { ...base, estimates: combinationLabel([{ letters: label.letters, weight: 1 }, ...extra]) } : base);
   }
   const blocked = blockLevels.length > 1;

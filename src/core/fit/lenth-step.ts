@@ -40,6 +40,8 @@ export interface LenthInput {
   readonly kinds: readonly ('factorial' | 'center' | 'other')[];
   /** Repeat groups (repeats.ts), used as they are when unblocked. */
   readonly groups: Int32Array;
+  /** Nominal coded settings of each run (nominal-settings.ts), when they differ from the actual ones. */
+  readonly nominal?: readonly (readonly number[])[] | null;
   /** The model's estimates, for the half-normal points when Lenth does not apply. */
   readonly terms: readonly TermEstimate[];
   /**
@@ -51,11 +53,11 @@ export interface LenthInput {
 }
 
 export function lenthStep(input: LenthInput): LenthStep {
-  const { factors, coded, y, points, blocks, kinds, groups, terms } = input;
+  const { factors, coded, y, points, blocks, kinds, groups, terms, nominal } = input;
   const factorialRows: number[] = [];
   kinds.forEach((kd, i) => kd === 'factorial' && factorialRows.push(i));
   // Unreplicated: no two factorial runs share their planned point or settings (blocks aside).
-  const unblockedGroups = !blocks ? groups : points ? labelGroups(points, null) : settingGroups(coded, null);
+  const unblockedGroups = !blocks ? groups : nominal ? settingGroups(nominal, null) : points ? labelGroups(points, null) : settingGroups(coded, null);
   const distinctPoints = new Set(factorialRows.map((i) => unblockedGroups[i])).size;
   // The half-normal chart shows two-level contrasts only: products of distinct factors, never a square.
   let effects: { name: string; letters: string; effect: number }[] = terms.filter((t) => isProduct(t.term)).map((t) => ({ name: t.name, letters: t.estimates ?? t.letters, effect: t.effect }));
@@ -73,9 +75,10 @@ export function lenthStep(input: LenthInput): LenthStep {
   } else if (factorialRows.length >= 2 && distinctPoints === factorialRows.length) {
     const sat = saturatedEffects(
       factors.length,
-      factorialRows.map((i) => coded[i]),
+      factorialRows.map((i) => (nominal ?? coded)[i]),
       factorialRows.map((i) => y[i]),
       blocks ? factorialRows.map((i) => blocks[i]) : null,
+      nominal ? factorialRows.map((i) => coded[i]) : undefined,
     );
     if (sat.length > 0) {
       result = lenth(sat.map((s) => s.effect));

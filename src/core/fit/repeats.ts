@@ -1,7 +1,8 @@
 /**
  * The repeats step of the analysis: which runs are repeats of one another, the pure error they
- * give, and how many repeat groups are near replicates. Repeats are the runs of one planned
- * point when the plan is known (data.points), else the runs at identical settings: on the Yates
+ * give, and how many repeat groups are near replicates. Repeats are the runs of one nominal
+ * point (nominal-settings.ts) when given, else of one planned point (data.points), else the runs
+ * at identical settings: on the Yates
  * path the runs sharing a cell (all center runs form one group), otherwise settings equal within
  * SETTING_TOLERANCE (pure-error.ts). Always within one block.
  * A near-replicate group is a group of planned repeats whose actual settings are not all equal:
@@ -31,18 +32,25 @@ export interface RepeatsInput {
   readonly cells: Int32Array | null;
   /** Number of factors (the center runs' group number on the Yates path is 2^k). */
   readonly k: number;
+  /**
+   * Nominal coded settings of each run (nominal-settings.ts): when given, runs at one nominal
+   * point and block are repeats, and groups whose actual settings differ are near replicates.
+   */
+  readonly nominal?: readonly (readonly number[])[] | null;
 }
 
 export function findRepeats(input: RepeatsInput): Repeats {
-  const { coded, y, points, blocks, cells, k } = input;
-  const groups = points
-    ? labelGroups(points, blocks)
-    : cells
-      ? Int32Array.from(cells, (c) => (c < 0 ? 1 << k : c))
-      : settingGroups(coded, blocks);
+  const { coded, y, points, blocks, cells, k, nominal } = input;
+  const groups = cells
+    ? Int32Array.from(cells, (c) => (c < 0 ? 1 << k : c))
+    : nominal
+      ? settingGroups(nominal, blocks)
+      : points
+        ? labelGroups(points, blocks)
+        : settingGroups(coded, blocks);
   const pure = pureErrorOfGroups(groups, y);
   let nearReplicates = 0;
-  if (points && pure.df > 0) {
+  if ((points || nominal) && !cells && pure.df > 0) {
     const exact = settingGroups(coded, blocks);
     const near = new Set<number>();
     const firstExact = new Map<number, number>();

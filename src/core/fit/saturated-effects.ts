@@ -6,10 +6,14 @@
  * factorial runs alone, adding terms order by order until the runs are used up. The set holds
  * two-level products only (bit masks below 2^k, never a square): on factorial runs every
  * coded column is +-1, so a square is the constant 1, the intercept's column.
+ * With `actual` given, `coded` holds the nominal settings (nominal-settings.ts), which decide
+ * the set, and the effects are estimated on the actual settings (fit-on-plan.ts), so that the
+ * half-normal chart shows the same kind of estimates as the model's bars.
  * Cost O(n r T) for n factorial runs, rank r and T terms tried.
  */
 import { compareTerms, termOrder, type Term } from '../model/term.ts';
 import { blockLevels, modelColumns, modelMatrix } from './columns.ts';
+import { fitOnPlan } from './fit-on-plan.ts';
 import { fitQr } from './fit-qr.ts';
 
 export interface SaturatedEffect {
@@ -24,6 +28,7 @@ export function saturatedEffects(
   coded: readonly (readonly number[])[],
   y: readonly number[],
   blocks: readonly number[] | null,
+  actual?: readonly (readonly number[])[],
 ): SaturatedEffect[] {
   const levels = blockLevels(blocks);
   const target = coded.length; // the most columns the runs can separate
@@ -44,6 +49,8 @@ export function saturatedEffects(
     if (fit.kept.length >= target) break;
   }
   if (!fit) return [];
+  // The set comes from the nominal settings (`coded`); the effects, like the model's, from the actual ones.
+  if (actual) fit = fitOnPlan(fit.columns, modelMatrix(fit.columns, coded, blocks), modelMatrix(fit.columns, actual, blocks), y);
   const byColumn = new Map<number, { term: Term; weight: number }[]>();
   for (const a of fit.aliased) {
     const c = fit.columns[a.column];

@@ -26,6 +26,13 @@ export interface CurvatureVerdict {
 export type Verdict =
   /** Repeats of a planned point whose actual settings differ slightly (near replicates). */
   | { readonly kind: 'near-replicates'; readonly groups: number }
+  /**
+   * Runs with a setting more than 0.1 coded from its planned level (planned) or from every level
+   * -1, 0, +1 (no plan): each counts as a point of its own.
+   */
+  | { readonly kind: 'off-levels'; readonly runs: number; readonly planned: boolean }
+  /** Terms whose VIF is above the limit, each with up to three runs whose removal lowers it most. */
+  | { readonly kind: 'collinear'; readonly limit: number; readonly terms: readonly { readonly letters: string; readonly vif: number; readonly runs: readonly string[] }[] }
   /** Columns not orthogonal: sequential and adjusted sums of squares differ. */
   | { readonly kind: 'not-orthogonal' }
   | CurvatureVerdict

@@ -8,6 +8,7 @@ import { InputError } from '../errors.ts';
 import type { FittedModel } from '../fit/analysis.ts';
 import { tIntervals } from '../fit/t-intervals.ts';
 import { isSquare, termLetters, termName, termValue, type Term } from '../model/term.ts';
+import { onResponseScale } from './back-transform.ts';
 import { CAUTION } from './caution.ts';
 import { cachedPredictor } from './compiled-predictor.ts';
 import { outsideRange, type OutsideSetting } from './outside-range.ts';
@@ -48,6 +49,8 @@ export interface Prediction {
   readonly outsideFactors: readonly OutsideSetting[];
   readonly messages: readonly string[];
   readonly caution: readonly string[];
+  /** With a transform: fit, se and intervals on the transformed scale (fit, ci, pi above are in the response's units). */
+  readonly transformed?: { readonly fit: number; readonly se: number | null; readonly ci: readonly [number, number] | null; readonly pi: readonly [number, number] | null };
 }
 
 export interface PredictOptions {
@@ -133,28 +136,30 @@ export function predictSettings(model: FittedModel, settings: readonly FactorSet
   const known = predictor.sigma !== null && predictor.tValue !== null;
   const r = tIntervals(fit, known ? predictor.varianceFactor(x) : 0, predictor.sigma, predictor.tValue);
   const se = r.se;
-  const ci: [number, number] | null = r.ciLo !== null && r.ciHi !== null ? [r.ciLo, r.ciHi] : null;
-  const pi: [number, number] | null = r.piLo !== null && r.piHi !== null ? [r.piLo, r.piHi] : null;
+  const zci: [number, number] | null = r.ciLo !== null && r.ciHi !== null ? [r.ciLo, r.ciHi] : null;
+  const zpi: [number, number] | null = r.piLo !== null && r.piHi !== null ? [r.piLo, r.piHi] : null;
+  const scale = onResponseScale(model, { fit, se, ci: zci, pi: zpi });
   const outsideFactors = outsideRange(model.factors, x);
   const messages = [...centerNotes(settings), ...outsideFactors.map((o) => o.message)];
   if (outsideFactors.length > 0) {
     messages.push('Outside the tested range the prediction is an extrapolation of the fitted model: confirm it with runs before relying on it.');
   }
-  messages.push(...modelNotes(model, alpha));
+  messages.push(...modelNotes(model, alpha), ...scale.messages);
   return {
     response: model.response,
     settings,
-    fit,
-    se,
+    fit: scale.fit,
+    se: scale.transformed ? null : se,
     level,
-    ci,
-    pi,
+    ci: scale.ci,
+    pi: scale.pi,
     baseline,
     contributions,
     outside: outsideFactors.length > 0,
     outsideFactors,
     messages,
     caution: CAUTION,
+    ...(scale.transformed ? { transformed: scale.transformed } : {}),
   };
 }
 

@@ -110,6 +110,10 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
   const level = options.level ?? 0.95;
   const alpha = options.alpha ?? 0.05;
   if (typeof target !== 'number' || !Number.isFinite(target)) throw new InputError(`The target needs to be a finite number, got ${target}`);
+  if (model.transform && model.transform.lambda !== 1) {
+    // Its messages would quote figures on the transformed scale: refused until they are brought back.
+    throw new InputError(`Solving for a target needs the response on its own scale (transform none), got ${model.transform.token}; use predict at candidate settings instead`);
+  }
   const f = findFactor(model.factors, options.factor);
   if (!f) {
     throw new InputError(

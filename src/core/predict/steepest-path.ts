@@ -10,6 +10,7 @@ import { findFactor } from '../factor/factor.ts';
 import type { FittedModel } from '../fit/analysis.ts';
 import { isInteraction, isSquare, mainEffect, termLetters } from '../model/term.ts';
 import type { Response } from '../study/response.ts';
+import { onResponseScale } from './back-transform.ts';
 import { CAUTION } from './caution.ts';
 import { cachedPredictor, type PointInterval } from './compiled-predictor.ts';
 import { isOutside } from './outside-range.ts';
@@ -215,6 +216,7 @@ export function steepestPath(model: FittedModel, options: PathOptions): Steepest
   const out: PathStep[] = [];
   const buf: PointInterval = { fit: 0, se: null, ciLo: null, ciHi: null, piLo: null, piHi: null };
   let firstOutside: number | null = null;
+  const scaleMessages = new Set<string>();
   for (let k = 0; k <= steps; k++) {
     let outside = false;
     for (let i = 0; i < factors.length; i++) {
@@ -223,15 +225,19 @@ export function steepestPath(model: FittedModel, options: PathOptions): Steepest
     }
     predictor.interval(x, buf);
     if (outside && firstOutside === null) firstOutside = k;
+    // In the response's units (back-transform.ts); the direction is the same on either scale.
+    const sc = onResponseScale(model, { fit: buf.fit, se: buf.se, ci: null, pi: buf.piLo !== null && buf.piHi !== null ? [buf.piLo, buf.piHi] : null });
+    for (const m of sc.messages) scaleMessages.add(m);
     out.push({
       step: k,
       real: factors.map((f, i) => toReal(f, x[i])),
       coded: Array.from(x),
-      fit: buf.fit,
-      pi: buf.piLo !== null && buf.piHi !== null ? [buf.piLo, buf.piHi] : null,
+      fit: sc.fit,
+      pi: sc.pi,
       outside,
     });
   }
+  messages.push(...scaleMessages);
   if (firstOutside !== null) {
     const leaving = factors.filter((f, i) => f.kind === 'numeric' && isOutside(out[firstOutside!].coded[i])).map((f) => f.name);
     messages.push(

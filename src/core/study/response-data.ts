@@ -10,6 +10,8 @@ export interface ResponseData {
   /** Response name (with its unit, if any, kept apart). */
   readonly response: string;
   readonly unit?: string;
+  /** The lowest value the response can take (0 for "cannot be negative"), or null/absent for none. */
+  readonly lowerBound?: number | null;
   /** Coded actual settings, one row per run used, one value per factor in declared order. */
   readonly coded: readonly (readonly number[])[];
   /** The response at each run (the mean of its readings when a run has several). */
@@ -29,6 +31,12 @@ export interface ResponseData {
    * the design's N - 1 orthogonal columns.
    */
   readonly screening?: { readonly runs: number; readonly standardOrder: readonly (number | null)[] };
+  /**
+   * The planned coded settings of each run (null for a run the plan does not hold), when the runs
+   * come from a plan: the nominal plan that decides what can be estimated (fit/nominal-settings.ts).
+   * Absent: the plan is inferred from the actual settings (-1, 0, +1 within 0.1 coded).
+   */
+  readonly planned?: readonly (readonly number[] | null)[] | null;
   /** Run labels for reports (run numbers), aligned with the rows. */
   readonly labels: readonly string[];
   /** What was skipped and why ("2 excluded runs skipped"), for the report. */

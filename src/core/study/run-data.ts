@@ -3,7 +3,8 @@
  * settings of every run used, and the mean of its readings. Excluded runs and runs without a
  * reading of the response are skipped and counted in the messages. Several readings of one run are
  * repeat measurements: their mean is the run's value, and they are never counted as replicates
- * (true replicates are separate runs of the plan).
+ * (true replicates are separate runs of the plan). The planned coded settings come along: the
+ * nominal plan decides what the runs can estimate (fit/nominal-settings.ts).
  * Example: a run with readings [10, 12] contributes one row with y = 11.
  */
 import { InputError } from '../errors.ts';
@@ -37,6 +38,7 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
   const labels: string[] = [];
   const points: string[] = [];
   const standardOrder: (number | null)[] = [];
+  const planned: (number[] | null)[] = [];
   const seen = new Map<number, number>();
   let excluded = 0;
   let missing = 0;
@@ -55,11 +57,12 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     if (readings.length > 1) repeated++;
     coded.push(study.factors.map((f, i) => toCoded(f, run.actual[i])));
     y.push(mean);
-    const planned = plannedRunOf(study, run.plannedRun);
-    blocks.push(planned?.block ?? 1);
+    const plan = plannedRunOf(study, run.plannedRun);
+    blocks.push(plan?.block ?? 1);
     // Runs planned at the same coded settings are repeats of one point, whatever their actuals.
-    points.push(planned ? planned.coded.join(',') : `run ${run.plannedRun}`);
-    standardOrder.push(planned && planned.kind === 'factorial' ? planned.standardOrder : null);
+    points.push(plan ? plan.coded.join(',') : `run ${run.plannedRun}`);
+    planned.push(plan ? [...plan.coded] : null);
+    standardOrder.push(plan && plan.kind === 'factorial' ? plan.standardOrder : null);
     const k = (seen.get(run.plannedRun) ?? 0) + 1;
     seen.set(run.plannedRun, k);
     labels.push(k === 1 ? String(run.plannedRun) : `${run.plannedRun}#${k}`);
@@ -75,10 +78,12 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     factors: study.factors,
     response: response.name,
     ...(response.unit ? { unit: response.unit } : {}),
+    lowerBound: response.lowerBound ?? null,
     coded,
     y,
     blocks: blocked ? blocks : null,
     points,
+    planned,
     ...(study.design.screening ? { screening: { runs: study.design.screening.runs, standardOrder } } : {}),
     labels,
     messages,

@@ -58,8 +58,19 @@ export function curvatureNote(p: number, use: 'prediction' | 'path', squares: re
  */
 export function verdictText(v: Verdict): string {
   switch (v.kind) {
+    case 'off-levels':
+      return v.planned
+        ? `${v.runs} run${v.runs === 1 ? ' has a setting' : 's have settings'} more than 0.1 coded from the planned level: ${v.runs === 1 ? 'it counts' : 'each counts'} as a point of its own, not as a repeat of the plan.`
+        : `${v.runs} run${v.runs === 1 ? ' has a setting' : 's have settings'} more than 0.1 coded from every level (-1, 0, +1 in the coding shown): ${v.runs === 1 ? 'it counts' : 'each counts'} as a point of its own; check the coding.`;
+    case 'collinear':
+      return v.terms
+        .map((t) => {
+          const runs = t.runs.length === 0 ? '' : ` Run${t.runs.length === 1 ? '' : 's'} ${listWords(t.runs)} do${t.runs.length === 1 ? 'es' : ''} most to cause it: check ${t.runs.length === 1 ? 'its' : 'their'} logged settings.`;
+          return `The estimate for ${t.letters} is unsteady: its column of settings nearly repeats a mix of the other terms' columns (variance inflation factor ${shortNumber(t.vif)}, above ${v.limit}), so small changes in the readings move it a lot.${runs}`;
+        })
+        .join(' ');
     case 'near-replicates':
-      return `Pure error comes from repeats of the same planned point; in ${v.groups} of them the actual settings differ slightly, so pure error and lack of fit are approximate (each group is treated as runs at one point).`;
+      return `Pure error comes from repeats of the same planned point; in ${v.groups} of them the actual settings differ slightly, so pure error and lack of fit are approximate (each group is treated as runs at one point), and the residual sum of squares may then fall below pure error.`;
     case 'not-orthogonal':
       return 'The runs are not orthogonal (missing runs, off-target settings or unequal blocks), so sequential sums of squares depend on the order of terms; the adjusted table gives each term after all others.';
     case 'curvature':
@@ -83,6 +94,11 @@ export function verdictText(v: Verdict): string {
       return `${v.count} model term${v.count > 1 ? 's' : ''} cannot be separated from others with these runs: ${parts.join('; ')}`;
     }
   }
+}
+
+/** "2", "2 and 5", "2, 5 and 7". */
+function listWords(items: readonly string[]): string {
+  return items.length <= 1 ? items.join('') : `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
 }
 
 /** A Lenth effect as the statement needs it. */

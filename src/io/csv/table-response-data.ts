@@ -1,8 +1,9 @@
 /**
  * Turns a table of runs into the data for one response: factor columns hold real settings
  * (numbers) or level labels, coded with the given levels or, without them, with a numeric
- * column's minimum and maximum as low and high and a categorical column's first label in file
- * order as -1. Columns are matched by name with any unit in parentheses ignored; where an
+ * column's most frequent value below its mid-range as low and above it as high (ties: the more
+ * extreme; so one off-target extreme does not rescale every run) and a categorical column's
+ * first label in file order as -1. Columns are matched by name with any unit in parentheses ignored; where an
  * "<name> actual" column exists (a Trialbook export), the actual settings are used, and a
  * "<name> planned" column (a filled-in run sheet) is used when nothing else matches. Runs whose
  * response cell is empty are skipped, and so are runs marked excluded; the messages say how many.
@@ -91,8 +92,8 @@ export function tableResponseData(table: Table, cols: TableColumns): ResponseDat
       return { kind: 'categorical', name: factorName, levels: [lo, hi] };
     }
     if (numeric) {
-      const values = cells.map(parseNumber);
-      return { kind: 'numeric', name: factorName, low: Math.min(...values), high: Math.max(...values), ...(unit ? { unit } : {}) };
+      const [low, high] = inferredLevels(cells.map(parseNumber));
+      return { kind: 'numeric', name: factorName, low, high, ...(unit ? { unit } : {}) };
     }
     const labels: string[] = [];
     for (const v of cells) if (!labels.some((l) => l.toLowerCase() === v.toLowerCase())) labels.push(v);
@@ -147,4 +148,27 @@ export function tableResponseData(table: Table, cols: TableColumns): ResponseDat
     labels,
     messages,
   };
+}
+
+/**
+ * Low and high of a numeric column without given levels: the most frequent value below the
+ * mid-range (min + max) / 2 and the most frequent above it; ties go to the more extreme value.
+ * Common practice (the plan's levels are the values most runs were set to). A column with one
+ * value gives it twice, which defineFactors refuses with its own message.
+ */
+export function inferredLevels(values: readonly number[]): [number, number] {
+  const lo = Math.min(...values);
+  const hi = Math.max(...values);
+  const mid = (lo + hi) / 2;
+  const counts = new Map<number, number>();
+  for (const v of values) counts.set(v, (counts.get(v) ?? 0) + 1);
+  let low = lo;
+  let high = hi;
+  let nLow = 0;
+  let nHigh = 0;
+  for (const [v, c] of counts) {
+    if (v < mid && (c > nLow || (c === nLow && v < low))) [low, nLow] = [v, c];
+    if (v > mid && (c > nHigh || (c === nHigh && v > high))) [high, nHigh] = [v, c];
+  }
+  return [low, high];
 }

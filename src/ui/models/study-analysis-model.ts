@@ -7,12 +7,14 @@
  *
  * One model per study for the whole session (openStudyAnalysis), so a model chosen on the
  * Effects screen is the one the quick card predicts from, and stays chosen while the person
- * moves between the study's screens. Per-response settings are the place for what else will be
- * chosen per response (a transform); `responses` gives every response's analysis at once.
+ * moves between the study's screens. Per response the person also chooses a transform (log,
+ * square root, inverse), which the quick card and charts then use too; `responses` gives every
+ * response's analysis at once.
  */
 import { computed, createModel, signal, type ReadonlySignal, type Signal } from '@preact/signals';
 import type { Analysis } from '../../core/fit/analysis.ts';
 import { analyze } from '../../core/fit/analyze.ts';
+import { parseTransform } from '../../core/fit/response-transform.ts';
 import { termsUpToOrder } from '../../core/model/formula.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
 import type { Response } from '../../core/study/response.ts';
@@ -29,17 +31,28 @@ export const MODEL_CHOICES: readonly { readonly value: ModelChoice; readonly lab
   { value: 'main', label: 'Main effects only' },
 ];
 
+/** The transform of a response (core/fit/response-transform.ts tokens). */
+export type TransformChoice = 'none' | 'log' | 'sqrt' | 'inverse';
+
+export const TRANSFORM_CHOICES: readonly { readonly value: TransformChoice; readonly label: string }[] = [
+  { value: 'none', label: 'As measured' },
+  { value: 'log', label: 'Log' },
+  { value: 'sqrt', label: 'Square root' },
+  { value: 'inverse', label: 'Inverse' },
+];
+
 /** What the person chose for one response's analysis. */
 export interface ResponseSettings {
   readonly model: ModelChoice;
+  readonly transform: TransformChoice;
 }
 
 /** A response's settings before anything is chosen. */
-export const DEFAULT_SETTINGS: ResponseSettings = { model: 'two-way' };
+export const DEFAULT_SETTINGS: ResponseSettings = { model: 'two-way', transform: 'none' };
 
 /** The settings before anything is chosen for a study: main effects for a Plackett-Burman screen (its interactions are only partly aliased). */
 export function defaultSettings(study: { readonly design: { readonly screening?: unknown } }): ResponseSettings {
-  return study.design.screening ? { model: 'main' } : DEFAULT_SETTINGS;
+  return study.design.screening ? { model: 'main', transform: 'none' } : DEFAULT_SETTINGS;
 }
 
 export type AnalysisResult =
@@ -54,7 +67,7 @@ export function analyzeResponse(d: StudyData, responseIndex: number, settings: R
     const data = responseDataFromRuns(d.study, d.runs, response.name);
     const k = d.study.factors.length;
     const terms = termsUpToOrder(k, settings.model === 'main' ? 1 : Math.min(2, k));
-    return { ok: true, analysis: analyze(data, { terms }), data };
+    return { ok: true, analysis: analyze(data, { terms, transform: parseTransform(settings.transform) }), data };
   } catch (err) {
     return { ok: false, message: problemOf(err).message };
   }
@@ -141,6 +154,13 @@ export const StudyAnalysisModel = createModel((store: Store, studyId: string) =>
       if (!r) return;
       const s = settingsOf(r.name, defaultSettings(data.peek()!.study));
       s.value = { ...s.peek(), model };
+    },
+    /** Sets the transform of one response (by index); the quick card and the charts follow it. */
+    chooseTransform(i: number, transform: TransformChoice) {
+      const r = data.peek()?.study.responses[i];
+      if (!r) return;
+      const s = settingsOf(r.name);
+      s.value = { ...s.peek(), transform };
     },
   };
 });

@@ -296,11 +296,13 @@ describe('analyze: pure error from repeats of a planned point (near replicates)'
     expect(a.warnings.join(' ')).not.toMatch(/near replicates/);
   });
 
-  it('with slightly off-target actual settings, only the planned points still find the repeats, and the report says it is approximate', () => {
+  it('with slightly off-target actual settings, the nominal points (planned, or inferred within 0.1 coded) still find the repeats, and the report says it is approximate', () => {
     // Invented setting errors of up to 2% of the half-range on every run.
     const off = data.coded.map((row, i) => row.map((v, f) => v + 0.02 * Math.sin(3 * i + f)));
     const byActual = analyze({ ...data, coded: off }, { terms });
-    expect(byActual.df.pureError).toBeNull(); // no two actual settings are identical
+    // no plan: each setting within 0.1 of -1 or +1 counts as that level, so the repeats are found
+    expect(byActual.df.pureError).toBe(8);
+    expect(byActual.anova.rows.find((r) => r.source === 'Pure error')!.ss).toBeCloseTo(18020.5, 6); // Montgomery 8th ed., Table 6.6
     const byPoint = analyze({ ...data, coded: off, points }, { terms: termsUpToOrder(3, 2) });
     expect(byPoint.df.pureError).toBe(8);
     // the same responses in the same groups: the printed pure error

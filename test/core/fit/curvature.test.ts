@@ -1,10 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import jStat from 'jstat';
-import { curvature, runKinds } from '../../../src/core/fit/curvature.ts';
+import MLR from 'ml-regression-multivariate-linear';
+import { adjustedCurvature, curvature, runKinds } from '../../../src/core/fit/curvature.ts';
+import { modelColumns } from '../../../src/core/fit/columns.ts';
 import { pureError } from '../../../src/core/fit/pure-error.ts';
 import { defineFactors } from '../../../src/core/factor/factor.ts';
 import { CENTER_TOLERANCE } from '../../../src/core/tolerance.ts';
 import { fixtureData } from '../../helpers/fixtures.ts';
+import { laserData, laserFactors } from '../../helpers/half-fraction.ts';
 
 describe('runKinds', () => {
   const factors = defineFactors([
@@ -49,3 +52,51 @@ describe('curvature (Montgomery 8th ed., section 6.8, Eq. 6.30)', () => {
     expect(zero.t).toBeNull();
   });
 });
+
+describe('adjustedCurvature (regression form with a center-run column)', () => {
+  const d = fixtureData('montgomery-8e-ex6-6-center-points.csv', { factors: ['Time', 'Temperature'], response: 'Yield' });
+  const kinds = runKinds(d.factors, d.coded);
+  const pe = pureError(d.coded, d.y, null);
+  const cols = modelColumns([], [1, 2, 3]);
+
+  it('on the complete balanced 2^2 with 5 centers it equals the mean difference (Montgomery 8th ed., section 6.8: 40.425 - 40.46)', () => {
+    const a = adjustedCurvature(cols, d.coded, null, kinds, d.y, pe)!;
+    const m = curvature(kinds, d.y, pe)!;
+    expect(a.estimate).toBeCloseTo(40.425 - 40.46, 10);
+    expect(a.se!).toBeCloseTo(m.se!, 10);
+    expect(a.p!).toBeCloseTo(m.p!, 10);
+    expect(a.ss).toBeCloseTo(m.ss, 10);
+  });
+
+  it('with centers unbalanced across a categorical factor, it matches a direct least-squares fit by ml-regression-multivariate-linear, and differs from the mean difference', () => {
+    const data = laserData();
+    // drop one center run at N2 and add two at air: centers air, air, N2 (invented responses)
+    const coded = [...data.coded.slice(0, 9), [0, 0, 0, -1], [0, 0, 0, 1]];
+    const y = [...data.y.slice(0, 9), 1.32, 2.37];
+    const k = runKinds(laserFactors, coded);
+    const pe2 = pureError(coded, y, null);
+    const terms = [1, 2, 4, 8, 3, 5, 9]; // A, B, C, D, AB, AC, AD: one term per chain of the fraction
+    const c = adjustedCurvature(modelColumns([], terms), coded, null, k, y, pe2)!;
+    const x = coded.map((r, i) => [...terms.map((t) => [0, 1, 2, 3].reduce((p, f) => (t & (1 << f) ? p * r[f] : p), 1)), k[i] === 'center' ? 1 : 0]);
+    const ref = new MLR(x, y.map((v) => [v]), { intercept: true });
+    expect(c.estimate).toBeCloseTo(-ref.weights[terms.length][0], 9); // ml-regression-multivariate-linear
+    const mean = curvature(k, y, pe2)!;
+    expect(Math.abs(c.estimate - mean.estimate)).toBeGreaterThan(0.01);
+    // se from the reference fit's (X'X)^-1: its stdErrors scale by its own sigma, so rescale to pure error
+    const refSigma = Math.sqrt(residualMs(ref, x, y, terms.length + 2));
+    const czz = (ref.stdErrors[terms.length] / refSigma) ** 2;
+    expect(c.se!).toBeCloseTo(Math.sqrt((pe2.ss / pe2.df) * czz), 9);
+  });
+
+  it('degenerate input: null without center runs; no se without pure error', () => {
+    const corners = d.coded.filter((_, i) => kinds[i] === 'factorial');
+    const yc = d.y.filter((_, i) => kinds[i] === 'factorial');
+    expect(adjustedCurvature(cols, corners, null, runKinds(d.factors, corners), yc, pureError(corners, yc, null))).toBeNull();
+    expect(adjustedCurvature(cols, d.coded, null, kinds, d.y, { ss: 0, df: 0 })!.se).toBeNull();
+  });
+});
+
+function residualMs(ref: MLR, x: number[][], y: number[], p: number): number {
+  const pred = ref.predict(x) as number[][];
+  return y.reduce((s, v, i) => s + (v - pred[i][0]) ** 2, 0) / (y.length - p);
+}

@@ -7,7 +7,18 @@ const flat: CurvatureVerdict = { kind: 'curvature', outcome: 'flat', reason: nul
 
 /** One sample of every verdict kind, with fragments its sentence must hold (and nothing outside the text module may). */
 const samples: Record<VerdictKind, { verdict: Verdict; fragments: string[] }[]> = {
-  'near-replicates': [{ verdict: { kind: 'near-replicates', groups: 8 }, fragments: ['in 8 of them the actual settings differ slightly'] }],
+  'near-replicates': [{ verdict: { kind: 'near-replicates', groups: 8 }, fragments: ['in 8 of them the actual settings differ slightly', 'the residual sum of squares may then fall below pure error'] }],
+  'off-levels': [
+    { verdict: { kind: 'off-levels', runs: 2, planned: false }, fragments: ['2 runs have settings more than 0.1 coded from every level'] },
+    { verdict: { kind: 'off-levels', runs: 1, planned: true }, fragments: ['1 run has a setting more than 0.1 coded from the planned level'] },
+  ],
+  collinear: [
+    {
+      verdict: { kind: 'collinear', limit: 10, terms: [{ letters: 'AD + BC', vif: 66.8, runs: ['7', '4', '6'] }] },
+      fragments: ['The estimate for AD + BC is unsteady', 'variance inflation factor 66.8, above 10', 'Runs 7, 4 and 6 do most to cause it'],
+    },
+    { verdict: { kind: 'collinear', limit: 10, terms: [{ letters: 'B', vif: 12, runs: ['3'] }] }, fragments: ['Run 3 does most to cause it: check its logged settings'] },
+  ],
   'not-orthogonal': [{ verdict: { kind: 'not-orthogonal' }, fragments: ['sequential sums of squares depend on the order of terms'] }],
   curvature: [
     { verdict: { ...flat, outcome: 'curved', p: 0.0021 }, fragments: ['Curvature is significant (p = 0.0021)', 'Add axial runs for a second-order design'] },

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { readTable } from '../../../src/io/csv/read-table.ts';
-import { tableResponseData } from '../../../src/io/csv/table-response-data.ts';
+import { inferredLevels, tableResponseData } from '../../../src/io/csv/table-response-data.ts';
 
 // Invented rows, for the column rules only.
 describe('tableResponseData', () => {
@@ -66,5 +66,17 @@ describe('tableResponseData: numbers the analysis cannot carry', () => {
       'Row 3, column "y": y is 1e+300, beyond what the analysis can carry (magnitudes up to 1e+150, so that sums of squares stay finite): give the response in a larger unit',
     );
     expect(tableResponseData(readTable('A,y\n1,5\n2,-1e150\n'), { factors: ['A'], response: 'y' }).y).toEqual([5, -1e150]);
+  });
+});
+
+describe('inferredLevels (most frequent value below and above the mid-range)', () => {
+  it('one off-target extreme does not rescale the runs: 89 among 90s keeps 90 as high (common practice)', () => {
+    expect(inferredLevels([70, 89, 70, 90, 70, 90, 70, 90, 80, 80])).toEqual([70, 90]);
+  });
+  it('ties go to the more extreme value', () => {
+    expect(inferredLevels([1, 2, 5, 6])).toEqual([1, 6]);
+  });
+  it('degenerate input: one value gives it twice (defineFactors then refuses the factor)', () => {
+    expect(inferredLevels([3, 3])).toEqual([3, 3]);
   });
 });

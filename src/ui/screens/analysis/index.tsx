@@ -24,7 +24,7 @@ import { effectWords, LENTH_WORDS, WITHIN_NOISE } from '../../../core/text/effec
 import { curvatureStatement } from '../../../core/text/verdict-text.ts';
 import { num, percent, setting, signed, termLabel, withUnit } from '../../lib/format.ts';
 import { AnalysisModel, twoFactorTerms } from '../../models/analysis-model.ts';
-import { MODEL_CHOICES, openStudyAnalysis } from '../../models/study-analysis-model.ts';
+import { MODEL_CHOICES, openStudyAnalysis, TRANSFORM_CHOICES } from '../../models/study-analysis-model.ts';
 import { interactionLines } from './interaction-lines.ts';
 import { hrefTo } from '../../app/routes.ts';
 import './style.css';
@@ -175,6 +175,10 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
         onChoose={(i) => shared.show(i)}
       />
       <ChoiceButtons label="Model" options={MODEL_CHOICES} value={shown.settings.value.model} onChoose={(c) => shared.chooseModel(shown.index, c)} />
+      <ChoiceButtons label="Scale" options={TRANSFORM_CHOICES} value={shown.settings.value.transform} onChoose={(c) => shared.chooseTransform(shown.index, c)} />
+      {result && result.ok && result.analysis.boxCox && (
+        <p class="quiet">Box-Cox suggests: {result.analysis.boxCox.suggestion === 'none' ? 'as measured' : result.analysis.boxCox.suggestion}</p>
+      )}
       {result && !result.ok && (
         <div class="problem input" role="alert">
           <p>{result.message}</p>

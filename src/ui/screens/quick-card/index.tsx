@@ -17,7 +17,7 @@ import { StudyHeader } from '../../components/study-header/index.tsx';
 import { num, signed, termLabel, withUnit } from '../../lib/format.ts';
 import { useHeightProperty } from '../../lib/use-height-property.ts';
 import { QuickCardModel, SLIDER_REACH } from '../../models/quick-card-model.ts';
-import { MODEL_CHOICES, openStudyAnalysis } from '../../models/study-analysis-model.ts';
+import { MODEL_CHOICES, openStudyAnalysis, TRANSFORM_CHOICES } from '../../models/study-analysis-model.ts';
 import './style.css';
 
 export type QuickCardScreenProps = { readonly store: Store; readonly studyId: string };
@@ -71,7 +71,8 @@ export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
   const result = model.prediction.value;
   const p = result && result.ok ? result.prediction : null;
   const analysis = model.analysis.value;
-  const modelLabel = MODEL_CHOICES.find((c) => c.value === shown.settings.value.model)?.label ?? '';
+  const transform = shown.settings.value.transform;
+  const modelLabel = (MODEL_CHOICES.find((c) => c.value === shown.settings.value.model)?.label ?? '') + (transform === 'none' ? '' : `, ${TRANSFORM_CHOICES.find((c) => c.value === transform)?.label.toLowerCase()} scale`);
   return (
     <section class="quick">
       <StudyHeader study={study} current="quickCard" />

@@ -1,0 +1,109 @@
+/**
+ * The Box-Cox power that best suits a response for a given model (Box and Cox 1964, "An analysis
+ * of transformations", JRSS B 26, 211-252, section 3): with y' = y - L all positive and g their
+ * geometric mean, w(lambda) = (y'^lambda - 1) / (lambda g^(lambda - 1)) (g log y' at 0), SSE(lambda)
+ * the residual sum of squares of w on the model columns, the profile log-likelihood is
+ * L(lambda) = -(n/2) log(SSE(lambda) / n). lambda-hat maximises it on [-3, 3] (a grid of step
+ * 0.01, then golden-section search to 1e-6); the 95% interval is {lambda : L(lambda) >= Lmax -
+ * chi-square(1, 0.95) / 2}, each end found by bisection to 1e-6 (an end that reaches -3 or 3 is
+ * null). The suggestion is the first of none (1), log (0), sqrt (0.5), inverse (-1) inside the
+ * interval, else power=lambda-hat rounded to 0.1.
+ * One Householder factorisation serves every lambda: only y changes (Q'w gives SSE).
+ * Cost O(n p^2) once, then O(n p) per lambda (about 650 evaluations).
+ * Null when some y' is not positive or the residual df is 0.
+ * Example: see test/core/fit/box-cox.test.ts (Box and Cox 1964 poison data).
+ */
+import { normalQuantile } from '../dist/normal.ts';
+import { applyQt, householderQr } from '../linalg/householder-qr.ts';
+import { BOX_COX_PRECISION, RANK_TOLERANCE } from '../tolerance.ts';
+import { transformToken } from './response-transform.ts';
+
+export interface BoxCox {
+  readonly lambda: number;
+  /** 95% interval; an end that reaches the search limit (-3 or 3) is null. */
+  readonly ci: readonly [number | null, number | null];
+  /** A --transform token. */
+  readonly suggestion: string;
+}
+
+/** The search range of lambda (Box and Cox 1964 plot roughly -1 to 1; a wider range is common practice). */
+const LAMBDA_MIN = -3;
+const LAMBDA_MAX = 3;
+const GRID_STEP = 0.01;
+
+/** `x`: the model matrix, column-major n x p (intercept included); `yp`: the response minus its bound. */
+export function boxCox(x: Float64Array, n: number, p: number, yp: readonly number[]): BoxCox | null {
+  if (yp.length !== n || n === 0 || yp.some((v) => !(v > 0))) return null;
+  const f = householderQr(Float64Array.from(x), n, p, RANK_TOLERANCE);
+  const m = f.rank;
+  if (n - m <= 0) return null;
+  let logSum = 0;
+  for (const v of yp) logSum += Math.log(v);
+  const logG = logSum / n;
+  const logY = yp.map(Math.log);
+  const w = new Float64Array(n);
+  const loglik = (lambda: number): number => {
+    if (lambda === 0) for (let i = 0; i < n; i++) w[i] = Math.exp(logG) * logY[i];
+    else {
+      const scale = lambda * Math.exp((lambda - 1) * logG);
+      for (let i = 0; i < n; i++) w[i] = Math.expm1(lambda * logY[i]) / scale;
+    }
+    applyQt(f, w);
+    let sse = 0;
+    for (let i = m; i < n; i++) sse += w[i] * w[i];
+    return -(n / 2) * Math.log(sse / n);
+  };
+  const steps = Math.round((LAMBDA_MAX - LAMBDA_MIN) / GRID_STEP);
+  const grid = new Float64Array(steps + 1);
+  let best = 0;
+  for (let s = 0; s <= steps; s++) {
+    grid[s] = loglik(LAMBDA_MIN + s * GRID_STEP);
+    if (grid[s] > grid[best]) best = s;
+  }
+  // Golden-section search in the grid cell either side of the best grid point.
+  let a = LAMBDA_MIN + Math.max(0, best - 1) * GRID_STEP;
+  let b = LAMBDA_MIN + Math.min(steps, best + 1) * GRID_STEP;
+  const r = (Math.sqrt(5) - 1) / 2;
+  let c = b - r * (b - a);
+  let d = a + r * (b - a);
+  let fc = loglik(c);
+  let fd = loglik(d);
+  while (b - a > BOX_COX_PRECISION) {
+    if (fc > fd) {
+      b = d;
+      d = c;
+      fd = fc;
+      c = b - r * (b - a);
+      fc = loglik(c);
+    } else {
+      a = c;
+      c = d;
+      fc = fd;
+      d = a + r * (b - a);
+      fd = loglik(d);
+    }
+  }
+  const lambda = (a + b) / 2;
+  const lmax = Math.max(loglik(lambda), grid[best]);
+  // chi-square(1, 0.95) is the square of the normal 0.975 quantile (3.8415).
+  const cut = lmax - normalQuantile(0.975) ** 2 / 2;
+  const end = (dir: -1 | 1): number | null => {
+    let s = best;
+    while (s + dir >= 0 && s + dir <= steps && grid[s + dir] >= cut) s += dir;
+    if (s + dir < 0 || s + dir > steps) return null;
+    let inside = s === best ? lambda : LAMBDA_MIN + s * GRID_STEP;
+    let outside = LAMBDA_MIN + (s + dir) * GRID_STEP;
+    while (Math.abs(outside - inside) > BOX_COX_PRECISION) {
+      const mid = (inside + outside) / 2;
+      if (loglik(mid) >= cut) inside = mid;
+      else outside = mid;
+    }
+    return (inside + outside) / 2;
+  };
+  const lo = end(-1);
+  const hi = end(1);
+  const inCi = (l: number): boolean => (lo === null || l >= lo) && (hi === null || l <= hi);
+  const named = [1, 0, 0.5, -1].find(inCi);
+  const suggestion = named !== undefined ? transformToken(named) : transformToken(Math.round(lambda * 10) / 10);
+  return { lambda, ci: [lo, hi], suggestion };
+}

@@ -1,0 +1,28 @@
+/**
+ * Least squares where the nominal plan decides what can be estimated: rank detection and the
+ * alias chains come from Householder QR of the NOMINAL model matrix (fit-qr.ts); the kept
+ * columns (each chain's first term in model order) are then fitted on the ACTUAL settings, so
+ * off-target settings adjust the estimates but never separate what the plan confounds. Aliases
+ * are those of the plan (weights +-1 in a regular fraction). Source: common practice; the QR
+ * method as in fit-qr.ts (Golub and Van Loan, Matrix Computations, 4th ed., section 5.3).
+ * Cost: two QR factorisations, O(n p^2). Throws nothing.
+ * Example: a 2^(4-1) with D = ABC and one setting at 0.8 instead of 1, terms A..D and all
+ * two-factor interactions -> 7 kept columns, aliased BC (= AD), BD (= AC), CD (= AB).
+ */
+import type { Column } from './columns.ts';
+import { fitQr } from './fit-qr.ts';
+import type { LinearFit } from './linear-fit.ts';
+
+export function fitOnPlan(columns: readonly Column[], xNominal: Float64Array, xActual: Float64Array, y: readonly number[]): LinearFit {
+  const n = y.length;
+  const plan = fitQr(columns, xNominal, y, true);
+  const m = plan.kept.length;
+  const kept = Array.from(plan.kept, (j) => columns[j]);
+  const x = new Float64Array(n * m);
+  for (let a = 0; a < m; a++) x.set(xActual.subarray(plan.kept[a] * n, (plan.kept[a] + 1) * n), a * n);
+  const act = fitQr(kept, x, y);
+  const up = (a: number): number => plan.kept[a];
+  // Should the actual settings lose a further column (they almost never do), it is listed too.
+  const extra = act.aliased.map((al) => ({ column: up(al.column), combination: al.combination.map((w) => ({ column: up(w.column), weight: w.weight })) }));
+  return { ...act, columns, kept: Int32Array.from(act.kept, up), aliased: [...plan.aliased, ...extra] };
+}
