@@ -12,7 +12,7 @@ import { StudyHeader } from '../../components/study-header/index.tsx';
 import { when } from '../../lib/format.ts';
 import { ExportModel } from '../../models/export-model.ts';
 import { hrefTo } from '../../app/routes.ts';
-import { isDemo } from '../../seed/demo-seed.ts';
+import { isDemo } from '../../seed/is-demo.ts';
 import './style.css';
 
 /** Without a study id: every study on this device. */
