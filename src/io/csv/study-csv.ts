@@ -58,7 +58,11 @@ export function studyTable(study: StudyRecord, runs: readonly LoggedRun[]): Tabl
   ];
   const blankTail = (): Cell[] => [...study.factors.map(() => ''), ...study.factors.map(() => ''), ...study.responses.flatMap(() => ['', '']), '', '', '', '', ''];
   const byPlanned = new Map<number, LoggedRun[]>();
-  for (const r of runs) byPlanned.set(r.plannedRun, [...(byPlanned.get(r.plannedRun) ?? []), r]);
+  for (const r of runs) {
+    const list = byPlanned.get(r.plannedRun);
+    if (list) list.push(r);
+    else byPlanned.set(r.plannedRun, [r]);
+  }
   const rows: Cell[][] = [];
   study.design.runs.forEach((planned, i) => {
     const logged = (byPlanned.get(planned.run) ?? []).sort((a, b) => (a.savedAt < b.savedAt ? -1 : a.savedAt > b.savedAt ? 1 : a.id < b.id ? -1 : 1));
