@@ -30,11 +30,8 @@ export async function createStudy(store: Store, plan: StudyPlan): Promise<StudyR
   return studies[0];
 }
 
-/** All studies, newest first. */
-export async function listStudies(store: Store): Promise<StudyRecord[]> {
-  const all = await guarded(() => store.db.studies.toArray());
-  return all.sort((a, b) => (a.createdAt < b.createdAt ? 1 : a.createdAt > b.createdAt ? -1 : a.id < b.id ? -1 : 1));
-}
+/** All studies, newest first (kept in study-list.ts, which the first screen loads without the write path). */
+export { listStudies } from './study-list.ts';
 
 /** One study by id; throws InputError when there is none. */
 export async function getStudy(store: Store, studyId: string): Promise<StudyRecord> {

@@ -23,6 +23,9 @@ const FORMULA_SIGN = /^[=+\-@\uff1d\uff0b\uff0d\uff20]/;
  * Example: needsFormulaGuard('\u00a0=1+1') -> true; needsFormulaGuard('matte') -> false.
  */
 export function needsFormulaGuard(text: string): boolean {
+  // Text starting with an ASCII letter or digit has nothing to skip and no sign (the export's hot path).
+  const c = text.charCodeAt(0);
+  if ((c >= 0x61 && c <= 0x7a) || (c >= 0x41 && c <= 0x5a) || (c >= 0x30 && c <= 0x39)) return false;
   const own = text.replace(/^'+/, '');
   if (own.startsWith('\t') || own.startsWith('\r')) return true;
   return FORMULA_SIGN.test(own.replace(TRIMMED, ''));

@@ -2,14 +2,13 @@
  * The run sheet: a plan's runs in run order with their planned settings in real units, as CSV a
  * spreadsheet opens. The same planned-settings columns head the records export, so a sheet
  * printed from either looks the same. CSV follows RFC 4180 (Shafranovich 2005): comma-separated,
- * CRLF line ends, fields with commas, quotes or line breaks quoted, written with papaparse's
- * unparse. Text cells that a spreadsheet would run as a formula (starting with =, +, -, @, tab or
+ * CRLF line ends, fields with commas, quotes or line breaks quoted (toCsv, checked against
+ * papaparse's unparse). Text cells that a spreadsheet would run as a formula (starting with =, +, -, @, tab or
  * carriage return, also after spaces or zero-width characters; formula-guard.ts) get a leading
  * single quote, as the OWASP "CSV Injection" advice says; numbers stay numbers. Numbers are
  * written by JavaScript's Number to String, the shortest text that reads back to the same value
  * (ECMA-262, Number::toString).
  */
-import Papa from 'papaparse';
 import type { Design, DesignRun } from '../../core/design/design.ts';
 import { plannedSetting } from '../../core/design/planned-settings.ts';
 import { InputError } from '../../core/errors.ts';
@@ -76,19 +75,38 @@ export function neutraliseCell(cell: Cell): Cell {
 }
 
 /**
- * RFC 4180 CSV text of a table (CRLF line ends, a final CRLF), every cell neutralised, through
- * papaparse's unparse. Throws InputError when a row's length differs from the header's.
+ * A field quoted when RFC 4180 needs it (a comma, a double quote or a line break in it), and also
+ * when it holds a byte-order mark or starts or ends with a space, as papaparse's unparse does,
+ * so that readers that trim fields keep the spaces; quotes inside are doubled.
+ */
+const NEEDS_QUOTES = /[",\r\n\ufeff]|^ | $/;
+
+function csvField(cell: Cell): string {
+  const safe = neutraliseCell(cell);
+  // A number's shortest form (digits, '.', '-', 'e', '+') never needs quotes.
+  if (typeof safe === 'number') return String(safe);
+  return NEEDS_QUOTES.test(safe) ? `"${safe.replaceAll('"', '""')}"` : safe;
+}
+
+/**
+ * RFC 4180 CSV text of a table (CRLF line ends, a final CRLF), every cell neutralised. Written in
+ * one pass of string appends (the export of 10,000 runs is a benchmark figure: test/bench/
+ * csv-export.ts); the same text papaparse's unparse writes, which a property test checks.
+ * Cost: linear in the table's characters. Throws InputError when a row's length differs from the
+ * header's, or for a number that is not finite.
  * Example: toCsv({header:['Run','Kind'], rows:[[1,'center']]}) -> "Run,Kind\r\n1,center\r\n".
  */
 export function toCsv(table: Table): string {
+  const width = table.header.length;
   table.rows.forEach((r, i) => {
-    if (r.length !== table.header.length) throw new InputError(`CSV row ${i + 1} has ${r.length} cells for ${table.header.length} columns`);
+    if (r.length !== width) throw new InputError(`CSV row ${i + 1} has ${r.length} cells for ${width} columns`);
   });
-  const text = Papa.unparse(
-    { fields: table.header.map((h) => String(neutraliseCell(h))), data: table.rows.map((r) => r.map(neutraliseCell)) },
-    { newline: '\r\n', quotes: false, escapeFormulae: false },
-  );
-  return text.endsWith('\r\n') ? text : text + '\r\n';
+  let out = '';
+  for (const row of [table.header, ...table.rows]) {
+    for (let j = 0; j < width; j++) out += (j === 0 ? '' : ',') + csvField(row[j]);
+    out += '\r\n';
+  }
+  return out;
 }
 
 /** The run sheet of a design as CSV text. Example: runSheetCsv(design).split('\r\n')[0] -> "Run,Std order,Replicate,Block,Kind,...". */

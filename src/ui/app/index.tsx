@@ -7,7 +7,8 @@ import { useEffect } from 'preact/hooks';
 import { ProblemBox } from '../components/problem-box/index.tsx';
 import { AppModel } from '../models/app-model.ts';
 import { RouterModel } from './router-model.ts';
-import { RouteScreen } from './route-screen.tsx';
+import { whenIdle } from '../lib/when-idle.ts';
+import { preloadAllScreens, preloadScreen, RouteScreen } from './route-screen.tsx';
 import { hrefTo } from './routes.ts';
 
 export type AppProps = Record<string, never>;
@@ -15,7 +16,13 @@ export type AppProps = Record<string, never>;
 export function App(_props: AppProps) {
   const app = useModel(AppModel);
   const router = useModel(RouterModel);
-  useEffect(() => void app.start(), []);
+  useEffect(() => {
+    void app.start();
+    // The address's screen loads beside the store; the others once the page is idle.
+    let cancel = () => {};
+    void preloadScreen(router.route.value).then(() => (cancel = whenIdle(() => void preloadAllScreens())));
+    return () => cancel();
+  }, []);
   const secure = typeof window !== 'undefined' && window.isSecureContext;
   const store = app.store.value;
   return (

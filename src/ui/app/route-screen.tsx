@@ -1,27 +1,23 @@
 /**
- * The screen switch: each route of the table (routes.ts) with its screen. The record's type names
- * every route, so a route added to the table without a screen does not compile.
+ * The screen switch: each route of the table (routes.ts) with its screen, one line per screen.
+ * The record's type names every route, so a route added to the table without a screen does not
+ * compile. Every screen is lazy (lazy-screen.tsx): its code, and the core and packages only it
+ * needs, arrive when it is first shown or preloaded, so the first screen carries none of it.
  */
 import type { ComponentType } from 'preact';
 import type { Store } from '../../store/store.ts';
-import { AnalysisScreen } from '../screens/analysis/index.tsx';
-import { ExportScreen } from '../screens/export/index.tsx';
 import { MissingScreen } from '../screens/missing/index.tsx';
-import { NewStudyScreen } from '../screens/new-study/index.tsx';
-import { QuickCardScreen } from '../screens/quick-card/index.tsx';
-import { RunFormScreen } from '../screens/run-form/index.tsx';
-import { RunSheetScreen } from '../screens/run-sheet/index.tsx';
-import { StudiesScreen } from '../screens/studies/index.tsx';
-import type { Route, RouteName, RouteParams } from './routes.ts';
+import { lazyScreen, type LazyScreen } from './lazy-screen.tsx';
+import { ROUTE_NAMES, type Route, type RouteName, type RouteParams } from './routes.ts';
 
-const SCREENS: { readonly [N in RouteName]: ComponentType<RouteParams<N> & { readonly store: Store }> } = {
-  studies: StudiesScreen,
-  newStudy: NewStudyScreen,
-  runSheet: RunSheetScreen,
-  runForm: RunFormScreen,
-  analysis: AnalysisScreen,
-  quickCard: QuickCardScreen,
-  export: ExportScreen,
+const SCREENS: { readonly [N in RouteName]: LazyScreen<RouteParams<N> & { readonly store: Store }> } = {
+  studies: lazyScreen(() => import('../screens/studies/index.tsx').then((m) => m.StudiesScreen)),
+  newStudy: lazyScreen(() => import('../screens/new-study/index.tsx').then((m) => m.NewStudyScreen)),
+  runSheet: lazyScreen(() => import('../screens/run-sheet/index.tsx').then((m) => m.RunSheetScreen)),
+  runForm: lazyScreen(() => import('../screens/run-form/index.tsx').then((m) => m.RunFormScreen)),
+  analysis: lazyScreen(() => import('../screens/analysis/index.tsx').then((m) => m.AnalysisScreen)),
+  quickCard: lazyScreen(() => import('../screens/quick-card/index.tsx').then((m) => m.QuickCardScreen)),
+  export: lazyScreen(() => import('../screens/export/index.tsx').then((m) => m.ExportScreen)),
 };
 
 export type RouteScreenProps = { readonly route: Route; readonly store: Store };
@@ -32,4 +28,18 @@ export function RouteScreen({ route, store }: RouteScreenProps) {
   // The parser gave exactly the parameters of this route's patterns, which are the screen's props.
   const Screen = SCREENS[route.name] as ComponentType<{ readonly store: Store }>;
   return <Screen store={store} {...route.params} />;
+}
+
+/** Starts fetching the code of the route's screen (the app calls it at start, beside opening the store). */
+export function preloadScreen(route: Route): Promise<void> {
+  return route.name === 'missing' ? Promise.resolve() : SCREENS[route.name].preload();
+}
+
+/**
+ * Fetches every screen's code, one after another in table order (so each fetch takes the
+ * network alone); the app calls it when idle after the first screen, so every screen opens
+ * offline later. A screen that fails is skipped here and offers a retry when it is opened.
+ */
+export async function preloadAllScreens(): Promise<void> {
+  for (const name of ROUTE_NAMES) await SCREENS[name].preload();
 }

@@ -2,20 +2,15 @@
  * The invented demo study: on first start, with no study on the device, the app merges the
  * demo backup (public/demo-study.json, a copy of test/fixtures/trialbook-demo-backup.json made by
  * the app's own export) into the store, so it is a normal, editable study. Its title and purpose
- * say it is invented, and every screen showing it says so again.
+ * say it is invented, and every screen showing it says so again (is-demo.ts). The app loads this
+ * module only when the store holds no study.
  */
-import type { StudyPlan } from '../../core/study/study.ts';
 import { importBackup, type ImportReport } from '../../store/files.ts';
 import { listStudies } from '../../store/studies.ts';
 import type { Store } from '../../store/store.ts';
 
 /** Where the built app serves the demo backup (relative to the page). */
 export const DEMO_FILE = 'demo-study.json';
-
-/** True for a study of invented demo data (the demo says so in its title or purpose). */
-export function isDemo(study: Pick<StudyPlan, 'title' | 'purpose'>): boolean {
-  return /^\s*invented demo/i.test(study.title) || /invented demo data/i.test(study.purpose);
-}
 
 /** Imports the demo study when the store holds no study; returns the import report, or null when nothing was done. */
 export async function addDemoIfEmpty(store: Store, fetchText: (url: string) => Promise<string> = fetchDemo): Promise<ImportReport | null> {

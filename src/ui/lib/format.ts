@@ -41,13 +41,7 @@ export function percent(x: number | null): string {
   return `${(Math.round(x * 1000) / 10).toFixed(1)}%`;
 }
 
-/** A stored ISO time as the phone's local date and time, or a dash. */
-export function when(iso: string | null | undefined): string {
-  if (!iso) return '–';
-  const d = new Date(iso);
-  if (Number.isNaN(d.getTime())) return iso;
-  return d.toLocaleString(undefined, { year: 'numeric', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
-}
+export { when } from './when.ts';
 
 /** A term's name for reading: 'Oven temperature:Line speed' -> 'Oven temperature × Line speed'. */
 export function termLabel(name: string): string {

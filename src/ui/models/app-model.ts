@@ -4,8 +4,8 @@
  */
 import { createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { openStore, type Store } from '../../store/store.ts';
+import { listStudies } from '../../store/study-list.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
-import { addDemoIfEmpty } from '../demo/demo-study.ts';
 
 export const AppModel = createModel(() => {
   const store = signal<Store | null>(null);
@@ -37,7 +37,8 @@ export const AppModel = createModel(() => {
         });
         blocked.value = null;
         try {
-          await addDemoIfEmpty(s);
+          // Adding the demo brings the backup import with it: loaded only for a device with no study.
+          if ((await listStudies(s)).length === 0) await (await import('../demo/demo-study.ts')).addDemoIfEmpty(s);
         } catch (err) {
           demoProblem.value = `The invented demo study could not be added: ${problemOf(err).message}`;
         }

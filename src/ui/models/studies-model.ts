@@ -1,11 +1,10 @@
 /** The studies on this device with how many of their planned runs are logged. */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import type { StudyRecord } from '../../core/study/study.ts';
-import { listRuns } from '../../store/runs.ts';
-import { listStudies } from '../../store/studies.ts';
+import { listStudies, loggedPlannedRuns } from '../../store/study-list.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
-import { isDemo } from '../demo/demo-study.ts';
+import { isDemo } from '../demo/is-demo.ts';
 
 export interface StudySummary {
   readonly study: StudyRecord;
@@ -33,9 +32,7 @@ export const StudiesModel = createModel((store: Store) => {
     async load() {
       try {
         const all = await listStudies(store);
-        const counts: Record<string, number> = {};
-        for (const s of all) counts[s.id] = new Set((await listRuns(store, s.id)).map((r) => r.plannedRun)).size;
-        loggedCounts.value = counts;
+        loggedCounts.value = Object.fromEntries(await loggedPlannedRuns(store));
         studies.value = all;
       } catch (err) {
         problem.value = problemOf(err);

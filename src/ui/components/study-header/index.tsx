@@ -1,7 +1,7 @@
 /** A study screen's heading: the title, the demo mark when it is invented, and the study's tabs. */
 import type { StudyRecord } from '../../../core/study/study.ts';
 import { hrefTo, STUDY_TABS, type StudyTabName } from '../../app/routes.ts';
-import { isDemo } from '../../demo/demo-study.ts';
+import { isDemo } from '../../demo/is-demo.ts';
 import { DemoBadge } from '../demo-badge/index.tsx';
 import './style.css';
 

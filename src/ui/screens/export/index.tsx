@@ -12,7 +12,7 @@ import { StudyHeader } from '../../components/study-header/index.tsx';
 import { when } from '../../lib/format.ts';
 import { ExportModel } from '../../models/export-model.ts';
 import { hrefTo } from '../../app/routes.ts';
-import { isDemo } from '../../demo/demo-study.ts';
+import { isDemo } from '../../demo/is-demo.ts';
 import './style.css';
 
 /** Without a study id: every study on this device. */

@@ -15,7 +15,6 @@ import { StudyHeader } from '../../components/study-header/index.tsx';
 import { setting, when } from '../../lib/format.ts';
 import { fileName, downloadText, mimeOf } from '../../lib/save-file.ts';
 import { problemOf } from '../../lib/problem.ts';
-import { backupText } from '../../models/export-model.ts';
 import { readingBoxes, RunFormModel } from '../../models/run-form-model.ts';
 import { hrefTo } from '../../app/routes.ts';
 import './style.css';
@@ -39,6 +38,8 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
     if (!state) return;
     exporting.value = true;
     try {
+      // The export code (with the CSV writer) loads on this rare path only, not with the form.
+      const { backupText } = await import('../../models/export-model.ts');
       const text = await backupText(store, [state.study.id]);
       downloadText(text, fileName(state.study.title, 'json'), mimeOf('json'));
       exportNote.value = 'The backup file is downloading. Keep it until the storage problem is solved.';

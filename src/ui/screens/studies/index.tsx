@@ -4,7 +4,7 @@ import { useEffect } from 'preact/hooks';
 import type { Store } from '../../../store/store.ts';
 import { DemoBadge } from '../../components/demo-badge/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
-import { when } from '../../lib/format.ts';
+import { when } from '../../lib/when.ts';
 import { hrefTo } from '../../app/routes.ts';
 import { StudiesModel } from '../../models/studies-model.ts';
 
