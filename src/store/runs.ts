@@ -3,7 +3,8 @@
  * save are fixed when the form opens, so a double tap or a retry saves once. Every change (an
  * edit, an exclusion, a restore) appends a revision; nothing is overwritten. A save that finds
  * the run changed since its form opened (another tab, another window) still keeps both
- * revisions and says so. Each write is one transaction across all the tables it touches, and
+ * revisions and says so. A save drops the run's draft only when the draft holds what was saved
+ * (another tab's typing stays). Each write is one transaction across all the tables it touches, and
  * resolves only once the transaction is on disk.
  */
 import { InputError } from '../core/errors.ts';
@@ -109,9 +110,11 @@ const sameSet = (a: readonly string[], b: readonly string[]) => a.length === b.l
 const valuesKey = (v: RunValues) =>
   canonicalJson({ actual: v.actual, readings: v.readings, loggedAt: v.loggedAt, operator: v.operator, notes: v.notes, excluded: v.excluded, reason: v.reason });
 
+/** True when a form's typing reads as exactly these values (a blank time takes the saved one: the form fills it at saving). */
 function sameTyping(study: StudyRecord, form: RunForm, values: RunValues): boolean {
   try {
-    return valuesKey(checkRunValues(study, parseRunForm(study, form))) === valuesKey(values);
+    const typed = form.loggedAt.trim() === '' ? { ...form, loggedAt: values.loggedAt ?? '' } : form;
+    return valuesKey(checkRunValues(study, parseRunForm(study, typed))) === valuesKey(values);
   } catch {
     return false; // typing that does not read as values is not what was saved: the draft stays
   }
@@ -166,7 +169,10 @@ async function appendRevision(store: Store, input: SaveInput, restoredFrom: stri
   });
   const revision = appended.revisions[0];
   const run = appended.runs[0];
-  await db.drafts.delete(input.runId);
+  // The run's draft goes only when it holds what was just saved: a draft of other typing
+  // (another tab's form on this run, typed after this one) stays, so no typing is lost.
+  const draft = await db.drafts.get(input.runId);
+  if (draft && sameTyping(study, draft.form, values)) await db.drafts.delete(input.runId);
   return { run, revision, duplicate: false, changedSince };
 }
 
@@ -179,7 +185,7 @@ async function writeRevision(store: Store, input: SaveInput, restoredFrom: strin
   return result;
 }
 
-/** Saves a run's values as a new revision (and drops its draft); resolves once on disk. */
+/** Saves a run's values as a new revision (and drops its draft when the draft holds these values); resolves once on disk. */
 export async function saveRun(store: Store, input: SaveInput): Promise<SaveResult> {
   return writeRevision(store, input);
 }

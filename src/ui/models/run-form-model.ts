@@ -16,6 +16,9 @@ import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
 import { markTyping } from '../lib/unsaved-forms.ts';
 
+/** The channel on which a tab says it saved a run (the other tabs' forms keep their typing again). */
+const SAVES_CHANNEL = 'trialbook-run-saves';
+
 export type SaveState = 'loading' | 'editing' | 'saving' | 'saved';
 export type DraftState = 'none' | 'restored' | 'keeping' | 'kept' | 'failed';
 
@@ -157,6 +160,25 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     return () => markTyping(formKey, 'none');
   });
 
+  // Another tab's save of this run drops the run's draft when the draft held what it saved;
+  // this form's typing, when it differs, is then kept again, so no tab's typing is lost.
+  effect(() => {
+    if (typeof BroadcastChannel === 'undefined') return;
+    const channel = new BroadcastChannel(SAVES_CHANNEL);
+    channel.onmessage = (e: MessageEvent<unknown>) => {
+      const s = state.peek();
+      const runId = (e.data as { runId?: unknown } | null)?.runId;
+      if (s && runId === s.runId && dirty.peek() && saveState.peek() === 'editing') keepDraft();
+    };
+    return () => channel.close();
+  });
+  function announceSave(runId: string) {
+    if (typeof BroadcastChannel === 'undefined') return;
+    const channel = new BroadcastChannel(SAVES_CHANNEL);
+    channel.postMessage({ runId });
+    channel.close();
+  }
+
   /** Reopens the form from the stored run (after a restore wrote a new current version). */
   async function reload() {
     await drafts;
@@ -279,6 +301,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
       try {
         await drafts; // the last draft write lands before the save drops the draft
         const result = await saveRun(store, { runId: s.runId, revisionId: s.revisionId, studyId: s.study.id, plannedRun: s.plannedRun, parents: s.parents, values });
+        announceSave(s.runId);
         // A fresh form state: the next change will be a new revision on top of this one.
         const reopened = await openRun(store, s.runId);
         state.value = reopened;

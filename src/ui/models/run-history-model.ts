@@ -21,6 +21,8 @@ export interface HistoryEntry {
   readonly restoredFromNumber: number | null;
   /** True when another version was made from the same version as this one (diverged edits). */
   readonly sharesParent: boolean;
+  /** True when every version made from the same start as this one was saved by one device (two tabs or windows). */
+  readonly forkOnThisDevice: boolean;
   /** What changed from the version it was made from, one phrase each; empty when nothing did. */
   readonly changes: readonly string[];
   /** True for the first version (there is nothing before it). */
@@ -62,9 +64,13 @@ export function historyEntries(study: Pick<StudyRecord, 'factors' | 'responses'>
   const byId = new Map(sorted.map((r) => [r.id, r]));
   // How many versions were made from each starting point ('' for "from nothing").
   const starts = new Map<string, number>();
+  const startDevices = new Map<string, Set<string>>();
   for (const r of sorted) {
     const keys = r.parents.length === 0 ? [''] : r.parents;
-    for (const k of keys) starts.set(k, (starts.get(k) ?? 0) + 1);
+    for (const k of keys) {
+      starts.set(k, (starts.get(k) ?? 0) + 1);
+      startDevices.set(k, (startDevices.get(k) ?? new Set()).add(r.device));
+    }
   }
   const entries = sorted.map((r, i): HistoryEntry => {
     const parent = r.parents.map((p) => byId.get(p)).filter((p): p is RunRevision => p !== undefined).sort(compareRevisions).at(-1);
@@ -76,6 +82,7 @@ export function historyEntries(study: Pick<StudyRecord, 'factors' | 'responses'>
       isCurrent: i === sorted.length - 1,
       restoredFromNumber: r.restoredFrom ? (numberOf.get(r.restoredFrom) ?? null) : null,
       sharesParent: keys.some((k) => (starts.get(k) ?? 0) > 1),
+      forkOnThisDevice: keys.filter((k) => (starts.get(k) ?? 0) > 1).every((k) => startDevices.get(k)!.size === 1),
       changes: before ? describeChanges(study, before, r) : [],
       first: i === 0,
     };

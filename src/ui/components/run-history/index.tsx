@@ -74,7 +74,7 @@ export function RunHistory({ store, study, runId, unsaved, onRestored, onSaveFir
                 Saved {when(r.savedAt)} · device {shortId(r.device)}
                 {r.device === store.device ? ' (this one)' : ''}
               </p>
-              {e.sharesParent && <p class="history-fork">Changed on two devices from the same version; both kept.</p>}
+              {e.sharesParent && <p class="history-fork">{e.forkOnThisDevice ? 'Changed in two places on this device (two tabs or windows) from the same version; both kept.' : 'Changed on two devices from the same version; both kept.'}</p>}
               <p class="history-changes">
                 {e.first ? 'First version.' : e.changes.length === 0 ? 'No values changed.' : `Changed: ${e.changes.join(', ')}`}
               </p>
