@@ -19,6 +19,7 @@ import {
   type RunValues,
   type StudyRecord,
 } from '../core/study/study.ts';
+import { divergedRuns, type DivergedRun } from '../core/study/diverged-runs.ts';
 import { canonicalJson } from '../core/records/canonical-json.ts';
 import { sha256, utf8Encode } from '../core/records/sha256.ts';
 import { appendRevisions } from './append-revisions.ts';
@@ -201,6 +202,16 @@ export async function getRun(store: Store, runId: string): Promise<LoggedRun> {
 export async function listRuns(store: Store, studyId: string): Promise<LoggedRun[]> {
   const runs = await guarded(() => store.db.runs.where('studyId').equals(studyId).toArray());
   return runs.sort((a, b) => a.plannedRun - b.plannedRun || (a.id < b.id ? -1 : 1));
+}
+
+/** The logged runs of a study with two or more current revisions (edits that diverged), each with those revisions. */
+export async function listDivergedRuns(store: Store, studyId: string, runs?: readonly LoggedRun[]): Promise<DivergedRun[]> {
+  const all = runs ?? (await listRuns(store, studyId));
+  const split = all.filter((r) => r.heads.length > 1);
+  if (split.length === 0) return [];
+  const heads = await guarded(() => store.db.revisions.bulkGet(split.flatMap((r) => [...r.heads])));
+  const byId = new Map(heads.filter((r): r is RunRevision => r !== undefined).map((r) => [r.id, r]));
+  return divergedRuns(split, (id) => byId.get(id));
 }
 
 /** Every revision of a logged run, oldest first (the last one is current). */

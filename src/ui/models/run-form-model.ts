@@ -11,7 +11,8 @@ import { joinReadings, splitReadings } from '../../core/study/reading-text.ts';
 import { parseReadings, parseRunForm, type RunForm } from '../../core/study/run-form.ts';
 import { meanReading, plannedSettings, type Setting } from '../../core/study/study.ts';
 import { discardDraft, saveDraft } from '../../store/drafts.ts';
-import { openPlannedRun, openRun, saveRun, type RunFormState, type SaveResult } from '../../store/runs.ts';
+import type { DivergedRun } from '../../core/study/diverged-runs.ts';
+import { listDivergedRuns, openPlannedRun, openRun, restoreRevision, saveRun, type RunFormState, type SaveResult } from '../../store/runs.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
 import { markTyping } from '../lib/unsaved-forms.ts';
@@ -44,6 +45,9 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
   const draftState = signal<DraftState>('none');
   const problem = signal<Problem | null>(null);
   const lastSave = signal<SaveResult | null>(null);
+  /** The run's current revisions when its edits diverged (changed in two places), else null. */
+  const diverged = signal<DivergedRun | null>(null);
+  const keeping = signal(false);
   let drafts: Promise<unknown> = Promise.resolve();
 
   const planned = computed<Setting[]>(() => (state.value ? plannedSettings(state.value.study, plannedRun) : []));
@@ -179,12 +183,21 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     channel.close();
   }
 
+  async function readDiverged(opened: RunFormState) {
+    if (!opened.current || opened.current.heads.length < 2) {
+      diverged.value = null;
+      return;
+    }
+    diverged.value = (await listDivergedRuns(store, opened.study.id, [opened.current]))[0] ?? null;
+  }
+
   /** Reopens the form from the stored run (after a restore wrote a new current version). */
   async function reload() {
     await drafts;
     const s = state.peek();
     try {
       const opened = s ? await openRun(store, s.runId) : await openPlannedRun(store, studyId, plannedRun);
+      await readDiverged(opened);
       state.value = opened;
       form.value = opened.form;
       draftState.value = opened.fromDraft ? 'restored' : 'none';
@@ -202,6 +215,8 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     draftState: draftState as ReadonlySignal<DraftState>,
     problem: problem as ReadonlySignal<Problem | null>,
     lastSave: lastSave as ReadonlySignal<SaveResult | null>,
+    diverged: diverged as ReadonlySignal<DivergedRun | null>,
+    keeping: keeping as ReadonlySignal<boolean>,
     planned,
     actualErrors,
     differs,
@@ -215,6 +230,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     async load() {
       try {
         const opened = await openPlannedRun(store, studyId, plannedRun);
+        await readDiverged(opened);
         state.value = opened;
         form.value = opened.form;
         draftState.value = opened.fromDraft ? 'restored' : 'none';
@@ -225,6 +241,28 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     },
 
     reload,
+
+    /**
+     * Keeps one of a diverged run's current revisions: its values become a new revision made
+     * from all of them (a restore), so the run has one current revision again; nothing is
+     * deleted. Waits while the form holds typing (save or discard it first).
+     */
+    async keepRevision(revisionId: string) {
+      const s = state.peek();
+      if (!s || keeping.peek() || saveState.peek() === 'saving') return;
+      if (dirty.peek() && saveState.peek() !== 'saved') return;
+      keeping.value = true;
+      problem.value = null;
+      try {
+        await restoreRevision(store, s.runId, revisionId);
+        announceSave(s.runId);
+        await reload();
+      } catch (err) {
+        problem.value = problemOf(err);
+      } finally {
+        keeping.value = false;
+      }
+    },
 
     /** Throws away the typing not yet saved (its draft too) and shows the saved run again. */
     async discardTyping() {
@@ -304,6 +342,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
         announceSave(s.runId);
         // A fresh form state: the next change will be a new revision on top of this one.
         const reopened = await openRun(store, s.runId);
+        await readDiverged(reopened);
         state.value = reopened;
         form.value = reopened.form;
         lastSave.value = result;

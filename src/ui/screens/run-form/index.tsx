@@ -8,6 +8,7 @@ import { useEffect } from 'preact/hooks';
 import { RUN_KIND_NAMES } from '../../../core/design/design.ts';
 import type { Store } from '../../../store/store.ts';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
+import { DivergedNote } from '../../components/diverged-note/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { ReadingsField } from '../../components/readings-field/index.tsx';
 import { RunHistory } from '../../components/run-history/index.tsx';
@@ -90,6 +91,12 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
           onDiscard={() => void model.discardTyping()}
           onClose={() => (showHistory.value = false)}
         />
+      )}
+      {model.diverged.value && !showHistory.value && (
+        <>
+          <DivergedNote study={study} diverged={model.diverged.value} busy={model.keeping.value || busy || (model.dirty.value && saveState !== 'saved')} onKeep={(id) => void model.keepRevision(id)} />
+          {model.dirty.value && saveState !== 'saved' && <p class="quiet">Save or discard the typing below before keeping one version.</p>}
+        </>
       )}
       {draftState === 'restored' && <p class="notice">Your earlier typing was kept and is back. It is not saved yet.</p>}
 
