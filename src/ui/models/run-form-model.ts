@@ -6,7 +6,9 @@
  * failure shows the store's message and offers an export.
  */
 import { computed, createModel, effect, signal, type ReadonlySignal } from '@preact/signals';
+import { farOutsideSettings } from '../../core/factor/far-outside.ts';
 import { readSetting } from '../../core/factor/read-setting.ts';
+import { farOutsideText } from '../../core/text/far-outside-text.ts';
 import { joinReadings, splitReadings } from '../../core/study/reading-text.ts';
 import { parseReadings, parseRunForm, type RunForm } from '../../core/study/run-form.ts';
 import { meanReading, plannedSettings, type Setting } from '../../core/study/study.ts';
@@ -81,6 +83,26 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     });
   });
 
+  /** Per factor: the strong warning when the actual setting as typed is far outside the planned range, else null. */
+  const farOutside = computed<(string | null)[]>(() => {
+    const s = state.value;
+    const f = form.value;
+    if (!s || !f) return [];
+    const factors = s.study.factors;
+    return factors.map((factor, i) => {
+      try {
+        const v = readSetting(factor, f.actual[i]);
+        const actual = factors.map((_, j) => (j === i ? v : Number.NaN));
+        const far = farOutsideSettings(factors, actual)[0];
+        return far ? farOutsideText(`Run ${plannedRun}`, factor, far) : null;
+      } catch {
+        return null;
+      }
+    });
+  });
+  /** The far-outside warnings waiting for the person's yes before saving, or null. */
+  const confirmingFar = signal<readonly string[] | null>(null);
+
   /** Per response: a message when a reading cannot be read, else null. */
   const readingErrors = computed<(string | null)[]>(() => {
     const s = state.value;
@@ -134,6 +156,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     if (!f || saveState.peek() === 'saving' || saveState.peek() === 'loading') return;
     form.value = { ...f, ...patch };
     saveState.value = 'editing';
+    confirmingFar.value = null;
     if (problem.peek()?.kind === 'input') problem.value = null;
     keepDraft();
   }
@@ -220,6 +243,12 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     planned,
     actualErrors,
     differs,
+    farOutside,
+    confirmingFar: confirmingFar as ReadonlySignal<readonly string[] | null>,
+    /** The person goes back to correct a far-outside setting: nothing is saved. */
+    cancelFar() {
+      confirmingFar.value = null;
+    },
     readingErrors,
     means,
     dirty,
@@ -320,11 +349,26 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
       change({ loggedAt: store.now().toISOString() });
     },
 
-    /** Checks the form and saves it as a new revision; a wrong entry changes nothing. */
-    async save() {
+    /**
+     * Checks the form and saves it as a new revision; a wrong entry changes nothing. A setting far
+     * outside the planned range waits for a yes (save again with `confirmed`) before saving.
+     */
+    async save(confirmed = false) {
       const s = state.peek();
       const typed = form.peek();
       if (!s || !typed || saveState.peek() === 'saving') return;
+      const far = farOutside.peek().filter((x): x is string => x !== null);
+      if (far.length > 0 && !confirmed) {
+        try {
+          parseRunForm(s.study, typed); // a wrong entry is said first
+        } catch (err) {
+          problem.value = problemOf(err);
+          return;
+        }
+        confirmingFar.value = far;
+        return;
+      }
+      confirmingFar.value = null;
       // A run without a time gets the time of its first saving.
       const f = typed.loggedAt.trim() === '' && !s.current ? { ...typed, loggedAt: store.now().toISOString() } : typed;
       let values;

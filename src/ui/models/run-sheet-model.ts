@@ -8,6 +8,8 @@ import type { RunKind } from '../../core/design/design.ts';
 import { meanReading, plannedSettings, type LoggedRun, type Setting, type StudyRecord } from '../../core/study/study.ts';
 import type { Draft } from '../../store/db.ts';
 import { listDrafts } from '../../store/drafts.ts';
+import { farOutsideSettings } from '../../core/factor/far-outside.ts';
+import { farOutsideText } from '../../core/text/far-outside-text.ts';
 import type { DivergedRun } from '../../core/study/diverged-runs.ts';
 import { listDivergedRuns, listRuns } from '../../store/runs.ts';
 import { getStudy } from '../../store/studies.ts';
@@ -27,6 +29,8 @@ export interface SheetRow {
   readonly hasDraft: boolean;
   /** The run's current revisions when its edits diverged (changed in two places), else null. */
   readonly diverged: DivergedRun | null;
+  /** The strong warnings for logged actual settings far outside the planned range (empty when none). */
+  readonly farOutside: readonly string[];
 }
 
 export const RunSheetModel = createModel((store: Store, studyId: string) => {
@@ -54,6 +58,7 @@ export const RunSheetModel = createModel((store: Store, studyId: string) => {
           excluded: logged.length > 0 && logged.every((r) => r.excluded),
           hasDraft: drafts.value.some((d) => d.plannedRun === p.run),
           diverged: diverged.value.find((d) => d.plannedRun === p.run) ?? null,
+          farOutside: logged.flatMap((r) => farOutsideSettings(s.factors, r.actual).map((far) => farOutsideText(`Run ${p.run}`, s.factors[far.factor], far))),
         };
       });
   });

@@ -142,7 +142,12 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
                 ) : (
                   <ChoiceButtons label={`${f.name} actual`} hideLabel options={f.levels.map((l) => ({ value: l, label: l }))} value={typed} onChoose={(v) => model.setActual(i, v)} />
                 )}
-                {differs && !error && <p class="differs">Actual differs from the plan: the analysis uses the actual setting.</p>}
+                {differs && !error && !model.farOutside.value[i] && <p class="differs">Actual differs from the plan: the analysis uses the actual setting.</p>}
+                {!error && model.farOutside.value[i] && (
+                  <p class="far-outside" role="alert">
+                    <strong>Far outside the plan.</strong> {model.farOutside.value[i]}. The analysis would extrapolate every effect through it.
+                  </p>
+                )}
                 {error && (
                   <p class="field-error" role="alert">
                     {error}
@@ -209,6 +214,24 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
           )}
         </fieldset>
 
+        {model.confirmingFar.value && (
+          <div class="far-confirm" role="alertdialog" aria-label="Save a setting far outside the plan?">
+            <p>
+              <strong>Save with {model.confirmingFar.value.length === 1 ? 'this setting' : 'these settings'}?</strong>
+            </p>
+            <ul>
+              {model.confirmingFar.value.map((t) => (
+                <li key={t}>{t}</li>
+              ))}
+            </ul>
+            <button type="button" class="btn primary big block" onClick={() => model.cancelFar()}>
+              Correct it
+            </button>
+            <button type="button" class="btn big block" onClick={() => void model.save(true)}>
+              Yes, it was run at {model.confirmingFar.value.length === 1 ? 'this setting' : 'these settings'}: save
+            </button>
+          </div>
+        )}
         {problem && <ProblemBox problem={problem} onExport={() => void exportNow()} exportBusy={exporting.value} />}
         {exportNote.value && <p class="notice">{exportNote.value}</p>}
 

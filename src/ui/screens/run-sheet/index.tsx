@@ -59,6 +59,11 @@ export function RunSheetScreen({ store, studyId }: RunSheetScreenProps) {
                 </p>
               )}
               {row.excluded && <p class="run-result">Reason: {row.logged[0].reason}</p>}
+              {row.farOutside.map((t) => (
+                <p key={t} class="far-note">
+                  <strong>Far outside the plan.</strong> {t}.
+                </p>
+              ))}
               {row.diverged && <DivergedNote study={study} diverged={row.diverged} />}
               {row.hasDraft && <p class="draft-note">Typing not saved yet is waiting in this run's form.</p>}
               <a class={logged ? 'btn block' : 'btn primary block'} href={hrefTo('runForm', { studyId: study.id, plannedRun: row.run })}>
