@@ -17,6 +17,8 @@ import type { DivergedRun } from '../../core/study/diverged-runs.ts';
 import { listDivergedRuns, openPlannedRun, openRun, restoreRevision, saveRun, type RunFormState, type SaveResult } from '../../store/runs.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
+import { registerOnScreen } from '../lib/on-screen.ts';
+import { storageCleared } from '../lib/storage-cleared.ts';
 import { markTyping } from '../lib/unsaved-forms.ts';
 
 /** The channel on which a tab says it saved a run (the other tabs' forms keep their typing again). */
@@ -38,6 +40,35 @@ export function joinBoxes(boxes: readonly string[]): string {
 /** What the actual-setting fields are called in messages, the same words as at saving (parseRunForm). */
 function actualField(name: string): string {
   return `${name}: the actual setting`;
+}
+
+/** The file name of a run form's typing downloaded when the records are gone. */
+function onScreenName(title: string, plannedRun: number): string {
+  const slug = title.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 60) || 'study';
+  return `trialbook-typing-${slug}-run-${plannedRun}.json`;
+}
+
+/** What a run form shows, as it was typed, named by study and run (a record of the typing, not a backup). */
+function onScreenText(s: RunFormState, f: RunForm, now: Date): string {
+  const { study } = s;
+  return JSON.stringify(
+    {
+      what: 'The typing of one Trialbook run form, downloaded after the browser removed the records of this device. It is not a backup file: type it again into the run form.',
+      downloadedAt: now.toISOString(),
+      study: { id: study.id, title: study.title },
+      run: s.plannedRun,
+      runId: s.runId,
+      settings: study.factors.map((factor, i) => ({ factor: factor.name, planned: plannedSettings(study, s.plannedRun)[i], actual: f.actual[i] })),
+      readings: study.responses.map((r, i) => ({ response: r.name, unit: r.unit ?? '', readings: f.readings[i] })),
+      loggedAt: f.loggedAt,
+      operator: f.operator,
+      notes: f.notes,
+      excluded: f.excluded,
+      reason: f.reason,
+    },
+    null,
+    2,
+  );
 }
 
 export const RunFormModel = createModel((store: Store, studyId: string, plannedRun: number) => {
@@ -132,6 +163,12 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     });
   });
 
+  /** The problem to show: once the records are gone, that (the store's closed-database error would say "updated in another tab"). */
+  function problemFor(err: unknown): Problem {
+    const gone = storageCleared.peek();
+    return gone !== null ? { message: gone, offerExport: false, kind: 'storage' } : problemOf(err);
+  }
+
   function keepDraft() {
     const s = state.peek();
     const f = form.peek();
@@ -145,7 +182,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
           },
           (err) => {
             draftState.value = 'failed';
-            problem.value = problemOf(err);
+            problem.value = problemFor(err);
           },
         ),
     );
@@ -214,6 +251,24 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     diverged.value = (await listDivergedRuns(store, opened.study.id, [opened.current]))[0] ?? null;
   }
 
+  // The browser removed the records under the page: the typing stays in this form only; say so
+  // (no draft is kept), and give what is on screen as a file to download at once.
+  effect(() => {
+    const message = storageCleared.value;
+    if (message === null) return;
+    draftState.value = dirty.peek() ? 'failed' : draftState.peek();
+    problem.value = { message, offerExport: false, kind: 'storage' };
+  });
+  effect(() => {
+    registerOnScreen(formKey, () => {
+      const s = state.peek();
+      const f = form.peek();
+      if (!s || !f) return null;
+      return { name: onScreenName(s.study.title, plannedRun), text: onScreenText(s, f, store.now()) };
+    });
+    return () => registerOnScreen(formKey, null);
+  });
+
   /** Reopens the form from the stored run (after a restore wrote a new current version). */
   async function reload() {
     await drafts;
@@ -227,7 +282,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
       saveState.value = 'editing';
       problem.value = null;
     } catch (err) {
-      problem.value = problemOf(err);
+      problem.value = problemFor(err);
     }
   }
 
@@ -265,7 +320,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
         draftState.value = opened.fromDraft ? 'restored' : 'none';
         saveState.value = 'editing';
       } catch (err) {
-        problem.value = problemOf(err);
+        problem.value = problemFor(err);
       }
     },
 
@@ -287,7 +342,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
         announceSave(s.runId);
         await reload();
       } catch (err) {
-        problem.value = problemOf(err);
+        problem.value = problemFor(err);
       } finally {
         keeping.value = false;
       }
@@ -301,7 +356,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
       try {
         await discardDraft(store, s.runId);
       } catch (err) {
-        problem.value = problemOf(err);
+        problem.value = problemFor(err);
         return;
       }
       await reload();
@@ -362,7 +417,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
         try {
           parseRunForm(s.study, typed); // a wrong entry is said first
         } catch (err) {
-          problem.value = problemOf(err);
+          problem.value = problemFor(err);
           return;
         }
         confirmingFar.value = far;
@@ -375,7 +430,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
       try {
         values = parseRunForm(s.study, f);
       } catch (err) {
-        problem.value = problemOf(err);
+        problem.value = problemFor(err);
         return;
       }
       problem.value = null;
@@ -393,7 +448,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
         draftState.value = 'none';
         saveState.value = 'saved';
       } catch (err) {
-        problem.value = problemOf(err);
+        problem.value = problemFor(err);
         saveState.value = 'editing';
       }
     },
