@@ -3,6 +3,7 @@
  * from the version it was made from, in plain words. Order is the revision order of the store
  * (the revision counter, then device, then id), never the clock. Restoring an earlier version
  * adds a new revision; nothing is deleted. A restore that fails changes nothing and says why.
+ * A long history is shown in pages, newest first (HISTORY_PAGE at a time).
  */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { compareRevisions, type RunRevision, type StudyRecord } from '../../core/study/study.ts';
@@ -92,6 +93,11 @@ export function historyEntries(study: Pick<StudyRecord, 'factors' | 'responses'>
 
 export type RestoreState = 'idle' | 'restoring' | 'restored';
 
+/** How many versions the history shows at first, and how many more each "older" tap adds: a
+ * long history (thousands of versions) opens and closes at once. Our own choice: a page fits a
+ * few phone screens. */
+export const HISTORY_PAGE = 20;
+
 export const RunHistoryModel = createModel((store: Store, study: StudyRecord, runId: string) => {
   const revisions = signal<RunRevision[] | null>(null);
   const problem = signal<Problem | null>(null);
@@ -100,6 +106,8 @@ export const RunHistoryModel = createModel((store: Store, study: StudyRecord, ru
   const restoreState = signal<RestoreState>('idle');
   /** The version number of the last restore's new version, and the one it brought back. */
   const lastRestore = signal<{ from: number; to: number } | null>(null);
+  const shownCount = signal(HISTORY_PAGE);
+  const entries = computed(() => (revisions.value ? historyEntries(study, revisions.value) : []));
 
   async function load() {
     try {
@@ -111,7 +119,15 @@ export const RunHistoryModel = createModel((store: Store, study: StudyRecord, ru
 
   return {
     revisions: revisions as ReadonlySignal<RunRevision[] | null>,
-    entries: computed(() => (revisions.value ? historyEntries(study, revisions.value) : [])),
+    entries,
+    /** The newest entries, as many as are shown (HISTORY_PAGE at first). */
+    shownEntries: computed(() => entries.value.slice(0, shownCount.value)),
+    /** How many older versions are not shown yet. */
+    hiddenCount: computed(() => Math.max(0, entries.value.length - shownCount.value)),
+    /** Shows the next page of older versions. */
+    showOlder() {
+      shownCount.value += HISTORY_PAGE;
+    },
     problem: problem as ReadonlySignal<Problem | null>,
     confirming: confirming as ReadonlySignal<string | null>,
     restoreState: restoreState as ReadonlySignal<RestoreState>,
