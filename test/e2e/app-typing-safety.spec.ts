@@ -148,3 +148,45 @@ test('a history of 2,500 versions opens in pages of the newest, and older pages 
   // A figure, never a pass mark (timings on a shared machine).
   console.log(`history of 2500 versions: opened in ${opened} ms, back to the form in ${Date.now() - back} ms`);
 });
+
+test('an import is read, checked and merged in a worker: it names a run edited on two devices, and a file above the size limit is refused unread', async ({ page }) => {
+  const { writeBackup } = await import('../../src/io/backup/backup.ts');
+  const { MAX_BACKUP_BYTES } = await import('../../src/io/backup/size-limit.ts');
+  const { mkdtempSync, rmSync, openSync, ftruncateSync, closeSync } = await import('node:fs');
+  const { tmpdir } = await import('node:os');
+  const { join } = await import('node:path');
+  const backup = readBackupSync(fixtureText);
+  const first = backup.payload.revisions.find((r) => r.plannedRun === 3)!;
+  // Invented edits of run 3 on two devices from its first revision.
+  const editA = { ...first, id: '00000000-0000-4000-8000-00000000000a', rev: 2, device: '00000000-0000-4000-8000-0000000000d1', parents: [first.id], readings: [[68.7], [75.5]] };
+  const editB = { ...first, id: '00000000-0000-4000-8000-00000000000b', rev: 2, device: '00000000-0000-4000-8000-0000000000d2', parents: [first.id], readings: [[68.7], [71.9]] };
+  const text = await writeBackup({ studies: backup.payload.studies, revisions: [...backup.payload.revisions, editA, editB] }, { device: backup.device, exportedAt: backup.exportedAt, scope: 'all' });
+
+  const workers: string[] = [];
+  page.on('worker', (w) => workers.push(w.url()));
+  await page.goto('/#/export');
+  await expect(page.locator('.card')).toHaveCount(1);
+  await page.locator('input[type="file"]').setInputFiles({ name: 'two-devices.json', mimeType: 'application/json', buffer: Buffer.from(text) });
+  await expect(page.getByRole('status')).toContainText(`1 run was changed on two devices; both versions are kept in its history: run 3 of "${study.title}"`);
+  expect(workers.some((u) => /import-worker/.test(u))).toBe(true);
+  await page.goto(`/#/study/${study.id}`);
+  await expect(page.locator('.run-card[data-run="3"]').getByRole('group', { name: 'Run 3 has 2 current versions' })).toContainText('Gloss 75.5 GU');
+  await page.goto(`/#/study/${study.id}/analysis`);
+  await expect(page.locator('.warnings')).toContainText('Run 3 has 2 current revisions');
+
+  // A sparse file one byte above the limit: refused by its size, before any of it is read.
+  const dir = mkdtempSync(join(tmpdir(), 'trialbook-big-'));
+  try {
+    const big = join(dir, 'too-big.json');
+    const fd = openSync(big, 'w');
+    ftruncateSync(fd, MAX_BACKUP_BYTES + 1);
+    closeSync(fd);
+    await page.goto('/#/export');
+    workers.length = 0;
+    await page.locator('input[type="file"]').setInputFiles(big);
+    await expect(page.getByRole('alert')).toContainText('A backup file can be at most 128 MB; this one is 128.0 MB, so it was not read and nothing changed');
+    expect(workers).toEqual([]);
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+});
