@@ -3,6 +3,7 @@ import type { Analysis, AnovaTable } from '../../core/fit/analysis.ts';
 import { combinationLabel } from '../../core/fit/combination-label.ts';
 import { pValue } from '../../core/text/p-value.ts';
 import { curvatureStatement, lenthStatement, verdictText } from '../../core/text/verdict-text.ts';
+import { zeroIfRoundoff } from '../../core/text/roundoff-zero.ts';
 import { num, table } from './numbers.ts';
 
 function anovaText(t: AnovaTable): string {
@@ -14,6 +15,10 @@ function anovaText(t: AnovaTable): string {
 
 export function analysisText(a: Analysis): string {
   const out: string[] = [];
+  // Figures that are zero up to round-off beside the response's own scale print as 0.
+  let scale = 0;
+  for (const r of a.runs) scale = Math.max(scale, Math.abs(r.y));
+  const z = (x: number | null | undefined) => (x === null || x === undefined ? x : zeroIfRoundoff(x, scale));
   const how = a.method === 'yates' ? "Yates' algorithm (complete, balanced factorial)" : 'least squares (Householder QR)';
   out.push(`Analysis of ${a.response}: ${a.n} runs, fitted by ${how}, in coded units`);
   out.push('');
@@ -26,6 +31,8 @@ export function analysisText(a: Analysis): string {
   out.push('');
   out.push('Effects (effect = 2 x coefficient: the change from -1 to +1 with the other factors at 0)');
   const lenthCol = a.df.residual === 0;
+  // A pseudo standard error that is itself round-off (an exact fit) gives no Lenth t.
+  const lenthRoundoff = a.lenth !== null && zeroIfRoundoff(a.lenth.pse, scale) === 0;
   const head = ['term', 'letters', 'effect', 'coefficient', 'std error', 't', 'p', '95% CI of coefficient'];
   if (lenthCol) head.push('Lenth t');
   const rows = [
@@ -35,13 +42,13 @@ export function analysisText(a: Analysis): string {
       .map((t) => [
         t.name,
         t.estimates ?? t.letters,
-        num(t.effect),
-        num(t.coef),
+        num(z(t.effect)),
+        num(z(t.coef)),
         num(t.se),
         num(t.t),
         pValue(t.p),
-        t.ci ? `${num(t.ci[0])} to ${num(t.ci[1])}` : '-',
-        ...(lenthCol ? [num(t.lenthT)] : []),
+        t.ci ? `${num(z(t.ci[0]))} to ${num(z(t.ci[1]))}` : '-',
+        ...(lenthCol ? [lenthRoundoff ? '-' : num(t.lenthT)] : []),
       ]),
   ];
   out.push(table(head, rows));
@@ -74,10 +81,21 @@ export function analysisText(a: Analysis): string {
     out.push(verdictText(lof));
   }
   if (a.lenth) {
-    const [figures, marked] = lenthStatement(a.lenth, a.lenth.effects);
+    const l = a.lenth;
+    const effects = l.effects.map((e) => ({ ...e, effect: zeroIfRoundoff(e.effect, scale) }));
+    const [figures, marked] = lenthStatement({ ...l, pse: zeroIfRoundoff(l.pse, scale), me: zeroIfRoundoff(l.me, scale), sme: zeroIfRoundoff(l.sme, scale) }, effects);
     out.push('');
     out.push(figures);
     out.push(`  ${marked}`);
+    // Lenth's effects come from the saturated fit over the factorial runs; where one differs
+    // from the table's effect of the same term (beyond round-off), each is labelled.
+    const table = new Map(a.terms.map((t) => [t.estimates ?? t.letters, zeroIfRoundoff(t.effect, scale)]));
+    const differ = effects.filter((e) => table.has(e.letters) && num(table.get(e.letters)) !== num(e.effect));
+    if (differ.length > 0) {
+      out.push(
+        `  Lenth's effects are those of the saturated fit over the factorial runs only; the effects table's are the model's over all runs: ${differ.map((e) => `${e.letters} ${num(e.effect)} (Lenth) and ${num(table.get(e.letters))} (table)`).join('; ')}`,
+      );
+    }
   }
   if (a.aliased.length > 0) {
     out.push('');
