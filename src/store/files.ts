@@ -66,7 +66,13 @@ export interface ImportReport {
   readonly summary: string;
 }
 
-function summarize(r: Omit<ImportReport, 'summary'>): string {
+/** The diverged runs named for the person: run number and study title, and whether one device made both edits. */
+interface ConflictNames {
+  readonly titleOf: (studyId: string) => string;
+  readonly oneDevice: (c: MergeConflict) => boolean;
+}
+
+function summarize(r: Omit<ImportReport, 'summary'>, names?: ConflictNames): string {
   const n = r.setAside.length;
   const clashes = r.setAside.filter((s) => s.field !== null);
   const named = clashes
@@ -80,7 +86,14 @@ function summarize(r: Omit<ImportReport, 'summary'>): string {
   if (r.studiesAdded + r.revisionsAdded === 0) return (n === 0 ? 'Nothing new: everything in the file was already here.' : 'Nothing new was merged.') + aside;
   const parts = [`${r.studiesAdded} new ${r.studiesAdded === 1 ? 'study' : 'studies'}`, `${r.runsAdded} new logged ${r.runsAdded === 1 ? 'run' : 'runs'}`, `${r.revisionsAdded} new ${r.revisionsAdded === 1 ? 'revision' : 'revisions'}`];
   const c = r.conflicts.length;
-  return `Imported ${parts.join(', ')}.` + (c > 0 ? ` ${c} ${c === 1 ? 'run was' : 'runs were'} changed on two devices; both revisions are kept in ${c === 1 ? 'its' : 'their'} history.` : '') + aside;
+  if (c === 0) return `Imported ${parts.join(', ')}.` + aside;
+  const where = names && r.conflicts.every(names.oneDevice) ? 'in two places on one device' : 'on two devices';
+  const which = names ? `: ${r.conflicts.map((x) => `run ${x.plannedRun} of "${names.titleOf(x.studyId)}"`).join(', ')}` : '';
+  return (
+    `Imported ${parts.join(', ')}. ${c} ${c === 1 ? 'run was' : 'runs were'} changed ${where}; both revisions are kept in ${c === 1 ? 'its' : 'their'} history${which}. ` +
+    `${c === 1 ? 'It is' : 'They are'} marked on the run sheet and the run's form, where one revision can be kept.` +
+    aside
+  );
 }
 
 /**
@@ -125,7 +138,13 @@ export async function mergeBackup(store: Store, backup: Pick<Backup, 'payload'> 
         setAside: plan.setAside,
         setAsideNew,
       };
-      return { ...report, summary: summarize(report) };
+      const titles = new Map([...haveStudies.filter((x): x is StudyRecord => !!x), ...plan.newStudies].map((x) => [x.id, x.title]));
+      const deviceOf = new Map([...history, ...plan.newRevisions].map((x) => [x.id, x.device]));
+      const names: ConflictNames = {
+        titleOf: (id) => titles.get(id) ?? id,
+        oneDevice: (c) => new Set(c.revisionIds.map((id) => deviceOf.get(id))).size === 1,
+      };
+      return { ...report, summary: summarize(report, names) };
     }),
   );
 }

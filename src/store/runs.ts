@@ -3,7 +3,8 @@
  * save are fixed when the form opens, so a double tap or a retry saves once. Every change (an
  * edit, an exclusion, a restore) appends a revision; nothing is overwritten. A save that finds
  * the run changed since its form opened (another tab, another window) still keeps both
- * revisions and says so. Each write is one transaction across all the tables it touches, and
+ * revisions and says so. A save drops the run's draft only when the draft holds what was saved
+ * (another tab's typing stays). Each write is one transaction across all the tables it touches, and
  * resolves only once the transaction is on disk.
  */
 import { InputError } from '../core/errors.ts';
@@ -18,6 +19,7 @@ import {
   type RunValues,
   type StudyRecord,
 } from '../core/study/study.ts';
+import { divergedRuns, type DivergedRun } from '../core/study/diverged-runs.ts';
 import { canonicalJson } from '../core/records/canonical-json.ts';
 import { sha256, utf8Encode } from '../core/records/sha256.ts';
 import { appendRevisions } from './append-revisions.ts';
@@ -109,9 +111,11 @@ const sameSet = (a: readonly string[], b: readonly string[]) => a.length === b.l
 const valuesKey = (v: RunValues) =>
   canonicalJson({ actual: v.actual, readings: v.readings, loggedAt: v.loggedAt, operator: v.operator, notes: v.notes, excluded: v.excluded, reason: v.reason });
 
+/** True when a form's typing reads as exactly these values (a blank time takes the saved one: the form fills it at saving). */
 function sameTyping(study: StudyRecord, form: RunForm, values: RunValues): boolean {
   try {
-    return valuesKey(checkRunValues(study, parseRunForm(study, form))) === valuesKey(values);
+    const typed = form.loggedAt.trim() === '' ? { ...form, loggedAt: values.loggedAt ?? '' } : form;
+    return valuesKey(checkRunValues(study, parseRunForm(study, typed))) === valuesKey(values);
   } catch {
     return false; // typing that does not read as values is not what was saved: the draft stays
   }
@@ -166,7 +170,10 @@ async function appendRevision(store: Store, input: SaveInput, restoredFrom: stri
   });
   const revision = appended.revisions[0];
   const run = appended.runs[0];
-  await db.drafts.delete(input.runId);
+  // The run's draft goes only when it holds what was just saved: a draft of other typing
+  // (another tab's form on this run, typed after this one) stays, so no typing is lost.
+  const draft = await db.drafts.get(input.runId);
+  if (draft && sameTyping(study, draft.form, values)) await db.drafts.delete(input.runId);
   return { run, revision, duplicate: false, changedSince };
 }
 
@@ -179,7 +186,7 @@ async function writeRevision(store: Store, input: SaveInput, restoredFrom: strin
   return result;
 }
 
-/** Saves a run's values as a new revision (and drops its draft); resolves once on disk. */
+/** Saves a run's values as a new revision (and drops its draft when the draft holds these values); resolves once on disk. */
 export async function saveRun(store: Store, input: SaveInput): Promise<SaveResult> {
   return writeRevision(store, input);
 }
@@ -195,6 +202,16 @@ export async function getRun(store: Store, runId: string): Promise<LoggedRun> {
 export async function listRuns(store: Store, studyId: string): Promise<LoggedRun[]> {
   const runs = await guarded(() => store.db.runs.where('studyId').equals(studyId).toArray());
   return runs.sort((a, b) => a.plannedRun - b.plannedRun || (a.id < b.id ? -1 : 1));
+}
+
+/** The logged runs of a study with two or more current revisions (edits that diverged), each with those revisions. */
+export async function listDivergedRuns(store: Store, studyId: string, runs?: readonly LoggedRun[]): Promise<DivergedRun[]> {
+  const all = runs ?? (await listRuns(store, studyId));
+  const split = all.filter((r) => r.heads.length > 1);
+  if (split.length === 0) return [];
+  const heads = await guarded(() => store.db.revisions.bulkGet(split.flatMap((r) => [...r.heads])));
+  const byId = new Map(heads.filter((r): r is RunRevision => r !== undefined).map((r) => [r.id, r]));
+  return divergedRuns(split, (id) => byId.get(id));
 }
 
 /** Every revision of a logged run, oldest first (the last one is current). */

@@ -1,7 +1,9 @@
 /**
  * Opening the store: the database, this device's id, and what happens when another tab
- * upgrades the database (drafts are written, the database closes, and the screens are told) or
- * when this tab's upgrade is blocked by another tab (the screens are told what to do).
+ * upgrades the database (drafts are written, the database closes, and the screens are told),
+ * when the browser deletes the database under the page (the screens are told, and nothing claims
+ * a draft was kept), or when this tab's upgrade is blocked by another tab (the screens are told
+ * what to do).
  */
 import type { Dexie, DexieOptions } from 'dexie';
 import { DB_NAME, TrialbookDB, declareSchema } from './db.ts';
@@ -24,6 +26,8 @@ export interface StoreOptions {
   readonly declare?: (db: Dexie) => void;
   /** Told when another tab upgrades the database and this tab has closed it. */
   readonly onClosed?: (message: string) => void;
+  /** Told when the browser removed the database under the open page (its site data cleared). */
+  readonly onCleared?: (message: string) => void;
   /** Told when opening waits for another tab to let go of an older version. */
   readonly onBlocked?: (message: string) => void;
   /** The clock for times shown to people and for the backup reminder (tests set it). */
@@ -46,6 +50,8 @@ export interface Store {
 
 export const CLOSED_FOR_UPGRADE =
   'Trialbook was updated in another tab, so this tab has saved your draft and closed its database. Reload this page to go on with the new version.';
+export const STORAGE_CLEARED =
+  "The browser removed this device's Trialbook records (the site's stored data was cleared), so nothing typed here can be saved on this device any more, and no draft was kept. What is on this screen is still here, in this page only: download it now, before you close or reload the page.";
 export const OPEN_BLOCKED =
   'Trialbook is waiting for another tab or window that still has an older version open. Close or reload the other Trialbook tabs, and this one will go on by itself.';
 
@@ -70,11 +76,24 @@ export async function openStore(options: StoreOptions = {}): Promise<Store> {
   });
   // Subscribed after Dexie's own handler, so it runs first; returning false stops Dexie from
   // closing at once, so running draft writes finish before the close.
-  db.on('versionchange', () => {
+  // The database deleted under the page (site data cleared): a version change to no version, or
+  // the browser closing the connection itself. Nothing can be written any more; say so plainly.
+  const cleared = () => {
+    if (store.closed !== null) return;
+    store.closed = STORAGE_CLEARED;
+    db.close({ disableAutoOpen: true });
+    options.onCleared?.(STORAGE_CLEARED);
+  };
+  db.on('versionchange', (event: IDBVersionChangeEvent) => {
+    if (event.newVersion === null) {
+      cleared();
+      return false;
+    }
     void (async () => {
       await Promise.allSettled([...store.pending]);
+      if (store.closed !== null) return;
+      store.closed = CLOSED_FOR_UPGRADE; // first: the close below fires 'close', which must not read as a clearing
       db.close({ disableAutoOpen: true });
-      store.closed = CLOSED_FOR_UPGRADE;
       options.onClosed?.(CLOSED_FOR_UPGRADE);
     })();
     return false;
@@ -89,6 +108,8 @@ export async function openStore(options: StoreOptions = {}): Promise<Store> {
       return id;
     });
     (store as { device: string }).device = device;
+    // Fired by every close; the store's own closes set `closed` first, so only the browser's counts.
+    db.on('close', cleared);
   } catch (err) {
     db.close();
     const e = toStorageError(err);
@@ -100,6 +121,6 @@ export async function openStore(options: StoreOptions = {}): Promise<Store> {
 
 /** Closes the store (a later call to any store function fails with a clear message). */
 export function closeStore(store: Store): void {
-  store.closed = 'closed';
+  store.closed = 'closed'; // first, so the close is not taken for the browser's clearing
   store.db.close({ disableAutoOpen: true });
 }

@@ -5,7 +5,7 @@ import { BACKUP_VERSION, readBackup } from '../../src/io/backup/backup.ts';
 import { canonicalJson } from '../../src/core/records/canonical-json.ts';
 import { exportBackup, importBackup, payloadOf } from '../../src/store/files.ts';
 import { createStudy } from '../../src/store/studies.ts';
-import { excludeRun, getRun, openNewRun, openRun, saveRun } from '../../src/store/runs.ts';
+import { excludeRun, getRun, listDivergedRuns, openNewRun, openRun, saveRun } from '../../src/store/runs.ts';
 import { safetyStatus, persistenceAnswer, BACKUP_REMINDER_MS } from '../../src/store/status.ts';
 import type { Store } from '../../src/store/store.ts';
 import { coatingPlan, freshStore } from './helpers.ts';
@@ -83,6 +83,12 @@ describe('backup export and import', () => {
     expect(r.conflicts).toHaveLength(1);
     expect(r.conflicts[0]).toMatchObject({ runId: shared.run.id, plannedRun: 1 });
     expect(r.summary).toMatch(/1 run was changed on two devices; both revisions are kept/);
+    expect(r.summary).toContain(`run 1 of "${study.title}"`);
+    expect(r.summary).toMatch(/marked on the run sheet and the run's form/);
+    // The run is listed with both current revisions, the one used last, both values shown.
+    const split = await listDivergedRuns(ab, study.id);
+    expect(split.map((d) => [d.plannedRun, d.oneDevice])).toEqual([[1, false]]);
+    expect([split[0].current, ...split[0].others].map((x) => x.readings[0][0]).sort()).toEqual([69.6, 70.4]);
     const merged = await getRun(ab, shared.run.id);
     expect(merged.heads).toHaveLength(2);
     expect(merged.revisions).toBe(3);

@@ -234,6 +234,39 @@ describe('drafts', () => {
     expect(await getDraft(again, state.runId)).toBeNull();
   });
 
+  it('a save keeps the draft of another tab\'s typing on the same run, and drops a draft of exactly what it saved', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, coatingPlan());
+    const first = await openNewRun(store, study.id, 4);
+    const saved = await saveRun(store, { ...first, studyId: study.id, values: parseRunForm(study, { ...first.form, readings: ['70', '90'] }) });
+    // Two tabs open the logged run; tab 1 types 71, then tab 2 types 55 (its draft is the last one kept).
+    const tab1 = await openRun(store, first.runId);
+    const tab2 = await openRun(store, first.runId);
+    await saveDraft(store, { ...tab1, studyId: study.id }, { ...tab1.form, readings: ['71', '90'] });
+    await saveDraft(store, { ...tab2, studyId: study.id }, { ...tab2.form, readings: ['55', '90'] });
+    const s1 = await saveRun(store, { ...tab1, studyId: study.id, values: parseRunForm(study, { ...tab1.form, readings: ['71', '90'] }) });
+    expect(s1.changedSince).toBeNull();
+    // Tab 2's typing is still there after a reload of tab 2.
+    const reloaded = await openRun(store, first.runId);
+    expect(reloaded.fromDraft).toBe(true);
+    expect(reloaded.form.readings).toEqual(['55', '90']);
+    expect(reloaded.parents).toEqual([saved.revision.id]); // it started before tab 1's save
+    const s2 = await saveRun(store, { ...reloaded, studyId: study.id, values: parseRunForm(study, reloaded.form) });
+    expect(s2.changedSince).toBe(s1.revision.id);
+    expect(await getDraft(store, first.runId)).toBeNull();
+    expect([...(await getRun(store, first.runId)).heads].sort()).toEqual([s1.revision.id, s2.revision.id].sort());
+  });
+
+  it('a new run saved with a blank time drops its draft (the time is filled at saving)', async () => {
+    const store = await freshStore();
+    const study = await createStudy(store, coatingPlan());
+    const state = await openNewRun(store, study.id, 5);
+    const form = { ...state.form, loggedAt: '', readings: ['70', '90'] };
+    await saveDraft(store, { ...state, studyId: study.id }, form);
+    await saveRun(store, { ...state, studyId: study.id, values: parseRunForm(study, { ...form, loggedAt: '2024-05-02T12:00:00.000Z' }) });
+    expect(await getDraft(store, state.runId)).toBeNull();
+  });
+
   it('a failed save keeps the draft', async () => {
     const store = await freshStore();
     const study = await createStudy(store, coatingPlan());

@@ -17,7 +17,7 @@ import { StorageError } from '../../src/store/errors.ts';
 import { saveDraft } from '../../src/store/drafts.ts';
 import { listRuns, openNewRun } from '../../src/store/runs.ts';
 import { createStudy, listStudies } from '../../src/store/studies.ts';
-import { CLOSED_FOR_UPGRADE, OPEN_BLOCKED, closeStore, openStore } from '../../src/store/store.ts';
+import { CLOSED_FOR_UPGRADE, OPEN_BLOCKED, STORAGE_CLEARED, closeStore, openStore } from '../../src/store/store.ts';
 import { coatingPlan, freshStore } from './helpers.ts';
 
 const fixtureDir = fileURLToPath(new URL('../fixtures/', import.meta.url));
@@ -137,6 +137,36 @@ describe('schema upgrades', () => {
     expect((await next.table('drafts').get(state.runId)).form.notes).toBe('typed just before the update');
     await expect(listStudies(store)).rejects.toThrow(StorageError);
     next.close();
+  });
+
+  it('when the browser deletes the database under the page, the store says so plainly, claims no draft, and writes nothing', async () => {
+    const closed: string[] = [];
+    const cleared: string[] = [];
+    const store = await freshStore({ onClosed: (m) => closed.push(m), onCleared: (m) => cleared.push(m) });
+    const study = await createStudy(store, coatingPlan());
+    const state = await openNewRun(store, study.id, 1);
+    // What clearing the site's data does to an open database: it is deleted (a version change to no version).
+    await new Promise<void>((resolve, reject) => {
+      const req = indexedDB.deleteDatabase(store.db.name);
+      req.onsuccess = () => resolve();
+      req.onerror = () => reject(req.error);
+    });
+    expect(cleared).toEqual([STORAGE_CLEARED]);
+    expect(closed).toEqual([]); // not "updated in another tab"
+    expect(store.closed).toBe(STORAGE_CLEARED);
+    expect(STORAGE_CLEARED).not.toMatch(/kept as a draft|saved your draft|another tab/);
+    // A draft write now fails (it must not recreate an empty database behind the person's back).
+    await expect(saveDraft(store, { ...state, studyId: study.id }, { ...state.form, notes: 'typed after the clearing' })).rejects.toThrow(StorageError);
+    const names = (await indexedDB.databases()).map((d) => d.name);
+    expect(names).not.toContain(store.db.name);
+  });
+
+  it('the store\'s own close is not taken for a clearing', async () => {
+    const cleared: string[] = [];
+    const store = await freshStore({ onCleared: (m) => cleared.push(m) });
+    closeStore(store);
+    expect(cleared).toEqual([]);
+    expect(store.closed).toBe('closed');
   });
 
   it('an open blocked by another tab that holds the old version says what to do, then goes on', async () => {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { buildDesign } from '../../src/core/design/build-design.ts';
 import { planPower } from '../../src/core/plan/power.ts';
 import { powerInWords } from '../../src/core/plan/power-words.ts';
-import { choiceName, fractionOptions, plackettBurmanRunsOf, powerView } from '../../src/ui/models/new-study-model.ts';
+import { choiceName, factorMessage, fractionOptions, plackettBurmanRunsOf, powerView } from '../../src/ui/models/new-study-model.ts';
 
 const three = ['A1', 'B1', 'C1'].map((name) => ({ kind: 'numeric' as const, name, low: 0, high: 1 }));
 
@@ -37,5 +37,17 @@ describe('the planning form: design choices and the power of the plan', () => {
   it('bad input: more factors than a 12-run design takes is refused by the builder with the count it takes', () => {
     const twelve = Array.from({ length: 12 }, (_, i) => ({ kind: 'numeric' as const, name: `F${i + 1}`, low: 0, high: 1 }));
     expect(() => buildDesign({ factors: twelve, plackettBurman: 12 })).toThrow('A 12-run Plackett-Burman design takes up to 11 factors, got 12');
+  });
+});
+
+const row = (over: Partial<Parameters<typeof factorMessage>[0]>) => ({ key: 1, kind: 'numeric' as const, name: 'Pressure', unit: 'kPa', low: '100', high: '120', levelA: '', levelB: '', ...over });
+
+describe('factorMessage: the planning form refuses what a new factor may not be', () => {
+  it('a range too narrow to code reliably is refused at planning, naming the factor', () => {
+    expect(factorMessage(row({}), 0)).toBeNull();
+    expect(factorMessage(row({ low: '1000', high: '1000.0000001' }), 0)).toMatch(/^Pressure: the range 1000 to 1000.0000001 is too narrow to code reliably/);
+  });
+  it('a name the command line could not use is refused (the same rule as design --factor)', () => {
+    expect(factorMessage(row({ name: 'Temp, C' }), 0)).toMatch(/contains a comma/);
   });
 });

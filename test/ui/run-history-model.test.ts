@@ -35,9 +35,19 @@ describe('run history entries', () => {
     expect(entries.map((e) => e.isCurrent)).toEqual([true, false, false, false]);
     expect(entries[0].restoredFromNumber).toBe(1);
     expect(entries.map((e) => e.sharesParent)).toEqual([false, true, true, false]);
+    expect(entries[1].forkOnThisDevice).toBe(false); // dev-a and dev-b: two devices
     expect(entries[1].changes).toEqual(['notes: "tab two"']);
     expect(entries[3].first).toBe(true);
     // The restore is described from the latest revision it was made from.
     expect(entries[0].changes).toEqual(['notes removed']);
+  });
+
+  it('edits from the same version saved by one device (two tabs) are in two places, not on two devices', () => {
+    const a = rev('a', 1, []);
+    const b = rev('b', 2, ['a'], { notes: 'tab one' });
+    const c = rev('c', 2, ['a'], { notes: 'tab two' });
+    const entries = historyEntries(study, [a, b, c]);
+    expect(entries.map((e) => e.sharesParent)).toEqual([true, true, false]);
+    expect(entries.slice(0, 2).map((e) => e.forkOnThisDevice)).toEqual([true, true]);
   });
 });

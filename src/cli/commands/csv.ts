@@ -1,17 +1,20 @@
 /** `csv BACKUP --study ID-OR-NAME [--bom]`: a study's records from a backup as the app's CSV export. */
 import { InputError } from '../../core/errors.ts';
 import { readBackupSync } from '../../io/backup/backup.ts';
-import { selectStudy, studyRuns } from '../../io/backup/select-study.ts';
+import { backupDivergedRuns, selectStudy, studyRuns } from '../../io/backup/select-study.ts';
+import { divergedNote } from '../../core/text/diverged-text.ts';
 import { studyCsv } from '../../io/csv/study-csv.ts';
 import { parseCommandArgs } from '../args.ts';
 import type { Command } from '../command.ts';
 import { readTextFile } from '../read-text-file.ts';
+import { visibleText } from '../visible-text.ts';
 
 const USAGE = `Usage: npm run --silent cli -- csv BACKUP.json --study ID-OR-NAME [--bom]
 
 Writes one study of a Trialbook backup as CSV on stdout, the same file the app's CSV export
 makes: one row per run with its planned, actual and coded settings, each response's mean and
-readings, time, operator, notes, excluded and reason.
+readings, time, operator, notes, excluded and reason. A run with two current revisions (edited
+in two places) is named on stderr with both values; the file has its current one.
 
   --study ID-OR-NAME   the study's id, or its name (a name that matches two studies is refused,
                        listing their ids)
@@ -28,6 +31,10 @@ export const csv: Command = {
     const text = readTextFile(positionals[0], { backup: true });
     const backup = readBackupSync(text);
     const study = selectStudy(backup, values.study);
-    return studyCsv(study, studyRuns(backup, study.id), { bom: values.bom === true });
+    const runs = studyRuns(backup, study.id);
+    // The file keeps its columns (each run's current revision); a run with two current
+    // revisions is named on stderr with both values, so the export never picks silently.
+    for (const d of backupDivergedRuns(backup, runs)) process.stderr.write(visibleText(`trialbook csv: ${divergedNote(study, d)}\n`));
+    return studyCsv(study, runs, { bom: values.bom === true });
   },
 };

@@ -4,6 +4,7 @@ import { combinationLabel } from '../../core/fit/combination-label.ts';
 import { effectWords } from '../../core/text/effect-words.ts';
 import { pValue } from '../../core/text/p-value.ts';
 import { curvatureStatement, lenthStatement, verdictText } from '../../core/text/verdict-text.ts';
+import { zeroIfRoundoff } from '../../core/text/roundoff-zero.ts';
 import { num, table } from './numbers.ts';
 
 function anovaText(t: AnovaTable): string {
@@ -28,15 +29,19 @@ export interface AnalysisTextOptions {
  */
 export function effectsTable(a: Analysis, unit?: string): string[] {
   const u = unit ? ` ${unit}` : '';
+  // Figures that are zero up to round-off print as 0 (core/text/roundoff-zero.ts), on the scale of the responses.
+  let scale = 0;
+  for (const r of a.runs) scale = Math.max(scale, Math.abs(r.y));
+  const z = (x: number) => zeroIfRoundoff(x, scale);
   const marks = new Map((a.lenth?.effects ?? []).map((e) => [e.letters, e.mark ?? null]));
   const byLenth = a.df.residual === 0 && a.lenth !== null;
   const rows = [...a.terms]
     .sort((x, y) => Math.abs(y.effect) - Math.abs(x.effect))
     .map((t, i) => {
       const letters = t.estimates ?? t.letters;
-      const interval = t.ci ? [2 * t.ci[0], 2 * t.ci[1]] : byLenth ? [t.effect - a.lenth!.me, t.effect + a.lenth!.me] : null;
+      const interval = t.ci ? [z(2 * t.ci[0]), z(2 * t.ci[1])] : byLenth ? [z(t.effect - a.lenth!.me), z(t.effect + a.lenth!.me)] : null;
       const words = effectWords(t.p, byLenth ? (marks.get(letters) ?? null) : undefined) ?? 'no test possible';
-      return [`${i + 1}. ${t.name} (${letters})`, `${num(t.effect)}${u}`, interval ? `${num(interval[0])} to ${num(interval[1])}${u}` : '-', pValue(t.p), words];
+      return [`${i + 1}. ${t.name} (${letters})`, `${num(z(t.effect))}${u}`, interval ? `${num(interval[0])} to ${num(interval[1])}${u}` : '-', pValue(t.p), words];
     });
   const how = byLenth ? "95% interval: effect +- Lenth's margin of error; verdict by Lenth's method" : "95% interval from the t distribution on the residual df; verdict by p: clear < 0.01, likely < 0.05, possible < 0.10";
   return [
@@ -47,18 +52,24 @@ export function effectsTable(a: Analysis, unit?: string): string[] {
 
 /** The coefficients in coded units as the fitted equation, one term a line, in model order. */
 export function fittedEquation(a: Analysis): string[] {
+  let scale = 0;
+  for (const r of a.runs) scale = Math.max(scale, Math.abs(r.y));
   const out = [`Fitted equation in coded units (each letter from -1 to +1${a.blocks ? ', for an average block' : ''})`];
   out.push(`  ${a.response} = ${num(a.intercept.coef)}`);
   for (const t of a.terms) {
     const c = t.coef;
     const sign = c < 0 ? '-' : '+';
-    out.push(`      ${sign} ${num(Math.abs(c))} ${t.estimates ? `[${t.estimates}]` : t.letters}`);
+    out.push(`      ${sign} ${num(Math.abs(zeroIfRoundoff(c, scale)))} ${t.estimates ? `[${t.estimates}]` : t.letters}`);
   }
   return out;
 }
 
 export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): string {
   const out: string[] = [];
+  // Figures that are zero up to round-off beside the response's own scale print as 0.
+  let scale = 0;
+  for (const r of a.runs) scale = Math.max(scale, Math.abs(r.y));
+  const z = (x: number | null | undefined) => (x === null || x === undefined ? x : zeroIfRoundoff(x, scale));
   const how = a.method === 'yates' ? "Yates' algorithm (complete, balanced factorial)" : 'least squares (Householder QR)';
   out.push(`Analysis of ${a.response}: ${a.n} runs, fitted by ${how}, in coded units`);
   if (a.transform.lambda !== 1) {
@@ -110,10 +121,21 @@ export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): st
     out.push(verdictText(lof));
   }
   if (a.lenth) {
-    const [figures, marked] = lenthStatement(a.lenth, a.lenth.effects);
+    const l = a.lenth;
+    const effects = l.effects.map((e) => ({ ...e, effect: zeroIfRoundoff(e.effect, scale) }));
+    const [figures, marked] = lenthStatement({ ...l, pse: zeroIfRoundoff(l.pse, scale), me: zeroIfRoundoff(l.me, scale), sme: zeroIfRoundoff(l.sme, scale) }, effects);
     out.push('');
     out.push(figures);
     out.push(`  ${marked}`);
+    // Lenth's effects come from the saturated fit over the factorial runs; where one differs
+    // from the table's effect of the same term (beyond round-off), each is labelled.
+    const table = new Map(a.terms.map((t) => [t.estimates ?? t.letters, zeroIfRoundoff(t.effect, scale)]));
+    const differ = effects.filter((e) => table.has(e.letters) && num(table.get(e.letters)) !== num(e.effect));
+    if (differ.length > 0) {
+      out.push(
+        `  Lenth's effects are those of the saturated fit over the factorial runs only; the effects table's are the model's over all runs: ${differ.map((e) => `${e.letters} ${num(e.effect)} (Lenth) and ${num(table.get(e.letters))} (table)`).join('; ')}`,
+      );
+    }
   }
   if (a.aliased.length > 0) {
     out.push('');

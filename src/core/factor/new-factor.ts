@@ -12,10 +12,14 @@
  *   it cannot be typed on a form and it would change how a terminal shows a report.
  * - A numeric factor's low setting is below its high one: the low is coded -1, and a reversed
  *   pair would turn every effect's sign silently.
+ * - Its range is wide enough to code reliably: the round-off of a setting, about
+ *   Number.EPSILON * max(|low|, |high|), stays within SETTING_TOLERANCE of half the range, so
+ *   a coded setting is accurate to that tolerance (1000 to 1000.0000001 is refused).
  * Source: common practice (the separators are this tool's own option syntax).
  */
 import { InputError } from '../errors.ts';
 import type { FactorSpec } from './factor.ts';
+import { SETTING_TOLERANCE } from '../tolerance.ts';
 
 /** The characters the command line uses as separators, with what each separates. */
 export const RESERVED_NAME_CHARACTERS: readonly { readonly char: string; readonly word: string; readonly use: string }[] = [
@@ -73,6 +77,14 @@ export function checkNewFactor(spec: FactorSpec): void {
   if (spec.low > spec.high) {
     throw new InputError(
       `${name}: the low setting (${spec.low}) is above the high setting (${spec.high}); the low is coded -1 and must be the smaller, so give ${spec.high} as the low and ${spec.low} as the high`,
+    );
+  }
+  const size = Math.max(Math.abs(spec.low), Math.abs(spec.high));
+  const half = spec.high / 2 - spec.low / 2;
+  if (spec.low < spec.high && Number.EPSILON * size > SETTING_TOLERANCE * half) {
+    throw new InputError(
+      `${name}: the range ${spec.low} to ${spec.high} is too narrow to code reliably: coding divides by half the range (${half}), so the round-off of settings near ${size} ` +
+        `would exceed the ${SETTING_TOLERANCE} within which two coded settings count as the same; widen the range, or give the factor as an offset from a reference (for example 0 to ${spec.high - spec.low} above ${spec.low})`,
     );
   }
 }

@@ -3,7 +3,9 @@
  * Throws InputError, with what was needed and what came, for: rows of settings that do not match
  * the responses, fewer runs than the intercept and the main effects need (k + 1), a response or a
  * setting that is not a finite number, a factor with the same setting in every run, or a
- * response with no variation (spread within CONSTANT_TOLERANCE of its magnitude; common practice).
+ * response with no variation: spread within CONSTANT_TOLERANCE of the values' own magnitude,
+ * max |y| (common practice), so the check is the same at every scale (1e-14 m and 1e14 both
+ * pass when they differ by 20 %; only values that are equal, or equal up to round-off, are refused).
  * Cost O(n k).
  * Example: validateResponseData({ ..., y: [5, 5, 5, 5] }) throws "Gloss is the same (5) in every run: ...".
  */
@@ -41,7 +43,8 @@ export function validateResponseData(data: ResponseData): void {
   let lo = Infinity;
   let hi = -Infinity;
   for (const v of y) (lo = Math.min(lo, v)), (hi = Math.max(hi, v));
-  if (hi - lo <= CONSTANT_TOLERANCE * Math.max(1, Math.abs(hi))) {
+  // Relative to the values' own scale (no absolute floor); all zeros give 0 <= 0 and are refused.
+  if (hi - lo <= CONSTANT_TOLERANCE * Math.max(Math.abs(lo), Math.abs(hi))) {
     throw new InputError(`${response} is the same (${shortNumber(lo)}) in every run: there is no variation to analyze`);
   }
 }

@@ -5,12 +5,16 @@
  * repeat measurements: their mean is the run's value, and they are never counted as replicates
  * (true replicates are separate runs of the plan). The planned coded settings come along: the
  * nominal plan decides what the runs can estimate (fit/nominal-settings.ts).
+ * An actual setting far outside the planned range (farOutsideSettings) is named in the
+ * messages with its run.
  * Example: a run with readings [10, 12] contributes one row with y = 11.
  */
 import { InputError } from '../errors.ts';
 import { toCoded } from '../factor/coding.ts';
 import type { Response } from './response.ts';
 import type { ResponseData } from './response-data.ts';
+import { farOutsideSettings } from '../factor/far-outside.ts';
+import { farOutsideText } from '../text/far-outside-text.ts';
 import { meanReading, plannedRunOf, type LoggedRun, type StudyPlan } from './study.ts';
 
 /** Finds a response by name (case-insensitive, surrounding spaces ignored); throws listing the names otherwise. */
@@ -43,6 +47,7 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
   let excluded = 0;
   let missing = 0;
   let repeated = 0;
+  const farNotes: string[] = [];
   for (const run of ordered) {
     if (run.excluded) {
       excluded++;
@@ -55,6 +60,8 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
       continue;
     }
     if (readings.length > 1) repeated++;
+    // A setting far outside the plan (a slipped digit) is named, as the fit extrapolates through it.
+    for (const far of farOutsideSettings(study.factors, run.actual)) farNotes.push(farOutsideText(`Run ${run.plannedRun}`, study.factors[far.factor], far));
     coded.push(study.factors.map((f, i) => toCoded(f, run.actual[i])));
     y.push(mean);
     const plan = plannedRunOf(study, run.plannedRun);
@@ -73,6 +80,7 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
   if (repeated > 0) {
     messages.push(`${plural(repeated, 'run has', 'runs have')} several readings of ${response.name}: each run's mean is used, and repeat readings are not counted as replicates`);
   }
+  messages.push(...farNotes);
   const blocked = blocks.some((b) => b !== 1);
   return {
     factors: study.factors,

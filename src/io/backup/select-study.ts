@@ -2,6 +2,8 @@
  * Picking one study out of a backup by id or by name, and the data of one of its responses for
  * the analysis (what the command line's analyze and csv commands read from a backup).
  */
+import { divergedRuns, type DivergedRun } from '../../core/study/diverged-runs.ts';
+import { divergedNote } from '../../core/text/diverged-text.ts';
 import { InputError } from '../../core/errors.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
 import { responseDataFromRuns } from '../../core/study/run-data.ts';
@@ -69,5 +71,16 @@ export function studyRuns(backup: Pick<Backup, 'payload'>, studyId: string): Log
 export function backupResponseData(backupText: string, studyRef: string, responseName: string): ResponseData {
   const backup = readBackupSync(backupText);
   const study = selectStudy(backup, studyRef);
-  return responseDataFromRuns(study, studyRuns(backup, study.id), responseName);
+  const runs = studyRuns(backup, study.id);
+  const data = responseDataFromRuns(study, runs, responseName);
+  // Runs edited in two places are named with both values (the current one is still the one used).
+  const split = backupDivergedRuns(backup, runs);
+  return split.length === 0 ? data : { ...data, messages: [...data.messages, ...split.map((d) => divergedNote(study, d))] };
+}
+
+/** The runs among `runs` (of a backup) with two or more current revisions, each with those revisions. */
+export function backupDivergedRuns(backup: Pick<Backup, 'payload'>, runs: readonly LoggedRun[]): DivergedRun[] {
+  if (runs.every((r) => r.heads.length < 2)) return [];
+  const byId = new Map(backup.payload.revisions.map((r) => [r.id, r]));
+  return divergedRuns(runs, (id) => byId.get(id));
 }

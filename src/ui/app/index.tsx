@@ -5,6 +5,9 @@
 import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
 import { ProblemBox } from '../components/problem-box/index.tsx';
+import { onScreenFiles, hasOnScreen } from '../lib/on-screen.ts';
+import { downloadText } from '../lib/save-file.ts';
+import { storageCleared } from '../lib/storage-cleared.ts';
 import { AppModel } from '../models/app-model.ts';
 import { RouterModel } from './router-model.ts';
 import { whenIdle } from '../lib/when-idle.ts';
@@ -12,6 +15,11 @@ import { preloadAllScreens, preloadScreen, RouteScreen } from './route-screen.ts
 import { hrefTo } from './routes.ts';
 
 export type AppProps = Record<string, never>;
+
+/** Downloads what the open screen holds (and nothing else), at once. */
+function downloadOnScreen() {
+  for (const f of onScreenFiles()) downloadText(f.text, f.name, 'application/json');
+}
 
 export function App(_props: AppProps) {
   const app = useModel(AppModel);
@@ -39,9 +47,26 @@ export function App(_props: AppProps) {
           localhost on this computer.
         </p>
       )}
-      {app.closed.value && (
+      {app.closed.value && storageCleared.value === null && (
         <p class="warning" role="alert">
           {app.closed.value}
+        </p>
+      )}
+      {storageCleared.value !== null && (
+        <div class="warning records-gone" role="alert">
+          <p>{storageCleared.value}</p>
+          {hasOnScreen.value ? (
+            <button type="button" class="btn primary big block" onClick={downloadOnScreen}>
+              Download what is on this screen
+            </button>
+          ) : (
+            <p>This screen holds no typing of its own.</p>
+          )}
+        </div>
+      )}
+      {app.recordsGone.value && (
+        <p class="warning" role="alert">
+          {app.recordsGone.value}
         </p>
       )}
       {app.blocked.value && (

@@ -1,11 +1,17 @@
 /**
- * The app's store: opened once, the demo study added on first start, and what the store says
- * about other tabs (closed for an upgrade, blocked by an older tab).
+ * The app's store: opened once, the demo study added on first start (never over a store that
+ * held studies), and what the store says about other tabs (closed for an upgrade, blocked by an
+ * older tab) and about the browser removing the records under the page.
  */
 import { createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { openStore, type Store } from '../../store/store.ts';
 import { listStudies } from '../../store/study-list.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
+import { heldStudiesBefore, markHeldStudies, reportCleared } from '../lib/storage-cleared.ts';
+
+/** Said at start when the store is empty but this device held studies before (the browser removed them). */
+export const RECORDS_GONE =
+  "The browser removed this device's Trialbook records: this device held studies before, and its storage is now empty. The demo study was not added. Import a backup file (Export screen of a study, or the studies list) to bring the records back.";
 
 export const AppModel = createModel(() => {
   const store = signal<Store | null>(null);
@@ -13,6 +19,7 @@ export const AppModel = createModel(() => {
   const closed = signal<string | null>(null);
   const blocked = signal<string | null>(null);
   const demoProblem = signal<string | null>(null);
+  const recordsGone = signal<string | null>(null);
   let started = false;
 
   return {
@@ -24,6 +31,8 @@ export const AppModel = createModel(() => {
     closed: closed as ReadonlySignal<string | null>,
     /** Set while opening waits for another tab. */
     blocked: blocked as ReadonlySignal<string | null>,
+    /** Set at start when the store is empty but held studies before. */
+    recordsGone: recordsGone as ReadonlySignal<string | null>,
     /** Set when the demo study could not be added (the app still works). */
     demoProblem: demoProblem as ReadonlySignal<string | null>,
 
@@ -33,14 +42,25 @@ export const AppModel = createModel(() => {
       try {
         const s = await openStore({
           onClosed: (m) => (closed.value = m),
+          onCleared: (m) => {
+            closed.value = m;
+            reportCleared(m);
+          },
           onBlocked: (m) => (blocked.value = m),
         });
         blocked.value = null;
-        try {
-          // Adding the demo brings the backup import with it: loaded only for a device with no study.
-          if ((await listStudies(s)).length === 0) await (await import('../demo/demo-study.ts')).addDemoIfEmpty(s);
-        } catch (err) {
-          demoProblem.value = `The invented demo study could not be added: ${problemOf(err).message}`;
+        const held = (await listStudies(s)).length > 0;
+        if (!held && heldStudiesBefore()) {
+          // Never add the demo over a store that held studies: say what happened instead.
+          recordsGone.value = RECORDS_GONE;
+        } else {
+          try {
+            // Adding the demo brings the backup import with it: loaded only for a device with no study.
+            if (!held) await (await import('../demo/demo-study.ts')).addDemoIfEmpty(s);
+          } catch (err) {
+            demoProblem.value = `The invented demo study could not be added: ${problemOf(err).message}`;
+          }
+          if (held || (await listStudies(s)).length > 0) markHeldStudies();
         }
         store.value = s;
       } catch (err) {

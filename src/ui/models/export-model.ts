@@ -7,7 +7,9 @@ import { computed, createModel, signal, type ReadonlySignal } from '@preact/sign
 import type { StudyRecord } from '../../core/study/study.ts';
 import { writeBackup } from '../../io/backup/backup.ts';
 import { StorageError } from '../../store/errors.ts';
-import { exportBackup, exportStudyCsv, importBackup, payloadOf } from '../../store/files.ts';
+import { exportBackup, exportStudyCsv, payloadOf } from '../../store/files.ts';
+import { importBackupFile } from '../import-worker/import-bridge.ts';
+import type { ImportProgress } from '../import-worker/protocol.ts';
 import { safetyStatus, type SafetyStatus } from '../../store/status.ts';
 import { listStudies } from '../../store/studies.ts';
 import type { Store } from '../../store/store.ts';
@@ -58,6 +60,8 @@ export const ExportModel = createModel((store: Store, studyId: string | null) =>
     return { text: await backupText(store, id ? [id] : undefined), name: fileName(title, 'json'), title };
   }
 
+  const importProgress = signal<ImportProgress | null>(null);
+
   async function run(task: () => Promise<string | null>) {
     if (busy.peek()) return;
     busy.value = true;
@@ -105,11 +109,17 @@ export const ExportModel = createModel((store: Store, studyId: string | null) =>
         return shared ? `${f.name} was handed to the share sheet.` : 'Sharing was canceled; nothing was sent.';
       });
     },
+    /** How far the running import has come, or null. */
+    importProgress: importProgress as ReadonlySignal<ImportProgress | null>,
+    /** Imports a backup file off the page's thread (a worker), with progress; a file above the size limit is refused before it is read. */
     importFile(file: File) {
       return run(async () => {
-        const text = await file.text();
-        const report = await importBackup(store, text);
-        return `${file.name}: ${report.summary}`;
+        try {
+          const report = await importBackupFile(store, file, (p) => (importProgress.value = p));
+          return `${file.name}: ${report.summary}`;
+        } finally {
+          importProgress.value = null;
+        }
       });
     },
   };

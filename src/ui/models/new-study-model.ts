@@ -4,6 +4,7 @@
  * The plan is built by the core's buildDesign on every change, so the preview shows exactly what
  * "Create study" will store. A wrong entry gets a message and nothing is created.
  */
+import { checkNewFactor } from '../../core/factor/new-factor.ts';
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { buildDesign, type DesignSpec } from '../../core/design/build-design.ts';
 import { catalogChoices, plackettBurmanChoices } from '../../core/design/catalog-choices.ts';
@@ -99,7 +100,10 @@ export function factorMessage(f: FactorDraft, i: number): string | null {
     }
   }
   try {
-    defineFactors([factorSpecOf(f, label)]);
+    const spec = factorSpecOf(f, label);
+    defineFactors([spec]);
+    // The rules of a new factor (usable names, low below high, a range wide enough to code).
+    checkNewFactor(spec);
     return null;
   } catch (err) {
     if (err instanceof InputError) return err.message.replace(/^Factor 1 /, `Factor ${i + 1} `);

@@ -27,7 +27,7 @@ export async function noiseSources(store: Store): Promise<NoiseSource[]> {
     const runs = await listRuns(store, study.id);
     if (runs.length === 0) continue;
     study.responses.forEach((r, i) => {
-      const res = analyzeResponse({ study, runs }, i, defaultSettings(study));
+      const res = analyzeResponse({ study, runs, diverged: [] }, i, defaultSettings(study));
       if (res.ok && res.analysis.sigma !== null && res.analysis.sigma > 0 && res.analysis.df.residual > 0) {
         out.push({ studyId: study.id, title: study.title, response: r.name, sigma: res.analysis.sigma, df: res.analysis.df.residual });
       }

@@ -6,15 +6,23 @@
  * failure shows the store's message and offers an export.
  */
 import { computed, createModel, effect, signal, type ReadonlySignal } from '@preact/signals';
+import { farOutsideSettings } from '../../core/factor/far-outside.ts';
 import { readSetting } from '../../core/factor/read-setting.ts';
+import { farOutsideText } from '../../core/text/far-outside-text.ts';
 import { joinReadings, splitReadings } from '../../core/study/reading-text.ts';
 import { parseReadings, parseRunForm, type RunForm } from '../../core/study/run-form.ts';
 import { meanReading, plannedSettings, type Setting } from '../../core/study/study.ts';
 import { discardDraft, saveDraft } from '../../store/drafts.ts';
-import { openPlannedRun, openRun, saveRun, type RunFormState, type SaveResult } from '../../store/runs.ts';
+import type { DivergedRun } from '../../core/study/diverged-runs.ts';
+import { listDivergedRuns, openPlannedRun, openRun, restoreRevision, saveRun, type RunFormState, type SaveResult } from '../../store/runs.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
+import { registerOnScreen } from '../lib/on-screen.ts';
+import { storageCleared } from '../lib/storage-cleared.ts';
 import { markTyping } from '../lib/unsaved-forms.ts';
+
+/** The channel on which a tab says it saved a run (the other tabs' forms keep their typing again). */
+const SAVES_CHANNEL = 'trialbook-run-saves';
 
 export type SaveState = 'loading' | 'editing' | 'saving' | 'saved';
 export type DraftState = 'none' | 'restored' | 'keeping' | 'kept' | 'failed';
@@ -34,6 +42,35 @@ function actualField(name: string): string {
   return `${name}: the actual setting`;
 }
 
+/** The file name of a run form's typing downloaded when the records are gone. */
+function onScreenName(title: string, plannedRun: number): string {
+  const slug = title.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 60) || 'study';
+  return `trialbook-typing-${slug}-run-${plannedRun}.json`;
+}
+
+/** What a run form shows, as it was typed, named by study and run (a record of the typing, not a backup). */
+function onScreenText(s: RunFormState, f: RunForm, now: Date): string {
+  const { study } = s;
+  return JSON.stringify(
+    {
+      what: 'The typing of one Trialbook run form, downloaded after the browser removed the records of this device. It is not a backup file: type it again into the run form.',
+      downloadedAt: now.toISOString(),
+      study: { id: study.id, title: study.title },
+      run: s.plannedRun,
+      runId: s.runId,
+      settings: study.factors.map((factor, i) => ({ factor: factor.name, planned: plannedSettings(study, s.plannedRun)[i], actual: f.actual[i] })),
+      readings: study.responses.map((r, i) => ({ response: r.name, unit: r.unit ?? '', readings: f.readings[i] })),
+      loggedAt: f.loggedAt,
+      operator: f.operator,
+      notes: f.notes,
+      excluded: f.excluded,
+      reason: f.reason,
+    },
+    null,
+    2,
+  );
+}
+
 export const RunFormModel = createModel((store: Store, studyId: string, plannedRun: number) => {
   const state = signal<RunFormState | null>(null);
   const form = signal<RunForm | null>(null);
@@ -41,6 +78,9 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
   const draftState = signal<DraftState>('none');
   const problem = signal<Problem | null>(null);
   const lastSave = signal<SaveResult | null>(null);
+  /** The run's current revisions when its edits diverged (changed in two places), else null. */
+  const diverged = signal<DivergedRun | null>(null);
+  const keeping = signal(false);
   let drafts: Promise<unknown> = Promise.resolve();
 
   const planned = computed<Setting[]>(() => (state.value ? plannedSettings(state.value.study, plannedRun) : []));
@@ -74,6 +114,26 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     });
   });
 
+  /** Per factor: the strong warning when the actual setting as typed is far outside the planned range, else null. */
+  const farOutside = computed<(string | null)[]>(() => {
+    const s = state.value;
+    const f = form.value;
+    if (!s || !f) return [];
+    const factors = s.study.factors;
+    return factors.map((factor, i) => {
+      try {
+        const v = readSetting(factor, f.actual[i]);
+        const actual = factors.map((_, j) => (j === i ? v : Number.NaN));
+        const far = farOutsideSettings(factors, actual)[0];
+        return far ? farOutsideText(`Run ${plannedRun}`, factor, far) : null;
+      } catch {
+        return null;
+      }
+    });
+  });
+  /** The far-outside warnings waiting for the person's yes before saving, or null. */
+  const confirmingFar = signal<readonly string[] | null>(null);
+
   /** Per response: a message when a reading cannot be read, else null. */
   const readingErrors = computed<(string | null)[]>(() => {
     const s = state.value;
@@ -103,6 +163,12 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     });
   });
 
+  /** The problem to show: once the records are gone, that (the store's closed-database error would say "updated in another tab"). */
+  function problemFor(err: unknown): Problem {
+    const gone = storageCleared.peek();
+    return gone !== null ? { message: gone, offerExport: false, kind: 'storage' } : problemOf(err);
+  }
+
   function keepDraft() {
     const s = state.peek();
     const f = form.peek();
@@ -116,7 +182,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
           },
           (err) => {
             draftState.value = 'failed';
-            problem.value = problemOf(err);
+            problem.value = problemFor(err);
           },
         ),
     );
@@ -127,6 +193,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     if (!f || saveState.peek() === 'saving' || saveState.peek() === 'loading') return;
     form.value = { ...f, ...patch };
     saveState.value = 'editing';
+    confirmingFar.value = null;
     if (problem.peek()?.kind === 'input') problem.value = null;
     keepDraft();
   }
@@ -157,19 +224,65 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     return () => markTyping(formKey, 'none');
   });
 
+  // Another tab's save of this run drops the run's draft when the draft held what it saved;
+  // this form's typing, when it differs, is then kept again, so no tab's typing is lost.
+  effect(() => {
+    if (typeof BroadcastChannel === 'undefined') return;
+    const channel = new BroadcastChannel(SAVES_CHANNEL);
+    channel.onmessage = (e: MessageEvent<unknown>) => {
+      const s = state.peek();
+      const runId = (e.data as { runId?: unknown } | null)?.runId;
+      if (s && runId === s.runId && dirty.peek() && saveState.peek() === 'editing') keepDraft();
+    };
+    return () => channel.close();
+  });
+  function announceSave(runId: string) {
+    if (typeof BroadcastChannel === 'undefined') return;
+    const channel = new BroadcastChannel(SAVES_CHANNEL);
+    channel.postMessage({ runId });
+    channel.close();
+  }
+
+  async function readDiverged(opened: RunFormState) {
+    if (!opened.current || opened.current.heads.length < 2) {
+      diverged.value = null;
+      return;
+    }
+    diverged.value = (await listDivergedRuns(store, opened.study.id, [opened.current]))[0] ?? null;
+  }
+
+  // The browser removed the records under the page: the typing stays in this form only; say so
+  // (no draft is kept), and give what is on screen as a file to download at once.
+  effect(() => {
+    const message = storageCleared.value;
+    if (message === null) return;
+    draftState.value = dirty.peek() ? 'failed' : draftState.peek();
+    problem.value = { message, offerExport: false, kind: 'storage' };
+  });
+  effect(() => {
+    registerOnScreen(formKey, () => {
+      const s = state.peek();
+      const f = form.peek();
+      if (!s || !f) return null;
+      return { name: onScreenName(s.study.title, plannedRun), text: onScreenText(s, f, store.now()) };
+    });
+    return () => registerOnScreen(formKey, null);
+  });
+
   /** Reopens the form from the stored run (after a restore wrote a new current revision). */
   async function reload() {
     await drafts;
     const s = state.peek();
     try {
       const opened = s ? await openRun(store, s.runId) : await openPlannedRun(store, studyId, plannedRun);
+      await readDiverged(opened);
       state.value = opened;
       form.value = opened.form;
       draftState.value = opened.fromDraft ? 'restored' : 'none';
       saveState.value = 'editing';
       problem.value = null;
     } catch (err) {
-      problem.value = problemOf(err);
+      problem.value = problemFor(err);
     }
   }
 
@@ -180,9 +293,17 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     draftState: draftState as ReadonlySignal<DraftState>,
     problem: problem as ReadonlySignal<Problem | null>,
     lastSave: lastSave as ReadonlySignal<SaveResult | null>,
+    diverged: diverged as ReadonlySignal<DivergedRun | null>,
+    keeping: keeping as ReadonlySignal<boolean>,
     planned,
     actualErrors,
     differs,
+    farOutside,
+    confirmingFar: confirmingFar as ReadonlySignal<readonly string[] | null>,
+    /** The person goes back to correct a far-outside setting: nothing is saved. */
+    cancelFar() {
+      confirmingFar.value = null;
+    },
     readingErrors,
     means,
     dirty,
@@ -193,16 +314,39 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     async load() {
       try {
         const opened = await openPlannedRun(store, studyId, plannedRun);
+        await readDiverged(opened);
         state.value = opened;
         form.value = opened.form;
         draftState.value = opened.fromDraft ? 'restored' : 'none';
         saveState.value = 'editing';
       } catch (err) {
-        problem.value = problemOf(err);
+        problem.value = problemFor(err);
       }
     },
 
     reload,
+
+    /**
+     * Keeps one of a diverged run's current revisions: its values become a new revision made
+     * from all of them (a restore), so the run has one current revision again; nothing is
+     * deleted. Waits while the form holds typing (save or discard it first).
+     */
+    async keepRevision(revisionId: string) {
+      const s = state.peek();
+      if (!s || keeping.peek() || saveState.peek() === 'saving') return;
+      if (dirty.peek() && saveState.peek() !== 'saved') return;
+      keeping.value = true;
+      problem.value = null;
+      try {
+        await restoreRevision(store, s.runId, revisionId);
+        announceSave(s.runId);
+        await reload();
+      } catch (err) {
+        problem.value = problemFor(err);
+      } finally {
+        keeping.value = false;
+      }
+    },
 
     /** Throws away the typing not yet saved (its draft too) and shows the saved run again. */
     async discardTyping() {
@@ -212,7 +356,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
       try {
         await discardDraft(store, s.runId);
       } catch (err) {
-        problem.value = problemOf(err);
+        problem.value = problemFor(err);
         return;
       }
       await reload();
@@ -260,18 +404,33 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
       change({ loggedAt: store.now().toISOString() });
     },
 
-    /** Checks the form and saves it as a new revision; a wrong entry changes nothing. */
-    async save() {
+    /**
+     * Checks the form and saves it as a new revision; a wrong entry changes nothing. A setting far
+     * outside the planned range waits for a yes (save again with `confirmed`) before saving.
+     */
+    async save(confirmed = false) {
       const s = state.peek();
       const typed = form.peek();
       if (!s || !typed || saveState.peek() === 'saving') return;
+      const far = farOutside.peek().filter((x): x is string => x !== null);
+      if (far.length > 0 && !confirmed) {
+        try {
+          parseRunForm(s.study, typed); // a wrong entry is said first
+        } catch (err) {
+          problem.value = problemFor(err);
+          return;
+        }
+        confirmingFar.value = far;
+        return;
+      }
+      confirmingFar.value = null;
       // A run without a time gets the time of its first saving.
       const f = typed.loggedAt.trim() === '' && !s.current ? { ...typed, loggedAt: store.now().toISOString() } : typed;
       let values;
       try {
         values = parseRunForm(s.study, f);
       } catch (err) {
-        problem.value = problemOf(err);
+        problem.value = problemFor(err);
         return;
       }
       problem.value = null;
@@ -279,15 +438,17 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
       try {
         await drafts; // the last draft write lands before the save drops the draft
         const result = await saveRun(store, { runId: s.runId, revisionId: s.revisionId, studyId: s.study.id, plannedRun: s.plannedRun, parents: s.parents, values });
+        announceSave(s.runId);
         // A fresh form state: the next change will be a new revision on top of this one.
         const reopened = await openRun(store, s.runId);
+        await readDiverged(reopened);
         state.value = reopened;
         form.value = reopened.form;
         lastSave.value = result;
         draftState.value = 'none';
         saveState.value = 'saved';
       } catch (err) {
-        problem.value = problemOf(err);
+        problem.value = problemFor(err);
         saveState.value = 'editing';
       }
     },

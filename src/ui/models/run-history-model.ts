@@ -3,6 +3,7 @@
  * from the revision it was made from, in plain words. Order is the revision order of the store
  * (the revision counter, then device, then id), never the clock. Restoring an earlier revision
  * adds a new revision; nothing is deleted. A restore that fails changes nothing and says why.
+ * A long history is shown in pages, newest first (HISTORY_PAGE at a time).
  */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { compareRevisions, type RunRevision, type StudyRecord } from '../../core/study/study.ts';
@@ -21,6 +22,8 @@ export interface HistoryEntry {
   readonly restoredFromNumber: number | null;
   /** True when another revision was made from the same revision as this one (diverged edits). */
   readonly sharesParent: boolean;
+  /** True when every revision made from the same start as this one was saved by one device (two tabs or windows). */
+  readonly forkOnThisDevice: boolean;
   /** What changed from the revision it was made from, one phrase each; empty when nothing did. */
   readonly changes: readonly string[];
   /** True for the first revision (there is nothing before it). */
@@ -62,9 +65,13 @@ export function historyEntries(study: Pick<StudyRecord, 'factors' | 'responses'>
   const byId = new Map(sorted.map((r) => [r.id, r]));
   // How many revisions were made from each starting point ('' for "from nothing").
   const starts = new Map<string, number>();
+  const startDevices = new Map<string, Set<string>>();
   for (const r of sorted) {
     const keys = r.parents.length === 0 ? [''] : r.parents;
-    for (const k of keys) starts.set(k, (starts.get(k) ?? 0) + 1);
+    for (const k of keys) {
+      starts.set(k, (starts.get(k) ?? 0) + 1);
+      startDevices.set(k, (startDevices.get(k) ?? new Set()).add(r.device));
+    }
   }
   const entries = sorted.map((r, i): HistoryEntry => {
     const parent = r.parents.map((p) => byId.get(p)).filter((p): p is RunRevision => p !== undefined).sort(compareRevisions).at(-1);
@@ -76,6 +83,7 @@ export function historyEntries(study: Pick<StudyRecord, 'factors' | 'responses'>
       isCurrent: i === sorted.length - 1,
       restoredFromNumber: r.restoredFrom ? (numberOf.get(r.restoredFrom) ?? null) : null,
       sharesParent: keys.some((k) => (starts.get(k) ?? 0) > 1),
+      forkOnThisDevice: keys.filter((k) => (starts.get(k) ?? 0) > 1).every((k) => startDevices.get(k)!.size === 1),
       changes: before ? describeChanges(study, before, r) : [],
       first: i === 0,
     };
@@ -85,6 +93,11 @@ export function historyEntries(study: Pick<StudyRecord, 'factors' | 'responses'>
 
 export type RestoreState = 'idle' | 'restoring' | 'restored';
 
+/** How many versions the history shows at first, and how many more each "older" tap adds: a
+ * long history (thousands of versions) opens and closes at once. Our own choice: a page fits a
+ * few phone screens. */
+export const HISTORY_PAGE = 20;
+
 export const RunHistoryModel = createModel((store: Store, study: StudyRecord, runId: string) => {
   const revisions = signal<RunRevision[] | null>(null);
   const problem = signal<Problem | null>(null);
@@ -93,6 +106,8 @@ export const RunHistoryModel = createModel((store: Store, study: StudyRecord, ru
   const restoreState = signal<RestoreState>('idle');
   /** The revision number of the last restore's new revision, and the one it brought back. */
   const lastRestore = signal<{ from: number; to: number } | null>(null);
+  const shownCount = signal(HISTORY_PAGE);
+  const entries = computed(() => (revisions.value ? historyEntries(study, revisions.value) : []));
 
   async function load() {
     try {
@@ -104,7 +119,15 @@ export const RunHistoryModel = createModel((store: Store, study: StudyRecord, ru
 
   return {
     revisions: revisions as ReadonlySignal<RunRevision[] | null>,
-    entries: computed(() => (revisions.value ? historyEntries(study, revisions.value) : [])),
+    entries,
+    /** The newest entries, as many as are shown (HISTORY_PAGE at first). */
+    shownEntries: computed(() => entries.value.slice(0, shownCount.value)),
+    /** How many older versions are not shown yet. */
+    hiddenCount: computed(() => Math.max(0, entries.value.length - shownCount.value)),
+    /** Shows the next page of older versions. */
+    showOlder() {
+      shownCount.value += HISTORY_PAGE;
+    },
     problem: problem as ReadonlySignal<Problem | null>,
     confirming: confirming as ReadonlySignal<string | null>,
     restoreState: restoreState as ReadonlySignal<RestoreState>,

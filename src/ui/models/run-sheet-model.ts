@@ -1,13 +1,17 @@
 /**
  * A study's run sheet: its planned runs in run order with their planned settings in real units,
- * whether each is logged (and excluded), and whether typing is waiting in a draft.
+ * whether each is logged (and excluded), whether typing is waiting in a draft, and whether its
+ * edits diverged (two current revisions, each shown).
  */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import type { RunKind } from '../../core/design/design.ts';
 import { meanReading, plannedSettings, type LoggedRun, type Setting, type StudyRecord } from '../../core/study/study.ts';
 import type { Draft } from '../../store/db.ts';
 import { listDrafts } from '../../store/drafts.ts';
-import { listRuns } from '../../store/runs.ts';
+import { farOutsideSettings } from '../../core/factor/far-outside.ts';
+import { farOutsideText } from '../../core/text/far-outside-text.ts';
+import type { DivergedRun } from '../../core/study/diverged-runs.ts';
+import { listDivergedRuns, listRuns } from '../../store/runs.ts';
 import { getStudy } from '../../store/studies.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
@@ -23,12 +27,17 @@ export interface SheetRow {
   readonly means: readonly (number | null)[];
   readonly excluded: boolean;
   readonly hasDraft: boolean;
+  /** The run's current revisions when its edits diverged (changed in two places), else null. */
+  readonly diverged: DivergedRun | null;
+  /** The strong warnings for logged actual settings far outside the planned range (empty when none). */
+  readonly farOutside: readonly string[];
 }
 
 export const RunSheetModel = createModel((store: Store, studyId: string) => {
   const study = signal<StudyRecord | null>(null);
   const runs = signal<LoggedRun[]>([]);
   const drafts = signal<Draft[]>([]);
+  const diverged = signal<DivergedRun[]>([]);
   const problem = signal<Problem | null>(null);
 
   const rows = computed<SheetRow[]>(() => {
@@ -48,6 +57,8 @@ export const RunSheetModel = createModel((store: Store, studyId: string) => {
           means: s.responses.map((_, i) => (first ? meanReading(first.readings[i] ?? []) : null)),
           excluded: logged.length > 0 && logged.every((r) => r.excluded),
           hasDraft: drafts.value.some((d) => d.plannedRun === p.run),
+          diverged: diverged.value.find((d) => d.plannedRun === p.run) ?? null,
+          farOutside: logged.flatMap((r) => farOutsideSettings(s.factors, r.actual).map((far) => farOutsideText(`Run ${p.run}`, s.factors[far.factor], far))),
         };
       });
   });
@@ -62,6 +73,7 @@ export const RunSheetModel = createModel((store: Store, studyId: string) => {
     async load() {
       try {
         const [s, r, d] = await Promise.all([getStudy(store, studyId), listRuns(store, studyId), listDrafts(store, studyId)]);
+        diverged.value = await listDivergedRuns(store, studyId, r);
         runs.value = r;
         drafts.value = d;
         study.value = s;

@@ -19,6 +19,7 @@ import { termsUpToOrder } from '../../core/model/formula.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
 import type { Response } from '../../core/study/response.ts';
 import { responseDataFromRuns } from '../../core/study/run-data.ts';
+import { divergedNote } from '../../core/text/diverged-text.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
 import { loadStudyData, type StudyData } from './study-data.ts';
@@ -64,7 +65,9 @@ export function analyzeResponse(d: StudyData, responseIndex: number, settings: R
   const response = d.study.responses[responseIndex];
   if (!response) return { ok: false, message: 'This study has no response to analyze.' };
   try {
-    const data = responseDataFromRuns(d.study, d.runs, response.name);
+    const read = responseDataFromRuns(d.study, d.runs, response.name);
+    // Runs with two current revisions are named, with both values, beside the other messages.
+    const data = d.diverged.length === 0 ? read : { ...read, messages: [...read.messages, ...d.diverged.map((x) => divergedNote(d.study, x))] };
     const k = d.study.factors.length;
     const terms = termsUpToOrder(k, settings.model === 'main' ? 1 : Math.min(2, k));
     return { ok: true, analysis: analyze(data, { terms, transform: parseTransform(settings.transform) }), data };

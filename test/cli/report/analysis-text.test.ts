@@ -5,6 +5,8 @@ import { analyze } from '../../../src/core/fit/analyze.ts';
 import { termsUpToOrder } from '../../../src/core/model/formula.ts';
 import { curvatureStatement, verdictText } from '../../../src/core/text/verdict-text.ts';
 import { fixtureData } from '../../helpers/fixtures.ts';
+import { defineFactors } from '../../../src/core/factor/factor.ts';
+import { shortNumber } from '../../../src/core/text/number-text.ts';
 
 describe('analysisText: the report says what the core says, in the same words', () => {
   it('curvature and lack of fit of the section 6.8 example (Montgomery 8th ed.): p 0.8137 for both, stated once each', () => {
@@ -37,6 +39,36 @@ describe('analysisText: the report says what the core says, in the same words', 
     expect(lof).toMatchObject({ outcome: 'significant' });
     const text = analysisText(a);
     expect(text.split(verdictText(lof)).length - 1).toBe(1);
+  });
+
+  describe('zero up to round-off prints as 0; Lenth\'s effects and the table\'s are one number or labelled', () => {
+    const factors = defineFactors(['A', 'B', 'C'].map((name) => ({ kind: 'numeric' as const, name, low: -1, high: 1 })));
+    const cube = [[-1, -1, -1], [1, -1, -1], [-1, 1, -1], [1, 1, -1], [-1, -1, 1], [1, -1, 1], [-1, 1, 1], [1, 1, 1]];
+    const base = { factors, response: 'y', blocks: null, messages: [] as string[] };
+
+    it('an exact fit (invented y = 10.5 + 0.1 A + 0.3 C): no round-off effects, pseudo standard error 0, no Lenth t', () => {
+      const y = cube.map(([a, , c]) => 10.5 + 0.1 * a + 0.3 * c);
+      const an = analyze({ ...base, coded: cube, y, labels: cube.map((_, i) => String(i + 1)) }, { terms: termsUpToOrder(3, 3) });
+      // The saturated fit's effects of B, AB, ... are round-off (not exactly 0) before printing.
+      expect(an.lenth!.effects.some((e) => e.effect !== 0 && Math.abs(e.effect) < 1e-12)).toBe(true);
+      const text = analysisText(an);
+      expect(text).toContain('pseudo standard error 0, margin of error 0, simultaneous margin 0');
+      expect(text).not.toMatch(/e-1[0-9]/); // no figure of round-off size anywhere
+      expect(text).not.toMatch(/e\+1[0-9]/); // and no Lenth t divided by round-off
+      expect(text).not.toContain("Lenth's effects are those of the saturated fit");
+    });
+
+    it('actual settings off the plan with center runs: the two fits differ, and the report labels both numbers', () => {
+      // Invented runs: A at 0.9 in run 2, two center runs.
+      const coded = [...cube.map((r, i) => (i === 1 ? [0.9, -1, -1] : r)), [0, 0, 0], [0, 0, 0]];
+      const y = [10.1, 10.6, 10.0, 10.3, 10.7, 11.4, 10.5, 10.9, 10.5, 10.7];
+      const an = analyze({ ...base, coded, y, labels: coded.map((_, i) => String(i + 1)) });
+      const text = analysisText(an);
+      const c = an.terms.find((t) => t.letters === 'C')!.effect;
+      const lc = an.lenth!.effects.find((e) => e.letters === 'C')!.effect;
+      expect(Math.abs(c - lc)).toBeGreaterThan(1e-4); // two different estimates of one effect
+      expect(text).toContain(`C ${shortNumber(lc)} (Lenth) and ${shortNumber(c)} (table)`);
+    });
   });
 });
 

@@ -38,6 +38,19 @@ describe('checkNewFactor', () => {
     );
     expect(() => checkNewFactor({ kind: 'numeric', name: 'Temperature', low: 160, high: 200, unit: 'degC' })).not.toThrow();
   });
+  it('refuses a range too narrow to code reliably, at every scale, and accepts one just wide enough', () => {
+    // 1000 to 1000.0000001: half range 5e-8; round-off near 1000 is 2.2e-13 (Number.EPSILON * 1000), above 1e-9 * 5e-8.
+    expect(() => checkNewFactor({ kind: 'numeric', name: 'Pressure', low: 1000, high: 1000.0000001 })).toThrow(/Pressure: the range 1000 to 1000.0000001 is too narrow to code reliably/);
+    expect(() => checkNewFactor({ kind: 'numeric', name: 'Pressure', low: 1000, high: 1000.0000001 })).toThrow(/offset from a reference/);
+    for (let e = -300; e <= 300; e += 50) {
+      const s = 10 ** e;
+      expect(() => checkNewFactor({ kind: 'numeric', name: 'X', low: 160 * s, high: 200 * s }), `1e${e}`).not.toThrow();
+      expect(() => checkNewFactor({ kind: 'numeric', name: 'X', low: s, high: s * (1 + 1e-12) }), `1e${e}`).toThrow(/too narrow/);
+    }
+    // A range about 1e-6 of its size keeps coded settings to about 2.2e-16 / 5e-7 = 4.4e-10, within SETTING_TOLERANCE.
+    expect(() => checkNewFactor({ kind: 'numeric', name: 'X', low: 1000, high: 1000.001 })).not.toThrow();
+  });
+
   it('refuses a reserved character in a name or a level, a control character in a unit', () => {
     expect(() => checkNewFactor({ kind: 'numeric', name: 'A,B', low: 1, high: 2 })).toThrow(/The factor name "A,B" contains a comma/);
     expect(() => checkNewFactor({ kind: 'categorical', name: 'A', levels: ['B=1', '2'] })).toThrow(/The level "B=1" of A contains an equals sign/);

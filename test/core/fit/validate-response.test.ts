@@ -29,4 +29,22 @@ describe('validateResponseData', () => {
     expect(() => validateResponseData({ ...base, y: [5, 5, 5, 5 + 1e-14] })).toThrow(InputError);
     expect(() => validateResponseData({ ...base, y: [], coded: [], labels: [] })).toThrow(/0 runs cannot estimate/);
   });
+  it('the constant-response check is relative to the values\' own scale, from 1e-300 to 1e300', () => {
+    // A thickness in metres: about 1e-14 and differing by 20 %, which an absolute floor refused.
+    expect(() => validateResponseData({ ...base, y: [1e-14, 1.2e-14, 1.1e-14, 1.3e-14] })).not.toThrow();
+    for (let e = -300; e <= 300; e += 20) {
+      const s = 10 ** e;
+      // Spread of 20 % of the scale: never refused, whatever the scale.
+      expect(() => validateResponseData({ ...base, y: [1, 1.2, 1.1, 1.3].map((v) => v * s) }), `scale 1e${e}`).not.toThrow();
+      // Truly equal values, and values equal up to round-off (one ulp apart), are refused at every scale.
+      expect(() => validateResponseData({ ...base, y: [s, s, s, s] }), `scale 1e${e}`).toThrow(/is the same .* in every run/);
+      const next = s * (1 + Number.EPSILON);
+      expect(() => validateResponseData({ ...base, y: [s, next, s, next] }), `scale 1e${e}`).toThrow(/is the same .* in every run/);
+      // Negative values too: the magnitude, not the sign, sets the scale.
+      expect(() => validateResponseData({ ...base, y: [-1, -1.2, -1.1, -1.3].map((v) => v * s) }), `scale -1e${e}`).not.toThrow();
+    }
+    // All zeros are equal; zero beside a tiny value is a real difference.
+    expect(() => validateResponseData({ ...base, y: [0, 0, 0, 0] })).toThrow(/is the same \(0\) in every run/);
+    expect(() => validateResponseData({ ...base, y: [0, 1e-300, 0, 1e-300] })).not.toThrow();
+  });
 });

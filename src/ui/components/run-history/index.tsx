@@ -8,7 +8,7 @@ import { useEffect } from 'preact/hooks';
 import type { StudyRecord } from '../../../core/study/study.ts';
 import type { Store } from '../../../store/store.ts';
 import { num, setting, when } from '../../lib/format.ts';
-import { RunHistoryModel } from '../../models/run-history-model.ts';
+import { HISTORY_PAGE, RunHistoryModel } from '../../models/run-history-model.ts';
 import { ProblemBox } from '../problem-box/index.tsx';
 import './style.css';
 
@@ -60,7 +60,7 @@ export function RunHistory({ store, study, runId, unsaved, onRestored, onSaveFir
       {model.problem.value && <ProblemBox problem={model.problem.value} />}
       {model.revisions.value === null && !model.problem.value && <p class="quiet">Reading the history…</p>}
       <ol class="history-list">
-        {entries.map((e) => {
+        {model.shownEntries.value.map((e) => {
           const r = e.revision;
           const asking = confirming === r.id;
           return (
@@ -74,7 +74,7 @@ export function RunHistory({ store, study, runId, unsaved, onRestored, onSaveFir
                 Saved {when(r.savedAt)} · device {shortId(r.device)}
                 {r.device === store.device ? ' (this one)' : ''}
               </p>
-              {e.sharesParent && <p class="history-fork">Changed on two devices from the same revision; both kept.</p>}
+              {e.sharesParent && <p class="history-fork">{e.forkOnThisDevice ? 'Changed in two places on this device (two tabs or windows) from the same revision; both kept.' : 'Changed on two devices from the same revision; both kept.'}</p>}
               <p class="history-changes">
                 {e.first ? 'First revision.' : e.changes.length === 0 ? 'No values changed.' : `Changed: ${e.changes.join(', ')}`}
               </p>
@@ -147,6 +147,11 @@ export function RunHistory({ store, study, runId, unsaved, onRestored, onSaveFir
           );
         })}
       </ol>
+      {model.hiddenCount.value > 0 && (
+        <button type="button" class="btn big block" onClick={() => model.showOlder()}>
+          Show {Math.min(HISTORY_PAGE, model.hiddenCount.value)} older versions ({model.hiddenCount.value} not shown)
+        </button>
+      )}
     </section>
   );
 }

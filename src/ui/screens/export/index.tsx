@@ -2,6 +2,8 @@
  * Files out and in: the JSON backup (with the whole history) and the CSV of a study, downloaded
  * or shared; a backup from another device merged in (nothing here is overwritten).
  */
+import { MAX_BACKUP_TEXT } from '../../../io/backup/size-limit.ts';
+import type { ImportProgress } from '../../import-worker/protocol.ts';
 import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
 import type { StudyRecord } from '../../../core/study/study.ts';
@@ -17,6 +19,12 @@ import './style.css';
 
 /** Without a study id: every study on this device. */
 export type ExportScreenProps = { readonly store: Store; readonly studyId?: string | null };
+
+/** The import's progress in words. */
+function progressText(p: ImportProgress): string {
+  if (p.stage === 'reading') return `Reading the file… ${Math.round(p.fraction * 100)} %`;
+  return p.stage === 'checking' ? 'Checking the file (format, checksum, every record)…' : 'Merging the records…';
+}
 
 export function ExportScreen({ store, studyId }: ExportScreenProps) {
   const model = useModel(() => new ExportModel(store, studyId ?? null));
@@ -68,7 +76,12 @@ export function ExportScreen({ store, studyId }: ExportScreenProps) {
         </button>
       )}
       <h3>Import a backup</h3>
-      <p class="quiet">A backup file from another phone or tab is merged in: new runs and revisions are added, and nothing here is overwritten.</p>
+      <p class="quiet">A backup file from another phone or tab is merged in: new runs and revisions are added, and nothing here is overwritten. Files up to {MAX_BACKUP_TEXT}.</p>
+      {model.importProgress.value && (
+        <p class="notice" role="status">
+          {progressText(model.importProgress.value)}
+        </p>
+      )}
       <label class="btn block file-pick">
         Choose a backup file
         <input

@@ -8,6 +8,7 @@ import { useEffect } from 'preact/hooks';
 import { RUN_KIND_NAMES } from '../../../core/design/design.ts';
 import type { Store } from '../../../store/store.ts';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
+import { DivergedNote } from '../../components/diverged-note/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { ReadingsField } from '../../components/readings-field/index.tsx';
 import { RunHistory } from '../../components/run-history/index.tsx';
@@ -92,6 +93,12 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
           onClose={() => (showHistory.value = false)}
         />
       )}
+      {model.diverged.value && !showHistory.value && (
+        <>
+          <DivergedNote study={study} diverged={model.diverged.value} busy={model.keeping.value || busy || (model.dirty.value && saveState !== 'saved')} onKeep={(id) => void model.keepRevision(id)} />
+          {model.dirty.value && saveState !== 'saved' && <p class="quiet">Save or discard the typing below before keeping one version.</p>}
+        </>
+      )}
       {draftState === 'restored' && <p class="notice">Your earlier typing was kept and is back. It is not saved yet.</p>}
 
       <form
@@ -136,7 +143,12 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
                 ) : (
                   <ChoiceButtons label={`${f.name} actual`} hideLabel options={f.levels.map((l) => ({ value: l, label: l }))} value={typed} onChoose={(v) => model.setActual(i, v)} />
                 )}
-                {differs && !error && <p class="differs">Actual differs from the plan: the analysis uses the actual setting.</p>}
+                {differs && !error && !model.farOutside.value[i] && <p class="differs">Actual differs from the plan: the analysis uses the actual setting.</p>}
+                {!error && model.farOutside.value[i] && (
+                  <p class="far-outside" role="alert">
+                    <strong>Far outside the plan.</strong> {model.farOutside.value[i]}. The analysis would extrapolate every effect through it.
+                  </p>
+                )}
                 {error && (
                   <p class="field-error" role="alert">
                     {error}
@@ -203,6 +215,24 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
           )}
         </fieldset>
 
+        {model.confirmingFar.value && (
+          <div class="far-confirm" role="alertdialog" aria-label="Save a setting far outside the plan?">
+            <p>
+              <strong>Save with {model.confirmingFar.value.length === 1 ? 'this setting' : 'these settings'}?</strong>
+            </p>
+            <ul>
+              {model.confirmingFar.value.map((t) => (
+                <li key={t}>{t}</li>
+              ))}
+            </ul>
+            <button type="button" class="btn primary big block" onClick={() => model.cancelFar()}>
+              Correct it
+            </button>
+            <button type="button" class="btn big block" onClick={() => void model.save(true)}>
+              Yes, it was run at {model.confirmingFar.value.length === 1 ? 'this setting' : 'these settings'}: save
+            </button>
+          </div>
+        )}
         {problem && <ProblemBox problem={problem} onExport={() => void exportNow()} exportBusy={exporting.value} />}
         {exportNote.value && <p class="notice">{exportNote.value}</p>}
 

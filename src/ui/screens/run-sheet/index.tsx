@@ -6,6 +6,7 @@ import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
 import type { Store } from '../../../store/store.ts';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
+import { DivergedNote } from '../../components/diverged-note/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { setting, withUnit } from '../../lib/format.ts';
 import { hrefTo } from '../../app/routes.ts';
@@ -58,6 +59,12 @@ export function RunSheetScreen({ store, studyId }: RunSheetScreenProps) {
                 </p>
               )}
               {row.excluded && <p class="run-result">Reason: {row.logged[0].reason}</p>}
+              {row.farOutside.map((t) => (
+                <p key={t} class="far-note">
+                  <strong>Far outside the plan.</strong> {t}.
+                </p>
+              ))}
+              {row.diverged && <DivergedNote study={study} diverged={row.diverged} />}
               {row.hasDraft && <p class="draft-note">Typing not saved yet is waiting in this run's form.</p>}
               <a class={logged ? 'btn block' : 'btn primary block'} href={hrefTo('runForm', { studyId: study.id, plannedRun: row.run })}>
                 {logged ? `Review run ${row.run}` : `Log run ${row.run}`}

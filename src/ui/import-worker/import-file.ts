@@ -1,0 +1,48 @@
+/**
+ * Importing a backup file: refused above MAX_BACKUP_BYTES before any of it is read; otherwise
+ * read in chunks (progress by bytes), checked (readBackup: format, checksum, records) and merged
+ * (mergeBackup: one transaction). Runs inside the import worker, off the page's thread; the same
+ * function runs in the page where no worker can be made.
+ */
+import { InputError } from '../../core/errors.ts';
+import { readBackup } from '../../io/backup/backup.ts';
+import { MAX_BACKUP_BYTES, MAX_BACKUP_TEXT } from '../../io/backup/size-limit.ts';
+import { mergeBackup, type ImportReport } from '../../store/files.ts';
+import type { Store } from '../../store/store.ts';
+import type { ImportProgress } from './protocol.ts';
+
+/** Throws InputError when the file is above the size limit (what was needed, what came). */
+export function checkImportSize(size: number): void {
+  if (size > MAX_BACKUP_BYTES) {
+    const mb = (size / (1024 * 1024)).toFixed(1);
+    throw new InputError(`A backup file can be at most ${MAX_BACKUP_TEXT}; this one is ${mb} MB, so it was not read and nothing changed. Export the studies in smaller files (one study each) and import them one by one`);
+  }
+}
+
+/** Reads a file as UTF-8 text in chunks, telling the fraction read. */
+async function readText(file: Blob, onProgress: (p: ImportProgress) => void): Promise<string> {
+  const reader = file.stream().getReader();
+  const decoder = new TextDecoder('utf-8');
+  const parts: string[] = [];
+  let read = 0;
+  onProgress({ stage: 'reading', fraction: 0 });
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    read += value.byteLength;
+    parts.push(decoder.decode(value, { stream: true }));
+    onProgress({ stage: 'reading', fraction: file.size > 0 ? read / file.size : 1 });
+  }
+  parts.push(decoder.decode());
+  return parts.join('');
+}
+
+/** Imports a backup file into the store; nothing changes on any error. */
+export async function importFile(store: Store, file: Blob, onProgress: (p: ImportProgress) => void): Promise<ImportReport> {
+  checkImportSize(file.size);
+  const text = await readText(file, onProgress);
+  onProgress({ stage: 'checking' });
+  const backup = await readBackup(text);
+  onProgress({ stage: 'merging' });
+  return mergeBackup(store, backup);
+}
