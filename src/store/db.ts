@@ -10,8 +10,10 @@
  *   runs       id -> LoggedRun: the current state of each logged run, decided from its revisions
  *   drafts     runId -> Draft: what was typed in a run's form and not yet saved
  *   meta       key -> value: device id, last exports, the answer to the persistent-storage request
+ *   blocks     id -> AddedBlock: planned runs added to a study after its plan (version 3; indexed by study)
  */
 import { Dexie, type DexieOptions, type Table, type Transaction } from 'dexie';
+import type { AddedBlock } from '../core/study/added-block.ts';
 import type { LoggedRun, RunRevision, StudyRecord } from '../core/study/study.ts';
 import type { RunForm } from '../core/study/run-form.ts';
 import { upgradeStudyRecord } from '../core/records/upgrade-study-record.ts';
@@ -70,6 +72,11 @@ export const SCHEMA: readonly SchemaVersion[] = [
         });
     },
   },
+  {
+    // Planned runs added later (path, foldover, confirmation) are records of their own; no data changes.
+    version: 3,
+    stores: { blocks: 'id, studyId' },
+  },
 ];
 
 /** The schema version this code opens. */
@@ -92,6 +99,7 @@ export class TrialbookDB extends Dexie {
   declare runs: Table<LoggedRun, string>;
   declare drafts: Table<Draft, string>;
   declare meta: Table<MetaRow, string>;
+  declare blocks: Table<AddedBlock, string>;
 
   /** Opens with strict durability: a write is reported done only once it is on disk. */
   constructor(name: string = DB_NAME, options: DexieOptions = {}, declare: (db: Dexie) => void = declareSchema) {

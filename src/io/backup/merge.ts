@@ -1,12 +1,13 @@
 /**
  * Merging a backup into what a device holds, as pure functions the store runs inside one
- * transaction. A merge is a union by id: studies and revisions never change once written, so an
+ * transaction. A merge is a union by id: studies, added blocks and revisions never change once written, so an
  * id present on both sides must carry the same content (otherwise the file was altered, and the
  * whole import is refused). The current state of each logged run is then decided again from all
  * its revisions (see compareRevisions), so merging twice equals merging once, and A then B
  * equals B then A.
  */
 import { InputError } from '../../core/errors.ts';
+import type { AddedBlock } from '../../core/study/added-block.ts';
 import { currentRun, type LoggedRun, type RunRevision, type StudyRecord } from '../../core/study/study.ts';
 import { canonicalJson } from '../../core/records/canonical-json.ts';
 import type { BackupPayload } from './backup.ts';
@@ -22,6 +23,8 @@ export interface MergeConflict {
 
 export interface MergePlan {
   readonly newStudies: readonly StudyRecord[];
+  /** Blocks of planned runs added to studies, not yet here (see core/study/added-block.ts). */
+  readonly newBlocks: readonly AddedBlock[];
   readonly newRevisions: readonly RunRevision[];
   /** New current state of every logged run the import touches. */
   readonly runs: readonly LoggedRun[];
@@ -35,6 +38,8 @@ export interface MergePlan {
 export interface MergeBase {
   readonly studies: ReadonlyMap<string, StudyRecord>;
   readonly revisions: ReadonlyMap<string, RunRevision>;
+  /** The added blocks the file names that are already here, by id. */
+  readonly blocks: ReadonlyMap<string, AddedBlock>;
   /** All revisions of each logged run the file touches, by run id. */
   readonly historyOf: (runId: string) => readonly RunRevision[];
 }
@@ -49,6 +54,14 @@ export function planMerge(base: MergeBase, incoming: BackupPayload): MergePlan {
     else if (canonicalJson(have) === canonicalJson(s)) unchangedStudies++;
     else {
       throw new InputError(`Study "${s.title}" (id ${s.id}) in the file differs from the study with the same id on this device ("${have.title}"); a study's plan never changes, so the file was altered. Nothing was imported.`);
+    }
+  }
+  const newBlocks: AddedBlock[] = [];
+  for (const b of incoming.blocks ?? []) {
+    const have = base.blocks.get(b.id);
+    if (!have) newBlocks.push(b);
+    else if (canonicalJson(have) !== canonicalJson(b)) {
+      throw new InputError(`The block of planned runs ${b.id} (${b.purpose}) in the file differs from the block with the same id on this device; a block never changes once added, so the file was altered. Nothing was imported.`);
     }
   }
   const newRevisions: RunRevision[] = [];
@@ -79,5 +92,5 @@ export function planMerge(base: MergeBase, incoming: BackupPayload): MergePlan {
       conflicts.push({ studyId: after.studyId, runId, plannedRun: after.plannedRun, revisionIds: after.heads });
     }
   }
-  return { newStudies, newRevisions, runs, unchangedStudies, unchangedRevisions, conflicts };
+  return { newStudies, newBlocks, newRevisions, runs, unchangedStudies, unchangedRevisions, conflicts };
 }
