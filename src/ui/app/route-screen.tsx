@@ -8,6 +8,7 @@ import { AnalysisScreen } from '../screens/analysis/index.tsx';
 import { ExportScreen } from '../screens/export/index.tsx';
 import { MissingScreen } from '../screens/missing/index.tsx';
 import { NewStudyScreen } from '../screens/new-study/index.tsx';
+import { NextRunsScreen } from '../screens/next-runs/index.tsx';
 import { QuickCardScreen } from '../screens/quick-card/index.tsx';
 import { RunFormScreen } from '../screens/run-form/index.tsx';
 import { RunSheetScreen } from '../screens/run-sheet/index.tsx';
@@ -21,6 +22,7 @@ const SCREENS: { readonly [N in RouteName]: ComponentType<RouteParams<N> & { rea
   runForm: RunFormScreen,
   analysis: AnalysisScreen,
   quickCard: QuickCardScreen,
+  nextRuns: NextRunsScreen,
   export: ExportScreen,
 };
 
