@@ -85,7 +85,7 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
         {solution && solution.ok && (
           <div class={solution.value.reachable ? 'result-card' : 'result-card outside'} data-testid="solve-result">
             <p class="result-main">
-              {solution.value.factor.name}: <strong>{setting(solution.value.setting, solution.value.factor.unit)}</strong>
+              {solution.value.factor.name}: <strong class="nowrap">{setting(solution.value.setting, solution.value.factor.unit)}</strong>
               {solution.value.reachable ? '' : ' (the nearest the tested range allows)'}
             </p>
             <p>
@@ -140,7 +140,14 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
                     <span class="step-no">{s.step === 0 ? 'Center' : `Step ${s.step}`}</span>
                     {s.outside && <span class="outside-mark">⚠ outside the tested range</span>}
                   </div>
-                  <p class="step-settings">{study.factors.map((f, i) => `${f.name} ${setting(s.real[i], f.kind === 'numeric' ? f.unit : undefined)}`).join(' · ')}</p>
+                  <p class="step-settings">
+                    {study.factors.map((f, i) => (
+                      <span class="nowrap" key={f.name}>
+                        {i > 0 ? ' · ' : ''}
+                        {f.name} {setting(s.real[i], f.kind === 'numeric' ? f.unit : undefined)}
+                      </span>
+                    ))}
+                  </p>
                   <p>
                     Predicted {withUnit(s.fit, response.unit)}; 95% for one run {range(s.pi, response.unit)}
                   </p>
