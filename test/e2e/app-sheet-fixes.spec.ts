@@ -72,3 +72,13 @@ for (const size of [
     });
   });
 }
+
+test('offline, a quiet note says that saving still works; it goes when the network is back', async ({ page, context }) => {
+  await page.goto(`/#/study/${study.id}`);
+  await expect(page.locator('.run-card').first()).toBeVisible();
+  await expect(page.locator('.offline-note')).toHaveCount(0);
+  await context.setOffline(true);
+  await expect(page.locator('.offline-note')).toHaveText('Offline: runs are still saved on this phone.');
+  await context.setOffline(false);
+  await expect(page.locator('.offline-note')).toHaveCount(0);
+});
