@@ -82,3 +82,20 @@ test('offline, a quiet note says that saving still works; it goes when the netwo
   await context.setOffline(false);
   await expect(page.locator('.offline-note')).toHaveCount(0);
 });
+
+test.describe('run form at 360x740', () => {
+  test.use({ viewport: { width: 360, height: 740 } });
+  test('the run number, its kind and the first setting are visible without scrolling, above the save bar', async ({ page }) => {
+    await page.goto(`/#/study/${study.id}/run/3`);
+    const title = page.locator('.run-title');
+    await expect(title).toContainText('Run 3');
+    await expect(title).toContainText(/factorial point|center point/);
+    const field = page.getByRole('textbox', { name: study.factors[0].name });
+    await expect(field).toBeVisible();
+    const box = (await field.boundingBox())!;
+    const bar = (await page.locator('.save-bar').boundingBox())!;
+    expect(await page.evaluate(() => window.scrollY)).toBe(0);
+    expect(box.y + box.height).toBeLessThanOrEqual(bar.y);
+    await page.screenshot({ path: 'test-results/run-form-360.png' });
+  });
+});
