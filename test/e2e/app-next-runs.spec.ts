@@ -43,6 +43,8 @@ for (const size of [
       const first = study.design.runs.length + 1;
       await expect(page.getByRole('status')).toContainText(`Added runs ${first} to ${first + 2} to the run sheet as block 2`);
       await expect(page.getByRole('table', { name: /observed against predicted/ }).locator('tbody tr')).toHaveCount(3);
+      // One tap, one block: the same path cannot be added twice by a second tap.
+      await expect(page.getByRole('button', { name: 'These steps are on the run sheet' })).toBeDisabled();
 
       await page.getByRole('link', { name: 'Runs' }).click();
       await expect(page.locator('.run-card')).toHaveCount(study.design.runs.length + 3);

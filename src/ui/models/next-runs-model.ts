@@ -60,6 +60,8 @@ export const NextRunsModel = createModel((store: Store, shared: StudyAnalysis) =
   const saving = signal(false);
   const saved = signal<string | null>(null);
   const saveProblem = signal<string | null>(null);
+  /** The path last turned into runs (its coded steps), so a second tap adds nothing. */
+  const addedPath = signal<string | null>(null);
 
   const factors = computed<readonly Factor[]>(() => shared.data.value?.study.factors ?? []);
   const model = computed(() => {
@@ -225,6 +227,11 @@ export const NextRunsModel = createModel((store: Store, shared: StudyAnalysis) =
     pathStepsText: computed(() => pathStepsText.value),
     pathSense,
     path,
+    /** True when the path on screen was already turned into planned runs. */
+    pathAdded: computed(() => {
+      const p = path.value;
+      return !!p && p.ok && addedPath.value === JSON.stringify(p.value.steps.filter((s) => s.step > 0).map((s) => s.coded));
+    }),
     pathPoints,
     solveIndex,
     targetText: computed(() => targetText.value),
@@ -246,6 +253,9 @@ export const NextRunsModel = createModel((store: Store, shared: StudyAnalysis) =
       const p = path.peek();
       if (!p || !p.ok) return;
       const steps = p.value.steps.filter((s) => s.step > 0);
+      const key = JSON.stringify(steps.map((s) => s.coded));
+      if (addedPath.peek() === key) return;
+      addedPath.value = key;
       const f = p.value.base;
       const note = `Path of steepest ${p.value.sense} for ${p.value.response}: ${f.name} in steps of ${setting(f.step)}, ${steps.length} steps.`;
       void add(studyId, 'path', steps.map((s) => ({ kind: 'path', coded: s.coded })), note);

@@ -166,8 +166,8 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
                 ))}
               </ul>
             )}
-            <button type="button" class="btn primary block" disabled={saving} onClick={() => model.addPath(study.id)}>
-              Add the {path.value.steps.length - 1} steps as planned runs
+            <button type="button" class="btn primary block" disabled={saving || model.pathAdded.value} onClick={() => model.addPath(study.id)}>
+              {model.pathAdded.value ? 'These steps are on the run sheet' : `Add the ${path.value.steps.length - 1} steps as planned runs`}
             </button>
           </>
         )}
