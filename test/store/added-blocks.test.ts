@@ -10,7 +10,7 @@ import { InputError } from '../../src/core/errors.ts';
 import { parseRunForm } from '../../src/core/study/run-form.ts';
 import { readBackup } from '../../src/io/backup/backup.ts';
 import { addPlannedRuns, listBlocks } from '../../src/store/added-blocks.ts';
-import { exportBackup, importBackup, payloadOf } from '../../src/store/files.ts';
+import { exportBackup, exportStudyCsv, importBackup, payloadOf } from '../../src/store/files.ts';
 import { listRuns, openNewRun, saveRun } from '../../src/store/runs.ts';
 import { createStudy, getStudy } from '../../src/store/studies.ts';
 import type { Store } from '../../src/store/store.ts';
@@ -51,6 +51,10 @@ describe('added blocks in the store', () => {
     expect(state.form.actual[0]).toBe('240'); // center 180 + 3 x half-range 20: coded 3 on 160..200 °C
     await log(store, study.id, block.runs[1].run, '75.5');
     expect((await listRuns(store, study.id)).map((r) => r.plannedRun)).toEqual([12]);
+    // The records export lists the added runs in run order, with their block and kind token.
+    const rows = (await exportStudyCsv(store, study.id)).split('\r\n');
+    expect(rows[0].startsWith('Run,Std order,Replicate,Block,Kind,')).toBe(true);
+    expect(rows.slice(11, 13).map((r) => r.split(',').slice(0, 5).join(','))).toEqual(['11,,1,2,path', '12,,1,2,path']);
   });
 
   it('bad input changes nothing: no runs, wrong settings, unknown study', async () => {
