@@ -1,6 +1,6 @@
 /**
  * The one write path of the records: every writer (saving a run, excluding, restoring, importing
- * a backup or a CSV, creating a study) hands its new studies and revisions to appendRevisions,
+ * a backup or a CSV, creating a study, adding planned runs) hands its new studies and revisions to appendRevisions,
  * which applies the record checks of src/core/records to each, adds them, and brings the current
  * state of every logged run it touches up to date, all in one transaction (the caller's, when it
  * has one over these tables). Revisions made on this device now are stamped with this device and
@@ -8,10 +8,12 @@
  * what they were written with, since a revision never changes. Nothing is ever overwritten:
  * adding a study or revision whose id is already stored fails, and the transaction with it.
  */
+import { checkAddedBlock } from '../core/records/check-added-block.ts';
 import { checkHistories, checkUniqueIds } from '../core/records/check-histories.ts';
 import { checkRevision } from '../core/records/check-revision.ts';
 import { checkStudy } from '../core/records/check-study.ts';
 import { MAX_SAVED_REV } from '../core/records/field-checks.ts';
+import { withAddedBlocks, type AddedBlock } from '../core/study/added-block.ts';
 import { currentRun, type LoggedRun, type RunRevision, type StudyRecord } from '../core/study/study.ts';
 import type { Store } from './store.ts';
 
@@ -21,6 +23,8 @@ export type MadeRevision = Omit<RunRevision, 'device' | 'savedAt'>;
 export interface NewRecords {
   /** New studies (a study is written once, with its plan). */
   readonly studies?: readonly StudyRecord[];
+  /** Planned runs added to studies (each block written once, never changed). */
+  readonly blocks?: readonly AddedBlock[];
   /** Revisions made on this device now. */
   readonly made?: readonly MadeRevision[];
   /** Revisions read from a file, written as they are. */
@@ -32,6 +36,8 @@ export interface NewRecords {
 export interface Appended {
   /** The studies as checked and stored. */
   readonly studies: readonly StudyRecord[];
+  /** The added blocks as checked and stored. */
+  readonly blocks: readonly AddedBlock[];
   /** The revisions as checked and stored: made ones first, in the order given, then imported ones. */
   readonly revisions: readonly RunRevision[];
   /** The new current state of every logged run the revisions touch, in the order first touched. */
@@ -45,18 +51,26 @@ export interface Appended {
  */
 const plain = <T>(v: T): T => JSON.parse(JSON.stringify(v)) as T;
 
-/** Checks and appends new studies and revisions, and updates the touched runs, in one transaction. Throws InputError (nothing written) at the first record that fails its checks. */
+/** Checks and appends new studies, added blocks and revisions, and updates the touched runs, in one transaction. Throws InputError (nothing written) at the first record that fails its checks. */
 export async function appendRevisions(store: Store, records: NewRecords): Promise<Appended> {
   const { db } = store;
-  return db.transaction('rw', [db.studies, db.revisions, db.runs], async () => {
+  return db.transaction('rw', [db.studies, db.revisions, db.runs, db.blocks], async () => {
     const savedAt = store.now().toISOString();
     const studies = (records.studies ?? []).map((s, i) => plain(checkStudy(s, records.studies!.length === 1 ? 'study' : `studies[${i}]`)));
     checkUniqueIds(studies, 'studies', 'study');
-    const known = new Map(studies.map((s) => [s.id, s]));
+    const own = new Map(studies.map((s) => [s.id, s]));
     const made = (records.made ?? []).map((r) => ({ ...r, device: store.device, savedAt }));
     const imported = records.imported ?? [];
-    const wanted = [...new Set([...made, ...imported].map((r) => r.studyId))].filter((id) => !known.has(id));
-    if (wanted.length > 0) for (const s of await db.studies.bulkGet(wanted)) if (s) known.set(s.id, s);
+    const newBlocks = records.blocks ?? [];
+    const wanted = [...new Set([...made, ...imported, ...newBlocks].map((r) => r.studyId))].filter((id) => !own.has(id));
+    if (wanted.length > 0) for (const s of await db.studies.bulkGet(wanted)) if (s) own.set(s.id, s);
+    const blocks = newBlocks.map((b, i) => plain(checkAddedBlock(b, newBlocks.length === 1 ? 'block' : `blocks[${i}]`, own)));
+    checkUniqueIds(blocks, 'blocks', 'block');
+    // Revisions are checked against each study's whole plan: its own runs and every added block's,
+    // stored or new; a run number planned twice (blocks added on two devices) aborts the write.
+    const ids = [...own.keys()];
+    const stored = ids.length > 0 ? await db.blocks.where('studyId').anyOf(ids).toArray() : [];
+    const known = new Map([...own].map(([id, s]) => [id, withAddedBlocks(s, [...stored, ...blocks])]));
     const revisions = [
       // Saves here may take counters past what a file may bring, so a run is never stuck.
       ...made.map((r, i) => plain(checkRevision(r, records.pathOf ? records.pathOf(i, r) : `Run ${r.plannedRun}`, known, MAX_SAVED_REV))),
@@ -75,8 +89,9 @@ export async function appendRevisions(store: Store, records: NewRecords): Promis
     const runs = runIds.map((id) => currentRun(byRun.get(id)!));
     // No catching inside the transaction: any failure aborts all of it.
     if (studies.length > 0) await db.studies.bulkAdd(studies);
+    if (blocks.length > 0) await db.blocks.bulkAdd(blocks);
     if (revisions.length > 0) await db.revisions.bulkAdd(revisions);
     if (runs.length > 0) await db.runs.bulkPut(runs);
-    return { studies, revisions, runs };
+    return { studies, blocks, revisions, runs };
   });
 }

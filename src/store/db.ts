@@ -13,8 +13,10 @@
  *   meta       key -> value: device id, last exports, the answer to the persistent-storage request
  *   setAside   key -> SetAsideRow: records of an imported file that clash with stored ones (same id,
  *              other content), kept apart with the field that differs (version 3)
+ *   blocks     id -> AddedBlock: planned runs added to a study after its plan (version 4; indexed by study)
  */
 import { Dexie, type DexieOptions, type Table, type Transaction } from 'dexie';
+import type { AddedBlock } from '../core/study/added-block.ts';
 import type { LoggedRun, RunRevision, StudyRecord } from '../core/study/study.ts';
 import type { RunForm } from '../core/study/run-form.ts';
 import { upgradeStudyRecord } from '../core/records/upgrade-study-record.ts';
@@ -90,6 +92,11 @@ export const SCHEMA: readonly SchemaVersion[] = [
     version: 3,
     stores: { setAside: 'key, id, studyId' },
   },
+  {
+    // Planned runs added later (path, foldover, confirmation) are records of their own; no data changes.
+    version: 4,
+    stores: { blocks: 'id, studyId' },
+  },
 ];
 
 /** The schema version this code opens. */
@@ -113,6 +120,7 @@ export class TrialbookDB extends Dexie {
   declare drafts: Table<Draft, string>;
   declare meta: Table<MetaRow, string>;
   declare setAside: Table<SetAsideRow, string>;
+  declare blocks: Table<AddedBlock, string>;
 
   /** Opens with strict durability: a write is reported done only once it is on disk. */
   constructor(name: string = DB_NAME, options: DexieOptions = {}, declare: (db: Dexie) => void = declareSchema) {

@@ -5,12 +5,14 @@
  * by id, so the same file twice changes nothing and two phones' files merge into their union.
  */
 import { InputError } from '../core/errors.ts';
+import type { AddedBlock } from '../core/study/added-block.ts';
 import type { RunRevision, StudyRecord } from '../core/study/study.ts';
 import { readBackup, writeBackup, type Backup, type BackupPayload } from '../io/backup/backup.ts';
 import { planMerge, type MergeConflict, type SetAside } from '../io/backup/merge.ts';
 import type { Digest } from '../io/digest.ts';
 import type { CsvRunsImport } from '../io/csv/runs-import.ts';
 import { studyCsv, type StudyCsvOptions } from '../io/csv/study-csv.ts';
+import { planOf } from './added-blocks.ts';
 import { appendRevisions, type MadeRevision } from './append-revisions.ts';
 import { guarded } from './errors.ts';
 import { newId } from './ids.ts';
@@ -19,18 +21,23 @@ import { markExported } from './status.ts';
 import { newStudyRecord } from './studies.ts';
 import type { Store } from './store.ts';
 
+/** A payload carries `blocks` only when there are some, so a file without added runs reads as before. */
+function withBlocks(p: BackupPayload, blocks: readonly AddedBlock[]): BackupPayload {
+  return blocks.length > 0 ? { ...p, blocks } : p;
+}
+
 /** Everything the store holds of these studies (all when none are named). */
 export async function payloadOf(store: Store, studyIds?: readonly string[]): Promise<BackupPayload> {
   const { db } = store;
   return guarded(() =>
-    db.transaction('r', [db.studies, db.revisions], async () => {
-      if (!studyIds) return { studies: await db.studies.toArray(), revisions: await db.revisions.toArray() };
+    db.transaction('r', [db.studies, db.revisions, db.blocks], async () => {
+      if (!studyIds) return withBlocks({ studies: await db.studies.toArray(), revisions: await db.revisions.toArray() }, await db.blocks.toArray());
       const studies = (await db.studies.bulkGet([...studyIds])).map((s, i) => {
         if (!s) throw new InputError(`There is no study with id "${studyIds[i]}" on this device`);
         return s;
       });
       const revisions = await db.revisions.where('studyId').anyOf([...studyIds]).toArray();
-      return { studies, revisions };
+      return withBlocks({ studies, revisions }, await db.blocks.where('studyId').anyOf([...studyIds]).toArray());
     }),
   );
 }
@@ -49,6 +56,8 @@ export async function exportBackup(store: Store, studyIds?: readonly string[], d
 
 export interface ImportReport {
   readonly studiesAdded: number;
+  /** Blocks of planned runs added to studies (path, foldover, confirmation) that were not here. */
+  readonly blocksAdded: number;
   readonly revisionsAdded: number;
   /** Logged runs that were not on this device before. */
   readonly runsAdded: number;
@@ -104,10 +113,11 @@ export async function mergeBackup(store: Store, backup: Pick<Backup, 'payload'> 
   const { db } = store;
   const incoming = backup.payload;
   return guarded(() =>
-    db.transaction('rw', [db.studies, db.revisions, db.runs, db.setAside], async () => {
+    db.transaction('rw', [db.studies, db.revisions, db.runs, db.setAside, db.blocks], async () => {
       const studyIds = incoming.studies.map((s) => s.id);
       const revIds = incoming.revisions.map((r) => r.id);
-      const [haveStudies, haveRevs] = await Promise.all([db.studies.bulkGet(studyIds), db.revisions.bulkGet(revIds)]);
+      const blockIds = (incoming.blocks ?? []).map((b) => b.id);
+      const [haveStudies, haveRevs, haveBlocks] = await Promise.all([db.studies.bulkGet(studyIds), db.revisions.bulkGet(revIds), db.blocks.bulkGet(blockIds)]);
       const runIds = [...new Set(incoming.revisions.map((r) => r.runId))];
       const history = await db.revisions.where('runId').anyOf(runIds).toArray();
       const byRun = new Map<string, RunRevision[]>();
@@ -120,16 +130,18 @@ export async function mergeBackup(store: Store, backup: Pick<Backup, 'payload'> 
         {
           studies: new Map(haveStudies.filter((s): s is StudyRecord => !!s).map((s) => [s.id, s])),
           revisions: new Map(haveRevs.filter((r): r is RunRevision => !!r).map((r) => [r.id, r])),
+          blocks: new Map(haveBlocks.filter((b): b is AddedBlock => !!b).map((b) => [b.id, b])),
           historyOf: (id) => byRun.get(id) ?? [],
         },
         incoming,
       );
       // The one write path (its record checks, in this transaction); any failure aborts all of it.
-      await appendRevisions(store, { studies: plan.newStudies, imported: plan.newRevisions });
+      await appendRevisions(store, { studies: plan.newStudies, blocks: plan.newBlocks, imported: plan.newRevisions });
       const setAsideNew = await keepSetAside(store, plan.setAside, backup.device ?? null);
       const runsAdded = plan.runs.filter((r) => !byRun.has(r.id)).length;
       const report = {
         studiesAdded: plan.newStudies.length,
+        blocksAdded: plan.newBlocks.length,
         revisionsAdded: plan.newRevisions.length,
         runsAdded,
         studiesUnchanged: plan.unchangedStudies,
@@ -176,7 +188,12 @@ export async function importRunsCsv(store: Store, mapped: CsvRunsImport): Promis
 /** The CSV export of a study's records (the same text the command line's csv command writes). */
 export async function exportStudyCsv(store: Store, studyId: string, options: StudyCsvOptions = {}): Promise<string> {
   const { db } = store;
-  const [study, runs] = await guarded(() => db.transaction('r', [db.studies, db.runs], () => Promise.all([db.studies.get(studyId), db.runs.where('studyId').equals(studyId).toArray()])));
+  const [study, runs] = await guarded(() =>
+    db.transaction('r', [db.studies, db.runs, db.blocks], async () => {
+      const s = await db.studies.get(studyId);
+      return Promise.all([s ? planOf(store, s) : undefined, db.runs.where('studyId').equals(studyId).toArray()]);
+    }),
+  );
   if (!study) throw new InputError(`There is no study with id "${studyId}" on this device`);
   return studyCsv(study, runs, options);
 }

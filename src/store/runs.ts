@@ -22,6 +22,7 @@ import {
 import { divergedRuns, type DivergedRun } from '../core/study/diverged-runs.ts';
 import { canonicalJson } from '../core/records/canonical-json.ts';
 import { sha256, utf8Encode } from '../core/records/sha256.ts';
+import { planOf } from './added-blocks.ts';
 import { appendRevisions } from './append-revisions.ts';
 import { listDrafts } from './drafts.ts';
 import { guarded } from './errors.ts';
@@ -63,10 +64,13 @@ export interface SaveResult {
   readonly changedSince: string | null;
 }
 
-async function studyIn(store: Store, studyId: string): Promise<StudyRecord> {
-  const study = await store.db.studies.get(studyId);
-  if (!study) throw new InputError(`There is no study with id "${studyId}" on this device`);
-  return study;
+/** The study with its added blocks' runs (inside a transaction over studies and blocks). */
+function studyIn(store: Store, studyId: string): Promise<StudyRecord> {
+  // A Dexie promise chain, for the reason given at planOf.
+  return store.db.studies.get(studyId).then((study) => {
+    if (!study) throw new InputError(`There is no study with id "${studyId}" on this device`);
+    return planOf(store, study);
+  });
 }
 
 /**
@@ -92,7 +96,7 @@ export async function openNewRun(store: Store, studyId: string, plannedRun: numb
 /** Opens the form of a logged run (a new or saved one) from its draft when there is one, else from its current state. */
 export async function openRun(store: Store, runId: string): Promise<RunFormState> {
   return guarded(() =>
-    store.db.transaction('r', [store.db.runs, store.db.drafts, store.db.studies], async () => {
+    store.db.transaction('r', [store.db.runs, store.db.drafts, store.db.studies, store.db.blocks], async () => {
       const [current, draft] = await Promise.all([store.db.runs.get(runId), store.db.drafts.get(runId)]);
       const studyId = draft?.studyId ?? current?.studyId;
       if (!studyId) throw new InputError(`There is no logged run with id "${runId}" on this device`);
@@ -180,7 +184,7 @@ async function appendRevision(store: Store, input: SaveInput, restoredFrom: stri
 async function writeRevision(store: Store, input: SaveInput, restoredFrom: string | null = null): Promise<SaveResult> {
   const { db } = store;
   const result = await guarded(() =>
-    db.transaction('rw', [db.studies, db.revisions, db.runs, db.drafts], () => appendRevision(store, input, restoredFrom)),
+    db.transaction('rw', [db.studies, db.revisions, db.runs, db.drafts, db.blocks], () => appendRevision(store, input, restoredFrom)),
   );
   if (!result.duplicate) void askPersistenceOnce(store);
   return result;

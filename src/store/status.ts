@@ -1,14 +1,16 @@
 /**
  * What the screens show about keeping records safe: the storage estimate (used, quota), whether
  * the browser granted persistent storage (asked once, after the first saved run, never on load),
- * and when each study was last exported, with a reminder when that is more than a week ago.
+ * and when each study was last exported, with a reminder when runs saved more than a week ago
+ * have never been exported (not merely when the last export is old: a study whose runs are all
+ * in an export needs no reminder, and a run saved minutes ago is not yet overdue).
  * Browsers may delete best-effort storage under pressure, and some after days without a visit,
  * so the exported file is the real safety net.
  */
 import { guarded } from './errors.ts';
 import type { Store } from './store.ts';
 
-/** A reminder is due when a study's last export is older than this. */
+/** A reminder is due when a run saved longer ago than this is in no export (common practice: a weekly backup). */
 export const BACKUP_REMINDER_MS = 7 * 24 * 60 * 60 * 1000;
 
 export interface StorageEstimate {
@@ -28,7 +30,7 @@ export interface SafetyStatus extends StorageEstimate {
   readonly persistence: PersistenceAnswer;
   /** Time of the last export of each study that has one. */
   readonly lastExports: Readonly<Record<string, string>>;
-  /** Studies with saved runs whose last export is missing or older than a week. */
+  /** Studies with a revision saved more than a week ago and after the study's last export (or never exported). */
   readonly backupDue: readonly { readonly studyId: string; readonly title: string; readonly lastExport: string | null }[];
 }
 
@@ -117,10 +119,15 @@ export async function safetyStatus(store: Store): Promise<SafetyStatus> {
   const now = store.now().getTime();
   const backupDue: SafetyStatus['backupDue'][number][] = [];
   for (const s of studies) {
-    const runs = await guarded(() => store.db.runs.where('studyId').equals(s.id).count());
-    if (runs === 0) continue;
     const last = exportsMap[s.id] ?? null;
-    if (last === null || now - Date.parse(last) > BACKUP_REMINDER_MS) backupDue.push({ studyId: s.id, title: s.title, lastExport: last });
+    const exportedAt = last === null ? -Infinity : Date.parse(last);
+    const revisions = await guarded(() => store.db.revisions.where('studyId').equals(s.id).toArray());
+    // Saving times are the store's clock (appendRevisions), compared as instants.
+    const overdue = revisions.some((r) => {
+      const saved = Date.parse(r.savedAt);
+      return saved > exportedAt && now - saved > BACKUP_REMINDER_MS;
+    });
+    if (overdue) backupDue.push({ studyId: s.id, title: s.title, lastExport: last });
   }
   return { ...estimate, persistence, lastExports: exportsMap, backupDue };
 }

@@ -5,6 +5,7 @@
 import { InputError } from '../core/errors.ts';
 import { checkStudy } from '../core/records/check-study.ts';
 import type { StudyPlan, StudyRecord } from '../core/study/study.ts';
+import { planOf } from './added-blocks.ts';
 import { appendRevisions } from './append-revisions.ts';
 import { guarded } from './errors.ts';
 import { newId } from './ids.ts';
@@ -30,12 +31,18 @@ export async function createStudy(store: Store, plan: StudyPlan): Promise<StudyR
   return studies[0];
 }
 
-/** All studies, newest first (kept in study-list.ts, which the first screen loads without the write path). */
-export { listStudies } from './study-list.ts';
+/** All studies, newest first, each with the planned runs added to it (see added-blocks.ts). */
+export async function listStudies(store: Store): Promise<StudyRecord[]> {
+  const all = await guarded(() => store.db.transaction('r', [store.db.studies, store.db.blocks], async () => Promise.all((await store.db.studies.toArray()).map((s) => planOf(store, s)))));
+  return all.sort((a, b) => (a.createdAt < b.createdAt ? 1 : a.createdAt > b.createdAt ? -1 : a.id < b.id ? -1 : 1));
+}
 
-/** One study by id; throws InputError when there is none. */
+/** One study by id, with the planned runs added to it; throws InputError when there is none. */
 export async function getStudy(store: Store, studyId: string): Promise<StudyRecord> {
-  const s = await guarded(() => store.db.studies.get(studyId));
+  const s = await guarded(() => store.db.transaction('r', [store.db.studies, store.db.blocks], async () => {
+    const study = await store.db.studies.get(studyId);
+    return study ? planOf(store, study) : undefined;
+  }));
   if (!s) throw new InputError(`There is no study with id "${studyId}" on this device`);
   return s;
 }

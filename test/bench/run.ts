@@ -91,7 +91,7 @@ console.log(lines.join('\n'));
     const text = await benchBackup(n);
     const payload = benchPayload(n);
     const half = payload.revisions.slice(0, n / 2);
-    const base = { studies: new Map(payload.studies.map((s) => [s.id, s])), revisions: new Map(half.map((r) => [r.id, r])), historyOf: () => half };
+    const base = { studies: new Map(payload.studies.map((s) => [s.id, s])), revisions: new Map(half.map((r) => [r.id, r])), historyOf: () => half, blocks: new Map() };
     const times = {
       'read and check': medianMs(() => readBackupSync(text), { batch: 1, rounds: 5, warmup: 1 }),
       'current state': medianMs(() => studyRuns({ payload }, 'bench-study'), { batch: 1, rounds: 5, warmup: 1 }),

@@ -2,7 +2,7 @@ import { test, expect } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
 
 // Every main screen of the demo study, checked by axe-core (WCAG 2.1 A and AA rules) at the phone size.
-const screens = ['', '/analysis', '/predict', '/export', '/run/3'];
+const screens = ['', '/analysis', '/predict', '/next', '/export', '/run/3'];
 
 test('the main screens have no accessibility violations (axe-core, WCAG 2.1 AA rules)', async ({ page }) => {
   await page.goto('/');

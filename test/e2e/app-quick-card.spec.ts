@@ -63,8 +63,8 @@ test('a setting that is not a number gets a message and leaves the prediction as
   await page.getByRole('button', { name: 'Gloss' }).click();
   const e = expected('Gloss', { 'Oven temperature': 180, 'Line speed': 3, 'Powder flow': 40 });
   await expect(page.getByTestId('predicted-value')).toHaveText(`${e.fit} GU`);
-  await page.getByRole('textbox', { name: 'Line speed (B)' }).fill('3,5');
-  await expect(page.locator('.factor .field-error')).toContainText('Line speed needs a number (use a point for decimals), got "3,5". The prediction still uses 3 m/min.');
+  await page.getByRole('textbox', { name: 'Line speed (B)' }).fill('3,5,1');
+  await expect(page.locator('.factor .field-error')).toContainText('Line speed needs a number (digits, with a point or a comma for decimals), got "3,5,1". The prediction still uses 3 m/min.');
   await expect(page.getByTestId('predicted-value')).toHaveText(`${e.fit} GU`);
   await expect(page.getByTestId('coded-1')).toHaveText('coded 0');
 });

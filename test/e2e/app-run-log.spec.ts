@@ -85,10 +85,10 @@ test('a reading that is not a number is refused with a message and nothing is sa
   await demoWithoutRun10(page);
   await openSheet(page);
   await run10(page).getByRole('link', { name: 'Log run 10' }).click();
-  await page.getByRole('textbox', { name: 'Film thickness reading' }).fill('62,9');
-  await expect(page.locator('.readings .field-error')).toContainText('use a point for decimals');
+  await page.getByRole('textbox', { name: 'Film thickness reading' }).fill('62,9,1');
+  await expect(page.locator('.readings .field-error')).toContainText('use a point or one comma for decimals');
   await page.getByRole('button', { name: 'Save run 10' }).click();
-  await expect(page.locator('.problem')).toContainText('Film thickness: reading 1 needs a number, got "62,9"');
+  await expect(page.locator('.problem')).toContainText('Film thickness: reading 1 needs a number, got "62,9,1"');
   await expect(page.getByRole('textbox', { name: 'Film thickness reading' })).toBeFocused();
   await expect(page.getByRole('status')).not.toContainText('Saved');
   await page.getByRole('link', { name: 'Run sheet' }).click();

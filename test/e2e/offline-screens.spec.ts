@@ -18,6 +18,7 @@ const READY: Record<(typeof ROUTE_NAMES)[number], readonly [string, RegExp]> = {
   runForm: ['h2', /^Run 2 of/],
   analysis: ['h2', /^Effects$/],
   quickCard: ['h2', /^Quick card$/],
+  nextRuns: ['h2', /^Next runs$/],
   export: ['h2', /^Export$/],
 };
 

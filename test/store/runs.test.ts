@@ -194,7 +194,8 @@ describe('logged runs', () => {
     const store = await freshStore();
     const study = await createStudy(store, brandPlan());
     const state = await openNewRun(store, study.id, 1);
-    expect(() => parseRunForm(study, { ...state.form, readings: ['12,5'] })).toThrow(/Gloss: reading 1 needs a number, got "12,5" \(use a point/);
+    expect(parseRunForm(study, { ...state.form, readings: ['12,5'] }).readings).toEqual([[12.5]]); // a decimal comma, as a phone keypad gives it
+    expect(() => parseRunForm(study, { ...state.form, readings: ['12,5,1'] })).toThrow(/Gloss: reading 1 needs a number, got "12,5,1" \(separate readings with spaces or ;, and use a point or one comma/);
     expect(() => parseRunForm(study, { ...state.form, actual: ['180', 'Brand East'] })).toThrow(/Powder: the actual setting needs "Brand North" or "Brand South"/);
     const bad = { ...state, studyId: study.id, values: { ...parseRunForm(study, state.form), readings: [[Number.NaN]] } };
     await expect(saveRun(store, bad)).rejects.toThrow(/Gloss: reading 1 needs a finite number/);

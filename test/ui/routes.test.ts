@@ -45,6 +45,7 @@ describe('the route table', () => {
       ['runSheet', 'Runs'],
       ['analysis', 'Effects'],
       ['quickCard', 'Predict'],
+      ['nextRuns', 'Next'],
       ['export', 'Export'],
     ]);
   });

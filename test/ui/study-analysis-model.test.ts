@@ -103,8 +103,8 @@ describe('the shared study analysis', () => {
     const { shared } = await opened();
     const card = new QuickCardModel(shared);
     const fit = card.prediction.value;
-    card.setText(1, '3,5');
-    expect(card.fieldErrors.value[1]).toBe('Line speed needs a number (use a point for decimals), got "3,5". The prediction still uses 3 m/min.');
+    card.setText(1, '3,5,1');
+    expect(card.fieldErrors.value[1]).toBe('Line speed needs a number (digits, with a point or a comma for decimals), got "3,5,1". The prediction still uses 3 m/min.');
     expect(card.settings.value[1]).toBe(3);
     expect(card.prediction.value).toEqual(fit);
     shared.show(99); // degenerate: no such response, nothing changes

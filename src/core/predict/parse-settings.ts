@@ -118,7 +118,7 @@ export function parseSettings(factors: readonly Factor[], input: SettingsInput, 
     if (options.free?.includes(i)) return makeSetting(f, f.kind === 'numeric' ? (toReal(f, 0) as number) : f.levels[0], 0, 'free');
     if (g) {
       const coded = codeOne(f, g.value);
-      const real = f.kind === 'categorical' ? toReal(f, coded) : typeof g.value === 'number' ? g.value : parseNumber(g.value.trim());
+      const real = f.kind === 'categorical' ? toReal(f, coded) : typeof g.value === 'number' ? g.value : (readSetting(f, g.value) as number);
       return makeSetting(f, real, coded, 'given');
     }
     if (f.kind === 'numeric') return makeSetting(f, toReal(f, 0) as number, 0, 'center');

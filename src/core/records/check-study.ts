@@ -85,25 +85,33 @@ function responses(v: unknown, path: string): Response[] {
   return out;
 }
 
+/**
+ * Checks one planned run: run number, standard-order index or null, replicate, block and block of
+ * origin (whole numbers from 1), kind (one of RUN_KINDS) and one finite coded setting per factor.
+ * Method: the rules of trialbook-backup.schema.json (common practice). Cost O(factors).
+ * Throws InputError naming the path. Example: checkPlannedRun({ ...run, kind: 'star' }, 'r', 2)
+ * throws 'r.kind: needs "factorial" or "center" or ... , got "star"'.
+ */
+export function checkPlannedRun(r: unknown, p: string, nFactors: number): DesignRun {
+  const ro = obj(r, p);
+  only(ro, p, ['run', 'standardOrder', 'replicate', 'block', 'originBlock', 'kind', 'coded']);
+  const coded = list(ro.coded, `${p}.coded`).map((c, j) => finite(c, `${p}.coded[${j}]`));
+  if (coded.length !== nFactors) fail(`${p}.coded`, `one coded setting per factor (${nFactors})`, `${coded.length} settings`);
+  return {
+    run: int(ro.run, `${p}.run`, 1, MAX_PLANNED_RUNS),
+    standardOrder: ro.standardOrder === null ? null : int(ro.standardOrder, `${p}.standardOrder`, 1),
+    replicate: int(ro.replicate, `${p}.replicate`, 1),
+    block: int(ro.block, `${p}.block`, 1),
+    originBlock: int(ro.originBlock, `${p}.originBlock`, 1),
+    kind: oneOf(ro.kind, `${p}.kind`, RUN_KINDS),
+    coded,
+  };
+}
+
 function design(v: unknown, path: string, nFactors: number): StoredDesign {
   const o = obj(v, path);
   only(o, path, ['runs', 'generators', 'definingRelation', 'resolution', 'wordLengths', 'aliases', 'blockWords', 'seed', 'summary', 'notes', 'screening']);
-  const runs = list(o.runs, `${path}.runs`, MAX_PLANNED_RUNS).map((r, i): DesignRun => {
-    const p = `${path}.runs[${i}]`;
-    const ro = obj(r, p);
-    only(ro, p, ['run', 'standardOrder', 'replicate', 'block', 'originBlock', 'kind', 'coded']);
-    const coded = list(ro.coded, `${p}.coded`).map((c, j) => finite(c, `${p}.coded[${j}]`));
-    if (coded.length !== nFactors) fail(`${p}.coded`, `one coded setting per factor (${nFactors})`, `${coded.length} settings`);
-    return {
-      run: int(ro.run, `${p}.run`, 1, MAX_PLANNED_RUNS),
-      standardOrder: ro.standardOrder === null ? null : int(ro.standardOrder, `${p}.standardOrder`, 1),
-      replicate: int(ro.replicate, `${p}.replicate`, 1),
-      block: int(ro.block, `${p}.block`, 1),
-      originBlock: int(ro.originBlock, `${p}.originBlock`, 1),
-      kind: oneOf(ro.kind, `${p}.kind`, RUN_KINDS),
-      coded,
-    };
-  });
+  const runs = list(o.runs, `${path}.runs`, MAX_PLANNED_RUNS).map((r, i) => checkPlannedRun(r, `${path}.runs[${i}]`, nFactors));
   if (runs.length === 0) fail(`${path}.runs`, 'at least one planned run', runs);
   const seen = new Map<number, number>();
   runs.forEach((r, i) => {

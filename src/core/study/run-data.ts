@@ -15,6 +15,7 @@ import type { Response } from './response.ts';
 import type { ResponseData } from './response-data.ts';
 import { farOutsideSettings } from '../factor/far-outside.ts';
 import { farOutsideText } from '../text/far-outside-text.ts';
+import type { RunKind } from '../design/design.ts';
 import { meanReading, plannedRunOf, type LoggedRun, type StudyPlan } from './study.ts';
 
 /** Finds a response by name (case-insensitive, surrounding spaces ignored); throws listing the names otherwise. */
@@ -32,8 +33,20 @@ function plural(n: number, one: string, many: string): string {
   return `${n} ${n === 1 ? one : many}`;
 }
 
+/**
+ * Run kinds kept out of the model unless asked for: path runs lie outside the region the model
+ * was fitted in, and confirmation runs are the test of the model, so fitting them would judge
+ * the model by itself (common practice; Montgomery, 8th ed., section 11.2, from memory).
+ */
+export const JUDGED_KINDS: readonly RunKind[] = ['path', 'confirmation'];
+
+export interface RunDataOptions {
+  /** Also fit the path and confirmation runs (JUDGED_KINDS); default false. */
+  readonly includeJudged?: boolean;
+}
+
 /** The analysis data of one response from the current state of a study's logged runs. */
-export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[], responseName: string): ResponseData {
+export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[], responseName: string, options: RunDataOptions = {}): ResponseData {
   const { response, index } = findResponse(study, responseName);
   const ordered = [...runs].sort((a, b) => a.plannedRun - b.plannedRun || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
   const coded: number[][] = [];
@@ -48,7 +61,13 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
   let missing = 0;
   let repeated = 0;
   const farNotes: string[] = [];
+  let judged = 0;
   for (const run of ordered) {
+    const plan = plannedRunOf(study, run.plannedRun);
+    if (!options.includeJudged && plan && JUDGED_KINDS.includes(plan.kind)) {
+      judged++;
+      continue;
+    }
     if (run.excluded) {
       excluded++;
       continue;
@@ -64,7 +83,6 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     for (const far of farOutsideSettings(study.factors, run.actual)) farNotes.push(farOutsideText(`Run ${run.plannedRun}`, study.factors[far.factor], far));
     coded.push(study.factors.map((f, i) => toCoded(f, run.actual[i])));
     y.push(mean);
-    const plan = plannedRunOf(study, run.plannedRun);
     blocks.push(plan?.block ?? 1);
     // Runs planned at the same coded settings are repeats of one point, whatever their actuals.
     points.push(plan ? plan.coded.join(',') : `run ${run.plannedRun}`);
@@ -75,6 +93,7 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     labels.push(k === 1 ? String(run.plannedRun) : `${run.plannedRun}#${k}`);
   }
   const messages: string[] = [];
+  if (judged > 0) messages.push(`${plural(judged, 'path or confirmation run', 'path and confirmation runs')} kept out of the model (they are judged against it)`);
   if (excluded > 0) messages.push(`${plural(excluded, 'excluded run', 'excluded runs')} skipped`);
   if (missing > 0) messages.push(`${plural(missing, 'run', 'runs')} without a value for ${response.name} skipped`);
   if (repeated > 0) {

@@ -7,7 +7,7 @@
  */
 import { InputError } from '../errors.ts';
 import { parseNumber } from '../factor/coding.ts';
-import { readSetting } from '../factor/read-setting.ts';
+import { parseTypedNumber, readSetting } from '../factor/read-setting.ts';
 import { splitReadings } from './reading-text.ts';
 import { checkRunValues, plannedSettings, type RunValues, type StudyPlan } from './study.ts';
 
@@ -50,13 +50,17 @@ export function formFromValues(values: RunValues): RunForm {
   };
 }
 
-/** Readings typed for one response; throws naming the response and the reading. */
-export function parseReadings(textIn: string, responseName: string): number[] {
+/**
+ * Readings typed for one response; throws naming the response and the reading. With
+ * `typed` (the run form) a comma may be the decimal mark of each reading (parseTypedNumber);
+ * without it (files) numbers are read strictly.
+ */
+export function parseReadings(textIn: string, responseName: string, typed = false): number[] {
   const parts = splitReadings(textIn).filter((p) => p !== '');
   return parts.map((p, i) => {
-    const x = parseNumber(p);
+    const x = typed ? parseTypedNumber(p) : parseNumber(p);
     if (!Number.isFinite(x)) {
-      const hint = /^\d+,\d+$/.test(p) ? ' (use a point for decimals; separate readings with spaces or ;)' : '';
+      const hint = /,/.test(p) ? ' (separate readings with spaces or ;, and use a point or one comma for decimals)' : '';
       throw new InputError(`${responseName}: reading ${i + 1} needs a number, got "${p}"${hint}`);
     }
     return x;
@@ -68,7 +72,7 @@ export function parseRunForm(study: StudyPlan, form: RunForm): RunValues {
   if (form.actual.length !== study.factors.length) throw new InputError(`Actual settings: needs one per factor (${study.factors.length}), got ${form.actual.length}`);
   if (form.readings.length !== study.responses.length) throw new InputError(`Readings: needs one per response (${study.responses.length}), got ${form.readings.length}`);
   const actual = study.factors.map((f, i) => readSetting(f, form.actual[i], `${f.name}: the actual setting`));
-  const readings = study.responses.map((r, i) => parseReadings(form.readings[i], r.name));
+  const readings = study.responses.map((r, i) => parseReadings(form.readings[i], r.name, true));
   const loggedAt = form.loggedAt.trim() === '' ? null : form.loggedAt.trim();
   return checkRunValues(study, {
     actual,

@@ -8,7 +8,10 @@
  *     "exportedAt": "...", "device": "...", "scope": "all" | "study",
  *     "counts": { "studies": 1, "runs": 16, "revisions": 19 },
  *     "checksum": { "algorithm": "SHA-256", "value": "<64 hex digits>" },
- *     "payload": { "studies": [...], "revisions": [...] } }
+ *     "payload": { "studies": [...], "revisions": [...], "blocks": [...] } }
+ *
+ * `blocks` (planned runs added to a study after its plan: path, foldover, confirmation) is
+ * written only when there are some.
  *
  * The checksum is SHA-256 (FIPS 180-4) of the UTF-8 bytes of the canonical JSON of `payload`
  * (src/core/records/canonical-json.ts). Reading checks, in this order: the size (at most
@@ -18,10 +21,13 @@
  * write).
  */
 import { InputError } from '../../core/errors.ts';
+import { withAddedBlocks, type AddedBlock } from '../../core/study/added-block.ts';
 import type { RunRevision, StudyRecord } from '../../core/study/study.ts';
 import { MAX_NESTING } from '../../core/records/canonical-json.ts';
 import { canonicalJsonBytes } from '../../core/records/canonical-json-bytes.ts';
 import { canonicalSha256 } from '../../core/records/canonical-sha256.ts';
+import { checkAddedBlock } from '../../core/records/check-added-block.ts';
+import { canonicalJson } from '../../core/records/canonical-json.ts';
 import { checkHistories, checkUniqueIds } from '../../core/records/check-histories.ts';
 import { checkRevision } from '../../core/records/check-revision.ts';
 import { checkStudy } from '../../core/records/check-study.ts';
@@ -42,6 +48,8 @@ export const BACKUP_VERSION = 2;
 export interface BackupPayload {
   readonly studies: readonly StudyRecord[];
   readonly revisions: readonly RunRevision[];
+  /** Planned runs added to the studies after their plans (path, foldover, confirmation); absent when none. */
+  readonly blocks?: readonly AddedBlock[];
 }
 
 export interface BackupCounts {
@@ -83,7 +91,8 @@ const byId = <T extends { id: string }>(a: T, b: T) => (a.id < b.id ? -1 : a.id 
 
 /** The payload in file order: studies and revisions sorted by id, so equal contents give equal files. */
 export function sortPayload(p: BackupPayload): BackupPayload {
-  return { studies: [...p.studies].sort(byId), revisions: [...p.revisions].sort(byId) };
+  const sorted = { studies: [...p.studies].sort(byId), revisions: [...p.revisions].sort(byId) };
+  return p.blocks && p.blocks.length > 0 ? { ...sorted, blocks: [...p.blocks].sort(byId) } : sorted;
 }
 
 /** The checksum of a payload: SHA-256 of its canonical JSON, as hexadecimal. */
@@ -207,13 +216,17 @@ export function checkBackup(doc: Record<string, unknown>): Backup {
   only(doc, 'file', ['format', 'formatVersion', 'app', 'exportedAt', 'device', 'scope', 'counts', 'checksum', 'payload']);
   const app = obj(doc.app, 'app');
   const payloadObj = obj(doc.payload, 'payload');
-  only(payloadObj, 'payload', ['studies', 'revisions']);
+  only(payloadObj, 'payload', ['studies', 'revisions', 'blocks']);
   const studies = list(payloadObj.studies, 'payload.studies', 10_000).map((s, i) => checkStudy(s, `payload.studies[${i}]`));
   checkUniqueIds(studies, 'payload.studies', 'study');
-  const studyMap = new Map(studies.map((s) => [s.id, s]));
+  const ownMap = new Map(studies.map((s) => [s.id, s]));
+  const blocks = payloadObj.blocks === undefined ? [] : list(payloadObj.blocks, 'payload.blocks', 100_000).map((b, i) => checkAddedBlock(b, `payload.blocks[${i}]`, ownMap));
+  checkUniqueIds(blocks, 'payload.blocks', 'block');
+  // Revisions are checked against each study's whole plan, its added blocks' runs included.
+  const studyMap = new Map(studies.map((s) => [s.id, withAddedBlocks(s, blocks)]));
   const revisions = list(payloadObj.revisions, 'payload.revisions', 10_000_000).map((r, i) => checkRevision(r, `payload.revisions[${i}]`, studyMap));
   checkHistories(revisions, 'payload.revisions');
-  const payload: BackupPayload = { studies, revisions };
+  const payload: BackupPayload = blocks.length > 0 ? { studies, revisions, blocks } : { studies, revisions };
   const countsObj = obj(doc.counts, 'counts');
   const counts = countPayload(payload);
   for (const k of ['studies', 'runs', 'revisions'] as const) {

@@ -1,6 +1,6 @@
 /**
  * Merging a backup into what a device holds, as pure functions the store runs inside one
- * transaction. A merge is a union by id: studies and revisions never change once written, so an
+ * transaction. A merge is a union by id: studies, added blocks and revisions never change once written, so an
  * id present on both sides should carry the same content. When it does not (the file was altered,
  * or two devices made different records under one id), the file's record is set aside, with the
  * field that differs, together with every record of the file that depends on it (the revisions
@@ -10,6 +10,8 @@
  * then decided again from all its revisions (see compareRevisions), so merging twice equals
  * merging once, and A then B equals B then A.
  */
+import { InputError } from '../../core/errors.ts';
+import type { AddedBlock } from '../../core/study/added-block.ts';
 import { currentRun, type LoggedRun, type RunRevision, type StudyRecord } from '../../core/study/study.ts';
 import { canonicalJson } from '../../core/records/canonical-json.ts';
 import { firstDifference } from '../../core/records/first-difference.ts';
@@ -43,6 +45,8 @@ export interface SetAside {
 
 export interface MergePlan {
   readonly newStudies: readonly StudyRecord[];
+  /** Blocks of planned runs added to studies, not yet here (see core/study/added-block.ts). */
+  readonly newBlocks: readonly AddedBlock[];
   readonly newRevisions: readonly RunRevision[];
   /** New current state of every logged run the import touches. */
   readonly runs: readonly LoggedRun[];
@@ -58,6 +62,8 @@ export interface MergePlan {
 export interface MergeBase {
   readonly studies: ReadonlyMap<string, StudyRecord>;
   readonly revisions: ReadonlyMap<string, RunRevision>;
+  /** The added blocks the file names that are already here, by id. */
+  readonly blocks: ReadonlyMap<string, AddedBlock>;
   /** All revisions of each logged run the file touches, by run id. */
   readonly historyOf: (runId: string) => readonly RunRevision[];
 }
@@ -92,6 +98,14 @@ export function planMerge(base: MergeBase, incoming: BackupPayload): MergePlan {
         reason: `Study "${s.title}" (id ${s.id}) in the file differs from the study with the same id on this device ("${have.title}") in ${fieldName(field)}; a study's plan never changes, so one of them was altered. The device's study is kept as it was, the file's is set aside.`,
         record: s,
       });
+    }
+  }
+  const newBlocks: AddedBlock[] = [];
+  for (const b of incoming.blocks ?? []) {
+    const have = base.blocks.get(b.id);
+    if (!have) newBlocks.push(b);
+    else if (canonicalJson(have) !== canonicalJson(b)) {
+      throw new InputError(`The block of planned runs ${b.id} (${b.purpose}) in the file differs from the block with the same id on this device; a block never changes once added, so the file was altered. Nothing was imported.`);
     }
   }
   // Revisions by counter, so a parent (always a smaller counter) is decided before its children.
@@ -153,5 +167,5 @@ export function planMerge(base: MergeBase, incoming: BackupPayload): MergePlan {
   // Revisions set aside with their run are not new, nor are revisions built on them (a child
   // of a set-aside run's revision is of the same run, so it is in that run's list already).
   const kept = asideRuns.size === 0 ? newRevisions : newRevisions.filter((r) => !asideRuns.has(r.runId));
-  return { newStudies, newRevisions: kept, runs, unchangedStudies, unchangedRevisions, conflicts, setAside };
+  return { newStudies, newBlocks, newRevisions: kept, runs, unchangedStudies, unchangedRevisions, conflicts, setAside };
 }

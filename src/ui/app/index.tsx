@@ -1,9 +1,10 @@
 /**
- * The app shell: the title bar, the warnings about this browser and other tabs, and the screen
+ * The app shell: the title bar, a quiet note while offline, the warnings about this browser and other tabs, and the screen
  * the address asks for (the route table is routes.ts, the screen switch route-screen.tsx).
  */
 import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
+import { OfflineNote } from '../components/offline-note/index.tsx';
 import { ProblemBox } from '../components/problem-box/index.tsx';
 import { onScreenFiles, hasOnScreen } from '../lib/on-screen.ts';
 import { downloadText } from '../lib/save-file.ts';
@@ -40,6 +41,7 @@ export function App(_props: AppProps) {
           Trialbook
         </a>
       </h1>
+      <OfflineNote />
       {!secure && (
         <p class="warning" role="alert">
           This page was opened over plain http on a network address, so the browser allows no offline use and no

@@ -17,6 +17,7 @@ const SCREENS: { readonly [N in RouteName]: LazyScreen<RouteParams<N> & { readon
   runForm: lazyScreen(() => import('../screens/run-form/index.tsx').then((m) => m.RunFormScreen)),
   analysis: lazyScreen(() => import('../screens/analysis/index.tsx').then((m) => m.AnalysisScreen)),
   quickCard: lazyScreen(() => import('../screens/quick-card/index.tsx').then((m) => m.QuickCardScreen)),
+  nextRuns: lazyScreen(() => import('../screens/next-runs/index.tsx').then((m) => m.NextRunsScreen)),
   export: lazyScreen(() => import('../screens/export/index.tsx').then((m) => m.ExportScreen)),
 };
 

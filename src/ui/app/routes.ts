@@ -26,6 +26,7 @@ export const ROUTES = {
   runForm: { paths: ['/study/:studyId/run/:plannedRun'] },
   analysis: { paths: ['/study/:studyId/analysis'], tab: 'Effects' },
   quickCard: { paths: ['/study/:studyId/predict'], tab: 'Predict' },
+  nextRuns: { paths: ['/study/:studyId/next'], tab: 'Next' },
   // One screen, two addresses: a study's files, or every study's.
   export: { paths: ['/study/:studyId/export', '/export'], tab: 'Export' },
 } as const satisfies Record<string, RouteSpec>;

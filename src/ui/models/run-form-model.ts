@@ -141,7 +141,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     if (!s || !f) return [];
     return s.study.responses.map((r, i) => {
       try {
-        parseReadings(f.readings[i], r.name);
+        parseReadings(f.readings[i], r.name, true);
         return null;
       } catch (err) {
         return problemOf(err).message;
@@ -156,7 +156,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     if (!s || !f) return [];
     return s.study.responses.map((r, i) => {
       try {
-        return meanReading(parseReadings(f.readings[i], r.name));
+        return meanReading(parseReadings(f.readings[i], r.name, true));
       } catch {
         return null;
       }

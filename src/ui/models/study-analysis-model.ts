@@ -85,9 +85,9 @@ export interface ResponseAnalysis {
   readonly result: ReadonlySignal<AnalysisResult>;
 }
 
-/** Identifies what an analysis was worked out from: the study and each run's current revision. */
+/** Identifies what an analysis was worked out from: the study, its planned runs (runs may be added later) and each run's current revision. */
 function fingerprint(d: StudyData): string {
-  return [d.study.id, ...d.runs.map((r) => `${r.id}@${r.revisionId}`).sort()].join('|');
+  return [d.study.id, `planned ${d.study.design.runs.length}`, ...d.runs.map((r) => `${r.id}@${r.revisionId}`).sort()].join('|');
 }
 
 export const StudyAnalysisModel = createModel((store: Store, studyId: string) => {

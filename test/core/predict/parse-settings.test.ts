@@ -35,7 +35,7 @@ describe('parseSettings', () => {
       }
       return 'no error';
     };
-    for (const [i, text] of [[0, '18,5'], [0, '12abc'], [1, 'silk'], [2, '-5'], [2, '0']] as const) {
+    for (const [i, text] of [[0, '18,5,1'], [0, '12abc'], [1, 'silk'], [2, '-5'], [2, '0']] as const) {
       const key = factors[i].letter;
       const given = { A: '170', B: 'matte', [key]: text };
       const expected = message(() => readSetting(factors[i], text));
@@ -76,7 +76,7 @@ describe('parseSettings', () => {
     expect(() => parseSettings(factors, { Pressure: 3, Powder: 'gloss' })).toThrow(/No factor is named or lettered "Pressure"; the factors are A \(Temperature\)/);
     expect(() => parseSettings(factors, { A: 170, Temperature: 180, Powder: 'gloss' })).toThrow(/given twice \(as "A" and "Temperature"\)/);
     expect(() => parseSettings(factors, { A: '', Powder: 'gloss' })).toThrow(/Temperature needs a setting, got an empty one/);
-    expect(() => parseSettings(factors, { A: '18O', Powder: 'gloss' })).toThrow(/Temperature needs a number \(use a point for decimals\), got "18O"/);
+    expect(() => parseSettings(factors, { A: '18O', Powder: 'gloss' })).toThrow(/Temperature needs a number \(digits, with a point or a comma for decimals\), got "18O"/);
     expect(() => parseSettings(factors, { A: Number.NaN, Powder: 'gloss' })).toThrow(/finite number/);
     expect(() => parseSettings(factors, { C: -5, Powder: 'gloss' })).toThrow(/log scale and needs a positive setting/);
   });

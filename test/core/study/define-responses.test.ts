@@ -24,7 +24,8 @@ describe('defineResponses', () => {
   it('a target goal needs a readable, finite target', () => {
     expect(() => defineResponses([{ name: 'Gloss', goal: 'target', target: '' }])).toThrow('Gloss: the goal is a target, so it needs a target value');
     expect(() => defineResponses([{ name: 'Gloss', goal: 'target' }])).toThrow('Gloss: the goal is a target, so it needs a target value');
-    expect(() => defineResponses([{ name: 'Gloss', goal: 'target', target: '7,5' }])).toThrow('Gloss: the target needs a number (use a point for decimals), got "7,5"');
+    expect(defineResponses([{ name: 'Gloss', goal: 'target', target: '7,5' }])[0].target).toBe(7.5); // a decimal comma, as a phone keypad gives it
+    expect(() => defineResponses([{ name: 'Gloss', goal: 'target', target: '7,5,0' }])).toThrow('Gloss: the target needs a number (digits, with a point or a comma for decimals), got "7,5,0"');
     expect(() => defineResponses([{ name: 'Gloss', goal: 'target', target: Number.POSITIVE_INFINITY }])).toThrow('needs a finite number');
   });
   it('refuses an unknown goal', () => {

@@ -22,7 +22,7 @@ describe('parseReadings', () => {
     expect(parseReadings(' 28;;25 ', 'Yield')).toEqual([28, 25]);
   });
   it('refuses a decimal comma with a hint, and text that is not a number', () => {
-    expect(() => parseReadings('62,9', 'Film thickness')).toThrow('Film thickness: reading 1 needs a number, got "62,9" (use a point for decimals; separate readings with spaces or ;)');
+    expect(() => parseReadings('62,9', 'Film thickness')).toThrow('Film thickness: reading 1 needs a number, got "62,9" (separate readings with spaces or ;, and use a point or one comma for decimals)');
     expect(() => parseReadings('28 2S', 'Yield')).toThrow('Yield: reading 2 needs a number, got "2S"');
   });
   it('degenerate input: an empty text is no readings', () => {
@@ -39,7 +39,7 @@ describe('parseRunForm and formFromValues', () => {
     expect(formFromValues(values)).toEqual({ ...typed, actual: ['160', '4', '30'] });
   });
   it('refuses a setting the reader refuses, naming the field', () => {
-    expect(() => parseRunForm(study, { ...blankForm(study, 1), actual: ['18,5', '2', '30'] })).toThrow('Oven temperature: the actual setting needs a number (use a point for decimals), got "18,5"');
+    expect(() => parseRunForm(study, { ...blankForm(study, 1), actual: ['18,5,1', '2', '30'] })).toThrow('Oven temperature: the actual setting needs a number (digits, with a point or a comma for decimals), got "18,5,1"');
     expect(() => parseRunForm(study, { ...blankForm(study, 1), excluded: true })).toThrow('Excluded: an excluded run needs a reason, got none');
   });
   it('degenerate input: a form with the wrong number of fields', () => {

@@ -14,7 +14,7 @@ const rev = (id: string, runId: string, n: number, parents: string[] = [], readi
 function baseOf(studies: StudyRecord[], revisions: RunRevision[]): MergeBase {
   const byRun = new Map<string, RunRevision[]>();
   for (const r of revisions) byRun.set(r.runId, [...(byRun.get(r.runId) ?? []), r]);
-  return { studies: new Map(studies.map((s) => [s.id, s])), revisions: new Map(revisions.map((r) => [r.id, r])), historyOf: (id) => byRun.get(id) ?? [] };
+  return { studies: new Map(studies.map((s) => [s.id, s])), revisions: new Map(revisions.map((r) => [r.id, r])), historyOf: (id) => byRun.get(id) ?? [], blocks: new Map() };
 }
 
 describe('planMerge', () => {

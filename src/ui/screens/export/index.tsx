@@ -55,7 +55,7 @@ export function ExportScreen({ store, studyId }: ExportScreenProps) {
             <h3 class="card-title">{s.title}</h3>
             {isDemo(s) && <DemoBadge compact />}
             <p class="card-line quiet">Last exported: {status?.lastExports[s.id] ? when(status.lastExports[s.id]) : 'never'}</p>
-            {status?.backupDue.some((b) => b.studyId === s.id) && <p class="card-line due">A backup is due: this study has runs not exported in the last week.</p>}
+            {status?.backupDue.some((b) => b.studyId === s.id) && <p class="card-line due">A backup is due: runs saved more than a week ago are in no exported file yet. Export this study now.</p>}
             <button type="button" class="btn primary block" disabled={busy} onClick={() => void model.download(s.id, 'json')}>
               Download backup (JSON)
             </button>

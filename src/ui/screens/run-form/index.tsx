@@ -66,7 +66,7 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
       <StudyHeader study={study} current={null} back={{ href: hrefTo('runSheet', { studyId: study.id }), label: 'Run sheet' }} />
       <h2 class="run-title">
         Run {plannedRun} <span class="quiet">of {runCount}</span>
-        {kind !== undefined && kind !== 'factorial' && <span class="run-kind"> {RUN_KIND_NAMES[kind]}</span>}
+        {kind !== undefined && <span class="run-kind"> {RUN_KIND_NAMES[kind]}</span>}
       </h2>
       {state.current && (
         <p class="quiet">

@@ -1,6 +1,7 @@
 /**
  * A study's run sheet: the planned runs in run order, each with its planned settings in real
- * units, whether it is logged, and one big button to log it (or to review what was logged).
+ * units (and the actual one beside it where the logged run differs), whether it is logged or
+ * excluded, and one big button to log it (or to review what was logged).
  */
 import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
@@ -12,7 +13,15 @@ import { setting, withUnit } from '../../lib/format.ts';
 import { hrefTo } from '../../app/routes.ts';
 import { RunSheetModel } from '../../models/run-sheet-model.ts';
 import { RUN_KIND_NAMES } from '../../../core/design/design.ts';
+import type { Setting } from '../../../core/study/study.ts';
+import { SETTING_TOLERANCE } from '../../../core/tolerance.ts';
 import './style.css';
+
+/** True when a logged setting is not the planned one (numbers compared with the core's setting tolerance, relative). */
+function settingDiffers(actual: Setting, planned: Setting): boolean {
+  if (typeof actual === 'number' && typeof planned === 'number') return Math.abs(actual - planned) > SETTING_TOLERANCE * Math.max(1, Math.abs(planned));
+  return actual !== planned;
+}
 
 export type RunSheetScreenProps = { readonly store: Store; readonly studyId: string };
 
@@ -43,22 +52,34 @@ export function RunSheetScreen({ store, studyId }: RunSheetScreenProps) {
               <div class="run-head">
                 <span class="run-no">Run {row.run}</span>
                 <span class="run-kind">{RUN_KIND_NAMES[row.kind]}</span>
-                <span class={logged ? 'run-state done' : 'run-state'}>{logged ? (row.excluded ? 'Excluded' : 'Logged ✓') : 'Not logged'}</span>
+                <span class={logged ? (row.excluded ? 'run-state out' : 'run-state done') : 'run-state'}>{logged ? (row.excluded ? '⊘ Excluded' : 'Logged ✓') : 'Not logged'}</span>
               </div>
               <dl class="settings">
-                {study.factors.map((f, i) => (
-                  <div class="setting" key={f.name}>
-                    <dt>{f.name}</dt>
-                    <dd>{setting(row.planned[i], f.kind === 'numeric' ? f.unit : undefined)}</dd>
-                  </div>
-                ))}
+                {study.factors.map((f, i) => {
+                  const unit = f.kind === 'numeric' ? f.unit : undefined;
+                  const actual = logged ? row.logged[0].actual[i] : undefined;
+                  const differs = actual !== undefined && settingDiffers(actual, row.planned[i]);
+                  return (
+                    <div class="setting" key={f.name}>
+                      <dt>{f.name}</dt>
+                      <dd>
+                        {!differs && <span>{setting(row.planned[i], unit)}</span>}
+                        {differs && (
+                          <>
+                            <span class="actual">actual {setting(actual, unit)}</span> <span class="planned-was">planned {setting(row.planned[i], unit)}</span>
+                          </>
+                        )}
+                      </dd>
+                    </div>
+                  );
+                })}
               </dl>
               {logged && !row.excluded && (
                 <p class="run-result">
                   {study.responses.map((r, i) => `${r.name} ${withUnit(row.means[i], r.unit)}`).join(' · ')}
                 </p>
               )}
-              {row.excluded && <p class="run-result">Reason: {row.logged[0].reason}</p>}
+              {row.excluded && <p class="run-result excluded-note">Left out of the analysis. Reason: {row.logged[0].reason}</p>}
               {row.farOutside.map((t) => (
                 <p key={t} class="far-note">
                   <strong>Far outside the plan.</strong> {t}.

@@ -1,0 +1,26 @@
+/**
+ * The sentence that says what a set of confirmation runs found, for the screens and the exports
+ * (see core/predict/confirm-runs.ts for the comparison and its source).
+ */
+import type { ConfirmationComparison } from '../predict/confirm-runs.ts';
+import { shortNumber } from './number-text.ts';
+
+/**
+ * One plain sentence on the comparison. Cost O(1).
+ * Example: mean 41.53 of 3 runs inside [41.14, 41.95] -> "Confirmed: the mean of the 3
+ * confirmation runs, 41.53, lies inside the 95% interval for the mean of 3 new runs, 41.14 to
+ * 41.95 (predicted 41.54)."
+ */
+export function confirmationStatement(c: ConfirmationComparison): string {
+  const runs = `${c.m} confirmation run${c.m === 1 ? '' : 's'}`;
+  const newRuns = `${c.m === 1 ? 'one new run' : `the mean of ${c.m} new runs`}`;
+  const pct = `${shortNumber(c.level * 100)}%`;
+  if (c.interval === null) {
+    return `Cannot judge: the model has no runs left over to estimate the noise, so there is no interval to compare the ${runs} with. Refit with fewer terms first.`;
+  }
+  const where = `the ${pct} interval for ${newRuns}, ${shortNumber(c.interval[0])} to ${shortNumber(c.interval[1])} (predicted ${shortNumber(c.fit)})`;
+  const mean = `${c.m === 1 ? 'the reading of the' : 'the mean of the'} ${runs}, ${shortNumber(c.mean)}`;
+  return c.outcome === 'confirmed'
+    ? `Confirmed: ${mean}, lies inside ${where}.`
+    : `Not confirmed: ${mean}, lies outside ${where}. The model does not hold at this setting; do not rely on its predictions here.`;
+}

@@ -1,0 +1,225 @@
+/**
+ * Next runs: what to do after the analysis, on the phone. Solve for a target, follow a path of
+ * steepest ascent or descent, turn the path's steps into planned runs, plan confirmation runs at
+ * a chosen setting, and see whether the logged confirmation runs confirm the model. Every
+ * proposed setting comes with the standing caution.
+ */
+import { useModel } from '@preact/signals';
+import { useEffect } from 'preact/hooks';
+import { confirmationStatement } from '../../../core/text/confirmation-text.ts';
+import type { Store } from '../../../store/store.ts';
+import { CautionBox } from '../../components/caution-box/index.tsx';
+import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
+import { CountStepper } from '../../components/count-stepper/index.tsx';
+import { ProblemBox } from '../../components/problem-box/index.tsx';
+import { StudyHeader } from '../../components/study-header/index.tsx';
+import { num, setting, withUnit } from '../../lib/format.ts';
+import { NextRunsModel } from '../../models/next-runs-model.ts';
+import { openStudyAnalysis } from '../../models/study-analysis-model.ts';
+import { CAUTION } from '../../../core/predict/caution.ts';
+import './style.css';
+
+export type NextRunsScreenProps = { readonly store: Store; readonly studyId: string };
+
+function range(i: readonly [number, number] | null, unit: string | undefined): string {
+  return i ? `${num(i[0])} to ${withUnit(i[1], unit)}` : 'not available (no runs left over to estimate the noise)';
+}
+
+export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
+  const shared = openStudyAnalysis(store, studyId);
+  const model = useModel(() => new NextRunsModel(store, shared));
+  useEffect(() => {
+    void shared.load();
+    void model.refreshBlocks(studyId);
+  }, []);
+  const d = shared.data.value;
+  const problem = shared.problem.value;
+  const shown = shared.shown.value;
+  if (problem) return <ProblemBox problem={problem} />;
+  if (!d || !shown) return <p class="quiet">Reading the runs…</p>;
+  const { study } = d;
+  const { response } = shown;
+  const numeric = study.factors.flatMap((f, i) => (f.kind === 'numeric' ? [{ value: i, label: f.name }] : []));
+  const path = model.path.value;
+  const solution = model.solution.value;
+  const base = model.pathBase.value;
+  const baseFactor = base !== null ? study.factors[base] : null;
+  const saving = model.saving.value;
+  return (
+    <section class="next-runs">
+      <StudyHeader study={study} current="nextRuns" />
+      <h2>Next runs</h2>
+      <ChoiceButtons label="Response" options={study.responses.map((r, i) => ({ value: i, label: r.name }))} value={shown.index} onChoose={(i) => shared.show(i)} />
+      {model.modelProblem.value && (
+        <p class="problem input" role="alert">
+          {model.modelProblem.value} Log more runs, then come back here.
+        </p>
+      )}
+      {model.saved.value && (
+        <p class="saved-note" role="status">
+          {model.saved.value}
+        </p>
+      )}
+      {model.saveProblem.value && (
+        <p class="problem input" role="alert">
+          {model.saveProblem.value}
+        </p>
+      )}
+
+      <section class="next-part" aria-labelledby="solve-h">
+        <h3 id="solve-h">Solve for a target</h3>
+        <p class="quiet">The setting of one factor that gives a target, the others held at their centers (categorical factors at their first level).</p>
+        {numeric.length > 0 && <ChoiceButtons label="Factor to move" options={numeric} value={model.solveIndex.value ?? -1} onChoose={(i) => model.setSolveFactor(i)} />}
+        <div class="field">
+          <label class="field-name" for="solve-target">
+            Target {response.name}
+            {response.unit ? ` (${response.unit})` : ''}
+          </label>
+          <input id="solve-target" class="num" type="text" inputMode="decimal" autocomplete="off" value={model.targetText.value} onInput={(e) => model.setTarget((e.currentTarget as HTMLInputElement).value)} />
+        </div>
+        {solution && !solution.ok && (
+          <p class="problem input" role="alert">
+            {solution.message}
+          </p>
+        )}
+        {solution && solution.ok && (
+          <div class={solution.value.reachable ? 'result-card' : 'result-card outside'} data-testid="solve-result">
+            <p class="result-main">
+              {solution.value.factor.name}: <strong class="nowrap">{setting(solution.value.setting, solution.value.factor.unit)}</strong>
+              {solution.value.reachable ? '' : ' (the nearest the tested range allows)'}
+            </p>
+            <p>
+              Predicted {response.name} there: {withUnit(solution.value.fit, response.unit)}; 95% interval for one run: {range(solution.value.pi, response.unit)}.
+            </p>
+            {solution.value.messages.length > 0 && (
+              <ul class="warnings">
+                {solution.value.messages.map((m) => (
+                  <li key={m}>{m}</li>
+                ))}
+              </ul>
+            )}
+            <button type="button" class="btn block" disabled={saving} onClick={() => model.addConfirmation(study.id, { from: 'solve' })}>
+              Plan confirmation runs at this setting
+            </button>
+          </div>
+        )}
+      </section>
+
+      <section class="next-part" aria-labelledby="path-h">
+        <h3 id="path-h">Path of steepest {model.pathSense.value}</h3>
+        <p class="quiet">Steps from the center in the direction the main effects point, to find where {response.name} stops improving.</p>
+        <ChoiceButtons
+          label="Direction"
+          options={[
+            { value: 'ascent', label: 'Larger (ascent)' },
+            { value: 'descent', label: 'Smaller (descent)' },
+          ]}
+          value={model.pathSense.value}
+          onChoose={(s) => model.setPathSense(s)}
+        />
+        {numeric.length > 0 && <ChoiceButtons label="Base factor" options={numeric} value={base ?? -1} onChoose={(i) => model.setPathBase(i)} />}
+        <div class="field">
+          <label class="field-name" for="path-step">
+            Step of {baseFactor?.name ?? 'the base factor'}
+            {baseFactor?.kind === 'numeric' && baseFactor.unit ? ` (${baseFactor.unit})` : ''}
+          </label>
+          <input id="path-step" class="num" type="text" inputMode="decimal" autocomplete="off" value={model.pathStepText.value} onInput={(e) => model.setPathStep((e.currentTarget as HTMLInputElement).value)} />
+        </div>
+        <CountStepper id="path-steps" label="Number of steps" value={model.pathStepsText.value} min={1} max={20} onChange={(t) => model.setPathSteps(t)} />
+        {path && !path.ok && model.pathStepText.value.trim() !== '' && (
+          <p class="problem input" role="alert">
+            {path.message}
+          </p>
+        )}
+        {path && path.ok && (
+          <>
+            <ol class="path-steps" data-testid="path-steps">
+              {path.value.steps.map((s) => (
+                <li key={s.step} class={s.outside ? 'path-step outside' : 'path-step'}>
+                  <div class="step-head">
+                    <span class="step-no">{s.step === 0 ? 'Center' : `Step ${s.step}`}</span>
+                    {s.outside && <span class="outside-mark">⚠ outside the tested range</span>}
+                  </div>
+                  <p class="step-settings">
+                    {study.factors.map((f, i) => (
+                      <span class="nowrap" key={f.name}>
+                        {i > 0 ? ' · ' : ''}
+                        {f.name} {setting(s.real[i], f.kind === 'numeric' ? f.unit : undefined)}
+                      </span>
+                    ))}
+                  </p>
+                  <p>
+                    Predicted {withUnit(s.fit, response.unit)}; 95% for one run {range(s.pi, response.unit)}
+                  </p>
+                  {s.step > 0 && (
+                    <button type="button" class="btn ghost" disabled={saving} onClick={() => model.addConfirmation(study.id, { from: 'path', step: s.step })}>
+                      Confirm at step {s.step}
+                    </button>
+                  )}
+                </li>
+              ))}
+            </ol>
+            {path.value.messages.length > 0 && (
+              <ul class="warnings">
+                {path.value.messages.map((m) => (
+                  <li key={m}>{m}</li>
+                ))}
+              </ul>
+            )}
+            <button type="button" class="btn primary block" disabled={saving || model.pathAdded.value} onClick={() => model.addPath(study.id)}>
+              {model.pathAdded.value ? 'These steps are on the run sheet' : `Add the ${path.value.steps.length - 1} steps as planned runs`}
+            </button>
+          </>
+        )}
+        {model.pathPoints.value.map((pts, k) => (
+          <table class="path-table" key={k} aria-label={`Path runs ${pts[0]?.run ?? ''} to ${pts[pts.length - 1]?.run ?? ''}: observed against predicted`}>
+            <thead>
+              <tr>
+                <th scope="col">Run</th>
+                <th scope="col">Step</th>
+                <th scope="col">Predicted</th>
+                <th scope="col">Observed</th>
+              </tr>
+            </thead>
+            <tbody>
+              {pts.map((p) => (
+                <tr key={p.run}>
+                  <td>{p.run}</td>
+                  <td>{p.step}</td>
+                  <td>{num(p.predicted)}</td>
+                  <td>{p.observed === null ? 'not logged' : num(p.observed)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        ))}
+      </section>
+
+      <section class="next-part" aria-labelledby="confirm-h">
+        <h3 id="confirm-h">Confirmation runs</h3>
+        <p class="quiet">Runs at a chosen setting, judged against the model fitted without them: their mean should fall inside the 95% interval for the mean of that many new runs.</p>
+        <CountStepper id="confirm-count" label="How many confirmation runs to plan" value={model.confirmCountText.value} min={1} max={20} onChange={(t) => model.setConfirmCount(t)} />
+        {model.judged.value.length === 0 && <p class="quiet">None planned yet: choose a setting above (a solved setting or a path step).</p>}
+        {model.judged.value.map((j) => (
+          <div class="result-card" key={j.block.id} data-testid="confirmation">
+            <p class="result-main">
+              Runs {j.block.runs[0].run} to {j.block.runs[j.block.runs.length - 1].run}: {j.block.note}
+            </p>
+            {j.judged === null && (
+              <p>
+                {j.logged} of {j.block.runs.length} logged with a value for {response.name}. Log them on the run sheet to see the verdict.
+              </p>
+            )}
+            {j.judged && !j.judged.ok && (
+              <p class="problem input" role="alert">
+                {j.judged.message}
+              </p>
+            )}
+            {j.judged && j.judged.ok && <p class={j.judged.value.outcome === 'confirmed' ? 'verdict good' : 'verdict bad'}>{confirmationStatement(j.judged.value)}</p>}
+          </div>
+        ))}
+      </section>
+      <CautionBox lines={CAUTION} />
+    </section>
+  );
+}

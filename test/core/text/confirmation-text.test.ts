@@ -1,0 +1,27 @@
+import { describe, expect, it } from 'vitest';
+import { analyze } from '../../../src/core/fit/analyze.ts';
+import { compareConfirmation } from '../../../src/core/predict/confirm-runs.ts';
+import { parseSettings } from '../../../src/core/predict/parse-settings.ts';
+import { confirmationStatement } from '../../../src/core/text/confirmation-text.ts';
+import { fixtureData } from '../../helpers/fixtures.ts';
+
+// Montgomery, Design and Analysis of Experiments, 8th ed., section 6.8 data (2^2 + 5 center runs).
+const data = fixtureData('montgomery-8e-ex6-6-center-points.csv', { factors: ['Time', 'Temperature'], response: 'Yield' });
+const model = analyze(data, { terms: [1, 2] }).model;
+const at = parseSettings(model.factors, { Time: 40, Temperature: 160 });
+
+describe('confirmationStatement', () => {
+  it('says "Confirmed" with the mean and the interval when the mean lies inside', () => {
+    const s = confirmationStatement(compareConfirmation(model, at, [41.2, 41.8, 41.6])); // invented readings
+    expect(s).toMatch(/^Confirmed: the mean of the 3 confirmation runs, 41\.53, lies inside the 95% interval for the mean of 3 new runs, 41\.1\d to 41\.9\d \(predicted 41\.54\)\.$/);
+  });
+  it('says "Not confirmed" and what to do when it lies outside; one run is "one new run"', () => {
+    const s = confirmationStatement(compareConfirmation(model, at, [43])); // invented reading
+    expect(s).toMatch(/^Not confirmed: the reading of the 1 confirmation run, 43, lies outside the 95% interval for one new run/);
+    expect(s).toMatch(/do not rely on its predictions here/);
+  });
+  it('a saturated model: cannot judge, and says what to do', () => {
+    const sat = analyze({ ...data, coded: data.coded.slice(0, 4), y: data.y.slice(0, 4), labels: data.labels.slice(0, 4), points: null }, { terms: [1, 2, 3] }).model;
+    expect(confirmationStatement(compareConfirmation(sat, at, [41]))).toMatch(/^Cannot judge: .*Refit with fewer terms first\.$/);
+  });
+});
