@@ -18,9 +18,12 @@ export const RUN_KINDS = ['factorial', 'center', 'axial', 'path', 'confirmation'
 /** The kind of a planned run: one of RUN_KINDS. */
 export type RunKind = (typeof RUN_KINDS)[number];
 
-/** The words a screen or report uses for each run kind (a factorial run is a corner of the cube). */
+/**
+ * The words every screen and report uses for each run kind, one set everywhere; files and JSON
+ * keep the tokens of RUN_KINDS. Example: RUN_KIND_NAMES.factorial -> 'factorial point'.
+ */
 export const RUN_KIND_NAMES: Readonly<Record<RunKind, string>> = {
-  factorial: 'corner',
+  factorial: 'factorial point',
   center: 'center point',
   axial: 'axial point',
   path: 'path run',
