@@ -6,7 +6,7 @@ import { canonicalJson } from '../../src/core/records/canonical-json.ts';
 import { exportBackup, importBackup, payloadOf } from '../../src/store/files.ts';
 import { createStudy } from '../../src/store/studies.ts';
 import { excludeRun, getRun, openNewRun, openRun, saveRun } from '../../src/store/runs.ts';
-import { safetyStatus, persistenceAnswer, BACKUP_REMINDER_MS } from '../../src/store/status.ts';
+import { persistenceAnswer, safetyStatus } from '../../src/store/status.ts';
 import type { Store } from '../../src/store/store.ts';
 import { coatingPlan, freshStore } from './helpers.ts';
 
@@ -187,21 +187,6 @@ describe('backup export and import', () => {
 });
 
 describe('keeping records safe', () => {
-  it('reminds of a backup a week after the last export, and knows when it was', async () => {
-    let now = new Date('2024-03-01T08:00:00Z');
-    const store = await freshStore({ now: () => now });
-    const study = await createStudy(store, coatingPlan());
-    expect((await safetyStatus(store)).backupDue).toEqual([]); // nothing logged yet
-    await log(store, study.id, 1, '70');
-    expect((await safetyStatus(store)).backupDue).toEqual([{ studyId: study.id, title: study.title, lastExport: null }]);
-    await exportBackup(store, [study.id]);
-    expect((await safetyStatus(store)).lastExports[study.id]).toBe('2024-03-01T08:00:00.000Z');
-    now = new Date(now.getTime() + BACKUP_REMINDER_MS - 1000);
-    expect((await safetyStatus(store)).backupDue).toEqual([]);
-    now = new Date(now.getTime() + 2000);
-    expect((await safetyStatus(store)).backupDue.map((d) => d.lastExport)).toEqual(['2024-03-01T08:00:00.000Z']);
-  });
-
   it('asks for persistent storage after the first saved run, not on open, once, and keeps the answer', async () => {
     let asked = 0;
     const storage = { persist: async () => (asked++, true), estimate: async () => ({ usage: 1234, quota: 10_000_000 }) };

@@ -42,25 +42,28 @@ export function ExportScreen({ store, studyId }: ExportScreenProps) {
         <p class="warning">This browser keeps Trialbook's records only as long as it has room. Export a backup often.</p>
       )}
       <ul class="cards">
-        {studies.map((s) => (
-          <li class="card" key={s.id}>
-            <h3 class="card-title">{s.title}</h3>
-            {isDemo(s) && <DemoBadge compact />}
-            <p class="card-line quiet">Last exported: {status?.lastExports[s.id] ? when(status.lastExports[s.id]) : 'never'}</p>
-            {status?.backupDue.some((b) => b.studyId === s.id) && <p class="card-line due">A backup is due: this study has runs not exported in the last week.</p>}
-            <button type="button" class="btn primary block" disabled={busy} onClick={() => void model.download(s.id, 'json')}>
-              Download backup (JSON)
-            </button>
-            <button type="button" class="btn block" disabled={busy} onClick={() => void model.download(s.id, 'csv')}>
-              Download CSV
-            </button>
-            {share && (
-              <button type="button" class="btn block" disabled={busy} onClick={() => void model.share(s.id, 'json')}>
-                Share backup…
+        {studies.map((s) => {
+          const due = status?.backupDue.find((b) => b.studyId === s.id);
+          return (
+            <li class="card" key={s.id}>
+              <h3 class="card-title">{s.title}</h3>
+              {isDemo(s) && <DemoBadge compact />}
+              <p class="card-line quiet">Last exported: {status?.lastExports[s.id] ? when(status.lastExports[s.id]) : 'never'}</p>
+              {due && <p class="card-line due">A backup is due: runs logged here since {when(due.unexportedSince)} are in no backup yet. Download or share one now.</p>}
+              <button type="button" class="btn primary block" disabled={busy} onClick={() => void model.download(s.id, 'json')}>
+                Download backup (JSON)
               </button>
-            )}
-          </li>
-        ))}
+              <button type="button" class="btn block" disabled={busy} onClick={() => void model.download(s.id, 'csv')}>
+                Download CSV
+              </button>
+              {share && (
+                <button type="button" class="btn block" disabled={busy} onClick={() => void model.share(s.id, 'json')}>
+                  Share backup…
+                </button>
+              )}
+            </li>
+          );
+        })}
       </ul>
       {!focus && model.studies.value.length > 1 && (
         <button type="button" class="btn block" disabled={busy} onClick={() => void model.download(null, 'json')}>
