@@ -13,9 +13,9 @@ import { ReadingsField } from '../../components/readings-field/index.tsx';
 import { RunHistory } from '../../components/run-history/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { setting, when } from '../../lib/format.ts';
-import { fileName, downloadText, mimeOf } from '../../lib/save-file.ts';
+import { fileName, mimeOf, saveText } from '../../lib/save-file.ts';
 import { problemOf } from '../../lib/problem.ts';
-import { backupText } from '../../models/export-model.ts';
+import { backupFile } from '../../models/export-model.ts';
 import { readingBoxes, RunFormModel } from '../../models/run-form-model.ts';
 import { hrefTo } from '../../app/routes.ts';
 import './style.css';
@@ -39,9 +39,13 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
     if (!state) return;
     exporting.value = true;
     try {
-      const text = await backupText(store, [state.study.id]);
-      downloadText(text, fileName(state.study.title, 'json'), mimeOf('json'));
-      exportNote.value = 'The backup file is downloading. Keep it until the storage problem is solved.';
+      const backup = await backupFile(store, [state.study.id]);
+      const outcome = await saveText(backup.text, fileName(state.study.title, 'json'), mimeOf('json'), `Trialbook: ${state.study.title}`);
+      if (outcome !== 'cancelled') await backup.noteSaved();
+      exportNote.value =
+        outcome === 'cancelled'
+          ? 'Sharing was cancelled; no backup was made. Tap again to export.'
+          : `The backup file ${outcome === 'shared' ? 'was handed to the share sheet' : 'is downloading'}. Keep it until the storage problem is solved.`;
     } catch (err) {
       exportNote.value = `The backup could not be made: ${problemOf(err).message}`;
     } finally {
