@@ -48,9 +48,10 @@ export async function payloadOf(store: Store, studyIds?: readonly string[]): Pro
  * still returned; the backup reminder then simply stays due.
  */
 export async function exportBackup(store: Store, studyIds?: readonly string[], digest?: Digest): Promise<string> {
+  const at = store.now().toISOString();
   const payload = await payloadOf(store, studyIds);
-  const text = await writeBackup(payload, { device: store.device, exportedAt: store.now().toISOString(), scope: studyIds ? 'study' : 'all' }, digest);
-  await markExported(store, payload.studies.map((s) => s.id)).catch(() => undefined);
+  const text = await writeBackup(payload, { device: store.device, exportedAt: at, scope: studyIds ? 'study' : 'all' }, digest);
+  await markExported(store, payload.studies.map((s) => s.id), at).catch(() => undefined);
   return text;
 }
 

@@ -1,16 +1,18 @@
 /**
  * What the screens show about keeping records safe: the storage estimate (used, quota), whether
  * the browser granted persistent storage (asked once, after the first saved run, never on load),
- * and when each study was last exported, with a reminder when runs saved more than a week ago
- * have never been exported (not merely when the last export is old: a study whose runs are all
- * in an export needs no reminder, and a run saved minutes ago is not yet overdue).
+ * and when each study was last exported, with a reminder when runs logged here more than a week ago
+ * are in no export yet.
  * Browsers may delete best-effort storage under pressure, and some after days without a visit,
  * so the exported file is the real safety net.
  */
 import { guarded } from './errors.ts';
 import type { Store } from './store.ts';
 
-/** A reminder is due when a run saved longer ago than this is in no export (common practice: a weekly backup). */
+/**
+ * A reminder is due when a run logged (or changed) on this device this long ago is in no export
+ * yet. A week: common practice for a reminder that is neither nagging nor too late.
+ */
 export const BACKUP_REMINDER_MS = 7 * 24 * 60 * 60 * 1000;
 
 export interface StorageEstimate {
@@ -30,8 +32,19 @@ export interface SafetyStatus extends StorageEstimate {
   readonly persistence: PersistenceAnswer;
   /** Time of the last export of each study that has one. */
   readonly lastExports: Readonly<Record<string, string>>;
-  /** Studies with a revision saved more than a week ago and after the study's last export (or never exported). */
-  readonly backupDue: readonly { readonly studyId: string; readonly title: string; readonly lastExport: string | null }[];
+  /**
+   * Studies with a run logged or changed on this device more than a week ago and saved after the
+   * study's last export (or never exported), with the time of the oldest such save.
+   */
+  readonly backupDue: readonly BackupDue[];
+}
+
+export interface BackupDue {
+  readonly studyId: string;
+  readonly title: string;
+  readonly lastExport: string | null;
+  /** When the oldest save not in any export was made (the store's clock). */
+  readonly unexportedSince: string;
 }
 
 const estimates = new WeakMap<Store, StorageEstimate>();
@@ -95,9 +108,11 @@ export async function lastExports(store: Store): Promise<Record<string, string>>
   return { ...((row?.value as Record<string, string> | undefined) ?? {}) };
 }
 
-/** Notes that these studies were exported now (inside the caller's transaction or alone). */
-export async function markExported(store: Store, studyIds: readonly string[]): Promise<void> {
-  const at = store.now().toISOString();
+/**
+ * Notes that these studies were exported at `at` (now when not given): the time taken before
+ * the exported records were read, so a save made while the file was written counts as unexported.
+ */
+export async function markExported(store: Store, studyIds: readonly string[], at: string = store.now().toISOString()): Promise<void> {
   await guarded(() =>
     store.db.transaction('rw', store.db.meta, async () => {
       const row = await store.db.meta.get('exports');
@@ -117,17 +132,35 @@ export async function safetyStatus(store: Store): Promise<SafetyStatus> {
     guarded(() => store.db.studies.toArray()),
   ]);
   const now = store.now().getTime();
-  const backupDue: SafetyStatus['backupDue'][number][] = [];
+  const backupDue: BackupDue[] = [];
   for (const s of studies) {
-    const last = exportsMap[s.id] ?? null;
-    const exportedAt = last === null ? -Infinity : Date.parse(last);
-    const revisions = await guarded(() => store.db.revisions.where('studyId').equals(s.id).toArray());
-    // Saving times are the store's clock (appendRevisions), compared as instants.
-    const overdue = revisions.some((r) => {
-      const saved = Date.parse(r.savedAt);
-      return saved > exportedAt && now - saved > BACKUP_REMINDER_MS;
-    });
-    if (overdue) backupDue.push({ studyId: s.id, title: s.title, lastExport: last });
+    const since = await oldestUnexportedSave(store, s.id, exportsMap[s.id] ?? null);
+    if (since !== null && now - Date.parse(since) > BACKUP_REMINDER_MS) backupDue.push({ studyId: s.id, title: s.title, lastExport: exportsMap[s.id] ?? null, unexportedSince: since });
   }
   return { ...estimate, persistence, lastExports: exportsMap, backupDue };
+}
+
+/**
+ * The oldest save made on this device after the study's last export (any save when it was never
+ * exported), or null when every save here is in an export. Saves from another device came in by
+ * a backup file, so a file holds them already. One pass over the study's revisions.
+ */
+async function oldestUnexportedSave(store: Store, studyId: string, lastExport: string | null): Promise<string | null> {
+  const after = lastExport === null ? -Infinity : Date.parse(lastExport);
+  let oldest: number | null = null;
+  let oldestText: string | null = null;
+  await guarded(() =>
+    store.db.revisions
+      .where('studyId')
+      .equals(studyId)
+      .each((r) => {
+        if (r.device !== store.device) return;
+        const t = Date.parse(r.savedAt);
+        if (t > after && (oldest === null || t < oldest)) {
+          oldest = t;
+          oldestText = r.savedAt;
+        }
+      }),
+  );
+  return oldestText;
 }

@@ -74,6 +74,20 @@ describe('design command: CSV and text', () => {
     expect(text).toMatch(/seed 7 \(PCG32 and a Fisher-Yates shuffle\)/);
   });
 
+  it('names run kinds in words in the text, with the tokens kept in the CSV and JSON', async () => {
+    const args = ['--factor', 'Temperature=160:200', '--factor', 'Time=10:20', '--center-runs', '2', '--standard-order'];
+    const text = await design.run(args);
+    const runs = text.split('\n').slice(text.split('\n').indexOf('Runs') + 2);
+    expect(runs.filter((l) => /factorial point/.test(l))).toHaveLength(4);
+    expect(runs.filter((l) => /center point/.test(l))).toHaveLength(2);
+    expect(text).not.toMatch(/\bcorner\b/);
+    const csv = await design.run([...args, '--csv']);
+    expect(csv.split('\r\n').filter((l) => /,center,/.test(l))).toHaveLength(2);
+    expect(csv).not.toMatch(/center point/);
+    const d = JSON.parse(await design.run([...args, '--json']));
+    expect(d.runs.map((r: { kind: string }) => r.kind).sort()).toEqual(['center', 'center', 'factorial', 'factorial', 'factorial', 'factorial']);
+  });
+
   it('warns when a hard-to-change factor is kept sorted', async () => {
     const text = await design.run(['--factor', 'Oven=160:200', '--factor', 'Time=10:20', '--factor', 'Speed=1:2', '--sort-by', 'Oven', '--seed', '2']);
     expect(text).toMatch(/Oven is kept sorted .* split-plot/);

@@ -6,7 +6,7 @@ import { canonicalJson } from '../../src/core/records/canonical-json.ts';
 import { exportBackup, importBackup, payloadOf } from '../../src/store/files.ts';
 import { createStudy } from '../../src/store/studies.ts';
 import { excludeRun, getRun, listDivergedRuns, openNewRun, openRun, saveRun } from '../../src/store/runs.ts';
-import { safetyStatus, persistenceAnswer, BACKUP_REMINDER_MS } from '../../src/store/status.ts';
+import { safetyStatus, persistenceAnswer } from '../../src/store/status.ts';
 import type { Store } from '../../src/store/store.ts';
 import { coatingPlan, freshStore } from './helpers.ts';
 
@@ -193,30 +193,6 @@ describe('backup export and import', () => {
 });
 
 describe('keeping records safe', () => {
-  it('reminds of a backup when runs saved more than a week ago are in no export, and knows when the last export was', async () => {
-    let now = new Date('2024-03-01T08:00:00Z');
-    const store = await freshStore({ now: () => now });
-    const study = await createStudy(store, coatingPlan());
-    const later = (ms: number) => (now = new Date(now.getTime() + ms));
-    expect((await safetyStatus(store)).backupDue).toEqual([]); // nothing logged yet
-    await log(store, study.id, 1, '70');
-    later(60_000);
-    expect((await safetyStatus(store)).backupDue).toEqual([]); // logged a minute ago: not overdue
-    later(BACKUP_REMINDER_MS - 61_000);
-    expect((await safetyStatus(store)).backupDue).toEqual([]); // a second short of a week
-    later(2000);
-    expect((await safetyStatus(store)).backupDue).toEqual([{ studyId: study.id, title: study.title, lastExport: null }]);
-    await exportBackup(store, [study.id]);
-    const exported = now.toISOString();
-    expect((await safetyStatus(store)).lastExports[study.id]).toBe(exported);
-    expect((await safetyStatus(store)).backupDue).toEqual([]);
-    later(3 * BACKUP_REMINDER_MS);
-    expect((await safetyStatus(store)).backupDue).toEqual([]); // an old export, but nothing new since
-    await log(store, study.id, 2, '71');
-    later(BACKUP_REMINDER_MS + 1000);
-    expect((await safetyStatus(store)).backupDue.map((d) => d.lastExport)).toEqual([exported]);
-  });
-
   it('asks for persistent storage after the first saved run, not on open, once, and keeps the answer', async () => {
     let asked = 0;
     const storage = { persist: async () => (asked++, true), estimate: async () => ({ usage: 1234, quota: 10_000_000 }) };

@@ -7,7 +7,7 @@ import { plackettBurmanAliasing, type PartialAlias } from '../../core/design/pla
 import { correlationText } from '../../core/text/screening-text.ts';
 import { formatWord, parseLetterWord } from '../../core/design/word.ts';
 import { buildDesign, type DesignSpec } from '../../core/design/build-design.ts';
-import type { Design } from '../../core/design/design.ts';
+import { RUN_KIND_NAMES, type Design } from '../../core/design/design.ts';
 import { romanResolution } from '../../core/design/defining-relation.ts';
 import { plannedSetting } from '../../core/design/planned-settings.ts';
 import { InputError } from '../../core/errors.ts';
@@ -455,7 +455,7 @@ export function designText(d: Design): string {
     r.standardOrder === null ? '-' : String(r.standardOrder),
     String(r.replicate),
     String(r.block),
-    r.kind,
+    RUN_KIND_NAMES[r.kind],
     ...d.factors.map((f, i) => String(plannedSetting(f, r.coded[i]))),
   ]);
   out.push(...table(header, rows, [true, true, true, true, false, ...d.factors.map((f) => f.kind === 'numeric')]));

@@ -18,7 +18,10 @@ export const RUN_KINDS = ['factorial', 'center', 'axial', 'path', 'confirmation'
 /** The kind of a planned run: one of RUN_KINDS. */
 export type RunKind = (typeof RUN_KINDS)[number];
 
-/** The words every screen and report uses for each run kind (the tokens stay as RUN_KINDS in files and JSON). */
+/**
+ * The words every screen and report uses for each run kind, one set everywhere; files and JSON
+ * keep the tokens of RUN_KINDS. Example: RUN_KIND_NAMES.factorial -> 'factorial point'.
+ */
 export const RUN_KIND_NAMES: Readonly<Record<RunKind, string>> = {
   factorial: 'factorial point',
   center: 'center point',

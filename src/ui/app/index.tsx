@@ -1,5 +1,5 @@
 /**
- * The app shell: the title bar, a quiet note while offline, the warnings about this browser and other tabs, and the screen
+ * The app shell: the title bar, the offline note, the warnings about this browser and other tabs, and the screen
  * the address asks for (the route table is routes.ts, the screen switch route-screen.tsx).
  */
 import { useModel } from '@preact/signals';
@@ -36,12 +36,14 @@ export function App(_props: AppProps) {
   const store = app.store.value;
   return (
     <main class="shell">
-      <h1>
-        <a href={hrefTo('studies', {})} class="home">
-          Trialbook
-        </a>
-      </h1>
-      <OfflineNote />
+      <div class="title-bar">
+        <h1>
+          <a href={hrefTo('studies', {})} class="home">
+            Trialbook
+          </a>
+        </h1>
+        <OfflineNote />
+      </div>
       {!secure && (
         <p class="warning" role="alert">
           This page was opened over plain http on a network address, so the browser allows no offline use and no

@@ -1,6 +1,8 @@
 /**
- * Handing a file to the person: a download through a link with the download attribute, or the
- * phone's share sheet when the browser can share files.
+ * Handing a file to the person: the phone's share sheet when the browser accepts this very file
+ * (navigator.canShare({ files }) then navigator.share), otherwise a download through a link with
+ * the download attribute. The share sheet comes first because an app installed on an iPhone opens
+ * a plain download in a preview with no way back to the app.
  */
 
 /** A file name from a study title: 'trialbook-invented-demo-powder-coating-cure-trial-2024-05-02.json'. */
@@ -44,14 +46,35 @@ export function canShareFiles(): boolean {
   }
 }
 
-/** Opens the share sheet with the text as a file; resolves false when the person cancels. */
-export async function shareText(text: string, name: string, type: string, title: string): Promise<boolean> {
-  const file = new File([text], name, { type });
+/** What became of a file handed to the person. */
+export type SaveOutcome = 'shared' | 'cancelled' | 'downloaded';
+
+/** True when the browser says it can share this file (false when it cannot say or throws). */
+function acceptsFile(file: File): boolean {
   try {
-    await navigator.share({ files: [file], title });
-    return true;
-  } catch (err) {
-    if ((err as { name?: string }).name === 'AbortError') return false;
-    throw err;
+    return typeof navigator.share === 'function' && typeof navigator.canShare === 'function' && navigator.canShare({ files: [file] });
+  } catch {
+    return false;
   }
+}
+
+/**
+ * Hands the text to the person as a file: the share sheet when the browser accepts the file,
+ * else a download. 'cancelled' when the person closed the share sheet (nothing was sent). Any
+ * other refusal of the share (NotAllowedError when the tap's activation has run out, a type
+ * refused only at sharing; https://developer.mozilla.org/docs/Web/API/Navigator/share) falls back
+ * to a download, so a file always comes out.
+ */
+export async function saveText(text: string, name: string, type: string, title: string): Promise<SaveOutcome> {
+  const file = new File([text], name, { type });
+  if (acceptsFile(file)) {
+    try {
+      await navigator.share({ files: [file], title });
+      return 'shared';
+    } catch (err) {
+      if ((err as { name?: string }).name === 'AbortError') return 'cancelled';
+    }
+  }
+  downloadText(text, name, type);
+  return 'downloaded';
 }

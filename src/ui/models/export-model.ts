@@ -6,28 +6,40 @@
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import type { StudyRecord } from '../../core/study/study.ts';
 import { writeBackup } from '../../io/backup/backup.ts';
-import { StorageError } from '../../store/errors.ts';
-import { exportBackup, exportStudyCsv, payloadOf } from '../../store/files.ts';
+import { exportStudyCsv, payloadOf } from '../../store/files.ts';
 import { importBackupFile } from '../import-worker/import-bridge.ts';
 import type { ImportProgress } from '../import-worker/protocol.ts';
-import { safetyStatus, type SafetyStatus } from '../../store/status.ts';
+import { markExported, safetyStatus, type SafetyStatus } from '../../store/status.ts';
 import { listStudies } from '../../store/studies.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
-import { canShareFiles, downloadText, fileName, mimeOf, shareText } from '../lib/save-file.ts';
+import { canShareFiles, fileName, mimeOf, saveText, type SaveOutcome } from '../lib/save-file.ts';
+
+export interface BackupFile {
+  readonly text: string;
+  /** Notes the export once the file is out (shared or downloaded, not cancelled). */
+  noteSaved(): Promise<void>;
+}
 
 /**
- * The backup text of these studies (all when none). When the store cannot note the export
- * (a full storage refuses even that small write), the file is still made from what is stored.
+ * The backup text of these studies (all when none), with the note of the export kept for when
+ * the file is really out: a cancelled share sheet leaves the backup reminder as it was. The time
+ * is taken before the records are read. When the store cannot write the note (a full storage
+ * refuses even that small write), the file still comes out and the reminder stays due.
  */
-export async function backupText(store: Store, studyIds?: readonly string[]): Promise<string> {
-  try {
-    return await exportBackup(store, studyIds);
-  } catch (err) {
-    if (!(err instanceof StorageError)) throw err;
-    const payload = await payloadOf(store, studyIds);
-    return writeBackup(payload, { device: store.device, exportedAt: store.now().toISOString(), scope: studyIds ? 'study' : 'all' });
-  }
+export async function backupFile(store: Store, studyIds?: readonly string[]): Promise<BackupFile> {
+  const at = store.now().toISOString();
+  const payload = await payloadOf(store, studyIds);
+  const text = await writeBackup(payload, { device: store.device, exportedAt: at, scope: studyIds ? 'study' : 'all' });
+  const ids = payload.studies.map((s) => s.id);
+  return { text, noteSaved: () => markExported(store, ids, at).catch(() => undefined) };
+}
+
+/** The sentence for what became of a file. */
+function savedSentence(outcome: SaveOutcome, name: string): string {
+  if (outcome === 'shared') return `${name} was handed to the share sheet. Keep it somewhere other than this phone.`;
+  if (outcome === 'cancelled') return 'Sharing was cancelled; nothing was sent and the backup reminder stays as it was.';
+  return `${name} is downloading. Keep it somewhere other than this phone.`;
 }
 
 export type FileKind = 'json' | 'csv';
@@ -49,15 +61,16 @@ export const ExportModel = createModel((store: Store, studyId: string | null) =>
     }
   }
 
-  async function fileOf(id: string | null, kind: FileKind): Promise<{ text: string; name: string; title: string }> {
+  async function fileOf(id: string | null, kind: FileKind): Promise<{ text: string; name: string; title: string; noteSaved(): Promise<void> }> {
     const study = id ? studies.peek().find((s) => s.id === id) : undefined;
     if (id && !study) throw new Error(`there is no study with id "${id}" on this device`);
     const title = study ? study.title : 'all studies';
     if (kind === 'csv') {
       if (!id) throw new Error('a CSV holds one study; choose a study');
-      return { text: await exportStudyCsv(store, id, { bom: true }), name: fileName(title, 'csv'), title };
+      return { text: await exportStudyCsv(store, id, { bom: true }), name: fileName(title, 'csv'), title, noteSaved: async () => undefined };
     }
-    return { text: await backupText(store, id ? [id] : undefined), name: fileName(title, 'json'), title };
+    const backup = await backupFile(store, id ? [id] : undefined);
+    return { text: backup.text, name: fileName(title, 'json'), title, noteSaved: backup.noteSaved };
   }
 
   const importProgress = signal<ImportProgress | null>(null);
@@ -95,18 +108,13 @@ export const ExportModel = createModel((store: Store, studyId: string | null) =>
         problem.value = problemOf(err);
       }
     },
-    download(id: string | null, kind: FileKind) {
+    /** The file through the share sheet where the browser accepts it, else downloaded. */
+    save(id: string | null, kind: FileKind) {
       return run(async () => {
         const f = await fileOf(id, kind);
-        downloadText(f.text, f.name, mimeOf(kind));
-        return `${f.name} is downloading. Keep it somewhere other than this phone.`;
-      });
-    },
-    share(id: string | null, kind: FileKind) {
-      return run(async () => {
-        const f = await fileOf(id, kind);
-        const shared = await shareText(f.text, f.name, mimeOf(kind), `Trialbook: ${f.title}`);
-        return shared ? `${f.name} was handed to the share sheet.` : 'Sharing was canceled; nothing was sent.';
+        const outcome = await saveText(f.text, f.name, mimeOf(kind), `Trialbook: ${f.title}`);
+        if (outcome !== 'cancelled') await f.noteSaved();
+        return savedSentence(outcome, f.name);
       });
     },
     /** How far the running import has come, or null. */

@@ -9,6 +9,17 @@ describe('run kinds', () => {
     expect(RUN_KINDS.every(isRunKind)).toBe(true);
     for (const v of ['star', '', 'Center', null, undefined, 1]) expect(isRunKind(v)).toBe(false);
   });
+
+  it('are shown in one set of words, distinct from the file tokens where they differ', () => {
+    // The words every screen and report uses (the project's own wording, common practice terms).
+    expect(RUN_KIND_NAMES).toEqual({
+      factorial: 'factorial point',
+      center: 'center point',
+      axial: 'axial point',
+      path: 'path run',
+      confirmation: 'confirmation run',
+    });
+  });
 });
 
 describe('block of origin', () => {

@@ -1,29 +1,37 @@
 /**
- * A quiet line while the phone has no network: saving works all the same, since every record is
- * kept on the device. Follows the browser's online and offline events
- * (https://developer.mozilla.org/en-US/docs/Web/API/Navigator/onLine).
+ * A quiet mark beside the app's title while the browser reports no network: saving works anyway,
+ * because every record is kept on this device (navigator.onLine and the online and offline
+ * events; https://developer.mozilla.org/docs/Web/API/Navigator/onLine). A browser that says
+ * "online" may still have no working connection, so the line only ever claims what is safe.
  */
-import { useEffect, useState } from 'preact/hooks';
+import { useSignal } from '@preact/signals';
+import { useEffect } from 'preact/hooks';
 import './style.css';
 
 export type OfflineNoteProps = Record<string, never>;
 
 export function OfflineNote(_props: OfflineNoteProps) {
-  const [online, setOnline] = useState(typeof navigator === 'undefined' ? true : navigator.onLine);
+  const offline = useSignal(typeof navigator !== 'undefined' && navigator.onLine === false);
   useEffect(() => {
-    const on = () => setOnline(true);
-    const off = () => setOnline(false);
-    window.addEventListener('online', on);
-    window.addEventListener('offline', off);
+    const update = () => void (offline.value = navigator.onLine === false);
+    update();
+    window.addEventListener('online', update);
+    window.addEventListener('offline', update);
     return () => {
-      window.removeEventListener('online', on);
-      window.removeEventListener('offline', off);
+      window.removeEventListener('online', update);
+      window.removeEventListener('offline', update);
     };
   }, []);
-  if (online) return null;
+  // The live region stays in the page (empty, no height) so that a change is announced without taking the focus.
   return (
-    <p class="offline-note" aria-live="polite">
-      Offline: runs are still saved on this phone.
-    </p>
+    <div class="offline-slot" aria-live="polite">
+      {offline.value && (
+        <p class="offline-note">
+          <span class="offline-words">
+            <strong>Offline</strong> <span>saving still works</span>
+          </span>
+        </p>
+      )}
+    </div>
   );
 }

@@ -165,7 +165,7 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
   const { response } = shown;
   const result = model.result.value;
   return (
-    <section>
+    <section class="analysis wide">
       <StudyHeader study={study} current="analysis" />
       <h2>Effects</h2>
       <ChoiceButtons
@@ -179,6 +179,9 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
       {result && result.ok && result.analysis.boxCox && (
         <p class="quiet">Box-Cox suggests: {result.analysis.boxCox.suggestion === 'none' ? 'as measured' : result.analysis.boxCox.suggestion}</p>
       )}
+      <p class="print-only">
+        Response: {response.name} · Model: {MODEL_CHOICES.find((c) => c.value === shown.settings.value.model)?.label}
+      </p>
       {result && !result.ok && (
         <div class="problem input" role="alert">
           <p>{result.message}</p>
@@ -188,57 +191,65 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
         </div>
       )}
       {result && result.ok && (
-        <>
-          <p class="lead-figure">
+        <div class="analysis-grid">
+          <p class="lead-figure part-lead">
             {result.analysis.n} runs used · average at the center {withUnit(result.analysis.intercept.coef, response.unit)}
           </p>
-          <h3>Effects, largest first</h3>
-          <p class="quiet">Each bar is the change in {response.name} from a factor's low to its high setting, the others held at their centers.</p>
-          <BarList label={`Effects on ${response.name}`} rows={effectRows(model.ranked.value, result.analysis, study.factors, response)} />
+          <div class="part part-effects">
+            <h3>Effects, largest first</h3>
+            <p class="quiet">Each bar is the change in {response.name} from a factor's low to its high setting, the others held at their centers.</p>
+            <BarList label={`Effects on ${response.name}`} rows={effectRows(model.ranked.value, result.analysis, study.factors, response)} />
+          </div>
           {result.analysis.halfNormal.length >= 3 && (
-            <>
+            <div class="part part-half-normal">
               <h3>Half-normal plot</h3>
               <HalfNormalChart points={result.analysis.halfNormal} axisLabel={nameWithUnit('Size of effect', response.unit)} />
-            </>
+            </div>
           )}
-          <h3>Interaction chart</h3>
-          <InteractionSection a={result.analysis} term={model.interactionTerm.value} response={response} onChoose={(t) => model.chooseInteraction(t)} />
-          <h3>How well the model fits</h3>
-          <ul class="facts">
-            <li>
-              <strong>R² {percent(result.analysis.r2)}</strong>: the share of the variation in these runs the model accounts for.
-            </li>
-            <li>
-              <strong>Adjusted R² {percent(result.analysis.r2adj)}</strong>: the same, allowing for the number of terms.
-            </li>
-            <li>
-              <strong>Predicted R² {percent(result.analysis.r2pred)}</strong>: how well it would predict a run it had not seen.
-            </li>
-            <li>
-              <strong>Run-to-run noise {withUnit(result.analysis.sigma, response.unit)}</strong> (residual standard deviation, {result.analysis.df.residual} df).
-            </li>
-            {result.analysis.verdicts.map((v) =>
-              v.kind === 'curvature' ? (
-                <li key="curvature">{v.outcome === 'curved' ? <strong>{curvatureStatement(v)}</strong> : curvatureStatement(v)}</li>
-              ) : null,
-            )}
-          </ul>
-          <h3>Residuals</h3>
-          <ResidualSection a={result.analysis} response={response} />
+          <div class="part part-interaction">
+            <h3>Interaction chart</h3>
+            <InteractionSection a={result.analysis} term={model.interactionTerm.value} response={response} onChoose={(t) => model.chooseInteraction(t)} />
+          </div>
+          <div class="part part-fit">
+            <h3>How well the model fits</h3>
+            <ul class="facts">
+              <li>
+                <strong>R² {percent(result.analysis.r2)}</strong>: the share of the variation in these runs the model accounts for.
+              </li>
+              <li>
+                <strong>Adjusted R² {percent(result.analysis.r2adj)}</strong>: the same, allowing for the number of terms.
+              </li>
+              <li>
+                <strong>Predicted R² {percent(result.analysis.r2pred)}</strong>: how well it would predict a run it had not seen.
+              </li>
+              <li>
+                <strong>Run-to-run noise {withUnit(result.analysis.sigma, response.unit)}</strong> (residual standard deviation, {result.analysis.df.residual} df).
+              </li>
+              {result.analysis.verdicts.map((v) =>
+                v.kind === 'curvature' ? (
+                  <li key="curvature">{v.outcome === 'curved' ? <strong>{curvatureStatement(v)}</strong> : curvatureStatement(v)}</li>
+                ) : null,
+              )}
+            </ul>
+          </div>
+          <div class="part part-residuals">
+            <h3>Residuals</h3>
+            <ResidualSection a={result.analysis} response={response} />
+          </div>
           {result.analysis.warnings.length > 0 && (
-            <>
+            <div class="part part-notes">
               <h3>Notes on these runs</h3>
               <ul class="warnings">
                 {result.analysis.warnings.map((w) => (
                   <li key={w}>{w}</li>
                 ))}
               </ul>
-            </>
+            </div>
           )}
-          <a class="btn primary block" href={hrefTo('quickCard', { studyId: study.id })}>
+          <a class="btn primary block part-action" href={hrefTo('quickCard', { studyId: study.id })}>
             Check a prediction
           </a>
-        </>
+        </div>
       )}
     </section>
   );

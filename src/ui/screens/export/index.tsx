@@ -1,6 +1,6 @@
 /**
- * Files out and in: the JSON backup (with the whole history) and the CSV of a study, downloaded
- * or shared; a backup from another device merged in (nothing here is overwritten).
+ * Files out and in: the JSON backup (with the whole history) and the CSV of a study, through
+ * the share sheet where the browser accepts the file, else downloaded; a backup from another device merged in (nothing here is overwritten).
  */
 import { MAX_BACKUP_TEXT } from '../../../io/backup/size-limit.ts';
 import type { ImportProgress } from '../../import-worker/protocol.ts';
@@ -50,29 +50,27 @@ export function ExportScreen({ store, studyId }: ExportScreenProps) {
         <p class="warning">This browser keeps Trialbook's records only as long as it has room. Export a backup often.</p>
       )}
       <ul class="cards">
-        {studies.map((s) => (
-          <li class="card" key={s.id}>
-            <h3 class="card-title">{s.title}</h3>
-            {isDemo(s) && <DemoBadge compact />}
-            <p class="card-line quiet">Last exported: {status?.lastExports[s.id] ? when(status.lastExports[s.id]) : 'never'}</p>
-            {status?.backupDue.some((b) => b.studyId === s.id) && <p class="card-line due">A backup is due: runs saved more than a week ago are in no exported file yet. Export this study now.</p>}
-            <button type="button" class="btn primary block" disabled={busy} onClick={() => void model.download(s.id, 'json')}>
-              Download backup (JSON)
-            </button>
-            <button type="button" class="btn block" disabled={busy} onClick={() => void model.download(s.id, 'csv')}>
-              Download CSV
-            </button>
-            {share && (
-              <button type="button" class="btn block" disabled={busy} onClick={() => void model.share(s.id, 'json')}>
-                Share backup…
+        {studies.map((s) => {
+          const due = status?.backupDue.find((b) => b.studyId === s.id);
+          return (
+            <li class="card" key={s.id}>
+              <h3 class="card-title">{s.title}</h3>
+              {isDemo(s) && <DemoBadge compact />}
+              <p class="card-line quiet">Last exported: {status?.lastExports[s.id] ? when(status.lastExports[s.id]) : 'never'}</p>
+              {due && <p class="card-line due">A backup is due: runs logged here since {when(due.unexportedSince)} are in no backup yet. Download or share one now.</p>}
+              <button type="button" class="btn primary block" disabled={busy} onClick={() => void model.save(s.id, 'json')}>
+                {share ? 'Save or share backup (JSON)' : 'Download backup (JSON)'}
               </button>
-            )}
-          </li>
-        ))}
+              <button type="button" class="btn block" disabled={busy} onClick={() => void model.save(s.id, 'csv')}>
+                {share ? 'Save or share CSV' : 'Download CSV'}
+              </button>
+            </li>
+          );
+        })}
       </ul>
       {!focus && model.studies.value.length > 1 && (
-        <button type="button" class="btn block" disabled={busy} onClick={() => void model.download(null, 'json')}>
-          Download one backup of all studies
+        <button type="button" class="btn block" disabled={busy} onClick={() => void model.save(null, 'json')}>
+          {share ? 'Save or share one backup of all studies' : 'Download one backup of all studies'}
         </button>
       )}
       <h3>Import a backup</h3>

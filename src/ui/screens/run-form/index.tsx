@@ -14,7 +14,7 @@ import { ReadingsField } from '../../components/readings-field/index.tsx';
 import { RunHistory } from '../../components/run-history/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { setting, when } from '../../lib/format.ts';
-import { fileName, downloadText, mimeOf } from '../../lib/save-file.ts';
+import { fileName, mimeOf, saveText } from '../../lib/save-file.ts';
 import { problemOf } from '../../lib/problem.ts';
 import { readingBoxes, RunFormModel } from '../../models/run-form-model.ts';
 import { hrefTo } from '../../app/routes.ts';
@@ -40,10 +40,14 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
     exporting.value = true;
     try {
       // The export code (with the CSV writer) loads on this rare path only, not with the form.
-      const { backupText } = await import('../../models/export-model.ts');
-      const text = await backupText(store, [state.study.id]);
-      downloadText(text, fileName(state.study.title, 'json'), mimeOf('json'));
-      exportNote.value = 'The backup file is downloading. Keep it until the storage problem is solved.';
+      const { backupFile } = await import('../../models/export-model.ts');
+      const backup = await backupFile(store, [state.study.id]);
+      const outcome = await saveText(backup.text, fileName(state.study.title, 'json'), mimeOf('json'), `Trialbook: ${state.study.title}`);
+      if (outcome !== 'cancelled') await backup.noteSaved();
+      exportNote.value =
+        outcome === 'cancelled'
+          ? 'Sharing was cancelled; no backup was made. Tap again to export.'
+          : `The backup file ${outcome === 'shared' ? 'was handed to the share sheet' : 'is downloading'}. Keep it until the storage problem is solved.`;
     } catch (err) {
       exportNote.value = `The backup could not be made: ${problemOf(err).message}`;
     } finally {

@@ -1,13 +1,16 @@
 /**
  * A study's run sheet: the planned runs in run order, each with its planned settings in real
  * units (and the actual one beside it where the logged run differs), whether it is logged or
- * excluded, and one big button to log it (or to review what was logged).
+ * excluded, and one big button to log it (or to review what was logged). From 1000 px wide the
+ * cards give way to a table with planned and actual settings and responses; on paper it is a
+ * table to fill in beside the machine.
  */
 import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
 import type { Store } from '../../../store/store.ts';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { DivergedNote } from '../../components/diverged-note/index.tsx';
+import { RunTable } from '../../components/run-table/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { setting, withUnit } from '../../lib/format.ts';
 import { hrefTo } from '../../app/routes.ts';
@@ -35,7 +38,7 @@ export function RunSheetScreen({ store, studyId }: RunSheetScreenProps) {
   const rows = model.rows.value;
   const next = model.nextRun.value;
   return (
-    <section>
+    <section class="run-sheet wide">
       <StudyHeader study={study} current="runSheet" />
       {study.purpose && <p class="purpose">{study.purpose}</p>}
       <p class="progress">
@@ -44,7 +47,9 @@ export function RunSheetScreen({ store, studyId }: RunSheetScreenProps) {
         </strong>{' '}
         planned runs logged{next !== null ? ` · next: run ${next}` : ' · all logged'}
       </p>
-      <ol class="runs">
+      <RunTable study={study} rows={rows} class="wide-only screen-only" />
+      <RunTable study={study} rows={rows} blank class="print-only" />
+      <ol class="runs phone-only screen-only">
         {rows.map((row) => {
           const logged = row.logged.length > 0;
           return (
