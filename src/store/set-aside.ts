@@ -1,6 +1,6 @@
 /**
  * Records of imported files that were set aside (same id as a stored record, other content),
- * kept in their own table so that neither version is lost and the person can see both.
+ * kept in their own table so that neither revision is lost and the person can see both.
  */
 import { canonicalJson } from '../core/records/canonical-json.ts';
 import { sha256, toHex, utf8Encode } from '../core/records/sha256.ts';

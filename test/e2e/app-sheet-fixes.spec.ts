@@ -73,16 +73,6 @@ for (const size of [
   });
 }
 
-test('offline, a quiet note says that saving still works; it goes when the network is back', async ({ page, context }) => {
-  await page.goto(`/#/study/${study.id}`);
-  await expect(page.locator('.run-card').first()).toBeVisible();
-  await expect(page.locator('.offline-note')).toHaveCount(0);
-  await context.setOffline(true);
-  await expect(page.locator('.offline-note')).toHaveText('Offline: runs are still saved on this phone.');
-  await context.setOffline(false);
-  await expect(page.locator('.offline-note')).toHaveCount(0);
-});
-
 test.describe('run form at 360x740', () => {
   test.use({ viewport: { width: 360, height: 740 } });
   test('the run number, its kind and the first setting are visible without scrolling, above the save bar', async ({ page }) => {

@@ -32,30 +32,30 @@ test('two tabs on one run: a save in the first keeps the second tab\'s typing, a
   await expect(other.getByText('Your earlier typing was kept and is back. It is not saved yet.')).toBeVisible();
   await other.getByRole('button', { name: 'Save run 3' }).click();
   await expect(other.getByRole('status')).toHaveText('Saved ✓ run 3');
-  await expect(other.getByText('This run was changed elsewhere after the form opened. Both versions are kept in its history.')).toBeVisible();
+  await expect(other.getByText('This run was changed elsewhere after the form opened. Both revisions are kept in its history.')).toBeVisible();
 
-  // The run has two current versions: marked on the form with both values, and on the sheet.
+  // The run has two current revisions: marked on the form with both values, and on the sheet.
   await other.reload();
-  const note = other.getByRole('group', { name: 'Run 3 has 2 current versions' });
+  const note = other.getByRole('group', { name: 'Run 3 has 2 current revisions' });
   await expect(note).toContainText('changed in two places on one device');
   await expect(note).toContainText('Gloss 76.2 GU');
   await expect(note).toContainText('Gloss 75.1 GU');
   await other.getByRole('button', { name: /History/ }).click();
-  await expect(other.getByText('Changed in two places on this device (two tabs or windows) from the same version; both kept.').first()).toBeVisible();
+  await expect(other.getByText('Changed in two places on this device (two tabs or windows) from the same revision; both kept.').first()).toBeVisible();
   await expect(other.getByText('Changed on two devices')).toHaveCount(0);
   await other.getByRole('button', { name: 'Back to the form' }).click();
 
   await page.goto(`/#/study/${study.id}`);
   const card = page.locator('.run-card[data-run="3"]');
-  await expect(card.getByRole('group', { name: 'Run 3 has 2 current versions' })).toContainText('Gloss 75.1 GU');
+  await expect(card.getByRole('group', { name: 'Run 3 has 2 current revisions' })).toContainText('Gloss 75.1 GU');
 
-  // Keeping one on the phone makes it a new revision; the mark goes, every version stays.
+  // Keeping one on the phone makes it a new revision; the mark goes, every revision stays.
   const usedNow = await note.locator('li').first().textContent();
   const keepOther = usedNow!.includes('76.2') ? '75.1' : '76.2';
   await note.getByRole('button', { name: 'Keep this one instead' }).click();
-  await expect(other.getByRole('group', { name: /current versions/ })).toHaveCount(0);
+  await expect(other.getByRole('group', { name: /current revisions/ })).toHaveCount(0);
   await expect(gloss(other)).toHaveValue(keepOther);
-  await expect(other.getByText('4 versions kept')).toBeVisible();
+  await expect(other.getByText('4 revisions kept')).toBeVisible();
 });
 
 test('the browser clearing the site\'s data under an open form: said plainly, typing kept on screen and downloadable, no demo seeded again', async ({ page, context, baseURL }) => {
@@ -105,7 +105,7 @@ test('an actual setting far outside the planned range: strong warning naming the
   await expect(ask).toHaveCount(0);
   await expect(page.getByRole('status')).not.toContainText('Saved');
   await page.reload();
-  await expect(page.getByText('1 version kept')).toBeVisible(); // nothing was saved
+  await expect(page.getByText('1 revision kept')).toBeVisible(); // nothing was saved
 
   await page.getByRole('button', { name: 'Save run 3' }).click();
   await page.getByRole('alertdialog').getByRole('button', { name: /Yes, it was run at this setting/ }).click();
@@ -117,7 +117,7 @@ test('an actual setting far outside the planned range: strong warning naming the
   await expect(page.locator('.warnings')).toContainText(warning);
 });
 
-test('a history of 2,500 versions opens in pages of the newest, and older pages come on request', async ({ page }) => {
+test('a history of 2,500 revisions opens in pages of the newest, and older pages come on request', async ({ page }) => {
   const { writeBackup } = await import('../../src/io/backup/backup.ts');
   const { randomUUID } = await import('node:crypto');
   const backup = readBackupSync(fixtureText);
@@ -133,20 +133,20 @@ test('a history of 2,500 versions opens in pages of the newest, and older pages 
   const text = await writeBackup({ studies: backup.payload.studies, revisions }, { device: backup.device, exportedAt: backup.exportedAt, scope: 'all' });
   await page.route('**/demo-study.json', (route) => route.fulfill({ status: 200, contentType: 'application/json', body: text }));
   await page.goto(runForm(3));
-  await expect(page.getByText('2500 versions kept')).toBeVisible({ timeout: 20_000 });
+  await expect(page.getByText('2500 revisions kept')).toBeVisible({ timeout: 20_000 });
   const started = Date.now();
-  await page.getByRole('button', { name: 'History (2500 versions)' }).click();
+  await page.getByRole('button', { name: 'History (2500 revisions)' }).click();
   await expect(page.locator('.history-item')).toHaveCount(20);
   const opened = Date.now() - started;
-  await expect(page.locator('.history-item').first()).toHaveAttribute('data-version', '2500');
-  await page.getByRole('button', { name: 'Show 20 older versions (2480 not shown)' }).click();
+  await expect(page.locator('.history-item').first()).toHaveAttribute('data-revision', '2500');
+  await page.getByRole('button', { name: 'Show 20 older revisions (2480 not shown)' }).click();
   await expect(page.locator('.history-item')).toHaveCount(40);
-  await expect(page.locator('.history-item').last()).toHaveAttribute('data-version', '2461');
+  await expect(page.locator('.history-item').last()).toHaveAttribute('data-revision', '2461');
   const back = Date.now();
   await page.getByRole('button', { name: 'Back to the form' }).click();
   await expect(gloss(page)).toBeVisible();
   // A figure, never a pass mark (timings on a shared machine).
-  console.log(`history of 2500 versions: opened in ${opened} ms, back to the form in ${Date.now() - back} ms`);
+  console.log(`history of 2500 revisions: opened in ${opened} ms, back to the form in ${Date.now() - back} ms`);
 });
 
 test('an import is read, checked and merged in a worker: it names a run edited on two devices, and a file above the size limit is refused unread', async ({ page }) => {
@@ -167,10 +167,10 @@ test('an import is read, checked and merged in a worker: it names a run edited o
   await page.goto('/#/export');
   await expect(page.locator('.card')).toHaveCount(1);
   await page.locator('input[type="file"]').setInputFiles({ name: 'two-devices.json', mimeType: 'application/json', buffer: Buffer.from(text) });
-  await expect(page.getByRole('status')).toContainText(`1 run was changed on two devices; both versions are kept in its history: run 3 of "${study.title}"`);
+  await expect(page.getByRole('status')).toContainText(`1 run was changed on two devices; both revisions are kept in its history: run 3 of "${study.title}"`);
   expect(workers.some((u) => /import-worker/.test(u))).toBe(true);
   await page.goto(`/#/study/${study.id}`);
-  await expect(page.locator('.run-card[data-run="3"]').getByRole('group', { name: 'Run 3 has 2 current versions' })).toContainText('Gloss 75.5 GU');
+  await expect(page.locator('.run-card[data-run="3"]').getByRole('group', { name: 'Run 3 has 2 current revisions' })).toContainText('Gloss 75.5 GU');
   await page.goto(`/#/study/${study.id}/analysis`);
   await expect(page.locator('.warnings')).toContainText('Run 3 has 2 current revisions');
 
@@ -184,7 +184,7 @@ test('an import is read, checked and merged in a worker: it names a run edited o
     await page.goto('/#/export');
     workers.length = 0;
     await page.locator('input[type="file"]').setInputFiles(big);
-    await expect(page.getByRole('alert')).toContainText('A backup file can be at most 128 MB; this one is 128.0 MB, so it was not read and nothing changed');
+    await expect(page.getByRole('alert')).toContainText('This backup file is 128.0 MB; Trialbook reads backups of up to 128 MB (134,217,728 bytes)');
     expect(workers).toEqual([]);
   } finally {
     rmSync(dir, { recursive: true, force: true });

@@ -6,17 +6,14 @@
  */
 import { InputError } from '../../core/errors.ts';
 import { readBackup } from '../../io/backup/backup.ts';
-import { MAX_BACKUP_BYTES, MAX_BACKUP_TEXT } from '../../io/backup/size-limit.ts';
+import { checkBackupSize } from '../../io/backup/backup-size.ts';
 import { mergeBackup, type ImportReport } from '../../store/files.ts';
 import type { Store } from '../../store/store.ts';
 import type { ImportProgress } from './protocol.ts';
 
-/** Throws InputError when the file is above the size limit (what was needed, what came). */
+/** Throws InputError when the file is above the size limit, in the same words as the command line (checkBackupSize). */
 export function checkImportSize(size: number): void {
-  if (size > MAX_BACKUP_BYTES) {
-    const mb = (size / (1024 * 1024)).toFixed(1);
-    throw new InputError(`A backup file can be at most ${MAX_BACKUP_TEXT}; this one is ${mb} MB, so it was not read and nothing changed. Export the studies in smaller files (one study each) and import them one by one`);
-  }
+  checkBackupSize(size, 'import');
 }
 
 /** Reads a file as UTF-8 text in chunks, telling the fraction read. */

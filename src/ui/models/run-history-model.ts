@@ -93,8 +93,8 @@ export function historyEntries(study: Pick<StudyRecord, 'factors' | 'responses'>
 
 export type RestoreState = 'idle' | 'restoring' | 'restored';
 
-/** How many versions the history shows at first, and how many more each "older" tap adds: a
- * long history (thousands of versions) opens and closes at once. Our own choice: a page fits a
+/** How many revisions the history shows at first, and how many more each "older" tap adds: a
+ * long history (thousands of revisions) opens and closes at once. Our own choice: a page fits a
  * few phone screens. */
 export const HISTORY_PAGE = 20;
 
@@ -122,9 +122,9 @@ export const RunHistoryModel = createModel((store: Store, study: StudyRecord, ru
     entries,
     /** The newest entries, as many as are shown (HISTORY_PAGE at first). */
     shownEntries: computed(() => entries.value.slice(0, shownCount.value)),
-    /** How many older versions are not shown yet. */
+    /** How many older revisions are not shown yet. */
     hiddenCount: computed(() => Math.max(0, entries.value.length - shownCount.value)),
-    /** Shows the next page of older versions. */
+    /** Shows the next page of older revisions. */
     showOlder() {
       shownCount.value += HISTORY_PAGE;
     },

@@ -21,9 +21,9 @@ export function DivergedNote({ study, diverged, onKeep, busy }: DivergedNoteProp
   const all = [...diverged.others, diverged.current];
   const n = all.length;
   return (
-    <div class="diverged" role="group" aria-label={`Run ${diverged.plannedRun} has ${n} current versions`}>
+    <div class="diverged" role="group" aria-label={`Run ${diverged.plannedRun} has ${n} current revisions`}>
       <p class="diverged-head">
-        <strong>{n} current versions</strong>: {divergedPlaces(diverged)} from the same version. {n === 2 ? 'Both are' : 'All are'} kept.
+        <strong>{n} current revisions</strong>: {divergedPlaces(diverged)} from the same revision. {n === 2 ? 'Both are' : 'All are'} kept.
       </p>
       <ul class="diverged-list">
         {[diverged.current, ...diverged.others].map((r) => (

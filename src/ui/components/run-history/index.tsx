@@ -149,7 +149,7 @@ export function RunHistory({ store, study, runId, unsaved, onRestored, onSaveFir
       </ol>
       {model.hiddenCount.value > 0 && (
         <button type="button" class="btn big block" onClick={() => model.showOlder()}>
-          Show {Math.min(HISTORY_PAGE, model.hiddenCount.value)} older versions ({model.hiddenCount.value} not shown)
+          Show {Math.min(HISTORY_PAGE, model.hiddenCount.value)} older revisions ({model.hiddenCount.value} not shown)
         </button>
       )}
     </section>

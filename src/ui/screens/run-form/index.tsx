@@ -100,7 +100,7 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
       {model.diverged.value && !showHistory.value && (
         <>
           <DivergedNote study={study} diverged={model.diverged.value} busy={model.keeping.value || busy || (model.dirty.value && saveState !== 'saved')} onKeep={(id) => void model.keepRevision(id)} />
-          {model.dirty.value && saveState !== 'saved' && <p class="quiet">Save or discard the typing below before keeping one version.</p>}
+          {model.dirty.value && saveState !== 'saved' && <p class="quiet">Save or discard the typing below before keeping one revision.</p>}
         </>
       )}
       {draftState === 'restored' && <p class="notice">Your earlier typing was kept and is back. It is not saved yet.</p>}
