@@ -92,7 +92,7 @@ function summarize(r: Omit<ImportReport, 'summary'>, names?: ConflictNames): str
   const aside =
     n === 0
       ? ''
-      : ` ${n} ${n === 1 ? 'record' : 'records'} of the file ${n === 1 ? 'was' : 'were'} set aside, not merged: ${clashes.length} ${clashes.length === 1 ? 'has' : 'have'} the id of a record on this device with other content (${named}${clashes.length > 3 ? ', ...' : ''})${n > clashes.length ? ` and ${n - clashes.length} depend on ${clashes.length === 1 ? 'it' : 'them'}` : ''}. Both revisions are kept; nothing on this device was changed by them.`;
+      : ` ${n} ${n === 1 ? 'record' : 'records'} of the file ${n === 1 ? 'was' : 'were'} set aside, not merged: ${clashes.length} ${clashes.length === 1 ? 'has' : 'have'} the id of a record on this device with other content (${named}${clashes.length > 3 ? ', ...' : ''})${n > clashes.length ? ` and ${n - clashes.length} depend on ${clashes.length === 1 ? 'it' : 'them'}` : ''}. Both records are kept; nothing on this device was changed by them.`;
   if (r.studiesAdded + r.revisionsAdded === 0) return (n === 0 ? 'Nothing new: everything in the file was already here.' : 'Nothing new was merged.') + aside;
   const parts = [`${r.studiesAdded} new ${r.studiesAdded === 1 ? 'study' : 'studies'}`, `${r.runsAdded} new logged ${r.runsAdded === 1 ? 'run' : 'runs'}`, `${r.revisionsAdded} new ${r.revisionsAdded === 1 ? 'revision' : 'revisions'}`];
   const c = r.conflicts.length;

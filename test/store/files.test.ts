@@ -148,7 +148,7 @@ describe('backup export and import', () => {
     expect(report.setAside[0].reason).toMatch(/differs from the revision with the same id on this device in readings\[0\]\[0\]/);
     expect(report.setAside[1].reason).toMatch(new RegExp(`builds on revision ${r.revision.id}, which was set aside`));
     expect(report.revisionsAdded).toBe(1);
-    expect(report.summary).toMatch(/Imported 0 new studies, 1 new logged run, 1 new revision\. 2 records of the file were set aside, not merged: 1 has the id of a record on this device with other content \(revision .* of run 1 \(readings\[0\]\[0\] differs\)\) and 1 depend on it\. Both versions are kept/);
+    expect(report.summary).toMatch(/Imported 0 new studies, 1 new logged run, 1 new revision\. 2 records of the file were set aside, not merged: 1 has the id of a record on this device with other content \(revision .* of run 1 \(readings\[0\]\[0\] differs\)\) and 1 depend on it\. Both records are kept/);
     expect(await b.db.revisions.get(run3.revision.id)).toBeDefined();
     expect(await b.db.revisions.get(child.revision.id)).toBeUndefined();
     // The device's own revision is as it was; the file's version is kept apart, whole.

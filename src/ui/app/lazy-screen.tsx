@@ -12,7 +12,7 @@ import './lazy-screen.css';
 
 export interface LazyScreen<P> {
   (props: P): JSX.Element;
-  /** Fetches the screen's module (once; again after a failure) and resolves when it is ready. */
+  /** Fetches the screen's module in the background (once; after a failure it waits for the screen itself or "Try again") and resolves when done. */
   preload(): Promise<void>;
 }
 
@@ -25,8 +25,11 @@ export function lazyScreen<P>(load: () => Promise<ComponentType<P>>): LazyScreen
   let pending: Promise<void> | null = null;
   let failure: string | null = null;
 
-  function preload(): Promise<void> {
+  /** `retry`: try again after a failure (the screen's own mount, or "Try again"); a background
+   * preload leaves a failure as it is, so the message on screen does not flicker away. */
+  function fetchScreen(retry: boolean): Promise<void> {
     if (screen) return Promise.resolve();
+    if (failure !== null && pending === null && !retry) return Promise.resolve();
     if (pending === null) failure = null;
     pending ??= load().then(
       (s) => {
@@ -48,7 +51,7 @@ export function lazyScreen<P>(load: () => Promise<ComponentType<P>>): LazyScreen
     useEffect(() => {
       if (ready) return;
       let live = true;
-      void preload().then(() => live && rerender());
+      void fetchScreen(true).then(() => live && rerender());
       return () => void (live = false);
     }, [ready]);
     if (ready) {
@@ -63,7 +66,7 @@ export function lazyScreen<P>(load: () => Promise<ComponentType<P>>): LazyScreen
             this device are not affected.
           </p>
           <button type="button" class="btn" onClick={() => {
-              void preload().then(rerender);
+              void fetchScreen(true).then(rerender);
               rerender();
             }}>
             Try again
@@ -77,5 +80,6 @@ export function lazyScreen<P>(load: () => Promise<ComponentType<P>>): LazyScreen
       </p>
     );
   }
+  const preload = () => fetchScreen(false);
   return Object.assign(Lazy, { preload });
 }
