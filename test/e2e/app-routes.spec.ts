@@ -2,23 +2,13 @@ import { test, expect } from '@playwright/test';
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { hrefTo, parseRoute, ROUTE_NAMES, ROUTES } from '../../src/ui/app/routes.ts';
+import { READY } from './screen-ready.ts';
 
 // Every screen of the route table opens at its address, and every link the screens draw parses
 // back to a screen of the table and to the address it was drawn with.
 const fixtureText = readFileSync(fileURLToPath(new URL('../fixtures/trialbook-demo-backup.json', import.meta.url)), 'utf8');
 const studyId = (JSON.parse(fixtureText) as { payload: { studies: { id: string }[] } }).payload.studies[0].id;
 
-/** What each screen shows once it has opened: an element and its text. */
-const READY: Record<(typeof ROUTE_NAMES)[number], readonly [string, RegExp]> = {
-  studies: ['h2', /^Studies$/],
-  newStudy: ['h2', /^Plan a new study$/],
-  runSheet: ['.progress', /planned runs logged/],
-  runForm: ['h2', /^Run 2 of/],
-  analysis: ['h2', /^Effects$/],
-  quickCard: ['h2', /^Quick card$/],
-  nextRuns: ['h2', /^Next runs$/],
-  export: ['h2', /^Export$/],
-};
 
 test('every screen opens at its address, and its links parse back to screens of the table', async ({ page }) => {
   for (const name of ROUTE_NAMES) {

@@ -2,6 +2,7 @@ import { test, expect } from '@playwright/test';
 import { readdirSync, readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { hrefTo, ROUTE_NAMES, ROUTES } from '../../src/ui/app/routes.ts';
+import { READY } from './screen-ready.ts';
 
 // The screens load their code on first use (src/ui/app/lazy-screen.tsx). After one visit with the
 // network on, the service worker holds every chunk of the built app, so each screen, opened
@@ -10,17 +11,6 @@ const assets = fileURLToPath(new URL('../../dist/assets/', import.meta.url));
 const fixtureText = readFileSync(fileURLToPath(new URL('../fixtures/trialbook-demo-backup.json', import.meta.url)), 'utf8');
 const studyId = (JSON.parse(fixtureText) as { payload: { studies: { id: string }[] } }).payload.studies[0].id;
 
-/** What each screen shows once it has opened (as in app-routes.spec.ts). */
-const READY: Record<(typeof ROUTE_NAMES)[number], readonly [string, RegExp]> = {
-  studies: ['h2', /^Studies$/],
-  newStudy: ['h2', /^Plan a new study$/],
-  runSheet: ['.progress', /planned runs logged/],
-  runForm: ['h2', /^Run 2 of/],
-  analysis: ['h2', /^Effects$/],
-  quickCard: ['h2', /^Quick card$/],
-  nextRuns: ['h2', /^Next runs$/],
-  export: ['h2', /^Export$/],
-};
 
 test('after one visit, every screen opens offline with all its code from the service worker', async ({ page, context }) => {
   const files = readdirSync(assets).filter((f) => /\.(js|css)$/.test(f));
