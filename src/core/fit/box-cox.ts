@@ -4,18 +4,21 @@
  * geometric mean, w(lambda) = (y'^lambda - 1) / (lambda g^(lambda - 1)) (g log y' at 0), SSE(lambda)
  * the residual sum of squares of w on the model columns, the profile log-likelihood is
  * L(lambda) = -(n/2) log(SSE(lambda) / n). lambda-hat maximises it on [-3, 3] (a grid of step
- * 0.01, then golden-section search to 1e-6); the 95% interval is {lambda : L(lambda) >= Lmax -
+ * 0.1, then golden-section search to 1e-6 in the grid cells either side of the best point); the 95% interval is {lambda : L(lambda) >= Lmax -
  * chi-square(1, 0.95) / 2}, each end found by bisection to 1e-6 (an end that reaches -3 or 3 is
  * null). The suggestion is the first of none (1), log (0), sqrt (0.5), inverse (-1) inside the
  * interval, else power=lambda-hat rounded to 0.1.
- * One Householder factorisation serves every lambda: only y changes (Q'w gives SSE).
- * Cost O(n p^2) once, then O(n p) per lambda (about 650 evaluations).
+ * One factorisation serves every lambda: only y changes (residual-ss.ts: Q'w, or the contrasts
+ * of a complete balanced factorial, gives SSE). On the grid y'^lambda is stepped by one
+ * multiplication per run (y'^(lambda + h) = y'^lambda y'^h); the refinements use expm1.
+ * Cost O(n p^2) once, then O(n p) (O(n + k 2^k) on Yates' path) per lambda, about 120 of them.
  * Null when some y' is not positive or the residual df is 0.
  * Example: see test/core/fit/box-cox.test.ts (Box and Cox 1964 poison data).
  */
 import { normalQuantile } from '../dist/normal.ts';
-import { applyQt, householderQr } from '../linalg/householder-qr.ts';
+import { householderQr } from '../linalg/householder-qr.ts';
 import { BOX_COX_PRECISION, RANK_TOLERANCE } from '../tolerance.ts';
+import { residualSsQr, type ResidualSs } from './residual-ss.ts';
 import { transformToken } from './response-transform.ts';
 
 export interface BoxCox {
@@ -29,35 +32,52 @@ export interface BoxCox {
 /** The search range of lambda (Box and Cox 1964 plot roughly -1 to 1; a wider range is common practice). */
 const LAMBDA_MIN = -3;
 const LAMBDA_MAX = 3;
-const GRID_STEP = 0.01;
+const GRID_STEP = 0.1;
 
 /** `x`: the model matrix, column-major n x p (intercept included); `yp`: the response minus its bound. */
 export function boxCox(x: Float64Array, n: number, p: number, yp: readonly number[]): BoxCox | null {
   if (yp.length !== n || n === 0 || yp.some((v) => !(v > 0))) return null;
-  const f = householderQr(Float64Array.from(x), n, p, RANK_TOLERANCE);
-  const m = f.rank;
-  if (n - m <= 0) return null;
+  return boxCoxOn(residualSsQr(householderQr(x, n, p, RANK_TOLERANCE)), yp);
+}
+
+/** The same search over a model already factorised (residual-ss.ts); null as boxCox. */
+export function boxCoxOn(model: ResidualSs, yp: readonly number[]): BoxCox | null {
+  const n = model.n;
+  if (yp.length !== n || n === 0 || model.df <= 0) return null;
+  for (let i = 0; i < n; i++) if (!(yp[i] > 0)) return null;
+  const logY = new Float64Array(n);
   let logSum = 0;
-  for (const v of yp) logSum += Math.log(v);
+  for (let i = 0; i < n; i++) logSum += logY[i] = Math.log(yp[i]);
   const logG = logSum / n;
-  const logY = yp.map(Math.log);
   const w = new Float64Array(n);
+  const toLoglik = (sse: number): number => -(n / 2) * Math.log(sse / n);
   const loglik = (lambda: number): number => {
     if (lambda === 0) for (let i = 0; i < n; i++) w[i] = Math.exp(logG) * logY[i];
     else {
       const scale = lambda * Math.exp((lambda - 1) * logG);
       for (let i = 0; i < n; i++) w[i] = Math.expm1(lambda * logY[i]) / scale;
     }
-    applyQt(f, w);
-    let sse = 0;
-    for (let i = m; i < n; i++) sse += w[i] * w[i];
-    return -(n / 2) * Math.log(sse / n);
+    return toLoglik(model.ss(w));
   };
   const steps = Math.round((LAMBDA_MAX - LAMBDA_MIN) / GRID_STEP);
   const grid = new Float64Array(steps + 1);
+  // The grid: y'^lambda by repeated multiplication (its rounding, some tens of ulps, only picks the cell).
+  const power = new Float64Array(n);
+  const stepBy = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    power[i] = Math.exp(LAMBDA_MIN * logY[i]);
+    stepBy[i] = Math.exp(GRID_STEP * logY[i]);
+  }
   let best = 0;
   for (let s = 0; s <= steps; s++) {
-    grid[s] = loglik(LAMBDA_MIN + s * GRID_STEP);
+    const lambda = LAMBDA_MIN + s * GRID_STEP;
+    if (Math.abs(lambda) < GRID_STEP / 2) grid[s] = loglik(0);
+    else {
+      const scale = lambda * Math.exp((lambda - 1) * logG);
+      for (let i = 0; i < n; i++) w[i] = (power[i] - 1) / scale;
+      grid[s] = toLoglik(model.ss(w));
+    }
+    for (let i = 0; i < n; i++) power[i] *= stepBy[i];
     if (grid[s] > grid[best]) best = s;
   }
   // Golden-section search in the grid cell either side of the best grid point.
