@@ -1,4 +1,4 @@
-// The one test command (npm test): type check, unit tests, browser tests, then the plain closing
+// The one test command (npm test): type check, unit tests, the first screen's size budget, browser tests, then the plain closing
 // line "N passed, N failed" with the real counts of both test runners.
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, existsSync } from 'node:fs';
@@ -33,6 +33,11 @@ if (existsSync(unitJson)) {
   failed += 1;
   broken = true;
 }
+
+// The first screen's JavaScript budget (60 KB gzip), from the bundler's own chunk graph
+// (test/bench/chunk-sizes.ts --check): counted as one test, passed or failed.
+if (step('first screen size budget', 'npx', ['tsx', 'test/bench/chunk-sizes.ts', '--check'])) passed += 1;
+else failed += 1;
 
 const e2eJson = join(out, 'e2e.json');
 const browserOk =

@@ -26,14 +26,17 @@ import { analysisVerdicts } from './analysis-verdicts.ts';
 import { anovaTables } from './anova-tables.ts';
 import { chooseFit } from './choose-fit.ts';
 import { codingRows } from './coding-rows.ts';
-import { adjustedCurvature, runKinds } from './curvature.ts';
+import { adjustedCurvature, curvature, runKinds } from './curvature.ts';
 import { runDiagnostics } from './diagnostics.ts';
 import { estimateTerms } from './estimate-terms.ts';
 import { lenthStep, withLenthT } from './lenth-step.ts';
 import { screeningStep } from './screening-step.ts';
 import { findRepeats } from './repeats.ts';
-import { boxCox } from './box-cox.ts';
+import { boxCoxOn } from './box-cox.ts';
 import { modelMatrix } from './columns.ts';
+import { householderQr } from '../linalg/householder-qr.ts';
+import { residualSsQr, residualSsYates } from './residual-ss.ts';
+import { RANK_TOLERANCE } from '../tolerance.ts';
 import { NO_TRANSFORM, transformResponses, type ResponseTransform } from './response-transform.ts';
 import { validateResponseData } from './validate-response.ts';
 import { columnVifs, VIF_LIMIT, vifDrivers } from './vif.ts';
@@ -73,7 +76,9 @@ export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analys
   const pe = repeats.pure;
   const tables = anovaTables(fit, y, est.labels, est.terms.map((t) => t.p), pe);
   const kinds = runKinds(factors, nominal ?? coded);
-  const curv = adjustedCurvature(keptColumns, coded, blocks, kinds, y, pe);
+  // On Yates' path every term column is 0 at the center runs and balanced over the factorial
+  // ones, so the adjusted curvature is exactly the mean difference (curvature.ts): no side fit.
+  const curv = cells ? curvature(kinds, y, pe) : adjustedCurvature(keptColumns, coded, blocks, kinds, y, pe);
   const lenthOut = lenthStep({ factors, coded, y, points: data.points, blocks, kinds, groups: repeats.groups, terms: est.terms, nominal, ...(screening ? { contrasts: screening.contrasts } : {}) });
   const terms = fit.dfResidual === 0 && lenthOut.lenth ? withLenthT(est.terms, lenthOut.lenth.pse) : est.terms;
   const diag = runDiagnostics(fit, y, data.labels, kinds, est.sigma, tables.ssTotal);
@@ -96,7 +101,9 @@ export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analys
   });
 
   const yp = bound === null ? raw.y : raw.y.map((v) => v - bound);
-  const bc = boxCox(modelMatrix(keptColumns, coded, blocks), y.length, keptColumns.length, yp);
+  // Box-Cox refits the same columns to each power of y': one factorisation serves them all.
+  const refit = cells ? residualSsYates(cells, factors.length, fit.columns.flatMap((c) => (c.kind === 'term' ? [c.term] : []))) : residualSsQr(fit.qr ?? householderQr(modelMatrix(keptColumns, coded, blocks), y.length, keptColumns.length, RANK_TOLERANCE));
+  const bc = boxCoxOn(refit, yp);
   const model: FittedModel = {
     factors,
     response: data.response,

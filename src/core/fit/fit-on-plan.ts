@@ -13,9 +13,10 @@ import type { Column } from './columns.ts';
 import { fitQr } from './fit-qr.ts';
 import type { LinearFit } from './linear-fit.ts';
 
-export function fitOnPlan(columns: readonly Column[], xNominal: Float64Array, xActual: Float64Array, y: readonly number[]): LinearFit {
+/** `planFit`: the lean fit on the nominal matrix when the caller already has it (saves one factorisation). */
+export function fitOnPlan(columns: readonly Column[], xNominal: Float64Array, xActual: Float64Array, y: readonly number[], planFit?: LinearFit): LinearFit {
   const n = y.length;
-  const plan = fitQr(columns, xNominal, y, true);
+  const plan = planFit ?? fitQr(columns, xNominal, y, true);
   const m = plan.kept.length;
   const kept = Array.from(plan.kept, (j) => columns[j]);
   const x = new Float64Array(n * m);

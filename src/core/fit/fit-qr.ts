@@ -90,5 +90,6 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
     aliased,
     orthogonal,
     method: 'qr',
+    qr: f,
   };
 }

@@ -3,6 +3,7 @@
  * Yates' algorithm for complete balanced factorials). Everything the analysis reports is
  * derived from this.
  */
+import type { QrFactor } from '../linalg/householder-qr.ts';
 import type { Column } from './columns.ts';
 
 export interface AliasedColumn {
@@ -33,4 +34,6 @@ export interface LinearFit {
   /** True when all kept columns are mutually orthogonal (sequential = adjusted sums of squares). */
   readonly orthogonal: boolean;
   readonly method: 'qr' | 'yates';
+  /** On the QR path, the factorisation of the columns, kept for steps that fit other responses to the same model (residual-ss.ts). */
+  readonly qr?: QrFactor;
 }

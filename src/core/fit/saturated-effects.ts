@@ -50,7 +50,8 @@ export function saturatedEffects(
   }
   if (!fit) return [];
   // The set comes from the nominal settings (`coded`); the effects, like the model's, from the actual ones.
-  if (actual) fit = fitOnPlan(fit.columns, modelMatrix(fit.columns, coded, blocks), modelMatrix(fit.columns, actual, blocks), y);
+  // The lean nominal fit just made is the plan: fitOnPlan need not factorise it again.
+  if (actual) fit = fitOnPlan(fit.columns, new Float64Array(0), modelMatrix(fit.columns, actual, blocks), y, fit);
   const byColumn = new Map<number, { term: Term; weight: number }[]>();
   for (const a of fit.aliased) {
     const c = fit.columns[a.column];

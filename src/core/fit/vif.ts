@@ -26,6 +26,11 @@ export function columnVifs(fit: LinearFit, coded: readonly (readonly number[])[]
   const levels = blockLevels(blocks);
   const last = levels[levels.length - 1];
   const out: (number | null)[] = [];
+  // On Yates' path the columns are orthogonal and balanced: S_jj = N_f and (X'X)^-1_jj = 1 / N_f, so every VIF is 1.
+  if (fit.method === 'yates') {
+    for (let a = 0; a < m; a++) out.push(fit.columns[fit.kept[a]].kind === 'term' ? 1 : null);
+    return out;
+  }
   const v = new Float64Array(n);
   for (let a = 0; a < m; a++) {
     const c = fit.columns[fit.kept[a]];
