@@ -1,7 +1,7 @@
 /** The path command's readable report: the direction, then one row per step. */
 import type { SteepestPath } from '../../core/predict/steepest-path.ts';
 import { num, table } from './numbers.ts';
-import { interval, messagesAndCaution, signedNum } from './prediction-text.ts';
+import { fitValue, interval, messagesAndCaution, signedNum } from './prediction-text.ts';
 
 /**
  * The readable path report: each factor's coefficient and step (coded and real), then one row per
@@ -33,7 +33,7 @@ export function pathText(p: SteepestPath): string {
   const rows = p.steps.map((s) => [
     s.step === 0 ? '0 (origin)' : String(s.step),
     ...s.real.map((v, i) => (typeof v === 'number' ? `${num(v)}${unit(i)}` : v)),
-    num(s.fit),
+    fitValue(s.fit),
     interval(s.pi),
     s.outside ? 'outside tested range' : '',
   ]);

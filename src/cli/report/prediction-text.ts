@@ -3,6 +3,7 @@
  * intervals, the make-up of the fit. Also the pieces the solve and path reports share.
  */
 import type { Prediction } from '../../core/predict/predict.ts';
+import { intervalText, valueText } from '../../core/text/interval-text.ts';
 import { num, table } from './numbers.ts';
 import type { FactorSetting } from '../../core/predict/parse-settings.ts';
 
@@ -18,8 +19,8 @@ export function predictionText(p: Prediction): string {
   out.push('');
   out.push(settingsTable(p.settings));
   out.push('');
-  out.push(`  fitted value                 ${num(p.fit)}`);
-  out.push(`  standard error of the fit    ${num(p.se)}`);
+  out.push(`  fitted value                 ${fitValue(p.fit)}`);
+  out.push(`  standard error of the fit    ${seText(p.se, p.transformed?.se)}`);
   out.push(`  ${pct} confidence interval      ${interval(p.ci)}   (for the mean response at these settings)`);
   out.push(`  ${pct} prediction interval      ${interval(p.pi)}   (for one new run)`);
   out.push('');
@@ -27,7 +28,7 @@ export function predictionText(p: Prediction): string {
   const rows = [
     ['baseline (fit at the center)', '', '', num(p.baseline)],
     ...p.contributions.map((c) => [`${c.estimates ?? c.letters}  ${c.name}`, num(c.coef), signedNum(c.product), signedNum(c.value)]),
-    ['fitted value', '', '', num(p.fit)],
+    ['fitted value', '', '', fitValue(p.fit)],
   ];
   out.push(
     table(['term', 'coefficient', 'product', 'contribution'], rows)
@@ -73,7 +74,17 @@ export function messagesAndCaution(messages: readonly string[], caution: readonl
   return out;
 }
 
-/** An interval as 'lo to hi', or '-' when null: interval([1, 2]) -> '1 to 2'. */
+/** An interval as 'lo to hi', an open end in words, or '-' when null: interval([1, 2]) -> '1 to 2'; interval([1, Infinity]) -> '1 or more (no upper limit)'. */
 export function interval(iv: readonly [number, number] | null): string {
-  return iv ? `${num(iv[0])} to ${num(iv[1])}` : '-';
+  return intervalText(iv, (x) => num(x));
+}
+
+/** The standard error, or under a transform the one on the fitted scale, said so: seText(null, 0.02) -> '- (0.02 on the fitted scale)'. */
+export function seText(se: number | null, fittedScale: number | null | undefined): string {
+  return fittedScale === undefined ? num(se) : `${num(se)} (${num(fittedScale)} on the fitted scale)`;
+}
+
+/** A fitted value, in words when it has no finite value (beyond a negative power's domain). */
+export function fitValue(x: number | null): string {
+  return valueText(x, (v) => num(v));
 }

@@ -1,8 +1,9 @@
 /** The second-order section of the analyze report: canonical analysis, ridge and the best setting, with the caution. */
 import type { SecondOrderAnalysis } from '../../core/optimum/second-order-analysis.ts';
+import { intervalText } from '../../core/text/interval-text.ts';
 import { num, table } from './numbers.ts';
 
-const interval = (iv: readonly [number, number] | null) => (iv ? `${num(iv[0])} to ${num(iv[1])}` : '-');
+const interval = (iv: readonly [number, number] | null) => intervalText(iv, (x) => num(x));
 
 export function secondOrderText(s: SecondOrderAnalysis): string {
   const factors = s.canonical.surface.factors;

@@ -27,5 +27,6 @@ export function solveJson(s: Solution) {
     outside: s.outside,
     messages: s.messages,
     caution: s.caution,
+    ...(s.transformed ? { transformed: s.transformed } : {}),
   };
 }

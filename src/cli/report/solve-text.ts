@@ -2,7 +2,7 @@
 import { formatSetting } from '../../core/predict/parse-settings.ts';
 import type { Solution } from '../../core/predict/solve-for-target.ts';
 import { num } from './numbers.ts';
-import { interval, messagesAndCaution, settingsTable, signedNum } from './prediction-text.ts';
+import { fitValue, interval, seText, messagesAndCaution, settingsTable, signedNum } from './prediction-text.ts';
 
 /**
  * The readable solve report: the answer (or the nearest setting and what would be needed), the
@@ -23,12 +23,12 @@ export function solveText(s: Solution): string {
   if (s.needed) {
     out.push(`  The model would need ${s.factor.name} = ${s.needed.real === null ? 'a setting far outside the range' : formatSetting(s.needed.real, s.factor.unit)} (coded ${signedNum(s.needed.coded)}), outside the tested range.`);
   }
-  out.push(`  The tested range of ${s.factor.name} reaches ${num(s.span[0])} to ${num(s.span[1])} at these settings (slope ${num(s.slope)} per coded unit).`);
+  out.push(`  The tested range of ${s.factor.name} reaches ${interval(s.span)} at these settings (slope ${num(s.slope)} per coded unit${s.transformed ? ` on the fitted scale` : ''}).`);
   out.push('');
   out.push(settingsTable(s.settings));
   out.push('');
-  out.push(`  fitted value there           ${num(s.fit)}`);
-  out.push(`  standard error of the fit    ${num(s.se)}`);
+  out.push(`  fitted value there           ${fitValue(s.fit)}`);
+  out.push(`  standard error of the fit    ${seText(s.se, s.transformed?.se)}`);
   out.push(`  ${pct} confidence interval      ${interval(s.ci)}   (for the mean response)`);
   out.push(`  ${pct} prediction interval      ${interval(s.pi)}   (for one new run)`);
   out.push(...messagesAndCaution(s.messages, s.caution));

@@ -53,8 +53,8 @@ export function onResponseScale(model: FittedModel, z: { fit: number; se: number
   const fit = back(z.fit);
   const ci = interval(z.ci);
   const pi = interval(z.pi);
-  const messages = [`Fitted on the ${t.token} scale of ${model.response}${bound !== null ? ` minus its bound ${bound}` : ''} and brought back to its units: the fit estimates the median, not the mean, and the intervals are not symmetric.`];
+  const messages = [`Fitted on the ${t.token} scale of ${model.response}${bound !== null && bound !== 0 ? ` minus its bound ${bound}` : ''} and brought back to its units: the fit estimates the median, not the mean, and the intervals are not symmetric.`];
   if (clipped) messages.push(`An interval end lies beyond what the ${t.token} transform can give: it is clipped to ${L}, the lowest value ${model.response} can take.`);
-  if (open) messages.push(`An interval end lies beyond what the ${t.token} transform can give: it has no finite value (shown as none).`);
+  if (open) messages.push(`An interval end lies beyond what the ${t.token} transform can give: it has no finite value (shown as no upper limit).`);
   return { fit, ci, pi, transformed: { fit: z.fit, se: z.se, ci: z.ci, pi: z.pi }, messages };
 }

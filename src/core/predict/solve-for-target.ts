@@ -10,6 +10,8 @@ import { findFactor } from '../factor/factor.ts';
 import type { FittedModel } from '../fit/analysis.ts';
 import { isSquare, termLetters, termMask, termValue } from '../model/term.ts';
 import { SETTING_TOLERANCE } from '../tolerance.ts';
+import { backTransform, transformValue } from '../fit/response-transform.ts';
+import { onResponseScale } from './back-transform.ts';
 import { CAUTION } from './caution.ts';
 import { cachedPredictor } from './compiled-predictor.ts';
 import { outsideRange, type OutsideSetting } from './outside-range.ts';
@@ -41,8 +43,9 @@ export interface Solution {
   readonly coded: number;
   /** True when a setting inside the tested range gives the target. */
   readonly reachable: boolean;
-  /** Prediction at `setting` (equals the target when reachable). */
+  /** Prediction at `setting` in the response's own units (equals the target when reachable). */
   readonly fit: number;
+  /** Standard error of the fit; null under a transform (it is given in `transformed`). */
   readonly se: number | null;
   readonly level: number;
   readonly ci: readonly [number, number] | null;
@@ -50,11 +53,11 @@ export interface Solution {
   /** Every setting inside the tested range that gives the target, low to high (up to two with a
    * square; empty when none does, or when the factor has no effect at all). */
   readonly solutions: readonly { readonly setting: number; readonly coded: number }[];
-  /** Change of the fit per coded unit of the factor at its center, the others held (s in a + s x + q x^2). */
+  /** Change of the fit per coded unit of the factor at its center, the others held (s in a + s x + q x^2); on the transformed scale under a transform. */
   readonly slope: number;
-  /** Coefficient q of the factor's coded square at the held settings; 0 when the model has no square of it. */
+  /** Coefficient q of the factor's coded square at the held settings (transformed scale under a transform); 0 when the model has no square of it. */
   readonly quadratic: number;
-  /** Where the fit turns (x = -s / 2q) when quadratic is not 0, inside the range or not; else null. */
+  /** Where the fit turns (x = -s / 2q) when quadratic is not 0, inside the range or not (fit in the response's units); else null. */
   readonly stationary: { readonly real: number | null; readonly coded: number; readonly fit: number } | null;
   /** Fit with the factor at its -1 and +1 settings (with a square the fit between may go beyond them). */
   readonly reach: readonly [number, number];
@@ -69,6 +72,8 @@ export interface Solution {
   readonly outsideFactors: readonly OutsideSetting[];
   readonly messages: readonly string[];
   readonly caution: readonly string[];
+  /** Under a transform: the target, fit, se and intervals on the transformed scale, where the solve is made. */
+  readonly transformed?: { readonly target: number; readonly fit: number; readonly se: number | null; readonly ci: readonly [number, number] | null; readonly pi: readonly [number, number] | null };
 }
 
 function fmt(x: number): string {
@@ -95,9 +100,15 @@ function signed(x: number): string {
  * answer; with none inside, the answer is the setting in the range whose fit comes nearest the
  * target (an end, or the turning point x = -s / 2q), and `needed` is the root nearest the range,
  * or null when the parabola never reaches the target. The fit, CI and PI at the setting follow
- * Montgomery section 10.6 (see compilePredictor).
+ * Montgomery section 10.6 (see compilePredictor). Under a transform (fit/response-transform.ts)
+ * the same solve is made on the transformed scale, for the transformed target g(T - L); the
+ * transform is monotone increasing, so roots, the reach and the nearest setting carry over, and
+ * every figure reported (the fit, its intervals, the reach, the turning point's fit) is brought
+ * back to the response's own units (back-transform.ts); slope and quadratic stay on the
+ * transformed scale, and `transformed` holds the figures there.
  * Cost O(p) after the model is compiled.
- * Throws InputError for a non-finite target, an unknown factor, a categorical factor (it has no
+ * Throws InputError for a non-finite target, a target outside what the transform allows (at or
+ * below the bound for log and negative powers, below it for positive ones), an unknown factor, a categorical factor (it has no
  * settings between its levels; the message gives the fit at each level), a setting given for
  * the factor solved for, and as parseSettings does.
  * Example: for yhat = 40.44 + 0.775 x1 + 0.325 x2 (time 30..40 min; Montgomery 8th ed., section 6.8
@@ -110,10 +121,23 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
   const level = options.level ?? 0.95;
   const alpha = options.alpha ?? 0.05;
   if (typeof target !== 'number' || !Number.isFinite(target)) throw new InputError(`The target needs to be a finite number, got ${target}`);
-  if (model.transform && model.transform.lambda !== 1) {
-    // Its messages would quote figures on the transformed scale: refused until they are brought back.
-    throw new InputError(`Solving for a target needs the response on its own scale (transform none), got ${model.transform.token}; use predict at candidate settings instead`);
+  const tr = model.transform && model.transform.lambda !== 1 ? model.transform : null;
+  const bound = tr ? (tr.lowerBound ?? 0) : 0;
+  if (tr && (target < bound || (target === bound && tr.lambda <= 0))) {
+    const what = tr.lowerBound === null ? (tr.lambda > 0 ? '0 or more' : 'above 0') : tr.lambda > 0 ? `at or above its lower bound ${bound}` : `above its lower bound ${bound}`;
+    throw new InputError(`With the ${tr.token} transform the target for ${model.response} needs to be ${what}, got ${fmt(target)}; give a target ${model.response} can reach`);
   }
+  // The solve runs on the fitted scale: z for the target, and every figure it quotes is shown back in the response's units.
+  const zTarget = tr ? transformValue(target - bound, tr.lambda) : target;
+  const back = (z: number): number => {
+    if (!tr) return z;
+    const b = backTransform(z, tr.lambda);
+    return b === null ? Infinity : bound + b;
+  };
+  const show = (z: number): string => {
+    const v = back(z);
+    return Number.isFinite(v) ? fmt(v) : 'a value with no finite limit';
+  };
   const f = findFactor(model.factors, options.factor);
   if (!f) {
     throw new InputError(
@@ -132,7 +156,7 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
     }
     const x = settings.map((s) => s.coded);
     const at = (c: number) => ((x[j] = c), predictor.fit(x));
-    throw new InputError(`${plain}; at the given settings the model predicts ${fmt(at(-1))} at ${f.levels[0]} and ${fmt(at(1))} at ${f.levels[1]}`);
+    throw new InputError(`${plain}; at the given settings the model predicts ${show(at(-1))} at ${f.levels[0]} and ${show(at(1))} at ${f.levels[1]}`);
   }
   const held = parseSettings(model.factors, options.at ?? {}, { free: [j] });
   const x = held.map((s) => s.coded);
@@ -180,18 +204,18 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
   if (!quadratic) {
     const lo = Math.min(reach[0], reach[1]);
     const hi = Math.max(reach[0], reach[1]);
-    const span = `${fmt(lo)} to ${fmt(hi)}`;
+    const span = `${show(lo)} to ${show(hi)}`;
     spanLoHi = [lo, hi];
     if (Math.abs(s) <= ZERO_SLOPE_TOLERANCE * scale) {
       coded = 0;
-      reachable = Math.abs(target - a) <= ZERO_SLOPE_TOLERANCE * scale;
+      reachable = Math.abs(zTarget - a) <= ZERO_SLOPE_TOLERANCE * scale;
       messages.push(
         reachable
-          ? `${f.name} has no effect at these settings (slope 0) and the fit already equals the target: every setting in the tested range gives ${fmt(a)}; its center is shown.`
-          : `${f.name} has no effect at these settings (slope 0): every setting in the tested range gives ${fmt(a)}, so the target ${fmt(target)} cannot be reached by ${f.name}; its center is shown.`,
+          ? `${f.name} has no effect at these settings (slope 0) and the fit already equals the target: every setting in the tested range gives ${show(a)}; its center is shown.`
+          : `${f.name} has no effect at these settings (slope 0): every setting in the tested range gives ${show(a)}, so the target ${fmt(target)} cannot be reached by ${f.name}; its center is shown.`,
       );
     } else {
-      const xs = (target - a) / s;
+      const xs = (zTarget - a) / s;
       if (inRange(xs)) {
         coded = clamp(xs);
         reachable = true;
@@ -223,13 +247,13 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
       if (fitAt(c) > fitAt(cHi)) cHi = c;
     }
     spanLoHi = [fitAt(cLo), fitAt(cHi)];
-    const span = `${fmt(spanLoHi[0])} to ${fmt(spanLoHi[1])}`;
-    const roots = quadraticRoots(q, s, a - target);
+    const span = `${show(spanLoHi[0])} to ${show(spanLoHi[1])}`;
+    const roots = quadraticRoots(q, s, a - zTarget);
     const inside = roots.filter(inRange).map(clamp);
     messages.push(
-      `The model is quadratic in ${f.name} (coefficient of its square ${signed(q)} in coded units): at these settings the fit turns ${q < 0 ? 'down' : 'up'} at ${f.name} = ` +
+      `The model is quadratic in ${f.name} (coefficient of its square ${signed(q)} in coded units${tr ? ` on the ${tr.token} scale` : ''}): at these settings the fit turns ${q < 0 ? 'down' : 'up'} at ${f.name} = ` +
         (stationary.real !== null ? formatSetting(stationary.real, unit) : 'a setting far outside the range') +
-        ` (coded ${signed(xv)}), where it is ${fmt(yv)}${inRange(xv) ? '' : ', outside the tested range'}.`,
+        ` (coded ${signed(xv)}), where it is ${show(yv)}${inRange(xv) ? '' : ', outside the tested range'}.`,
     );
     if (inside.length > 0) {
       reachable = true;
@@ -242,7 +266,7 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
       );
     } else {
       reachable = false;
-      coded = target > fitAt(cHi) ? cHi : cLo;
+      coded = zTarget > fitAt(cHi) ? cHi : cLo;
       const where = coded === 1 ? 'the high setting' : coded === -1 ? 'the low setting' : `where the fit turns`;
       let need = '';
       if (roots.length > 0) {
@@ -254,7 +278,7 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
             ? `; the model would need ${f.name} = ${formatSetting(needed.real, unit)} (coded ${signed(r)}), an extrapolation`
             : '; the model would need a setting far outside the range';
       } else {
-        need = `; no setting of ${f.name} reaches it in the fitted model, whose fit ${q < 0 ? 'peaks' : 'bottoms out'} at ${fmt(yv)}`;
+        need = `; no setting of ${f.name} reaches it in the fitted model, whose fit ${q < 0 ? 'peaks' : 'bottoms out'} at ${show(yv)}`;
       }
       messages.push(
         `The target ${fmt(target)} lies outside what the tested range of ${f.name} reaches at these settings (${span})${need}. ` +
@@ -267,10 +291,13 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
   }
   x[j] = coded;
   const r = predictor.interval(x);
+  const zci: [number, number] | null = r.ciLo !== null && r.ciHi !== null ? [r.ciLo, r.ciHi] : null;
+  const zpi: [number, number] | null = r.piLo !== null && r.piHi !== null ? [r.piLo, r.piHi] : null;
+  const onScale = onResponseScale(model, { fit: r.fit, se: r.se, ci: zci, pi: zpi });
   const outsideFactors = outsideRange(model.factors, x);
   messages.push(...outsideFactors.map((o) => o.message));
   if (outsideFactors.length > 0) messages.push('With a held setting outside the tested range, the answer is an extrapolation of the fitted model.');
-  messages.push(...modelNotes(model, alpha));
+  messages.push(...modelNotes(model, alpha), ...onScale.messages);
   const setting = toReal(f, coded) as number;
   const settings = held.map((h, i) =>
     i === j ? { ...h, real: setting, coded, source: 'free' as const } : h,
@@ -282,23 +309,24 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
     setting,
     coded,
     reachable,
-    fit: r.fit,
-    se: r.se,
+    fit: onScale.fit,
+    se: tr ? null : r.se,
     level,
-    ci: r.ciLo !== null && r.ciHi !== null ? [r.ciLo, r.ciHi] : null,
-    pi: r.piLo !== null && r.piHi !== null ? [r.piLo, r.piHi] : null,
+    ci: onScale.ci,
+    pi: onScale.pi,
     solutions,
     slope: s,
     quadratic: q,
-    stationary,
-    reach,
-    span: spanLoHi,
+    stationary: stationary && { ...stationary, fit: back(stationary.fit) },
+    reach: [back(reach[0]), back(reach[1])],
+    span: [back(spanLoHi[0]), back(spanLoHi[1])],
     needed,
     settings,
     outside: outsideFactors.length > 0,
     outsideFactors,
     messages,
     caution: CAUTION,
+    ...(tr ? { transformed: { target: zTarget, fit: r.fit, se: r.se, ci: zci, pi: zpi } } : {}),
   };
 }
 

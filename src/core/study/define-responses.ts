@@ -1,6 +1,7 @@
 /**
  * The responses of a study as a person declares them: each needs a name (names differ, case
- * ignored), may have a unit, and has a goal; a target goal needs a target value. The same rules
+ * ignored), may have a unit, and has a goal; a target goal needs a target value; it may have a
+ * lowest value it can take (0 for one that cannot be negative). The same rules
  * for the planning form and any other place that makes a study.
  */
 import { InputError } from '../errors.ts';
@@ -14,17 +15,21 @@ export interface ResponseSpec {
   readonly goal: Response['goal'];
   /** Needed when the goal is 'target': a number, or the text typed for it. Ignored otherwise. */
   readonly target?: number | string;
+  /** The lowest value the response can take: a number, the text typed for it, or null / empty for none. */
+  readonly lowerBound?: number | string | null;
 }
 
 const GOALS: readonly Response['goal'][] = ['maximize', 'minimize', 'target'];
 
 /**
  * Checks response declarations and returns them as a study keeps them: names and units trimmed,
- * an empty unit dropped, a target only with the target goal. Common practice: every quality
+ * an empty unit dropped, a target only with the target goal, a lower bound only when given
+ * (transforms of the analysis then work on y minus it; fit/response-transform.ts). Common practice: every quality
  * characteristic of a designed experiment is named, measured in one unit and has a goal
  * (larger, smaller or nominal is best).
- * Throws InputError for no responses, an empty or repeated name, an unknown goal, or a target
- * goal without a readable, finite target.
+ * Throws InputError for no responses, an empty or repeated name, an unknown goal, a target
+ * goal without a readable, finite target, a lower bound that is not a finite number, or a target
+ * below the lower bound.
  * Example: defineResponses([{ name: ' Gloss ', unit: 'GU', goal: 'maximize' }]) ->
  * [{ name: 'Gloss', unit: 'GU', goal: 'maximize' }].
  */
@@ -40,12 +45,24 @@ export function defineResponses(specs: readonly ResponseSpec[]): Response[] {
     seen.set(key, i);
     if (!GOALS.includes(r.goal)) throw new InputError(`${name}: the goal is maximize, minimize or target, got "${String(r.goal)}"`);
     const unit = r.unit?.trim() ?? '';
-    const out: Response = { name, goal: r.goal, ...(unit ? { unit } : {}) };
+    const lowerBound = boundOf(r.lowerBound, name);
+    const out: Response = { name, goal: r.goal, ...(unit ? { unit } : {}), ...(lowerBound !== null ? { lowerBound } : {}) };
     if (r.goal !== 'target') return out;
     const t = r.target;
     if (t === undefined || (typeof t === 'string' && t.trim() === '')) throw new InputError(`${name}: the goal is a target, so it needs a target value`);
     const target = typeof t === 'number' ? t : readNumber(t, `${name}: the target`);
     if (!Number.isFinite(target)) throw new InputError(`${name}: the target needs a finite number, got ${target}`);
+    if (lowerBound !== null && target < lowerBound) {
+      throw new InputError(`${name}: the target ${target} is below the lowest value it can take (${lowerBound}); raise the target or change the lowest value`);
+    }
     return { ...out, target };
   });
+}
+
+/** A declared lower bound: null for none (absent, null or empty text), else a finite number. */
+function boundOf(b: number | string | null | undefined, name: string): number | null {
+  if (b === undefined || b === null || (typeof b === 'string' && b.trim() === '')) return null;
+  const v = typeof b === 'number' ? b : readNumber(b, `${name}: the lowest value`);
+  if (!Number.isFinite(v)) throw new InputError(`${name}: the lowest value needs a finite number, got ${v}`);
+  return v;
 }

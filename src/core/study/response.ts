@@ -11,8 +11,8 @@ export interface Response {
    * The lowest value the response can take in the physical world, in its unit, or null when it
    * has none: 0 for a response that cannot be negative (a thickness, a count of defects, a
    * time). A finite number when given. A plan may leave it out (read as null); every stored
-   * study and every backup carries it, null or a number. It does not change the analysis yet;
-   * it is recorded so that readings at or near the floor can be treated as such later.
+   * study and every backup carries it, null or a number. The analysis applies its transforms
+   * to y minus it and warns when a prediction of the untransformed response crosses it.
    */
   readonly lowerBound?: number | null;
 }

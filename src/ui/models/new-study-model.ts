@@ -43,6 +43,9 @@ export interface ResponseDraft {
   readonly unit: string;
   readonly goal: Response['goal'];
   readonly target: string;
+  /** The lowest value it can take: none, 0 (cannot be negative), or the typed `lowerBound`. */
+  readonly floor: 'none' | 'zero' | 'other';
+  readonly lowerBound: string;
 }
 
 /** 'full', a catalog fraction such as '1/2', or a Plackett-Burman design such as 'pb-12'. */
@@ -81,7 +84,7 @@ function blankFactor(): FactorDraft {
 }
 
 function blankResponse(): ResponseDraft {
-  return { key: nextKey++, name: '', unit: '', goal: 'maximize', target: '' };
+  return { key: nextKey++, name: '', unit: '', goal: 'maximize', target: '', floor: 'none', lowerBound: '' };
 }
 
 /** A factor row as the core's factor declaration; throws InputError for a low or high that is not a number. */
@@ -113,7 +116,15 @@ export function factorMessage(f: FactorDraft, i: number): string | null {
 
 /** The responses as the study keeps them (the core's rules, defineResponses); throws InputError with a clear message. */
 export function responsesOf(drafts: readonly ResponseDraft[]): Response[] {
-  return defineResponses(drafts.map((r) => ({ name: r.name, unit: r.unit, goal: r.goal, target: r.target })));
+  return defineResponses(
+    drafts.map((r) => ({ name: r.name, unit: r.unit, goal: r.goal, target: r.target, lowerBound: r.floor === 'zero' ? 0 : r.floor === 'other' ? lowestTyped(r) : null })),
+  );
+}
+
+/** The typed lowest value; an empty box under "another lowest value" is a clear message, not "no bound". */
+function lowestTyped(r: ResponseDraft): string {
+  if (r.lowerBound.trim() === '') throw new InputError(`${r.name.trim() || 'A response'}: type the lowest value it can take, or choose "No lowest value"`);
+  return r.lowerBound;
 }
 
 /** A count typed in a box: a whole number, or InputError saying what is needed. */

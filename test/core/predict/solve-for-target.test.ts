@@ -9,6 +9,9 @@ import { predict } from '../../../src/core/predict/predict.ts';
 import { solveForTarget } from '../../../src/core/predict/solve-for-target.ts';
 import { fixtureData } from '../../helpers/fixtures.ts';
 import { handModel, numeric } from './designs.ts';
+import { referenceColumnsModel } from './reference.ts';
+import { parseTransform } from '../../../src/core/fit/response-transform.ts';
+import { shortNumber } from '../../../src/core/text/number-text.ts';
 
 const yieldData = fixtureData('montgomery-8e-ex6-6-center-points.csv', { factors: ['Time', 'Temperature'], response: 'Yield' });
 const yieldModel = analyze(yieldData, { terms: [1, 2] }).model;
@@ -206,5 +209,93 @@ describe('solveForTarget with a square: the model is quadratic in the factor sol
       }),
       { numRuns: 100 },
     );
+  });
+});
+
+describe('solveForTarget under a transform: solved on the fitted scale, reported in the response units', () => {
+  // Montgomery 8th ed., Example 6.1 (plasma etch, every rate positive), fitted on a transformed
+  // scale with A, C and AC. The references: ml-regression-multivariate-linear 2.0.4 fitted to
+  // the transformed rates by the test itself, and the Box-Cox formulas done by hand here.
+  const transforms = [
+    { token: 'log', lambda: 0 },
+    { token: 'sqrt', lambda: 0.5 },
+    { token: 'inverse', lambda: -1 },
+    { token: 'power=0.3', lambda: 0.3 },
+  ];
+  const g = (y: number, l: number) => (l === 0 ? Math.log(y) : (y ** l - 1) / l);
+  const gInv = (z: number, l: number) => (l === 0 ? Math.exp(z) : (1 + l * z) ** (1 / l));
+  const terms = [1, 4, 5]; // A (Gap), C (Power), AC
+  const columns = (x: readonly number[]) => [x[0], x[2], x[0] * x[2]];
+  for (const { token, lambda } of transforms) {
+    const model = analyze(etch, { terms, transform: parseTransform(token) }).model;
+    const ref = referenceColumnsModel({ ...etch, y: etch.y.map((v) => g(v, lambda)) }, columns);
+    // The reference line along Power at Gap 1.2 cm (coded +1), Flow at its center: z = a + s xC.
+    const a = ref.at([1, 0, 0]).fit;
+    const s = ref.at([1, 0, 1]).fit - a;
+
+    it(`${token}: the setting is the hand root x = (g(T) - a) / s, and predict there gives the target back`, () => {
+      const sol = solveForTarget(model, { factor: 'Power', target: 700, at: { Gap: 1.2 } });
+      expect(sol.reachable).toBe(true);
+      expect(sol.coded).toBeCloseTo((g(700, lambda) - a) / s, 9);
+      expect(sol.fit).toBeCloseTo(700, 8);
+      expect(sol.transformed!.target).toBeCloseTo(g(700, lambda), 12);
+      expect(sol.se).toBeNull();
+      const p = predict(model, { Gap: 1.2, Flow: 162.5, Power: sol.setting });
+      expect(p.fit).toBeCloseTo(700, 8);
+      expect(p.pi![0]).toBeCloseTo(sol.pi![0], 8);
+      expect(p.pi![1]).toBeCloseTo(sol.pi![1], 8);
+      // the interval, back-transformed by hand from the reference's interval on the fitted scale
+      const r = ref.at([1, 0, sol.coded]);
+      // relative agreement: the reference library's least squares agrees to about 1e-9 here
+      expect(Math.abs(sol.pi![0] / gInv(r.pi[0], lambda) - 1)).toBeLessThan(1e-8);
+      expect(Math.abs(sol.ci![1] / gInv(r.ci[1], lambda) - 1)).toBeLessThan(1e-8);
+      expect(sol.messages.join(' ')).toContain('To reach 700, set Power to');
+    });
+
+    it(`${token}: an unreachable target quotes the reach in the response units, and the nearest setting`, () => {
+      const sol = solveForTarget(model, { factor: 'Power', target: 2000, at: { Gap: 1.2 } });
+      expect(sol.reachable).toBe(false);
+      // the reach along Power, back-transformed by hand: g^-1(a - |s|) to g^-1(a + |s|)
+      const lo = gInv(a - Math.abs(s), lambda);
+      const hi = gInv(a + Math.abs(s), lambda);
+      expect(sol.span[0]).toBeCloseTo(lo, 6);
+      expect(sol.span[1]).toBeCloseTo(hi, 6);
+      const text = sol.messages.join(' ');
+      expect(text).toContain(`The target 2000 lies outside what the tested range of Power reaches at these settings (${shortNumber(lo)} to ${shortNumber(hi)})`);
+      expect(text).toContain(`the model would need Power = `);
+      expect(sol.fit).toBeCloseTo(hi, 6);
+    });
+  }
+
+  it('a square under log: two roots quoted with the target in the response units (invented coefficients)', () => {
+    // log yhat = 2 + xA - 4 xA^2, L = 0: the target e^1.5 (4.4817) is reached where xA - 4 xA^2 = -0.5,
+    // by hand xA = -0.25 and 0.5; the fit turns at xA = 1/8 where it is e^(2 + 1/16) = 7.866.
+    const base = handModel([numeric('A', 0, 10), numeric('B', 0, 10)], [1, 2, squareTerm(0)], [2, 1, 0, -4]);
+    const m = { ...base, transform: { token: 'log', lambda: 0, lowerBound: 0, suggestion: null } };
+    const sol = solveForTarget(m, { factor: 'A', target: Math.exp(1.5) });
+    expect(sol.solutions.map((r) => r.coded)).toEqual([-0.25, 0.5]);
+    expect(sol.fit).toBeCloseTo(Math.exp(1.5), 12);
+    expect(sol.stationary!.fit).toBeCloseTo(Math.exp(2 + 1 / 16), 12);
+    const text = sol.messages.join(' ');
+    expect(text).toContain('Two settings of A inside the tested range give 4.482: 3.75 (coded -0.25) and 7.5 (coded +0.5)');
+    expect(text).toContain('where it is 7.866');
+    expect(text).toContain('on the log scale');
+  });
+
+  it('a lower bound shifts the scale: sqrt of y - 2 (invented coefficients)', () => {
+    // sqrt scale z = 2 (sqrt(y - 2) - 1); zhat = 1 + 0.5 xA. Target 5: z = 2 (sqrt 3 - 1) = 1.4641, xA = 0.9282 by hand.
+    const base = handModel([numeric('A', 0, 10)], [1], [1, 0.5]);
+    const m = { ...base, transform: { token: 'sqrt', lambda: 0.5, lowerBound: 2, suggestion: null } };
+    const sol = solveForTarget(m, { factor: 'A', target: 5 });
+    expect(sol.coded).toBeCloseTo(2 * (Math.sqrt(3) - 1) * 2 - 2, 12);
+    expect(sol.fit).toBeCloseTo(5, 12);
+  });
+
+  it('a target the transform cannot give is refused with the bound in words; nothing is solved', () => {
+    const model = analyze(etch, { terms, transform: parseTransform('log') }).model;
+    expect(() => solveForTarget(model, { factor: 'Power', target: 0 })).toThrow(InputError);
+    expect(() => solveForTarget(model, { factor: 'Power', target: -5 })).toThrow('With the log transform the target for Etch rate needs to be above 0, got -5');
+    const sq = analyze(etch, { terms, transform: parseTransform('sqrt') }).model;
+    expect(solveForTarget(sq, { factor: 'Power', target: 0 }).reachable).toBe(false); // 0 is allowed under sqrt, just far out of reach
   });
 });

@@ -32,3 +32,23 @@ describe('defineResponses', () => {
     expect(() => defineResponses([{ name: 'Gloss', goal: 'biggest' as never }])).toThrow('the goal is maximize, minimize or target, got "biggest"');
   });
 });
+
+// Rules, not numbers (common practice): a response may have a lowest value it can take.
+describe('defineResponses: the lowest value a response can take', () => {
+  it('"cannot be negative" is a lower bound of 0; another bound is read from typed text; empty means none', () => {
+    const r = defineResponses([
+      { name: 'Roughness', goal: 'minimize', lowerBound: 0 },
+      { name: 'Temperature rise', goal: 'minimize', lowerBound: ' 20,5 ' },
+      { name: 'Gloss', goal: 'maximize', lowerBound: '' },
+      { name: 'Haze', goal: 'maximize', lowerBound: null },
+    ]);
+    expect(r.map((x) => x.lowerBound)).toEqual([0, 20.5, undefined, undefined]);
+  });
+  it('refuses a bound that is not a number, and a target below the bound', () => {
+    expect(() => defineResponses([{ name: 'Roughness', goal: 'minimize', lowerBound: 'zero' }])).toThrow('Roughness: the lowest value needs a number');
+    expect(() => defineResponses([{ name: 'Roughness', goal: 'target', target: '-1', lowerBound: 0 }])).toThrow(
+      'Roughness: the target -1 is below the lowest value it can take (0); raise the target or change the lowest value',
+    );
+    expect(defineResponses([{ name: 'Roughness', goal: 'target', target: '0', lowerBound: 0 }])[0]).toEqual({ name: 'Roughness', goal: 'target', target: 0, lowerBound: 0 });
+  });
+});

@@ -27,6 +27,7 @@ import { AnalysisModel, twoFactorTerms } from '../../models/analysis-model.ts';
 import { MODEL_CHOICES, openStudyAnalysis, TRANSFORM_CHOICES } from '../../models/study-analysis-model.ts';
 import { interactionLines } from './interaction-lines.ts';
 import { hrefTo } from '../../app/routes.ts';
+import { boundNote, boxCoxText } from '../../../core/text/bound-text.ts';
 import './style.css';
 
 export type AnalysisScreenProps = { readonly store: Store; readonly studyId: string };
@@ -176,8 +177,15 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
       />
       <ChoiceButtons label="Model" options={MODEL_CHOICES} value={shown.settings.value.model} onChoose={(c) => shared.chooseModel(shown.index, c)} />
       <ChoiceButtons label="Scale" options={TRANSFORM_CHOICES} value={shown.settings.value.transform} onChoose={(c) => shared.chooseTransform(shown.index, c)} />
+      {response.lowerBound !== undefined && response.lowerBound !== null && (
+        <p class="quiet" data-testid="bound-note">
+          {boundNote(response.name, response.lowerBound)}
+        </p>
+      )}
       {result && result.ok && result.analysis.boxCox && (
-        <p class="quiet">Box-Cox suggests: {result.analysis.boxCox.suggestion === 'none' ? 'as measured' : result.analysis.boxCox.suggestion}</p>
+        <p class="quiet" data-testid="box-cox">
+          {boxCoxText(result.analysis.boxCox.suggestion, response.name, response.lowerBound ?? null)}
+        </p>
       )}
       <p class="print-only">
         Response: {response.name} · Model: {MODEL_CHOICES.find((c) => c.value === shown.settings.value.model)?.label}

@@ -26,6 +26,11 @@ const GOAL_CHOICES = [
   { value: 'minimize' as const, label: 'Minimize' },
   { value: 'target' as const, label: 'Hit a target' },
 ];
+const FLOOR_CHOICES = [
+  { value: 'none' as const, label: 'No lowest value' },
+  { value: 'zero' as const, label: 'Cannot be negative' },
+  { value: 'other' as const, label: 'Another lowest value' },
+];
 const ORDER_CHOICES = [
   { value: 'random' as const, label: 'Randomized' },
   { value: 'standard' as const, label: 'Standard order' },
@@ -167,6 +172,10 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
             <TextField id={`ns-r${r.key}-unit`} label={`Response ${i + 1} unit`} value={r.unit} onInput={(v) => model.setResponse(i, { unit: v })} />
             <ChoiceButtons label={`Response ${i + 1} goal`} options={GOAL_CHOICES} value={r.goal} onChoose={(goal) => model.setResponse(i, { goal })} />
             {r.goal === 'target' && <TextField id={`ns-r${r.key}-target`} label={`Response ${i + 1} target`} numeric value={r.target} onInput={(v) => model.setResponse(i, { target: v })} />}
+            <ChoiceButtons label={`Response ${i + 1} lowest value it can take`} options={FLOOR_CHOICES} value={r.floor} onChoose={(floor) => model.setResponse(i, { floor })} />
+            {r.floor === 'other' && (
+              <TextField id={`ns-r${r.key}-floor`} label={`Response ${i + 1} lowest value`} numeric value={r.lowerBound} onInput={(v) => model.setResponse(i, { lowerBound: v })} />
+            )}
           </div>
         ))}
         <button type="button" class="btn block" onClick={() => model.addResponse()}>

@@ -7,6 +7,7 @@
 import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
 import { confirmationStatement } from '../../../core/text/confirmation-text.ts';
+import { intervalText } from '../../../core/text/interval-text.ts';
 import type { Store } from '../../../store/store.ts';
 import { CautionBox } from '../../components/caution-box/index.tsx';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
@@ -22,7 +23,7 @@ import './style.css';
 export type NextRunsScreenProps = { readonly store: Store; readonly studyId: string };
 
 function range(i: readonly [number, number] | null, unit: string | undefined): string {
-  return i ? `${num(i[0])} to ${withUnit(i[1], unit)}` : 'not available (no runs left over to estimate the noise)';
+  return intervalText(i, (x) => num(x), unit ? ` ${unit}` : '', 'not available (no runs left over to estimate the noise)');
 }
 
 export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {

@@ -6,6 +6,7 @@
 import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
 import type { Prediction } from '../../../core/predict/predict.ts';
+import { intervalText } from '../../../core/text/interval-text.ts';
 import type { Response } from '../../../core/study/response.ts';
 import type { Store } from '../../../store/store.ts';
 import { BarList } from '../../components/bar-list/index.tsx';
@@ -23,7 +24,9 @@ import './style.css';
 export type QuickCardScreenProps = { readonly store: Store; readonly studyId: string };
 
 function interval(i: readonly [number, number] | null, unit: string | undefined): string {
-  return i ? `${num(i[0])} – ${withUnit(i[1], unit)}` : 'not available';
+  // An open end (beyond a negative power's back-transform) reads in words, never as a dash or "Infinity".
+  if (i && Number.isFinite(i[0]) && Number.isFinite(i[1])) return `${num(i[0])} – ${withUnit(i[1], unit)}`;
+  return intervalText(i, (x) => num(x), unit ? ` ${unit}` : '', 'not available');
 }
 
 function PredictionPanel({ p, response }: { p: Prediction; response: Response }) {
