@@ -9,7 +9,9 @@
  *   studies    id -> StudyRecord (title, purpose, factors, responses, design with planned runs and seed)
  *   revisions  id -> RunRevision: the append-only history of every logged run (indexed by run and study)
  *   runs       id -> LoggedRun: the current state of each logged run, decided from its revisions
- *   drafts     runId -> Draft: what was typed in a run's form and not yet saved
+ *   drafts     runId -> Draft: what was typed in a run's form and not yet saved (versions 1 to 4)
+ *   formDrafts formId -> Draft: what was typed in one open run form and not yet saved, one per
+ *              form (version 5; indexed by run and study), so tabs on one run never share one
  *   meta       key -> value: device id, last exports, the answer to the persistent-storage request
  *   setAside   key -> SetAsideRow: records of an imported file that clash with stored ones (same id,
  *              other content), kept apart with the field that differs (version 3)
@@ -24,6 +26,8 @@ import type { SetAside } from '../io/backup/merge.ts';
 
 /** A run form's unsaved typing, kept on every change until the run is saved. */
 export interface Draft {
+  /** The open form's own id (kept in the tab's session, so a reload of that tab finds it again). */
+  readonly formId: string;
   /** The logged run's id, fixed when the form opened. */
   readonly runId: string;
   readonly studyId: string;
@@ -97,6 +101,17 @@ export const SCHEMA: readonly SchemaVersion[] = [
     version: 4,
     stores: { blocks: 'id, studyId' },
   },
+  {
+    // A draft per open form, not per run: a third tab on a run no longer takes over a second
+    // tab's typing. The primary key changes, so the drafts move to a table of their own; a
+    // draft kept before forms had ids takes its run's id as its form's id (one per run then).
+    version: 5,
+    stores: { drafts: null, formDrafts: 'formId, runId, studyId' },
+    upgrade: async (tx) => {
+      const old = await tx.table('drafts').toArray();
+      await tx.table('formDrafts').bulkAdd(old.map((d: Omit<Draft, 'formId'>) => ({ formId: d.runId, ...d })));
+    },
+  },
 ];
 
 /** The schema version this code opens. */
@@ -117,7 +132,7 @@ export class TrialbookDB extends Dexie {
   declare studies: Table<StudyRecord, string>;
   declare revisions: Table<RunRevision, string>;
   declare runs: Table<LoggedRun, string>;
-  declare drafts: Table<Draft, string>;
+  declare formDrafts: Table<Draft, string>;
   declare meta: Table<MetaRow, string>;
   declare setAside: Table<SetAsideRow, string>;
   declare blocks: Table<AddedBlock, string>;

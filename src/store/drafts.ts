@@ -1,7 +1,9 @@
 /**
  * Drafts: whatever a person has typed in a run's form and not saved, kept on every change so it
- * comes back after a reload, a crash or an update. Saving the run drops its draft in the same
- * transaction, so a draft is never both saved and waiting.
+ * comes back after a reload, a crash or an update. Each open form keeps its own draft (by its
+ * form id), so two or three tabs on one run never write over each other's typing. Saving a run
+ * drops, in the same transaction, every draft of that run that holds exactly what was saved, so
+ * a draft is never both saved and waiting; a draft of other typing stays.
  */
 import type { RunForm } from '../core/study/run-form.ts';
 import type { Draft } from './db.ts';
@@ -9,11 +11,12 @@ import { guarded } from './errors.ts';
 import type { Store } from './store.ts';
 
 /** Which form a draft belongs to: the ids its form fixed when it opened (a run form's state has them all). */
-export type DraftOwner = Pick<Draft, 'runId' | 'studyId' | 'plannedRun' | 'revisionId' | 'parents'>;
+export type DraftOwner = Pick<Draft, 'formId' | 'runId' | 'studyId' | 'plannedRun' | 'revisionId' | 'parents'>;
 
 /** Keeps the typing of a run's form as its draft (called on every change). */
 export async function saveDraft(store: Store, state: DraftOwner, form: RunForm): Promise<Draft> {
   const draft: Draft = {
+    formId: state.formId,
     runId: state.runId,
     studyId: state.studyId,
     plannedRun: state.plannedRun,
@@ -22,7 +25,7 @@ export async function saveDraft(store: Store, state: DraftOwner, form: RunForm):
     form: structuredCloneForm(form),
     updatedAt: store.now().toISOString(),
   };
-  const write = guarded(() => store.db.transaction('rw', store.db.drafts, () => store.db.drafts.put(draft)));
+  const write = guarded(() => store.db.transaction('rw', store.db.formDrafts, () => store.db.formDrafts.put(draft)));
   store.pending.add(write);
   try {
     await write;
@@ -44,18 +47,24 @@ function structuredCloneForm(form: RunForm): RunForm {
   };
 }
 
-/** The draft of a run's form, or null. */
-export async function getDraft(store: Store, runId: string): Promise<Draft | null> {
-  return (await guarded(() => store.db.drafts.get(runId))) ?? null;
+/** The draft of one open form (by its form id), or null. */
+export async function getDraft(store: Store, formId: string): Promise<Draft | null> {
+  return (await guarded(() => store.db.formDrafts.get(formId))) ?? null;
+}
+
+/** Every draft of one logged run (one per form that holds typing for it), oldest change first. */
+export async function listRunDrafts(store: Store, runId: string): Promise<Draft[]> {
+  const all = await guarded(() => store.db.formDrafts.where('runId').equals(runId).toArray());
+  return all.sort((a, b) => (a.updatedAt < b.updatedAt ? -1 : 1));
 }
 
 /** All drafts of a study (forms typed in and not saved), oldest change first. */
 export async function listDrafts(store: Store, studyId: string): Promise<Draft[]> {
-  const all = await guarded(() => store.db.drafts.where('studyId').equals(studyId).toArray());
+  const all = await guarded(() => store.db.formDrafts.where('studyId').equals(studyId).toArray());
   return all.sort((a, b) => (a.updatedAt < b.updatedAt ? -1 : 1));
 }
 
-/** Throws away a run form's draft (the person chose to discard the typing). */
-export async function discardDraft(store: Store, runId: string): Promise<void> {
-  await guarded(() => store.db.transaction('rw', store.db.drafts, () => store.db.drafts.delete(runId)));
+/** Throws away one form's draft (the person chose to discard that typing); other forms' drafts stay. */
+export async function discardDraft(store: Store, formId: string): Promise<void> {
+  await guarded(() => store.db.transaction('rw', store.db.formDrafts, () => store.db.formDrafts.delete(formId)));
 }

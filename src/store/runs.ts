@@ -3,8 +3,8 @@
  * save are fixed when the form opens, so a double tap or a retry saves once. Every change (an
  * edit, an exclusion, a restore) appends a revision; nothing is overwritten. A save that finds
  * the run changed since its form opened (another tab, another window) still keeps both
- * revisions and says so. A save drops the run's draft only when the draft holds what was saved
- * (another tab's typing stays). Each write is one transaction across all the tables it touches, and
+ * revisions and says so. Every open form has its own id and its own draft; a save drops the
+ * run's drafts that hold what was saved (another tab's other typing stays). Each write is one transaction across all the tables it touches, and
  * resolves only once the transaction is on disk.
  */
 import { InputError } from '../core/errors.ts';
@@ -24,7 +24,7 @@ import { canonicalJson } from '../core/records/canonical-json.ts';
 import { sha256, utf8Encode } from '../core/records/sha256.ts';
 import { planOf } from './added-blocks.ts';
 import { appendRevisions } from './append-revisions.ts';
-import { listDrafts } from './drafts.ts';
+import type { Draft } from './db.ts';
 import { guarded } from './errors.ts';
 import { newId, uuidFromBytes } from './ids.ts';
 import { askPersistenceOnce } from './status.ts';
@@ -32,6 +32,8 @@ import type { Store } from './store.ts';
 
 /** What a run's form works on: fixed ids, the revisions it starts from, and what to show. */
 export interface RunFormState {
+  /** The open form's own id: its draft's key (a tab keeps it for the session, so a reload finds its draft). */
+  readonly formId: string;
   readonly study: StudyRecord;
   readonly runId: string;
   readonly plannedRun: number;
@@ -42,6 +44,8 @@ export interface RunFormState {
   readonly current: LoggedRun | null;
   /** True when the form comes back from a draft (typing not yet saved). */
   readonly fromDraft: boolean;
+  /** Drafts of this run kept by other forms (other tabs, or tabs since closed), oldest change first. */
+  readonly otherDrafts: readonly Draft[];
 }
 
 export interface SaveInput {
@@ -74,40 +78,80 @@ function studyIn(store: Store, studyId: string): Promise<StudyRecord> {
 }
 
 /**
- * Opens the form for a planned run: its logged run (its draft first, when one is waiting), else a
- * waiting draft of a new run of it, else a new run. Deciding this in one place means reopening
- * a form never starts a second record beside a draft.
+ * Opens the form for a planned run: this form's own draft when it kept one, else the logged run
+ * of the planned run, else a new run under the record id of a waiting draft of another form
+ * (so two tabs never start two records of one planned run), else a new run. Other forms'
+ * drafts are listed, never taken over. Deciding this in one place means reopening a form never
+ * starts a second record beside a draft.
  */
-export async function openPlannedRun(store: Store, studyId: string, plannedRun: number): Promise<RunFormState> {
-  const [runs, waiting] = await Promise.all([listRuns(store, studyId), listDrafts(store, studyId)]);
+export async function openPlannedRun(store: Store, studyId: string, plannedRun: number, formId: string = newId()): Promise<RunFormState> {
+  const [own, runs, waiting] = await guarded(() =>
+    Promise.all([
+      store.db.formDrafts.get(formId),
+      store.db.runs.where('studyId').equals(studyId).toArray(),
+      store.db.formDrafts.where('studyId').equals(studyId).toArray(),
+    ]),
+  );
+  if (own && own.studyId === studyId && own.plannedRun === plannedRun) return openRun(store, own.runId, formId);
   const logged = runs.find((r) => r.plannedRun === plannedRun);
-  if (logged) return openRun(store, logged.id);
-  const draft = waiting.find((d) => d.plannedRun === plannedRun);
-  return draft ? openRun(store, draft.runId) : openNewRun(store, studyId, plannedRun);
+  if (logged) return openRun(store, logged.id, formId);
+  const draft = waiting.filter((d) => d.plannedRun === plannedRun).sort((a, b) => (a.updatedAt < b.updatedAt ? -1 : 1))[0];
+  return draft ? openRun(store, draft.runId, formId) : openNewRun(store, studyId, plannedRun, formId);
 }
 
 /** Opens the form of a new logged run of a planned run, with a fresh record id (see openPlannedRun). */
-export async function openNewRun(store: Store, studyId: string, plannedRun: number): Promise<RunFormState> {
+export async function openNewRun(store: Store, studyId: string, plannedRun: number, formId: string = newId()): Promise<RunFormState> {
   const study = await guarded(() => studyIn(store, studyId));
   if (!plannedRunOf(study, plannedRun)) throw new InputError(`Run ${plannedRun} is not in the plan of "${study.title}"`);
-  return { study, runId: newId(), plannedRun, revisionId: newId(), parents: [], form: blankForm(study, plannedRun), current: null, fromDraft: false };
+  return { formId, study, runId: newId(), plannedRun, revisionId: newId(), parents: [], form: blankForm(study, plannedRun), current: null, fromDraft: false, otherDrafts: [] };
 }
 
-/** Opens the form of a logged run (a new or saved one) from its draft when there is one, else from its current state. */
-export async function openRun(store: Store, runId: string): Promise<RunFormState> {
+const byChange = (a: Draft, b: Draft) => (a.updatedAt < b.updatedAt ? -1 : 1);
+
+/**
+ * Opens the form of a logged run (a new or saved one) for one form: from that form's own draft
+ * when it kept one, else from the run's current state (a blank form for a run only other forms
+ * have typed in). Other forms' drafts of the run come in otherDrafts, for the person to pick.
+ */
+export async function openRun(store: Store, runId: string, formId: string = newId()): Promise<RunFormState> {
   return guarded(() =>
-    store.db.transaction('r', [store.db.runs, store.db.drafts, store.db.studies, store.db.blocks], async () => {
-      const [current, draft] = await Promise.all([store.db.runs.get(runId), store.db.drafts.get(runId)]);
-      const studyId = draft?.studyId ?? current?.studyId;
+    store.db.transaction('r', [store.db.runs, store.db.formDrafts, store.db.studies, store.db.blocks], async () => {
+      const [current, drafts] = await Promise.all([store.db.runs.get(runId), store.db.formDrafts.where('runId').equals(runId).toArray()]);
+      const own = drafts.find((d) => d.formId === formId);
+      const otherDrafts = drafts.filter((d) => d.formId !== formId).sort(byChange);
+      const studyId = own?.studyId ?? current?.studyId ?? otherDrafts[0]?.studyId;
       if (!studyId) throw new InputError(`There is no logged run with id "${runId}" on this device`);
       const study = await studyIn(store, studyId);
-      if (draft) {
-        return { study, runId, plannedRun: draft.plannedRun, revisionId: draft.revisionId, parents: draft.parents, form: draft.form, current: current ?? null, fromDraft: true };
+      if (own) {
+        return { formId, study, runId, plannedRun: own.plannedRun, revisionId: own.revisionId, parents: own.parents, form: own.form, current: current ?? null, fromDraft: true, otherDrafts };
       }
-      const run = current!;
-      return { study, runId, plannedRun: run.plannedRun, revisionId: newId(), parents: run.heads, form: formFromValues(run), current: run, fromDraft: false };
+      if (!current) {
+        const plannedRun = otherDrafts[0].plannedRun;
+        return { formId, study, runId, plannedRun, revisionId: newId(), parents: [], form: blankForm(study, plannedRun), current: null, fromDraft: false, otherDrafts };
+      }
+      return { formId, study, runId, plannedRun: current.plannedRun, revisionId: newId(), parents: current.heads, form: formFromValues(current), current, fromDraft: false, otherDrafts };
     }),
   );
+}
+
+/**
+ * Takes another form's draft into this form: its typing and the revisions it started from, under
+ * this form's own id and a fresh revision id. The other draft stays as it was (its tab may still
+ * be open); it goes when a save stores exactly its typing, or when the person throws it away.
+ */
+export function takeOtherDraft(state: RunFormState, otherFormId: string): RunFormState {
+  const picked = state.otherDrafts.find((d) => d.formId === otherFormId);
+  if (!picked) throw new InputError('That typing is no longer waiting: it was saved or thrown away in its own tab. Reopen the run to see what is waiting now.');
+  return {
+    ...state,
+    runId: picked.runId,
+    plannedRun: picked.plannedRun,
+    revisionId: newId(),
+    parents: picked.parents,
+    form: picked.form,
+    fromDraft: true,
+    otherDrafts: state.otherDrafts.filter((d) => d.formId !== otherFormId),
+  };
 }
 
 const sameSet = (a: readonly string[], b: readonly string[]) => a.length === b.length && a.every((x) => b.includes(x));
@@ -134,6 +178,13 @@ function derivedRevisionId(revisionId: string, values: RunValues): string {
   return uuidFromBytes(sha256(utf8Encode(`${revisionId}\n${valuesKey(values)}`)));
 }
 
+/** Deletes, inside the caller's transaction, every draft of a run whose typing reads as exactly these values. */
+async function dropSavedDrafts(store: Store, study: StudyRecord, runId: string, values: RunValues): Promise<void> {
+  const drafts = await store.db.formDrafts.where('runId').equals(runId).toArray();
+  const saved = drafts.filter((d) => sameTyping(study, d.form, values)).map((d) => d.formId);
+  if (saved.length > 0) await store.db.formDrafts.bulkDelete(saved);
+}
+
 /** Appends a revision inside the caller's transaction; returns what saveRun returns. */
 async function appendRevision(store: Store, input: SaveInput, restoredFrom: string | null): Promise<SaveResult> {
   const { db } = store;
@@ -146,11 +197,9 @@ async function appendRevision(store: Store, input: SaveInput, restoredFrom: stri
     if (!existing) break;
     if (existing.runId !== input.runId) throw new InputError(`Revision id ${revisionId} is already used by another run`);
     if (valuesKey(existing) === valuesKey(values)) {
-      // A second tap or a retry: nothing new. A draft still waiting on this revision id whose
-      // typing is exactly what is saved goes (else the form would reopen from it again and again);
-      // a draft with other typing stays.
-      const draft = await db.drafts.get(input.runId);
-      if (draft && draft.revisionId === input.revisionId && sameTyping(study, draft.form, values)) await db.drafts.delete(input.runId);
+      // A second tap or a retry: nothing new. Drafts of the run whose typing is exactly what is
+      // saved go (else a form would reopen from one again and again); other typing stays.
+      await dropSavedDrafts(store, study, input.runId, values);
       const run = await db.runs.get(input.runId);
       return { run: run!, revision: existing, duplicate: true, changedSince: null };
     }
@@ -174,17 +223,16 @@ async function appendRevision(store: Store, input: SaveInput, restoredFrom: stri
   });
   const revision = appended.revisions[0];
   const run = appended.runs[0];
-  // The run's draft goes only when it holds what was just saved: a draft of other typing
-  // (another tab's form on this run, typed after this one) stays, so no typing is lost.
-  const draft = await db.drafts.get(input.runId);
-  if (draft && sameTyping(study, draft.form, values)) await db.drafts.delete(input.runId);
+  // The run's drafts go only when they hold what was just saved: a draft of other typing
+  // (another tab's form on this run) stays, so no typing is lost.
+  await dropSavedDrafts(store, study, input.runId, values);
   return { run, revision, duplicate: false, changedSince };
 }
 
 async function writeRevision(store: Store, input: SaveInput, restoredFrom: string | null = null): Promise<SaveResult> {
   const { db } = store;
   const result = await guarded(() =>
-    db.transaction('rw', [db.studies, db.revisions, db.runs, db.drafts, db.blocks], () => appendRevision(store, input, restoredFrom)),
+    db.transaction('rw', [db.studies, db.revisions, db.runs, db.formDrafts, db.blocks], () => appendRevision(store, input, restoredFrom)),
   );
   if (!result.duplicate) void askPersistenceOnce(store);
   return result;

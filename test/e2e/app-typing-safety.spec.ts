@@ -58,6 +58,61 @@ test('two tabs on one run: a save in the first keeps the second tab\'s typing, a
   await expect(other.getByText('4 revisions kept')).toBeVisible();
 });
 
+test('three tabs on one run: each keeps its own typing across reloads, none takes over another\'s, and a form says which typing waits elsewhere', async ({ page, context }) => {
+  const tabs = [page, await context.newPage(), await context.newPage()];
+  const typed = ['75.1', '76.2', '77.3'];
+  for (const tab of tabs) {
+    await tab.goto(runForm(5));
+    await expect(gloss(tab)).toBeVisible();
+  }
+  // Each tab types; the third tab types last (it took over the second tab's draft before).
+  for (const [i, tab] of tabs.entries()) {
+    await gloss(tab).fill(typed[i]);
+    await expect(tab.getByRole('status')).toHaveText(kept);
+  }
+  await tabs[0].getByRole('button', { name: 'Save run 5' }).click();
+  await expect(tabs[0].getByRole('status')).toHaveText('Saved ✓ run 5');
+
+  // A reload of tab 2 finds tab 2's typing (not tab 3's), and says tab 3's typing waits.
+  await tabs[1].reload();
+  await expect(gloss(tabs[1])).toHaveValue('76.2');
+  await expect(tabs[1].getByText('Your earlier typing was kept and is back. It is not saved yet.')).toBeVisible();
+  const waiting2 = tabs[1].getByRole('group', { name: 'Typing from another tab' });
+  await expect(waiting2).toContainText('Gloss: 77.3');
+  await expect(waiting2).not.toContainText('76.2');
+  // Taking other typing would replace this form's own: it waits for a save or a discard.
+  await expect(waiting2.getByRole('button', { name: 'Use this typing here' })).toBeDisabled();
+  await tabs[1].getByRole('button', { name: 'Save run 5' }).click();
+  await expect(tabs[1].getByRole('status')).toHaveText('Saved ✓ run 5');
+
+  // Tab 3's typing is still its own after a reload.
+  await tabs[2].reload();
+  await expect(gloss(tabs[2])).toHaveValue('77.3');
+  await expect(tabs[2].getByRole('group', { name: /Typing from/ })).toHaveCount(0);
+
+  // A fourth tab opens the saved run, is told of tab 3's typing, and the person picks it.
+  const fourth = await context.newPage();
+  await fourth.goto(runForm(5));
+  const waiting4 = fourth.getByRole('group', { name: 'Typing from another tab' });
+  await expect(waiting4).toContainText('Gloss: 77.3');
+  await expect(gloss(fourth)).not.toHaveValue('77.3');
+  await waiting4.getByRole('button', { name: 'Use this typing here' }).click();
+  await expect(gloss(fourth)).toHaveValue('77.3');
+  await expect(fourth.getByRole('status')).toHaveText(kept);
+  await expect(fourth.getByRole('group', { name: /Typing from/ })).toHaveCount(0);
+  // Tab 3 still holds its typing: nothing was taken away from it.
+  await tabs[2].reload();
+  await expect(gloss(tabs[2])).toHaveValue('77.3');
+  // Pictures to look at, when asked for (TRIALBOOK_SHOTS names a folder outside the repository).
+  const shots = process.env.TRIALBOOK_SHOTS;
+  for (const [w, h] of shots ? ([[390, 844], [360, 740]] as const) : []) {
+    await tabs[1].setViewportSize({ width: w, height: h });
+    await tabs[1].goto(runForm(5));
+    await tabs[1].getByRole('group', { name: /Typing from/ }).scrollIntoViewIfNeeded();
+    await tabs[1].screenshot({ path: `${shots}/other-typing-${w}.png` });
+  }
+});
+
 test('the browser clearing the site\'s data under an open form: said plainly, typing kept on screen and downloadable, no demo seeded again', async ({ page, context, baseURL }) => {
   await page.goto(runForm(3));
   await gloss(page).fill('75.1');

@@ -36,7 +36,7 @@ describe('storage failures', () => {
     expect(err.problem).toBe('quota');
     expect(await store.db.revisions.count()).toBe(0); // the revision written first was rolled back
     expect(await listRuns(store, study.id)).toEqual([]);
-    expect((await getDraft(store, state.runId))?.form).toEqual(form);
+    expect((await getDraft(store, state.formId))?.form).toEqual(form);
     // Once there is room again, the same form saves once.
     await saveRun(store, { ...state, studyId: study.id, values: parseRunForm(study, form) });
     expect(await listRuns(store, study.id)).toHaveLength(1);

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/core/errors.ts';
 import { parseRunForm } from '../../src/core/study/run-form.ts';
 import { createStudy, getStudy, listStudies } from '../../src/store/studies.ts';
-import { excludeRun, getRun, listRuns, openNewRun, openPlannedRun, openRun, readmitRun, restoreRevision, runHistory, saveRun } from '../../src/store/runs.ts';
+import { excludeRun, getRun, listRuns, openNewRun, openPlannedRun, openRun, readmitRun, restoreRevision, runHistory, saveRun, takeOtherDraft } from '../../src/store/runs.ts';
 import { discardDraft, getDraft, listDrafts, saveDraft } from '../../src/store/drafts.ts';
 import { closeStore, openStore } from '../../src/store/store.ts';
 import { SCHEMA_VERSION } from '../../src/store/db.ts';
@@ -133,13 +133,13 @@ describe('logged runs', () => {
     expect(s3.run.heads).toEqual([s3.revision.id]);
   });
 
-  it('two tabs that reopened one draft share its revision id: both saves are kept, and a retry writes nothing new', async () => {
+  it('two tabs that reopened one draft (a duplicated tab copies its session, so its form id) share its revision id: both saves are kept, and a retry writes nothing new', async () => {
     const store = await freshStore();
     const study = await createStudy(store, coatingPlan());
     const opened = await openNewRun(store, study.id, 1);
     await saveDraft(store, { ...opened, studyId: study.id }, { ...opened.form, readings: ['70', '90'] });
-    const tab1 = await openRun(store, opened.runId);
-    const tab2 = await openRun(store, opened.runId);
+    const tab1 = await openRun(store, opened.runId, opened.formId);
+    const tab2 = await openRun(store, opened.runId, opened.formId);
     expect(tab2.revisionId).toBe(tab1.revisionId); // both come from the draft's fixed ids
     const s1 = await saveRun(store, { ...tab1, studyId: study.id, values: parseRunForm(study, { ...tab1.form, readings: ['70', '90'] }) });
     // Tab 2 goes on typing (its draft comes back under the same ids) and saves other values.
@@ -151,7 +151,7 @@ describe('logged runs', () => {
     expect(s2.changedSince).toBe(s1.revision.id);
     expect((await runHistory(store, opened.runId)).map((r) => r.readings[0][0]).sort()).toEqual([55, 70]);
     expect([...(await getRun(store, opened.runId)).heads].sort()).toEqual([s1.revision.id, s2.revision.id].sort());
-    expect(await getDraft(store, opened.runId)).toBeNull();
+    expect(await getDraft(store, opened.formId)).toBeNull();
     // The same save again (a second tap of tab 2) finds its revision.
     const again = await saveRun(store, input2);
     expect(again.duplicate).toBe(true);
@@ -168,11 +168,11 @@ describe('logged runs', () => {
     // Other typing on that id (another tab) is kept when the first save is tapped again...
     await saveDraft(store, { ...opened, studyId: study.id }, { ...opened.form, readings: ['55', '90'] });
     expect((await saveRun(store, input)).duplicate).toBe(true);
-    expect((await getDraft(store, opened.runId))?.form.readings).toEqual(['55', '90']);
+    expect((await getDraft(store, opened.formId))?.form.readings).toEqual(['55', '90']);
     // ...typing equal to what is saved is not waiting any more, and goes.
     await saveDraft(store, { ...opened, studyId: study.id }, { ...opened.form, readings: ['70', '90'] });
     expect((await saveRun(store, input)).duplicate).toBe(true);
-    expect(await getDraft(store, opened.runId)).toBeNull();
+    expect(await getDraft(store, opened.formId)).toBeNull();
   });
 
   it('refuses a time that the backup file could not carry, and writes nothing', async () => {
@@ -225,37 +225,56 @@ describe('drafts', () => {
     closeStore(store);
     const again = await openStore({ name: store.db.name, storage: null });
     expect((await listDrafts(again, study.id)).map((d) => d.runId)).toEqual([state.runId]);
-    const reopened = await openRun(again, state.runId);
+    const reopened = await openRun(again, state.runId, state.formId);
     expect(reopened.fromDraft).toBe(true);
     expect(reopened.form.readings).toEqual(['69', '']);
     expect(reopened.form.notes).toBe('half typed');
     // The draft keeps the ids fixed at opening, so a save after the reload is the same record.
     expect(reopened.revisionId).toBe(state.revisionId);
     await saveRun(again, { ...reopened, studyId: study.id, values: parseRunForm(study, reopened.form) });
-    expect(await getDraft(again, state.runId)).toBeNull();
+    expect(await getDraft(again, state.formId)).toBeNull();
   });
 
-  it('a save keeps the draft of another tab\'s typing on the same run, and drops a draft of exactly what it saved', async () => {
+  it('three tabs on one run each keep their own draft: a save drops only the draft of what it saved, and a reload finds its own tab\'s typing', async () => {
     const store = await freshStore();
     const study = await createStudy(store, coatingPlan());
     const first = await openNewRun(store, study.id, 4);
     const saved = await saveRun(store, { ...first, studyId: study.id, values: parseRunForm(study, { ...first.form, readings: ['70', '90'] }) });
-    // Two tabs open the logged run; tab 1 types 71, then tab 2 types 55 (its draft is the last one kept).
-    const tab1 = await openRun(store, first.runId);
-    const tab2 = await openRun(store, first.runId);
-    await saveDraft(store, { ...tab1, studyId: study.id }, { ...tab1.form, readings: ['71', '90'] });
-    await saveDraft(store, { ...tab2, studyId: study.id }, { ...tab2.form, readings: ['55', '90'] });
-    const s1 = await saveRun(store, { ...tab1, studyId: study.id, values: parseRunForm(study, { ...tab1.form, readings: ['71', '90'] }) });
+    // Three tabs open the logged run (each with its own form id); each types, tab 3 last.
+    const tabs = [await openRun(store, first.runId), await openRun(store, first.runId), await openRun(store, first.runId)];
+    expect(new Set(tabs.map((t) => t.formId)).size).toBe(3);
+    const typing = ['71', '55', '66'];
+    for (const [i, tab] of tabs.entries()) await saveDraft(store, { ...tab, studyId: study.id }, { ...tab.form, readings: [typing[i], '90'] });
+    expect((await listDrafts(store, study.id)).map((d) => d.form.readings[0]).sort()).toEqual(['55', '66', '71']);
+    // Tab 1 saves: its draft goes; tabs 2 and 3 keep theirs (tab 3's later typing took over nothing).
+    const s1 = await saveRun(store, { ...tabs[0], studyId: study.id, values: parseRunForm(study, { ...tabs[0].form, readings: ['71', '90'] }) });
     expect(s1.changedSince).toBeNull();
-    // Tab 2's typing is still there after a reload of tab 2.
-    const reloaded = await openRun(store, first.runId);
+    expect(await getDraft(store, tabs[0].formId)).toBeNull();
+    // A reload of tab 2 finds tab 2's typing, and lists tab 3's as other typing (never the reverse).
+    const reloaded = await openRun(store, first.runId, tabs[1].formId);
     expect(reloaded.fromDraft).toBe(true);
     expect(reloaded.form.readings).toEqual(['55', '90']);
     expect(reloaded.parents).toEqual([saved.revision.id]); // it started before tab 1's save
+    expect(reloaded.otherDrafts.map((d) => d.form.readings[0])).toEqual(['66']);
     const s2 = await saveRun(store, { ...reloaded, studyId: study.id, values: parseRunForm(study, reloaded.form) });
     expect(s2.changedSince).toBe(s1.revision.id);
-    expect(await getDraft(store, first.runId)).toBeNull();
+    expect(await getDraft(store, tabs[1].formId)).toBeNull();
+    expect((await getDraft(store, tabs[2].formId))?.form.readings).toEqual(['66', '90']);
     expect([...(await getRun(store, first.runId)).heads].sort()).toEqual([s1.revision.id, s2.revision.id].sort());
+    // A new tab lists tab 3's typing and can take it in; the save drops both copies of it.
+    const fourth = await openRun(store, first.runId);
+    expect(fourth.fromDraft).toBe(false);
+    expect(fourth.otherDrafts.map((d) => d.formId)).toEqual([tabs[2].formId]);
+    const taken = takeOtherDraft(fourth, tabs[2].formId);
+    expect(taken.formId).toBe(fourth.formId);
+    expect(taken.form.readings).toEqual(['66', '90']);
+    expect(taken.parents).toEqual([saved.revision.id]);
+    expect(taken.revisionId).not.toBe(tabs[2].revisionId);
+    await saveDraft(store, { ...taken, studyId: study.id }, taken.form);
+    expect((await getDraft(store, tabs[2].formId))?.form.readings).toEqual(['66', '90']); // the other copy stays until a save
+    await saveRun(store, { ...taken, studyId: study.id, values: parseRunForm(study, taken.form) });
+    expect(await listDrafts(store, study.id)).toEqual([]);
+    expect(() => takeOtherDraft(fourth, 'no-such-form')).toThrow(/no longer waiting/);
   });
 
   it('a new run saved with a blank time drops its draft (the time is filled at saving)', async () => {
@@ -265,7 +284,7 @@ describe('drafts', () => {
     const form = { ...state.form, loggedAt: '', readings: ['70', '90'] };
     await saveDraft(store, { ...state, studyId: study.id }, form);
     await saveRun(store, { ...state, studyId: study.id, values: parseRunForm(study, { ...form, loggedAt: '2024-05-02T12:00:00.000Z' }) });
-    expect(await getDraft(store, state.runId)).toBeNull();
+    expect(await getDraft(store, state.formId)).toBeNull();
   });
 
   it('a failed save keeps the draft', async () => {
@@ -275,9 +294,9 @@ describe('drafts', () => {
     const form = { ...state.form, readings: ['70', '90'] };
     await saveDraft(store, { ...state, studyId: study.id }, form);
     await expect(saveRun(store, { ...state, studyId: study.id, values: { ...parseRunForm(study, form), actual: [1, 2] } })).rejects.toThrow(InputError);
-    expect((await getDraft(store, state.runId))?.form).toEqual(form);
-    await discardDraft(store, state.runId);
-    expect(await getDraft(store, state.runId)).toBeNull();
+    expect((await getDraft(store, state.formId))?.form).toEqual(form);
+    await discardDraft(store, state.formId);
+    expect(await getDraft(store, state.formId)).toBeNull();
   });
 });
 
@@ -288,10 +307,18 @@ describe('openPlannedRun', () => {
     const first = await openPlannedRun(store, study.id, 2);
     expect(first.current).toBeNull();
     await saveDraft(store, { ...first, studyId: study.id }, { ...first.form, notes: 'typed, not saved' });
-    const again = await openPlannedRun(store, study.id, 2);
+    // Another form (another tab) opens the same record, blank, and is told of the waiting typing.
+    const other = await openPlannedRun(store, study.id, 2);
+    expect(other.runId).toBe(first.runId);
+    expect(other.fromDraft).toBe(false);
+    expect(other.form.notes).toBe('');
+    expect(other.otherDrafts.map((d) => d.formId)).toEqual([first.formId]);
+    // The same form (a reload of that tab) gets its own typing back.
+    const again = await openPlannedRun(store, study.id, 2, first.formId);
     expect(again.runId).toBe(first.runId);
     expect(again.fromDraft).toBe(true);
     expect(again.form.notes).toBe('typed, not saved');
+    expect(again.otherDrafts).toEqual([]);
     const values = parseRunForm(again.study, { ...again.form, readings: again.form.readings.map(() => '70') });
     await saveRun(store, { ...again, studyId: study.id, values });
     const logged = await openPlannedRun(store, study.id, 2);

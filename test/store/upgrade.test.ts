@@ -15,8 +15,8 @@ import { readBackup } from '../../src/io/backup/backup.ts';
 import { SCHEMA_VERSION, declareSchema } from '../../src/store/db.ts';
 import { exportBackup } from '../../src/store/files.ts';
 import { StorageError } from '../../src/store/errors.ts';
-import { saveDraft } from '../../src/store/drafts.ts';
-import { listRuns, openNewRun } from '../../src/store/runs.ts';
+import { listDrafts, saveDraft } from '../../src/store/drafts.ts';
+import { listRuns, openNewRun, openPlannedRun, openRun } from '../../src/store/runs.ts';
 import { createStudy, listStudies } from '../../src/store/studies.ts';
 import { CLOSED_FOR_UPGRADE, OPEN_BLOCKED, STORAGE_CLEARED, closeStore, openStore } from '../../src/store/store.ts';
 import { coatingPlan, freshStore } from './helpers.ts';
@@ -32,13 +32,20 @@ interface StoreFixture {
 
 type Row = { [k: string]: unknown };
 
+/** The table a record of an older version lives in after the upgrades: version 5 moves drafts to formDrafts. */
+function upgradedTable(fromVersion: number, table: string): string {
+  return fromVersion < 5 && table === 'drafts' ? 'formDrafts' : table;
+}
+
 /**
  * How a record of an older version looks after the upgrades, written out here rather than taken
  * from the upgrade code (db.ts), so that a wrong upgrade fails. Version 2: a study's planned runs
  * gain originBlock = block and their field yates becomes standardOrder, its responses
- * lowerBound = null; every other table is unchanged.
+ * lowerBound = null. Version 5: a draft gains formId = its run's id (one draft per run before).
+ * Every other table is unchanged.
  */
 function upgraded(fromVersion: number, table: string, record: Row): Row {
+  if (fromVersion < 5 && table === 'drafts') return { ...record, formId: record.runId };
   if (fromVersion >= 2 || table !== 'studies') return record;
   const design = record.design as Row & { runs: Row[] };
   return {
@@ -79,7 +86,7 @@ describe('schema upgrades', () => {
       expect(store.db.verno).toBe(SCHEMA_VERSION);
       let total = 0;
       for (const [t, rows] of Object.entries(fx.tables)) {
-        const table = store.db.table(t);
+        const table = store.db.table(upgradedTable(fx.schemaVersion, t));
         for (const row of rows) {
           const key = (row as Record<string, unknown>)[table.schema.primKey.keyPath as string] as string;
           expect(await table.get(key), `${t} ${key}`).toEqual(upgraded(fx.schemaVersion, t, row));
@@ -100,6 +107,42 @@ describe('schema upgrades', () => {
       closeStore(store);
     });
   }
+
+  it('a draft typed under schema version 4 survives the upgrade to per-form drafts: its tab gets it back, other tabs see it waiting', async () => {
+    const fx: StoreFixture = JSON.parse(readFileSync(fixtureDir + 'store-v4.json', 'utf8'));
+    expect(fx.schemaVersion).toBe(4);
+    // Two drafts as version 4 kept them (key runId): an edit of a logged run, and the typing of
+    // the unlogged path run (a record that exists only as its draft).
+    const logged = fx.tables.runs[0] as Row & { id: string; studyId: string; plannedRun: number; heads: string[] };
+    const pathRun = (fx.tables.blocks[0] as { runs: { run: number }[] }).runs[1].run;
+    const form = (notes: string, readings: string[]) => ({ actual: ['180', '3', '40'], readings, loggedAt: '', operator: 'Shift B (invented)', notes, excluded: false, reason: '' });
+    const drafts: Row[] = [
+      { runId: logged.id, studyId: logged.studyId, plannedRun: logged.plannedRun, revisionId: 'rev-typed-v4', parents: logged.heads, form: form('typed under v4', ['71.5', '83']), updatedAt: '2024-05-02T16:10:00.000Z' },
+      { runId: 'run-path-typed-v4', studyId: logged.studyId, plannedRun: pathRun, revisionId: 'rev-path-v4', parents: [], form: form('path run typed', ['75', '']), updatedAt: '2024-05-02T16:20:00.000Z' },
+    ];
+    const name = `fixture-v4-draft-${Math.random()}`;
+    await writeFixtureDb(name, { ...fx, tables: { ...fx.tables, drafts } });
+    const store = await openStore({ name, storage: null });
+    expect(store.db.verno).toBe(SCHEMA_VERSION);
+    expect(store.db.tables.map((t) => t.name)).not.toContain('drafts');
+    expect(await store.db.formDrafts.count()).toBe(2);
+    // The tab that typed it (whose form id is now its run's id, as the upgrade gives it) gets it back whole.
+    const own = await openRun(store, logged.id, logged.id);
+    expect(own.fromDraft).toBe(true);
+    expect(own.form).toEqual(drafts[0].form);
+    expect(own.revisionId).toBe('rev-typed-v4');
+    expect(own.parents).toEqual(logged.heads);
+    // Any other tab opens the saved run and is told the typing waits.
+    const other = await openRun(store, logged.id);
+    expect(other.fromDraft).toBe(false);
+    expect(other.otherDrafts.map((d) => d.form.notes)).toEqual(['typed under v4']);
+    // The path run's typing: a new form of that planned run finds its record id and the waiting typing.
+    const path = await openPlannedRun(store, logged.studyId, pathRun);
+    expect(path.runId).toBe('run-path-typed-v4');
+    expect(path.otherDrafts.map((d) => d.form.readings)).toEqual([['75', '']]);
+    expect((await listDrafts(store, logged.studyId)).map((d) => d.formId)).toEqual([logged.id, 'run-path-typed-v4']);
+    closeStore(store);
+  });
 
   it('an upgrade that throws leaves the old database intact, at its old version', async () => {
     const store = await freshStore();
@@ -137,7 +180,7 @@ describe('schema upgrades', () => {
     await draftWrite;
     await next.open();
     expect(messages).toEqual([CLOSED_FOR_UPGRADE]);
-    expect((await next.table('drafts').get(state.runId)).form.notes).toBe('typed just before the update');
+    expect((await next.table('formDrafts').get(state.formId)).form.notes).toBe('typed just before the update');
     await expect(listStudies(store)).rejects.toThrow(StorageError);
     next.close();
   });

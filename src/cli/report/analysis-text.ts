@@ -5,6 +5,7 @@ import { effectWords } from '../../core/text/effect-words.ts';
 import { pValue } from '../../core/text/p-value.ts';
 import { curvatureStatement, lenthStatement, verdictText } from '../../core/text/verdict-text.ts';
 import { zeroIfRoundoff } from '../../core/text/roundoff-zero.ts';
+import { lenthTableDifferences, lenthTableText, responseScale } from '../../core/text/lenth-table-effects.ts';
 import { num, table } from './numbers.ts';
 
 function anovaText(t: AnovaTable): string {
@@ -29,9 +30,8 @@ export interface AnalysisTextOptions {
  */
 export function effectsTable(a: Analysis, unit?: string): string[] {
   const u = unit ? ` ${unit}` : '';
-  // Figures that are zero up to round-off print as 0 (core/text/roundoff-zero.ts), on the scale of the responses.
-  let scale = 0;
-  for (const r of a.runs) scale = Math.max(scale, Math.abs(r.y));
+  // Figures that are zero up to round-off print as 0 (core/text/lenth-table-effects.ts), on the scale of the responses.
+  const scale = responseScale(a);
   const z = (x: number) => zeroIfRoundoff(x, scale);
   const marks = new Map((a.lenth?.effects ?? []).map((e) => [e.letters, e.mark ?? null]));
   const byLenth = a.df.residual === 0 && a.lenth !== null;
@@ -52,8 +52,7 @@ export function effectsTable(a: Analysis, unit?: string): string[] {
 
 /** The coefficients in coded units as the fitted equation, one term a line, in model order. */
 export function fittedEquation(a: Analysis): string[] {
-  let scale = 0;
-  for (const r of a.runs) scale = Math.max(scale, Math.abs(r.y));
+  const scale = responseScale(a);
   const out = [`Fitted equation in coded units (each letter from -1 to +1${a.blocks ? ', for an average block' : ''})`];
   out.push(`  ${a.response} = ${num(a.intercept.coef)}`);
   for (const t of a.terms) {
@@ -67,8 +66,7 @@ export function fittedEquation(a: Analysis): string[] {
 export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): string {
   const out: string[] = [];
   // Figures that are zero up to round-off beside the response's own scale print as 0.
-  let scale = 0;
-  for (const r of a.runs) scale = Math.max(scale, Math.abs(r.y));
+  const scale = responseScale(a);
   const z = (x: number | null | undefined) => (x === null || x === undefined ? x : zeroIfRoundoff(x, scale));
   const how = a.method === 'yates' ? "Yates' algorithm (complete, balanced factorial)" : 'least squares (Householder QR)';
   out.push(`Analysis of ${a.response}: ${a.n} runs, fitted by ${how}, in coded units`);
@@ -128,14 +126,10 @@ export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): st
     out.push(figures);
     out.push(`  ${marked}`);
     // Lenth's effects come from the saturated fit over the factorial runs; where one differs
-    // from the table's effect of the same term (beyond round-off), each is labelled.
-    const table = new Map(a.terms.map((t) => [t.estimates ?? t.letters, zeroIfRoundoff(t.effect, scale)]));
-    const differ = effects.filter((e) => table.has(e.letters) && num(table.get(e.letters)) !== num(e.effect));
-    if (differ.length > 0) {
-      out.push(
-        `  Lenth's effects are those of the saturated fit over the factorial runs only; the effects table's are the model's over all runs: ${differ.map((e) => `${e.letters} ${num(e.effect)} (Lenth) and ${num(table.get(e.letters))} (table)`).join('; ')}`,
-      );
-    }
+    // from the table's effect of the same term (beyond round-off), each is labelled (the one rule
+    // of core/text/lenth-table-effects.ts, which the Effects screen applies too).
+    const label = lenthTableText(lenthTableDifferences(a, num), num);
+    if (label !== null) out.push(`  ${label}`);
   }
   if (a.aliased.length > 0) {
     out.push('');

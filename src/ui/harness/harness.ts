@@ -176,7 +176,9 @@ async function start() {
   study = studies[0] ?? null;
   if (study) {
     const drafts = await listDrafts(store, study.id);
-    if (drafts.length > 0) showForm(await openRun(store, drafts[drafts.length - 1].runId));
+    // The test page reopens the latest draft as its own form (the app keeps a form id per tab instead).
+    const last = drafts[drafts.length - 1];
+    if (last) showForm(await openRun(store, last.runId, last.formId));
   }
   await refreshCounts();
   say(`Ready (schema version ${store.db.verno})`);
@@ -216,7 +218,7 @@ $('export').addEventListener('click', async () => {
   fill,
   timeSaves,
   taps,
-  counts: async () => ({ studies: await store.db.studies.count(), runs: await store.db.runs.count(), revisions: await store.db.revisions.count(), drafts: await store.db.drafts.count() }),
+  counts: async () => ({ studies: await store.db.studies.count(), runs: await store.db.runs.count(), revisions: await store.db.revisions.count(), drafts: await store.db.formDrafts.count() }),
   persistence: () => persistenceAnswer(store),
   status: () => safetyStatus(store),
   version: () => store.db.verno,

@@ -12,14 +12,16 @@ import { farOutsideText } from '../../core/text/far-outside-text.ts';
 import { joinReadings, splitReadings } from '../../core/study/reading-text.ts';
 import { parseReadings, parseRunForm, type RunForm } from '../../core/study/run-form.ts';
 import { meanReading, plannedSettings, type Setting } from '../../core/study/study.ts';
-import { discardDraft, saveDraft } from '../../store/drafts.ts';
+import { discardDraft, listRunDrafts, saveDraft } from '../../store/drafts.ts';
+import type { Draft } from '../../store/db.ts';
 import type { DivergedRun } from '../../core/study/diverged-runs.ts';
-import { listDivergedRuns, openPlannedRun, openRun, restoreRevision, saveRun, type RunFormState, type SaveResult } from '../../store/runs.ts';
+import { listDivergedRuns, openPlannedRun, openRun, restoreRevision, saveRun, takeOtherDraft, type RunFormState, type SaveResult } from '../../store/runs.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
 import { registerOnScreen } from '../lib/on-screen.ts';
 import { storageCleared } from '../lib/storage-cleared.ts';
 import { markTyping } from '../lib/unsaved-forms.ts';
+import { formIdFor } from '../lib/form-id.ts';
 
 /** The channel on which a tab says it saved a run (the other tabs' forms keep their typing again). */
 const SAVES_CHANNEL = 'trialbook-run-saves';
@@ -82,6 +84,11 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
   const diverged = signal<DivergedRun | null>(null);
   const keeping = signal(false);
   let drafts: Promise<unknown> = Promise.resolve();
+  // This form's own id in this tab: its draft is its own, and a reload of the tab finds it again.
+  const formKey = `run-form:${studyId}:${plannedRun}`;
+  const formId = formIdFor(formKey);
+  /** Typing of this run kept by other forms (other tabs, or tabs since closed), oldest change first. */
+  const otherDrafts = signal<readonly Draft[]>([]);
 
   const planned = computed<Setting[]>(() => (state.value ? plannedSettings(state.value.study, plannedRun) : []));
 
@@ -214,9 +221,15 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     if (!s.current || s.fromDraft) return true;
     return JSON.stringify(f) !== JSON.stringify(s.form);
   });
+  /** True when this form holds typing of its own not yet saved (restored from its draft, or typed since it opened). */
+  const ownTyping = computed(() => {
+    const s = state.value;
+    const f = form.value;
+    if (!s || !f || saveState.value === 'saved') return false;
+    return s.fromDraft || JSON.stringify(f) !== JSON.stringify(s.form);
+  });
   // An app update waits while this form holds typing a reload would lose: typing whose draft
   // is still being written or could not be written, or a save under way (components/update-banner).
-  const formKey = `run-form:${studyId}:${plannedRun}`;
   effect(() => {
     const d = draftState.value;
     const s = saveState.value;
@@ -233,6 +246,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
       const s = state.peek();
       const runId = (e.data as { runId?: unknown } | null)?.runId;
       if (s && runId === s.runId && dirty.peek() && saveState.peek() === 'editing') keepDraft();
+      if (s && runId === s.runId) void refreshOthers();
     };
     return () => channel.close();
   });
@@ -269,16 +283,32 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     return () => registerOnScreen(formKey, null);
   });
 
+  /** Reads again which other forms hold typing for this run (after another tab saved it). */
+  async function refreshOthers() {
+    const s = state.peek();
+    if (!s) return;
+    try {
+      otherDrafts.value = (await listRunDrafts(store, s.runId)).filter((d) => d.formId !== formId);
+    } catch {
+      // The list is a hint only; the form itself is unaffected.
+    }
+  }
+
+  function show(opened: RunFormState) {
+    state.value = opened;
+    form.value = opened.form;
+    otherDrafts.value = opened.otherDrafts;
+    draftState.value = opened.fromDraft ? 'restored' : 'none';
+  }
+
   /** Reopens the form from the stored run (after a restore wrote a new current revision). */
   async function reload() {
     await drafts;
     const s = state.peek();
     try {
-      const opened = s ? await openRun(store, s.runId) : await openPlannedRun(store, studyId, plannedRun);
+      const opened = s ? await openRun(store, s.runId, formId) : await openPlannedRun(store, studyId, plannedRun, formId);
       await readDiverged(opened);
-      state.value = opened;
-      form.value = opened.form;
-      draftState.value = opened.fromDraft ? 'restored' : 'none';
+      show(opened);
       saveState.value = 'editing';
       problem.value = null;
     } catch (err) {
@@ -313,11 +343,9 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     /** Opens the form: the logged run of this planned run (or its draft), else a waiting draft of a new run, else a new run. */
     async load() {
       try {
-        const opened = await openPlannedRun(store, studyId, plannedRun);
+        const opened = await openPlannedRun(store, studyId, plannedRun, formId);
         await readDiverged(opened);
-        state.value = opened;
-        form.value = opened.form;
-        draftState.value = opened.fromDraft ? 'restored' : 'none';
+        show(opened);
         saveState.value = 'editing';
       } catch (err) {
         problem.value = problemFor(err);
@@ -325,6 +353,40 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     },
 
     reload,
+
+    otherDrafts: otherDrafts as ReadonlySignal<readonly Draft[]>,
+    ownTyping,
+
+    /**
+     * Takes another form's waiting typing into this form (the person picked it), kept at once as
+     * this form's own draft; the other form's draft stays as it was. Waits while this form holds
+     * typing of its own (save or discard it first), so nothing typed here is replaced.
+     */
+    async takeOther(otherFormId: string) {
+      const s = state.peek();
+      if (!s || saveState.peek() === 'saving') return;
+      if (ownTyping.peek()) return;
+      await drafts;
+      try {
+        const taken = takeOtherDraft({ ...s, otherDrafts: otherDrafts.peek() }, otherFormId);
+        show(taken);
+        saveState.value = 'editing';
+        problem.value = null;
+        keepDraft();
+      } catch (err) {
+        problem.value = problemFor(err);
+      }
+    },
+
+    /** Throws away another form's waiting typing (the person chose to, seeing it); this form is unchanged. */
+    async discardOther(otherFormId: string) {
+      try {
+        await discardDraft(store, otherFormId);
+        otherDrafts.value = otherDrafts.peek().filter((d) => d.formId !== otherFormId);
+      } catch (err) {
+        problem.value = problemFor(err);
+      }
+    },
 
     /**
      * Keeps one of a diverged run's current revisions: its values become a new revision made
@@ -354,7 +416,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
       if (!s || saveState.peek() === 'saving') return;
       await drafts;
       try {
-        await discardDraft(store, s.runId);
+        await discardDraft(store, formId);
       } catch (err) {
         problem.value = problemFor(err);
         return;
@@ -440,10 +502,11 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
         const result = await saveRun(store, { runId: s.runId, revisionId: s.revisionId, studyId: s.study.id, plannedRun: s.plannedRun, parents: s.parents, values });
         announceSave(s.runId);
         // A fresh form state: the next change will be a new revision on top of this one.
-        const reopened = await openRun(store, s.runId);
+        const reopened = await openRun(store, s.runId, formId);
         await readDiverged(reopened);
         state.value = reopened;
         form.value = reopened.form;
+        otherDrafts.value = reopened.otherDrafts;
         lastSave.value = result;
         draftState.value = 'none';
         saveState.value = 'saved';

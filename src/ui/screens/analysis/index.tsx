@@ -21,6 +21,7 @@ import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { pPhrase } from '../../../core/text/p-value.ts';
 import { effectWords, LENTH_WORDS, WITHIN_NOISE } from '../../../core/text/effect-words.ts';
+import { effectShown, lenthTableDifferences, lenthTermText } from '../../../core/text/lenth-table-effects.ts';
 import { curvatureStatement } from '../../../core/text/verdict-text.ts';
 import { num, percent, setting, signed, termLabel, withUnit } from '../../lib/format.ts';
 import { AnalysisModel, twoFactorTerms } from '../../models/analysis-model.ts';
@@ -52,6 +53,7 @@ export function meaning(t: TermEstimate, factors: readonly Factor[], response: R
   if (fs.length === 1) {
     const f = fs[0];
     const size = withUnit(Math.abs(t.effect), response.unit, 3);
+    if (t.effect === 0) return `From ${levelText(f, 0)} to ${levelText(f, 1)}, ${response.name} does not change.`;
     return `From ${levelText(f, 0)} to ${levelText(f, 1)}, ${response.name} ${t.effect >= 0 ? 'rises' : 'falls'} by ${size}.`;
   }
   if (fs.length === 2) {
@@ -63,15 +65,24 @@ export function meaning(t: TermEstimate, factors: readonly Factor[], response: R
 }
 
 function effectRows(ranked: readonly TermEstimate[], a: Analysis, factors: readonly Factor[], response: Response): BarRow[] {
-  return ranked.map((t) => {
-    const s = strength(t, a.lenth ? (a.lenth.effects.find((e) => e.letters === (t.estimates ?? t.letters))?.mark ?? null) : undefined);
+  // The report's rule (core/text/lenth-table-effects.ts): round-off zeros are 0, and a term that
+  // Lenth's list gives another number than the bar says so beside it.
+  const shownNumber = (x: number) => signed(x);
+  const differs = new Map(lenthTableDifferences(a, shownNumber).map((d) => [d.letters, d]));
+  const unit = response.unit ? ' ' + response.unit : '';
+  return ranked.map((raw) => {
+    const t = { ...raw, effect: effectShown(a, raw.effect) };
+    const letters = t.estimates ?? t.letters;
+    const s = strength(t, a.lenth ? (a.lenth.effects.find((e) => e.letters === letters)?.mark ?? null) : undefined);
     const carries = t.estimates ? ` Carries ${t.estimates}: these runs cannot tell them apart.` : '';
+    const d = differs.get(letters);
+    const lenth = d ? ` ${lenthTermText(d, (x) => shownNumber(x) + unit)}.` : '';
     return {
       key: String(t.term),
       label: `${termLabel(t.name)} (${t.letters})`,
       value: t.effect,
-      shown: `${signed(t.effect)}${response.unit ? ' ' + response.unit : ''}`,
-      detail: `${meaning(t, factors, response)} ${s.words}.${carries}`,
+      shown: `${shownNumber(t.effect)}${unit}`,
+      detail: `${meaning(t, factors, response)} ${s.words}.${carries}${lenth}`,
       faint: s.faint,
     };
   });

@@ -9,6 +9,7 @@ import { RUN_KIND_NAMES } from '../../../core/design/design.ts';
 import type { Store } from '../../../store/store.ts';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { DivergedNote } from '../../components/diverged-note/index.tsx';
+import { OtherTyping } from '../../components/other-typing/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { ReadingsField } from '../../components/readings-field/index.tsx';
 import { RunHistory } from '../../components/run-history/index.tsx';
@@ -104,6 +105,16 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
         </>
       )}
       {draftState === 'restored' && <p class="notice">Your earlier typing was kept and is back. It is not saved yet.</p>}
+      {!showHistory.value && (
+        <OtherTyping
+          study={study}
+          drafts={model.otherDrafts.value}
+          ownTyping={model.ownTyping.value}
+          busy={busy}
+          onTake={(id) => void model.takeOther(id)}
+          onDiscard={(id) => void model.discardOther(id)}
+        />
+      )}
 
       <form
         hidden={showHistory.value}
