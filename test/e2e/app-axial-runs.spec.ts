@@ -34,8 +34,7 @@ for (const size of [
       // alpha > 1: every axial setting lies past the factorial range, so each factor is warned about.
       await expect(page.getByTestId('axial-warnings').locator('li')).toHaveCount(3);
       for (const line of CAUTION) await expect(preview.getByLabel('Caution')).toContainText(line);
-      await preview.scrollIntoViewIfNeeded();
-      await page.screenshot({ path: `/tmp/soloop-axial-preview-${size.width}.png`, fullPage: true });
+      await page.locator('.add-axial').screenshot({ path: `test-results/axial-preview-${size.width}.png` });
 
       // On the faces: alpha = 1, inside the factorial range, no warning; the caution stays.
       await page.getByRole('group', { name: 'How far out the axial runs go' }).getByRole('button', { name: 'On the faces (±1)' }).click();
