@@ -55,7 +55,7 @@ export function drawContours(canvas: HTMLCanvasElement, pic: ContourPicture): vo
   const left = 64;
   const bottom = 56;
   const top = 12;
-  const right = 14;
+  const right = 26;
   const size = css - left - right;
   const height = top + size + bottom;
   canvas.style.width = `${css}px`;
@@ -129,8 +129,15 @@ export function drawContours(canvas: HTMLCanvasElement, pic: ContourPicture): vo
       }
     }
     if (longest.length > 2) {
-      const [a, b] = longest[Math.floor(longest.length / 2)];
-      labels.push({ x: px(gx(a)), y: py(gy(b)), text: pic.levelText(band.value) });
+      // The point of the line farthest inside the plot, so the label is not cut by the frame.
+      let best = { x: 0, y: 0, room: -Infinity };
+      for (const [a, b] of longest) {
+        const x = px(gx(a));
+        const y = py(gy(b));
+        const room = Math.min(x - left, left + size - x, y - top, top + size - y);
+        if (room > best.room) best = { x, y, room };
+      }
+      if (best.room > 10) labels.push({ x: best.x, y: best.y, text: pic.levelText(band.value) });
     }
   }
   // Labels on a light patch so the line under them does not cut the digits.
@@ -144,6 +151,8 @@ export function drawContours(canvas: HTMLCanvasElement, pic: ContourPicture): vo
     g.fillStyle = LINE;
     g.fillText(l.text, l.x, l.y);
   }
+  g.restore();
+  // Marks after the clip, so design points on the corners show whole.
   g.fillStyle = INK;
   for (const [a, b] of pic.points) {
     g.beginPath();
@@ -162,5 +171,4 @@ export function drawContours(canvas: HTMLCanvasElement, pic: ContourPicture): vo
     g.lineTo(px(a) - r, py(b) + r);
     g.stroke();
   }
-  g.restore();
 }
