@@ -57,14 +57,15 @@ describe('an invented study from a screening fraction to the best setting', () =
     const backupFile = join(dir, 'second.json');
     writeFileSync(backupFile, await writeBackup({ studies: [study], revisions }, { device: 'dev-1', exportedAt: '2026-01-02T00:00:00Z', scope: 'all' }));
 
-    // 4. Augment into a central composite design; "run" the added block.
+    // 4. Augment into a central composite design in the same study; "run" the added block.
     const augmented = readBackupSync(await augment.run([backupFile, '--study', 'journey-study', '--axial', '--seed', '3']));
-    const ccd = selectStudy(augmented, 'Invented: cure strength near the path best point (augmented)');
+    expect(augmented.payload.studies).toHaveLength(1); // the same study, not a new one
+    const ccd = selectStudy(augmented, 'journey-study');
     const added = ccd.design.runs.filter((r) => r.block === 2);
     expect(added).toHaveLength(7); // 4 axial + 3 center
     const moreRevisions = added.map((r, i) => revision(ccd, r.run, r.coded, 300 + i));
     const finalFile = join(dir, 'final.json');
-    writeFileSync(finalFile, await writeBackup({ studies: augmented.payload.studies, revisions: [...augmented.payload.revisions, ...moreRevisions] }, { device: 'dev-1', exportedAt: '2026-01-03T00:00:00Z', scope: 'all' }));
+    writeFileSync(finalFile, await writeBackup({ ...augmented.payload, revisions: [...augmented.payload.revisions, ...moreRevisions] }, { device: 'dev-1', exportedAt: '2026-01-03T00:00:00Z', scope: 'all' }));
 
     // 5. The quadratic analysis finds the invented peak: 190 degC, 33 min, strength 90.
     const out = JSON.parse(await analyze.run([finalFile, '--study', ccd.id, '--response', 'Strength', '--terms', 'quadratic', '--json']));

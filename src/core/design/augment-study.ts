@@ -37,6 +37,8 @@ export interface Augmentation {
   readonly properties: SecondOrderProperties;
   /** What the augmented design can estimate, what is logged, and the warnings. */
   readonly notes: readonly string[];
+  /** The notes without the warnings and the caution: what was added and what the augmented design can estimate (the added block's note). */
+  readonly about: string;
 }
 
 /**
@@ -100,6 +102,7 @@ export function augmentStudy(study: StudyPlan, logged: readonly LoggedRun[], opt
     );
   }
   if (!properties.rotatable) notes.push('The augmented design is not rotatable: the precision of a prediction depends on its direction from the center, not only its distance.');
+  const about = notes.join(' ');
   notes.push(...properties.warnings);
   if (properties.warnings.length > 0) notes.push(...properties.caution);
 
@@ -109,5 +112,5 @@ export function augmentStudy(study: StudyPlan, logged: readonly LoggedRun[], opt
     summary: `${study.design.summary} Augmented into a central composite design: block ${block} holds ${ns} axial runs (alpha ${Number(alpha.toPrecision(4))}) and ${ns0} center runs, ${all.length} runs in all.`,
     notes: [...study.design.notes, ...notes],
   };
-  return { plan: { ...study, design }, added, block, alpha, seed, properties, notes };
+  return { plan: { ...study, design }, added, block, alpha, seed, properties, notes, about };
 }

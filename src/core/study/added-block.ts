@@ -1,6 +1,7 @@
 /**
  * Planned runs added to a study after its plan was made: runs along a path of steepest ascent,
- * a foldover of a fraction, confirmation runs at a chosen setting. The study's own plan never
+ * a foldover of a fraction, confirmation runs at a chosen setting, the axial block of a central
+ * composite design. The study's own plan never
  * changes; each addition is a record of its own (an added block), written once and never
  * changed, that carries its planned runs in a new block. The plan a screen or an analysis reads
  * is the study's runs followed by every added block's runs (withAddedBlocks).
@@ -16,8 +17,12 @@ import { InputError } from '../errors.ts';
 import type { DesignRun, RunKind } from '../design/design.ts';
 import type { StudyRecord } from './study.ts';
 
-/** Why the runs were added: they follow the path, they fold the fraction over, or they confirm a setting. */
-export const ADDED_BLOCK_PURPOSES = ['path', 'foldover', 'confirmation'] as const;
+/**
+ * Why the runs were added: they follow the path, they fold the fraction over, they confirm a
+ * setting, or they are the axial block (axial runs and their center runs) that augments a
+ * two-level study into a central composite design.
+ */
+export const ADDED_BLOCK_PURPOSES = ['path', 'foldover', 'confirmation', 'axial'] as const;
 export type AddedBlockPurpose = (typeof ADDED_BLOCK_PURPOSES)[number];
 
 export interface AddedBlock {

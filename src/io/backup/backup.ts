@@ -10,7 +10,7 @@
  *     "checksum": { "algorithm": "SHA-256", "value": "<64 hex digits>" },
  *     "payload": { "studies": [...], "revisions": [...], "blocks": [...] } }
  *
- * `blocks` (planned runs added to a study after its plan: path, foldover, confirmation) is
+ * `blocks` (planned runs added to a study after its plan: path, foldover, confirmation, axial) is
  * written only when there are some.
  *
  * The checksum is SHA-256 (FIPS 180-4) of the UTF-8 bytes of the canonical JSON of `payload`
@@ -48,7 +48,7 @@ export const BACKUP_VERSION = 2;
 export interface BackupPayload {
   readonly studies: readonly StudyRecord[];
   readonly revisions: readonly RunRevision[];
-  /** Planned runs added to the studies after their plans (path, foldover, confirmation); absent when none. */
+  /** Planned runs added to the studies after their plans (path, foldover, confirmation, axial); absent when none. */
   readonly blocks?: readonly AddedBlock[];
 }
 

@@ -5,6 +5,7 @@
 import { divergedRuns, type DivergedRun } from '../../core/study/diverged-runs.ts';
 import { divergedNote } from '../../core/text/diverged-text.ts';
 import { InputError } from '../../core/errors.ts';
+import { withAddedBlocks } from '../../core/study/added-block.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
 import { responseDataFromRuns } from '../../core/study/run-data.ts';
 import { currentRun, type LoggedRun, type RunRevision, type StudyRecord } from '../../core/study/study.ts';
@@ -20,7 +21,8 @@ function refuseSeveral(ref: string, found: readonly StudyRecord[], how: string):
 }
 
 /**
- * The study `ref` names, in this order: the study whose id is `ref`; else whose title is exactly
+ * The study `ref` names, as its plan is read: its own runs followed by the runs of every block
+ * added to it (path, foldover, confirmation, axial; withAddedBlocks), in this order: the study whose id is `ref`; else whose title is exactly
  * `ref`; else whose title is `ref` ignoring case; else the one study whose title contains `ref`
  * ignoring case. Text is compared in Unicode form C with surrounding spaces ignored.
  * Throws InputError when none matches (listing the studies) or when two or more match at the
@@ -29,6 +31,10 @@ function refuseSeveral(ref: string, found: readonly StudyRecord[], how: string):
  * "oven" is refused, naming both.
  */
 export function selectStudy(backup: Pick<Backup, 'payload'>, ref: string): StudyRecord {
+  return withAddedBlocks(selectOwnStudy(backup, ref), backup.payload.blocks ?? []);
+}
+
+function selectOwnStudy(backup: Pick<Backup, 'payload'>, ref: string): StudyRecord {
   const studies = backup.payload.studies;
   const key = nfc(ref);
   const byId = studies.find((s) => s.id === key);

@@ -10,6 +10,10 @@ describe('checkAddedBlock', () => {
   it('passes a block made by addedRuns, rebuilt from its fields', () => {
     expect(checkAddedBlock(JSON.parse(JSON.stringify(good)), 'block', studies)).toEqual(good);
   });
+  it('passes an axial block (axial and center runs that augment the plan)', () => {
+    const axial = { ...block('b-2', addedRuns(inventedStudy(), [{ kind: 'axial', coded: [-1.4, 0] }, { kind: 'center', coded: [0, 0] }])), purpose: 'axial' };
+    expect(checkAddedBlock(JSON.parse(JSON.stringify(axial)), 'block', studies).purpose).toBe('axial');
+  });
   it('refuses runs numbered inside the plan, a shared number, mixed or old blocks, an unknown study or purpose, extra fields', () => {
     const bad = (change: (b: any) => void) => {
       const b = JSON.parse(JSON.stringify(good));
@@ -22,7 +26,7 @@ describe('checkAddedBlock', () => {
     expect(bad((b) => ((b.runs[1].block = 3), (b.runs[1].originBlock = 3)))).toThrow(/share one block \(2\), got 3/);
     expect(bad((b) => b.runs.forEach((r: any) => ((r.block = 1), (r.originBlock = 1))))).toThrow(/block after the study's own blocks \(above 1\), got 1/);
     expect(bad((b) => (b.studyId = 's-9'))).toThrow(/needs a study in this file, got "s-9"/);
-    expect(bad((b) => (b.purpose = 'extra'))).toThrow(/block.purpose: needs "path" or "foldover" or "confirmation"/);
+    expect(bad((b) => (b.purpose = 'extra'))).toThrow(/block.purpose: needs "path" or "foldover" or "confirmation" or "axial"/);
     expect(bad((b) => (b.runs = []))).toThrow(/block.runs: needs at least one planned run/);
     expect(bad((b) => (b.colour = 'red'))).toThrow(/has no field "colour"/);
     expect(bad((b) => (b.runs[0].coded = [1]))).toThrow(/one coded setting per factor \(2\)/);

@@ -9,6 +9,7 @@ import { useEffect } from 'preact/hooks';
 import { confirmationStatement } from '../../../core/text/confirmation-text.ts';
 import { intervalText } from '../../../core/text/interval-text.ts';
 import type { Store } from '../../../store/store.ts';
+import { AddAxialRuns } from '../../components/add-axial-runs/index.tsx';
 import { CautionBox } from '../../components/caution-box/index.tsx';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { CountStepper } from '../../components/count-stepper/index.tsx';
@@ -220,6 +221,7 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
           </div>
         ))}
       </section>
+      <AddAxialRuns store={store} shared={shared} />
       <CautionBox lines={CAUTION} />
     </section>
   );

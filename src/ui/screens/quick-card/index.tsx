@@ -12,6 +12,7 @@ import type { Store } from '../../../store/store.ts';
 import { BarList } from '../../components/bar-list/index.tsx';
 import { CautionBox } from '../../components/caution-box/index.tsx';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
+import { ContourCard } from '../../components/contour-card/index.tsx';
 import { FactorControl } from '../../components/factor-control/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
@@ -143,6 +144,9 @@ export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
             {analysis && analysis.ok ? ` Model: ${modelLabel.toLowerCase()} (as chosen on the Effects screen), fitted to ${analysis.analysis.n} logged runs.` : ''}
           </p>
         </>
+      )}
+      {p && analysis && analysis.ok && (
+        <ContourCard model={analysis.analysis.model} runs={analysis.data.coded} held={model.coded.value} settings={model.settings.value} responseLabel={response.unit ? `${response.name} (${response.unit})` : response.name} />
       )}
     </section>
   );
