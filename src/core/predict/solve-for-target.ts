@@ -267,7 +267,7 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
   }
   x[j] = coded;
   const r = predictor.interval(x);
-  const outsideFactors = outsideRange(model.factors, x);
+  const outsideFactors = outsideRange(model.factors, x, model.extent);
   messages.push(...outsideFactors.map((o) => o.message));
   if (outsideFactors.length > 0) messages.push('With a held setting outside the tested range, the answer is an extrapolation of the fitted model.');
   messages.push(...modelNotes(model, alpha));
