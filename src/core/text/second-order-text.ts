@@ -113,3 +113,15 @@ export function secondOrderNotAvailable(): string {
 export function quadraticNotSupported(): string {
   return 'The quadratic model needs runs at three or more settings of each factor (a central composite or Box-Behnken design) and numeric factors only.';
 }
+
+/**
+ * What a square term means on the Effects screen: with y-hat = ... + b x^2, at either end of the
+ * range (x = -1 or +1) the square adds b, so the response sits |b| above or below the straight
+ * line through the center (Montgomery 8th ed., section 11.3, from memory).
+ * Example: squareMeaning('Time', 'Yield', -1.376, '%') -> 'Curvature of Time: at its low and high
+ * settings Yield sits 1.376 % below a straight line through the center.'
+ */
+export function squareMeaning(factor: string, response: string, coef: number, unit?: string): string {
+  const size = `${shortNumber(Math.abs(coef))}${unit ? ` ${unit}` : ''}`;
+  return `Curvature of ${factor}: at its low and high settings ${response} sits ${size} ${coef >= 0 ? 'above' : 'below'} a straight line through the center.`;
+}
