@@ -22,11 +22,13 @@ export function AxialWarning({ factors, coded }: AxialWarningProps) {
   if (lines.length === 0) return null;
   return (
     <div class="axial-warning">
-      <ul role="alert">
-        {lines.map((l) => (
-          <li key={l}>{l}</li>
-        ))}
-      </ul>
+      <div role="alert">
+        <ul>
+          {lines.map((l) => (
+            <li key={l}>{l}</li>
+          ))}
+        </ul>
+      </div>
       <CautionBox lines={CAUTION} compact />
     </div>
   );

@@ -77,11 +77,13 @@ export function SecondOrderFacts({ facts }: SecondOrderFactsProps) {
       )}
       {facts.warnings.length > 0 && (
         <>
-          <ul class="so-warnings" role="alert">
-            {facts.warnings.map((w) => (
-              <li key={w}>{w}</li>
-            ))}
-          </ul>
+          <div role="alert">
+            <ul class="so-warnings">
+              {facts.warnings.map((w) => (
+                <li key={w}>{w}</li>
+              ))}
+            </ul>
+          </div>
           <CautionBox lines={facts.caution} compact />
         </>
       )}
