@@ -52,7 +52,7 @@ export const optimize: Command = {
       const settings = parseSettings(models[0].factors, parseAssignments(values.at, '--at'));
       const coded = settings.map((s) => s.coded);
       const p = desirabilityAt(models, specs, coded);
-      const messages = outsideRange(models[0].factors, coded).map((o) => o.message);
+      const messages = outsideRange(models[0].factors, coded, models[0].extent).map((o) => o.message);
       const out = {
         at: {
           settings: Object.fromEntries(settings.map((s) => [s.name, s.real])),

@@ -111,6 +111,11 @@ export interface FittedModel {
   readonly pValues: ReadonlyMap<Term, number | null>;
   readonly curvatureP: number | null;
   /**
+   * Per factor, the half-width of its tested range in coded units (1, the factorial box, or the
+   * axial distance of the design's axial runs: predict/tested-extent.ts). Absent means 1 each.
+   */
+  readonly extent?: readonly number[];
+  /**
    * The transform the fit was made on: coefficients are on the scale (y'^lambda - 1) / lambda,
    * y' = y - lowerBound (fit/response-transform.ts); lambda 1 (none) is the response itself.
    * Absent means none.

@@ -39,6 +39,7 @@ import { residualSsQr, residualSsYates } from './residual-ss.ts';
 import { RANK_TOLERANCE } from '../tolerance.ts';
 import { NO_TRANSFORM, transformResponses, type ResponseTransform } from './response-transform.ts';
 import { validateResponseData } from './validate-response.ts';
+import { testedExtent } from '../predict/tested-extent.ts';
 import { columnVifs, VIF_LIMIT, vifDrivers } from './vif.ts';
 import { isWarning } from './verdicts.ts';
 
@@ -116,6 +117,7 @@ export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analys
     dfResidual: fit.dfResidual,
     pValues: new Map<Term, number | null>(terms.map((t) => [t.term, t.p ?? null])),
     curvatureP: curv?.p ?? null,
+    extent: testedExtent(factors, coded),
     transform: { token: transform.token, lambda: transform.lambda, lowerBound: bound, suggestion: bc?.suggestion ?? null },
   };
   return {

@@ -1,6 +1,7 @@
 /**
  * The tested range: a numeric factor was run between its low and high settings (coded -1 and
- * +1); a setting with |coded| > 1 asks the model to extrapolate.
+ * +1), or out to its axial runs at +-e when the design has them (tested-extent.ts); a setting
+ * with |coded| > e asks the model to extrapolate.
  */
 import { toReal } from '../factor/coding.ts';
 import type { Factor } from '../factor/factor.ts';
@@ -14,21 +15,23 @@ export interface OutsideSetting {
   readonly coded: number;
   /** How far beyond the nearer end of the tested range, in real units (always positive). */
   readonly beyond: number;
-  /** How far beyond, in coded units: |coded| - 1. */
+  /** How far beyond, in coded units: |coded| - e (e = 1 unless the design has axial runs). */
   readonly beyondCoded: number;
-  /** Which end of the tested range it passed: the setting coded -1 ('low') or +1 ('high'). */
+  /** Which end of the tested range it passed: the setting coded -e ('low') or +e ('high'). */
   readonly end: 'low' | 'high';
   /** A plain sentence naming the factor and how far out it is. */
   readonly message: string;
 }
 
 /**
- * True when a coded setting lies outside the tested range [-1, +1], beyond rounding
+ * True when a coded setting lies outside the tested range [-e, +e] (e = 1, the factorial box,
+ * unless given: a central composite design's axial distance, tested-extent.ts), beyond rounding
  * (SETTING_TOLERANCE, src/core/tolerance.ts). Cost O(1); NaN is not outside (callers check
- * finiteness first). Example: isOutside(1.5) -> true; isOutside(-1) -> false.
+ * finiteness first). Example: isOutside(1.5) -> true; isOutside(-1) -> false;
+ * isOutside(1.4, 1.414) -> false.
  */
-export function isOutside(coded: number): boolean {
-  return Math.abs(coded) > 1 + SETTING_TOLERANCE;
+export function isOutside(coded: number, extent = 1): boolean {
+  return Math.abs(coded) > extent + SETTING_TOLERANCE;
 }
 
 /**
@@ -41,20 +44,25 @@ export function isOutside(coded: number): boolean {
  * Throws InputError (from toReal) for a non-finite coded value.
  * Example: Temperature 160..200 degC at coded 1.5 -> one entry, real 210, beyond 10, end 'high',
  * message 'Temperature = 210 degC is outside the tested range (160 to 200 degC): 10 degC above
- * the high setting (coded +1.5).'
+ * the high setting (coded +1.5).' With `extent` (per factor, coded; tested-extent.ts) the range
+ * is [-e, +e] on each axis: for a rotatable central composite design (e = 1.414) coded 1.4 is
+ * inside and 1.5 is outside, 0.086 coded beyond its axial runs.
  */
-export function outsideRange(factors: readonly Factor[], coded: ArrayLike<number>): OutsideSetting[] {
+export function outsideRange(factors: readonly Factor[], coded: ArrayLike<number>, extent?: readonly number[]): OutsideSetting[] {
   const out: OutsideSetting[] = [];
   for (let i = 0; i < factors.length; i++) {
     const f = factors[i];
-    if (f.kind !== 'numeric' || !isOutside(coded[i])) continue;
+    const e = extent?.[i] ?? 1;
+    if (f.kind !== 'numeric' || !isOutside(coded[i], e)) continue;
     const x = coded[i];
     const real = toReal(f, x) as number;
-    const lowEnd = toReal(f, -1) as number;
-    const highEnd = toReal(f, 1) as number;
+    const lowEnd = toReal(f, -e) as number;
+    const highEnd = toReal(f, e) as number;
     const end = x > 0 ? highEnd : lowEnd;
     const beyond = Math.abs(real - end);
     const which = x > 0 ? 'high' : 'low';
+    const range = e === 1 ? `${formatSetting(f.low)} to ${formatSetting(f.high, f.unit)}` : `${formatSetting(lowEnd)} to ${formatSetting(highEnd, f.unit)}, axial runs included`;
+    const endWords = e === 1 ? `the ${which} setting` : `the ${which === 'high' ? 'highest' : 'lowest'} tested setting`;
     const dirWord = real > end ? 'above' : 'below';
     const sign = x > 0 ? '+' : '-';
     out.push({
@@ -63,11 +71,11 @@ export function outsideRange(factors: readonly Factor[], coded: ArrayLike<number
       real,
       coded: x,
       beyond,
-      beyondCoded: Math.abs(x) - 1,
+      beyondCoded: Math.abs(x) - e,
       end: which,
       message:
-        `${f.name} = ${formatSetting(real, f.unit)} is outside the tested range (${formatSetting(f.low)} to ${formatSetting(f.high, f.unit)}): ` +
-        `${formatSetting(beyond, f.unit)} ${dirWord} the ${which} setting (coded ${sign}${formatSetting(Math.abs(x))}).`,
+        `${f.name} = ${formatSetting(real, f.unit)} is outside the tested range (${range}): ` +
+        `${formatSetting(beyond, f.unit)} ${dirWord} ${endWords} (coded ${sign}${formatSetting(Math.abs(x))}).`,
     });
   }
   return out;

@@ -139,7 +139,7 @@ export function predictSettings(model: FittedModel, settings: readonly FactorSet
   const zci: [number, number] | null = r.ciLo !== null && r.ciHi !== null ? [r.ciLo, r.ciHi] : null;
   const zpi: [number, number] | null = r.piLo !== null && r.piHi !== null ? [r.piLo, r.piHi] : null;
   const scale = onResponseScale(model, { fit, se, ci: zci, pi: zpi });
-  const outsideFactors = outsideRange(model.factors, x);
+  const outsideFactors = outsideRange(model.factors, x, model.extent);
   const messages = [...centerNotes(settings), ...outsideFactors.map((o) => o.message)];
   if (outsideFactors.length > 0) {
     messages.push('Outside the tested range the prediction is an extrapolation of the fitted model: confirm it with runs before relying on it.');

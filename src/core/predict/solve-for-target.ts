@@ -294,7 +294,7 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
   const zci: [number, number] | null = r.ciLo !== null && r.ciHi !== null ? [r.ciLo, r.ciHi] : null;
   const zpi: [number, number] | null = r.piLo !== null && r.piHi !== null ? [r.piLo, r.piHi] : null;
   const onScale = onResponseScale(model, { fit: r.fit, se: r.se, ci: zci, pi: zpi });
-  const outsideFactors = outsideRange(model.factors, x);
+  const outsideFactors = outsideRange(model.factors, x, model.extent);
   messages.push(...outsideFactors.map((o) => o.message));
   if (outsideFactors.length > 0) messages.push('With a held setting outside the tested range, the answer is an extrapolation of the fitted model.');
   messages.push(...modelNotes(model, alpha), ...onScale.messages);

@@ -24,6 +24,8 @@ import { studyPlan, type StudyRecord } from '../../core/study/study.ts';
 import type { Store } from '../../store/store.ts';
 import { createStudy } from '../../store/studies.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
+import type { SecondOrderProperties } from '../../core/design/second-order-plan.ts';
+import { defaultCenterRuns, secondOrderPlanOf, type AxialChoice, type DesignFamily } from './second-order-choice.ts';
 
 export interface FactorDraft {
   readonly key: number;
@@ -180,7 +182,10 @@ export function powerView(design: Design | null, effectText: string, sigmaText: 
   }
 }
 
-export type Preview = { readonly design: Design; readonly error: null } | { readonly design: null; readonly error: string };
+/** The plan as it stands; `secondOrder` holds a second-order design's properties for the comparison. */
+export type Preview =
+  | { readonly design: Design; readonly error: null; readonly secondOrder?: SecondOrderProperties }
+  | { readonly design: null; readonly error: string };
 
 export const NewStudyModel = createModel((store: Store) => {
   const title = signal('');
@@ -191,6 +196,11 @@ export const NewStudyModel = createModel((store: Store) => {
   const centerRuns = signal('0');
   const replicates = signal('1');
   const blocks = signal<number>(1);
+  const family = signal<DesignFamily>('two-level');
+  const axial = signal<AxialChoice>('rotatable');
+  const axialText = signal('');
+  const soBlocks = signal<1 | 2>(1);
+  const soCenterRuns = signal(String(defaultCenterRuns('central composite', 1, 2)));
   const randomize = signal(true);
   const seedText = signal('');
   /** Drawn once for a blank seed box, so the preview and the created study share one run order. */
@@ -218,8 +228,8 @@ export const NewStudyModel = createModel((store: Store) => {
 
   const factorMessages = computed(() => factors.value.map((f, i) => factorMessage(f, i)));
 
-  /** The design spec, or InputError for what cannot be read. */
-  function spec(): DesignSpec {
+  /** The factor rows as the core's declarations and the seed, or InputError for what cannot be read. */
+  function factorsAndSeed(): { specs: FactorSpec[]; seed: number | null } {
     const rows = factors.value;
     rows.forEach((f, i) => {
       const m = factorMessages.value[i];
@@ -227,6 +237,13 @@ export const NewStudyModel = createModel((store: Store) => {
     });
     const s = seed.value;
     if (s !== null && !Number.isFinite(s)) throw new InputError(`The seed must be a whole number, or left blank to draw one; got "${seedText.value.trim()}"`);
+    return { specs: rows.map((f) => factorSpecOf(f)), seed: s };
+  }
+
+  /** The design spec, or InputError for what cannot be read. */
+  function spec(): DesignSpec {
+    const rows = factors.value;
+    const s = factorsAndSeed().seed;
     const pb = plackettBurmanRunsOf(fraction.value);
     return {
       factors: rows.map((f) => factorSpecOf(f)),
@@ -241,6 +258,11 @@ export const NewStudyModel = createModel((store: Store) => {
 
   const preview = computed<Preview>(() => {
     try {
+      if (family.value !== 'two-level') {
+        const { specs, seed: s } = factorsAndSeed();
+        const plan = secondOrderPlanOf(specs, { family: family.value, axial: axial.value, axialText: axialText.value, blocks: soBlocks.value, centerRuns: soCenterRuns.value }, randomize.value, s);
+        return { design: plan.design, error: null, secondOrder: plan.properties };
+      }
       return { design: buildDesign(spec()), error: null };
     } catch (err) {
       if (err instanceof InputError) return { design: null, error: err.message };
@@ -285,6 +307,34 @@ export const NewStudyModel = createModel((store: Store) => {
     centerRuns: centerRuns as ReadonlySignal<string>,
     replicates: replicates as ReadonlySignal<string>,
     blocks: blocks as ReadonlySignal<number>,
+    family: family as ReadonlySignal<DesignFamily>,
+    axial: axial as ReadonlySignal<AxialChoice>,
+    axialText: axialText as ReadonlySignal<string>,
+    soBlocks: soBlocks as ReadonlySignal<1 | 2>,
+    soCenterRuns: soCenterRuns as ReadonlySignal<string>,
+    /** Chooses the design family; the second-order center runs start at the core's default. */
+    chooseFamily(v: DesignFamily) {
+      if (v !== 'two-level' && v !== family.peek()) soCenterRuns.value = String(defaultCenterRuns(v, soBlocks.peek(), factors.peek().length));
+      family.value = v;
+      edit();
+    },
+    chooseAxial(v: AxialChoice) {
+      axial.value = v;
+      edit();
+    },
+    setAxialText(v: string) {
+      axialText.value = v;
+      edit();
+    },
+    chooseSecondOrderBlocks(n: 1 | 2) {
+      if (n !== soBlocks.peek()) soCenterRuns.value = String(defaultCenterRuns('central composite', n, factors.peek().length));
+      soBlocks.value = n;
+      edit();
+    },
+    setSecondOrderCenterRuns(v: string) {
+      soCenterRuns.value = v;
+      edit();
+    },
     randomize: randomize as ReadonlySignal<boolean>,
     seedText: seedText as ReadonlySignal<string>,
     problem: problem as ReadonlySignal<Problem | null>,
@@ -303,7 +353,7 @@ export const NewStudyModel = createModel((store: Store) => {
     /** Earlier studies with an analysis of a response named as one of this form's responses, and its residual SD. */
     noiseChoices: computed(() => sources.value.filter((s) => responseNames.value.has(s.response.trim().toLowerCase()))),
     /** The power of the plan as it stands, in words. */
-    power: computed(() => powerView(preview.value.design, effectText.value, sigmaText.value)),
+    power: computed(() => powerView(family.value === 'two-level' ? preview.value.design : null, effectText.value, sigmaText.value)),
     setEffectText(v: string) {
       effectText.value = v;
     },

@@ -15,7 +15,8 @@ import { computed, createModel, signal, type ReadonlySignal, type Signal } from 
 import type { Analysis } from '../../core/fit/analysis.ts';
 import { analyze } from '../../core/fit/analyze.ts';
 import { parseTransform } from '../../core/fit/response-transform.ts';
-import { termsUpToOrder } from '../../core/model/formula.ts';
+import { quadraticTerms, termsUpToOrder } from '../../core/model/formula.ts';
+import { supportsQuadratic } from '../../core/design/supports-quadratic.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
 import type { Response } from '../../core/study/response.ts';
 import { responseDataFromRuns } from '../../core/study/run-data.ts';
@@ -24,13 +25,21 @@ import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
 import { loadStudyData, type StudyData } from './study-data.ts';
 
-/** Which terms the model holds: main effects only, or main effects and two-factor interactions. */
-export type ModelChoice = 'main' | 'two-way';
+/** Which terms the model holds: main effects only, main effects and two-factor interactions, or those and the squares (quadratic). */
+export type ModelChoice = 'main' | 'two-way' | 'quadratic';
 
 export const MODEL_CHOICES: readonly { readonly value: ModelChoice; readonly label: string }[] = [
   { value: 'two-way', label: 'With interactions' },
   { value: 'main', label: 'Main effects only' },
 ];
+
+/** The quadratic model, offered only for a study whose planned runs can estimate it (see modelChoicesFor). */
+export const QUADRATIC_CHOICE = { value: 'quadratic' as const, label: 'Quadratic (with curvature)' };
+
+/** The model choices for a study: the quadratic one too when its planned runs support it (core/design/supports-quadratic.ts). */
+export function modelChoicesFor(study: { readonly factors: StudyData['study']['factors']; readonly design: { readonly runs: readonly { readonly coded: readonly number[] }[] } }) {
+  return supportsQuadratic(study.factors, study.design.runs.map((r) => r.coded)) ? [...MODEL_CHOICES, QUADRATIC_CHOICE] : MODEL_CHOICES;
+}
 
 /** The transform of a response (core/fit/response-transform.ts tokens). */
 export type TransformChoice = 'none' | 'log' | 'sqrt' | 'inverse';
@@ -69,7 +78,7 @@ export function analyzeResponse(d: StudyData, responseIndex: number, settings: R
     // Runs with two current revisions are named, with both values, beside the other messages.
     const data = d.diverged.length === 0 ? read : { ...read, messages: [...read.messages, ...d.diverged.map((x) => divergedNote(d.study, x))] };
     const k = d.study.factors.length;
-    const terms = termsUpToOrder(k, settings.model === 'main' ? 1 : Math.min(2, k));
+    const terms = settings.model === 'quadratic' ? quadraticTerms(d.study.factors) : termsUpToOrder(k, settings.model === 'main' ? 1 : Math.min(2, k));
     return { ok: true, analysis: analyze(data, { terms, transform: parseTransform(settings.transform) }), data };
   } catch (err) {
     return { ok: false, message: problemOf(err).message };

@@ -37,6 +37,29 @@ describe('outsideRange (the tested range is coded -1 to +1; Montgomery 8th ed., 
     expect(isOutside(1.001)).toBe(true);
   });
 
+  it('with a rotatable central composite design the tested range reaches its axial runs: coded 1.4 is inside, 1.5 outside', () => {
+    // alpha = 4^(1/4) = 1.41421 for 2 factors (Montgomery 8th ed., section 11.4.1, from memory)
+    const alpha = Math.SQRT2;
+    const two = defineFactors([
+      { kind: 'numeric', name: 'Temperature', low: 160, high: 200, unit: 'degC' },
+      { kind: 'numeric', name: 'Time', low: 30, high: 40, unit: 'min' },
+    ]);
+    expect(isOutside(1.4, alpha)).toBe(false);
+    expect(isOutside(1.5, alpha)).toBe(true);
+    expect(outsideRange(two, [1.4, -1.4], [alpha, alpha])).toEqual([]);
+    expect(outsideRange(two, [alpha, -alpha], [alpha, alpha])).toEqual([]);
+    const out = outsideRange(two, [1.5, 0], [alpha, alpha]);
+    expect(out).toHaveLength(1);
+    // 180 + 1.5 x 20 = 210; highest tested 180 + 1.41421 x 20 = 208.28, so 1.72 above (by hand)
+    expect(out[0].beyond).toBeCloseTo(210 - (180 + 20 * alpha), 9);
+    expect(out[0].beyondCoded).toBeCloseTo(1.5 - alpha, 12);
+    expect(out[0].message).toBe(
+      'Temperature = 210 degC is outside the tested range (151.7 to 208.3 degC, axial runs included): 1.716 degC above the highest tested setting (coded +1.5).',
+    );
+    // without the extent the same setting at 1.4 is outside the factorial box
+    expect(outsideRange(two, [1.4, 0])).toHaveLength(1);
+  });
+
   it('degenerate: no factors gives no entries; a non-finite coded value throws', () => {
     expect(outsideRange([], [])).toEqual([]);
     expect(() => outsideRange(factors, [Number.POSITIVE_INFINITY, 1, 0])).toThrow(/finite coded value/);

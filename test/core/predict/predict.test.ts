@@ -219,3 +219,28 @@ describe('predict with squares: Montgomery 8th ed., Example 11.2 (central compos
     expect(p.fit).toBeCloseTo(ref.at([1, -0.5]).fit, 7);
   });
 });
+
+describe('predict: the tested range of a central composite design reaches its axial runs', () => {
+  // Montgomery 8th ed., Example 11.2: axial runs at coded +-1.414 (fixture typed in from memory)
+  const data = fixtureData('montgomery-8e-ex11-2-ccd-yield.csv', { factors: ['Time', 'Temperature'], response: 'Yield', levels: { Time: ['80', '90'], Temperature: ['170', '180'] } });
+  const model = analyze(data, { terms: parseTerms('quadratic', data.factors) }).model;
+
+  it('a setting at coded 1.4 on an axis is inside; 1.5 is outside, with the extrapolation note', () => {
+    expect(model.extent?.[0]).toBeCloseTo(1.414, 3);
+    // coded 1.4 of Time 80..90: 85 + 1.4 x 5 = 92 min (by hand)
+    const inside = predict(model, { Time: 92, Temperature: 175 });
+    expect(inside.outside).toBe(false);
+    expect(inside.messages.some((m) => /extrapolation/.test(m))).toBe(false);
+    // coded 1.5: 85 + 1.5 x 5 = 92.5 min
+    const out = predict(model, { Time: 92.5, Temperature: 175 });
+    expect(out.outside).toBe(true);
+    expect(out.outsideFactors.map((o) => o.name)).toEqual(['Time']);
+  });
+
+  it('a two-level fit of the same runs without the axial pair keeps the factorial box', () => {
+    const rows = data.coded.map((c, i) => ({ c, y: data.y[i] })).filter(({ c }) => Math.abs(c[0]) <= 1 + 1e-9 && Math.abs(c[1]) <= 1 + 1e-9);
+    const box = analyze({ ...data, coded: rows.map((r) => r.c), y: rows.map((r) => r.y), labels: rows.map((_, i) => String(i + 1)) }, { terms: [1, 2] }).model;
+    expect(box.extent).toEqual([1, 1]);
+    expect(predict(box, { Time: 92, Temperature: 175 }).outside).toBe(true);
+  });
+});

@@ -102,6 +102,11 @@ const designFragments = [
   'main effects are clear of two-factor interactions',
   'main effects are aliased with two-factor interactions',
   'cannot be told from the block differences',
+  'so they need numeric factors',
+  'lower means steadier predictions',
+  'before making the run',
+  'the response falls away in every direction',
+  'so do not move the process there on this result alone',
 ];
 
 describe('one wording: verdict and design sentences live only in src/core/text', () => {

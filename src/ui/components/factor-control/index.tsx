@@ -21,12 +21,14 @@ export type FactorControlProps = {
   readonly error: string | null;
   /** Reach of the slider in coded units (e.g. 1.5: half a range beyond each tested end). */
   readonly reach: number;
+  /** Half-width of the tested range in coded units: 1, or a central composite design's axial distance (core/predict/tested-extent.ts). */
+  readonly extent?: number;
   readonly onCoded: (x: number) => void;
   readonly onText: (text: string) => void;
   readonly onLevel: (label: string) => void;
 };
 
-export function FactorControl({ factor, index, value, text, coded, error, reach, onCoded, onText, onLevel }: FactorControlProps) {
+export function FactorControl({ factor, index, value, text, coded, error, reach, extent = 1, onCoded, onText, onLevel }: FactorControlProps) {
   if (factor.kind === 'categorical') {
     return (
       <div class="factor">
@@ -40,11 +42,13 @@ export function FactorControl({ factor, index, value, text, coded, error, reach,
     );
   }
   const id = `factor-${index}`;
-  const outside = isOutside(coded);
-  const low = settingText(toReal(factor, -1) as number, factor.unit);
-  const high = settingText(toReal(factor, 1) as number, factor.unit);
-  // The tested part of the track, drawn as a band: [-1, +1] within [-reach, +reach].
-  const band = `${((reach - 1) / (2 * reach)) * 100}%`;
+  const outside = isOutside(coded, extent);
+  // Axial ends are irrational (e.g. 1.414 coded): shown to 4 significant digits.
+  const end = (x: number) => settingText(extent === 1 ? (toReal(factor, x) as number) : Number((toReal(factor, x) as number).toPrecision(4)), factor.unit);
+  const low = end(-extent);
+  const high = end(extent);
+  // The tested part of the track, drawn as a band: [-extent, +extent] within [-reach, +reach].
+  const band = `${((reach - extent) / (2 * reach)) * 100}%`;
   return (
     <div class={outside ? 'factor outside' : 'factor'}>
       <label for={id} class="factor-name">

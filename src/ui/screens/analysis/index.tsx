@@ -8,7 +8,11 @@ import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
 import type { Analysis, RunDiagnostics, TermEstimate } from '../../../core/fit/analysis.ts';
 import type { Factor } from '../../../core/factor/factor.ts';
-import { termFactors, type Term } from '../../../core/model/term.ts';
+import { isSquare, termFactors, type Term } from '../../../core/model/term.ts';
+import { anovaByKind } from '../../../core/fit/anova-by-kind.ts';
+import { squareMeaning } from '../../../core/text/second-order-text.ts';
+import { SecondOrderSummary } from '../../components/second-order-summary/index.tsx';
+import { secondOrderView } from '../../models/second-order-view.ts';
 import { nameWithUnit } from '../../../core/study/name-with-unit.ts';
 import type { Response } from '../../../core/study/response.ts';
 import type { Store } from '../../../store/store.ts';
@@ -25,7 +29,7 @@ import { effectShown, lenthTableDifferences, lenthTermText } from '../../../core
 import { curvatureStatement } from '../../../core/text/verdict-text.ts';
 import { num, percent, setting, signed, termLabel, withUnit } from '../../lib/format.ts';
 import { AnalysisModel, twoFactorTerms } from '../../models/analysis-model.ts';
-import { MODEL_CHOICES, openStudyAnalysis, TRANSFORM_CHOICES } from '../../models/study-analysis-model.ts';
+import { modelChoicesFor, openStudyAnalysis, TRANSFORM_CHOICES } from '../../models/study-analysis-model.ts';
 import { interactionLines } from './interaction-lines.ts';
 import { hrefTo } from '../../app/routes.ts';
 import { boundNote, boxCoxText } from '../../../core/text/bound-text.ts';
@@ -50,6 +54,7 @@ function levelText(f: Factor, end: 0 | 1): string {
 /** What an effect means, in a sentence. */
 export function meaning(t: TermEstimate, factors: readonly Factor[], response: Response): string {
   const fs = termFactors(t.term).map((i) => factors[i]);
+  if (isSquare(t.term)) return squareMeaning(fs[0].name, response.name, t.coef, response.unit);
   if (fs.length === 1) {
     const f = fs[0];
     const size = withUnit(Math.abs(t.effect), response.unit, 3);
@@ -176,6 +181,8 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
   const { study } = d;
   const { response } = shown;
   const result = model.result.value;
+  const modelChoices = modelChoicesFor(study);
+  const so = result && result.ok && shown.settings.value.model === 'quadratic' ? secondOrderView(result, response) : null;
   return (
     <section class="analysis wide">
       <StudyHeader study={study} current="analysis" />
@@ -186,7 +193,7 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
         value={shown.index}
         onChoose={(i) => shared.show(i)}
       />
-      <ChoiceButtons label="Model" options={MODEL_CHOICES} value={shown.settings.value.model} onChoose={(c) => shared.chooseModel(shown.index, c)} />
+      <ChoiceButtons label="Model" options={modelChoices} value={shown.settings.value.model} onChoose={(c) => shared.chooseModel(shown.index, c)} />
       <ChoiceButtons label="Scale" options={TRANSFORM_CHOICES} value={shown.settings.value.transform} onChoose={(c) => shared.chooseTransform(shown.index, c)} />
       {response.lowerBound !== undefined && response.lowerBound !== null && (
         <p class="quiet" data-testid="bound-note">
@@ -199,7 +206,7 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
         </p>
       )}
       <p class="print-only">
-        Response: {response.name} · Model: {MODEL_CHOICES.find((c) => c.value === shown.settings.value.model)?.label}
+        Response: {response.name} · Model: {modelChoices.find((c) => c.value === shown.settings.value.model)?.label}
       </p>
       {result && !result.ok && (
         <div class="problem input" role="alert">
@@ -214,6 +221,11 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
           <p class="lead-figure part-lead">
             {result.analysis.n} runs used · average at the center {withUnit(result.analysis.intercept.coef, response.unit)}
           </p>
+          {so && (
+            <div class="part part-second-order">
+              {so.ok ? <SecondOrderSummary so={so.so} factors={study.factors} response={response} byKind={anovaByKind(result.analysis.anova, result.analysis.terms)} /> : <p class="quiet">{so.message}</p>}
+            </div>
+          )}
           <div class="part part-effects">
             <h3>Effects, largest first</h3>
             <p class="quiet">Each bar is the change in {response.name} from a factor's low to its high setting, the others held at their centers.</p>

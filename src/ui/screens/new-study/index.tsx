@@ -12,6 +12,10 @@ import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { CountStepper } from '../../components/count-stepper/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { hrefTo } from '../../app/routes.ts';
+import { SecondOrderFacts } from '../../components/second-order-facts/index.tsx';
+import { SecondOrderFields } from '../../components/second-order-fields/index.tsx';
+import { categoricalNames, type DesignFamily } from '../../models/second-order-choice.ts';
+import { secondOrderNeedsNumeric } from '../../../core/text/second-order-text.ts';
 import { BLOCK_CHOICES, choiceName, FORM_MAX_FACTORS, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
 import './style.css';
 
@@ -31,6 +35,12 @@ const FLOOR_CHOICES = [
   { value: 'zero' as const, label: 'Cannot be negative' },
   { value: 'other' as const, label: 'Another lowest value' },
 ];
+const FAMILY_CHOICES: readonly { value: DesignFamily; label: string }[] = [
+  { value: 'two-level', label: 'Two-level' },
+  { value: 'central composite', label: 'Central composite' },
+  { value: 'Box-Behnken', label: 'Box-Behnken' },
+];
+const SHOWN_WITH_FACTS = new Set<string | undefined>(['axial-outside', 'standing-caution']);
 const ORDER_CHOICES = [
   { value: 'random' as const, label: 'Randomized' },
   { value: 'standard' as const, label: 'Standard order' },
@@ -84,6 +94,8 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
   const preview = model.preview.value;
   const design = preview.design;
   const problem = model.problem.value;
+  const family = model.family.value;
+  const categorical = family === 'two-level' ? [] : categoricalNames(factors);
 
   useEffect(() => {
     void model.loadNoiseSources();
@@ -190,6 +202,10 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
 
       <fieldset class="group">
         <legend>Design</legend>
+        <ChoiceButtons label="Kind of design" options={FAMILY_CHOICES} value={family} onChoose={(v) => model.chooseFamily(v)} />
+        {categorical.length > 0 && <p class="field-error" role="alert">{secondOrderNeedsNumeric(categorical)}</p>}
+        {family === 'two-level' ? (
+          <>
         <ChoiceButtons label="Runs of the factorial" options={model.options.value.map((o) => ({ value: o.value, label: o.label }))} value={model.fraction.value} onChoose={(v) => model.chooseFraction(v)} />
         {factors.length >= 2 && factors.length < 4 && <p class="quiet field-hint">Fractions from the catalog start at 8 runs, so they need 4 factors or more.</p>}
         {!model.fractionOffered.value && <p class="field-error">{choiceName(model.fraction.value).replace(/^t/, 'T')} is not offered for {factors.length} factors; choose one of the above.</p>}
@@ -198,6 +214,20 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
         <div class="choice-compact">
           <ChoiceButtons label="Blocks per replicate" options={BLOCK_CHOICES.map((n) => ({ value: n, label: String(n) }))} value={model.blocks.value} onChoose={(n) => model.chooseBlocks(n)} />
         </div>
+          </>
+        ) : (
+          <SecondOrderFields
+            family={family}
+            axial={model.axial.value}
+            axialText={model.axialText.value}
+            blocks={model.soBlocks.value}
+            centerRuns={model.soCenterRuns.value}
+            onAxial={(v) => model.chooseAxial(v)}
+            onAxialText={(v) => model.setAxialText(v)}
+            onBlocks={(n) => model.chooseSecondOrderBlocks(n)}
+            onCenterRuns={(v) => model.setSecondOrderCenterRuns(v)}
+          />
+        )}
         <ChoiceButtons label="Run order" options={ORDER_CHOICES} value={model.randomize.value ? 'random' : 'standard'} onChoose={(v) => model.setRandomize(v === 'random')} />
         {model.randomize.value && (
           <div class="field">
@@ -226,6 +256,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
         )}
       </fieldset>
 
+      {family === 'two-level' && (
       <fieldset class="group plan-power-group">
         <legend>Will the plan find the effect?</legend>
         <p class="quiet">The power of the plan: how often its runs show an effect of the size that matters, given the run-to-run noise.</p>
@@ -255,6 +286,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
           {power.state === 'ready' ? power.words : power.message}
         </p>
       </fieldset>
+      )}
 
       <section class="plan-preview" aria-label="Preview of the plan" aria-live="polite">
         <h3>Preview</h3>
@@ -262,6 +294,9 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
           <>
             <p class="plan-runs">{design.runs.length} runs</p>
             <p class="plan-summary">{design.summary}</p>
+            {preview.secondOrder ? (
+              <SecondOrderFacts facts={preview.secondOrder} />
+            ) : (
             <dl class="plan-facts">
               <div>
                 <dt>Resolution</dt>
@@ -290,9 +325,11 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
                 <dd>{design.seed === null ? 'Standard order' : `Randomized, seed ${design.seed}`}</dd>
               </div>
             </dl>
+            )}
             {design.notes.length > 0 && (
               <ul class="warnings plan-notes">
-                {design.notes.map((n) => (
+                {/* A second-order plan's axial warnings and caution show with its facts above. */}
+                {design.notes.filter((_, i) => !preview.secondOrder || !SHOWN_WITH_FACTS.has(design.noteFacts[i]?.kind)).map((n) => (
                   <li key={n}>{n}</li>
                 ))}
               </ul>
@@ -309,7 +346,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
           {design ? (
             <>
               <span class="plan-bar-runs">{design.runs.length} runs</span>
-              <span class="plan-bar-res">{design.screening ? 'screening' : design.resolution === null ? 'full factorial' : `resolution ${romanResolution(design.resolution)}`}</span>
+              <span class="plan-bar-res">{family !== 'two-level' ? family : design.screening ? 'screening' : design.resolution === null ? 'full factorial' : `resolution ${romanResolution(design.resolution)}`}</span>
             </>
           ) : (
             'Not ready yet'

@@ -19,7 +19,7 @@ import { StudyHeader } from '../../components/study-header/index.tsx';
 import { num, signed, termLabel, withUnit } from '../../lib/format.ts';
 import { useHeightProperty } from '../../lib/use-height-property.ts';
 import { QuickCardModel, SLIDER_REACH } from '../../models/quick-card-model.ts';
-import { MODEL_CHOICES, openStudyAnalysis, TRANSFORM_CHOICES } from '../../models/study-analysis-model.ts';
+import { MODEL_CHOICES, openStudyAnalysis, QUADRATIC_CHOICE, TRANSFORM_CHOICES } from '../../models/study-analysis-model.ts';
 import './style.css';
 
 export type QuickCardScreenProps = { readonly store: Store; readonly studyId: string };
@@ -76,7 +76,7 @@ export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
   const p = result && result.ok ? result.prediction : null;
   const analysis = model.analysis.value;
   const transform = shown.settings.value.transform;
-  const modelLabel = (MODEL_CHOICES.find((c) => c.value === shown.settings.value.model)?.label ?? '') + (transform === 'none' ? '' : `, ${TRANSFORM_CHOICES.find((c) => c.value === transform)?.label.toLowerCase()} scale`);
+  const modelLabel = ([...MODEL_CHOICES, QUADRATIC_CHOICE].find((c) => c.value === shown.settings.value.model)?.label ?? '') + (transform === 'none' ? '' : `, ${TRANSFORM_CHOICES.find((c) => c.value === transform)?.label.toLowerCase()} scale`);
   return (
     <section class="quick">
       <StudyHeader study={study} current="quickCard" />
@@ -107,7 +107,8 @@ export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
           text={model.texts.value[i]}
           coded={model.coded.value[i]}
           error={model.fieldErrors.value[i]}
-          reach={SLIDER_REACH}
+          reach={Math.max(SLIDER_REACH, (analysis?.ok ? analysis.analysis.model.extent?.[i] ?? 1 : 1) + 0.1)}
+          extent={analysis?.ok ? analysis.analysis.model.extent?.[i] ?? 1 : 1}
           onCoded={(x) => model.setCoded(i, x)}
           onText={(t) => model.setText(i, t)}
           onLevel={(l) => model.setLevel(i, l)}

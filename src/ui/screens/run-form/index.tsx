@@ -7,6 +7,7 @@ import { useModel, useSignal } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
 import { RUN_KIND_NAMES } from '../../../core/design/design.ts';
 import type { Store } from '../../../store/store.ts';
+import { AxialWarning } from '../../components/axial-warning/index.tsx';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { DivergedNote } from '../../components/diverged-note/index.tsx';
 import { OtherTyping } from '../../components/other-typing/index.tsx';
@@ -62,7 +63,8 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
   const { study } = state;
   const planned = model.planned.value;
   const runCount = study.design.runs.length;
-  const kind = study.design.runs.find((r) => r.run === plannedRun)?.kind;
+  const plannedRow = study.design.runs.find((r) => r.run === plannedRun);
+  const kind = plannedRow?.kind;
   const busy = saveState === 'saving';
   const nextRun = study.design.runs.some((r) => r.run === plannedRun + 1) ? plannedRun + 1 : null;
 
@@ -73,6 +75,7 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
         Run {plannedRun} <span class="quiet">of {runCount}</span>
         {kind !== undefined && <span class="run-kind"> {RUN_KIND_NAMES[kind]}</span>}
       </h2>
+      {kind === 'axial' && plannedRow && <AxialWarning factors={study.factors} coded={plannedRow.coded} />}
       {state.current && (
         <p class="quiet">
           Logged {when(state.current.savedAt)} · {state.current.revisions} {state.current.revisions === 1 ? 'revision' : 'revisions'} kept. Saving adds a new revision; nothing is overwritten.
