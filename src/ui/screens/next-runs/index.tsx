@@ -17,6 +17,7 @@ import { num, setting, withUnit } from '../../lib/format.ts';
 import { NextRunsModel } from '../../models/next-runs-model.ts';
 import { openStudyAnalysis } from '../../models/study-analysis-model.ts';
 import { CAUTION } from '../../../core/predict/caution.ts';
+import { FoldoverPart, isFraction } from './foldover-part.tsx';
 import './style.css';
 
 export type NextRunsScreenProps = { readonly store: Store; readonly studyId: string };
@@ -194,6 +195,8 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
           </table>
         ))}
       </section>
+
+      {isFraction(study) && <FoldoverPart store={store} study={study} onAdded={() => Promise.all([shared.load(), model.refreshBlocks(study.id)]).then(() => undefined)} />}
 
       <section class="next-part" aria-labelledby="confirm-h">
         <h3 id="confirm-h">Confirmation runs</h3>
