@@ -2,6 +2,8 @@
 declare module 'jstat' {
   interface JStatStatic {
     gammaln(x: number): number;
+    /** Matrix inverse (Gauss-Jordan). */
+    inv(a: number[][]): number[][];
     betaln(a: number, b: number): number;
     ibeta(x: number, a: number, b: number): number;
     normal: {

@@ -12,6 +12,9 @@ import { goalOfResponse, parseGoal } from '../goal-option.ts';
 import { loadModelInput, modelOptionSpec, modelOptionUsage } from '../model-options.ts';
 import { analysisJson } from '../report/analysis-json.ts';
 import { analysisText } from '../report/analysis-text.ts';
+import { confirmationsJson, confirmationsText } from '../report/confirmations-report.ts';
+import { confirmationSets, judgeConfirmationSets } from '../../core/predict/confirmation-sets.ts';
+import { confirmationRowsOfFile } from '../confirmation-input.ts';
 import { secondOrderJson } from '../report/second-order-json.ts';
 import { secondOrderText } from '../report/second-order-text.ts';
 
@@ -39,8 +42,13 @@ export const analyze: Command = {
       goal = goalOfResponse(findResponse(study, values.response!).response);
     }
     const so = second ? secondOrderAnalysis(result.model, data.coded, goal) : null;
-    if (values.json) return JSON.stringify({ ...analysisJson(result), ...(so ? { secondOrder: secondOrderJson(so) } : {}) }, null, 2);
+    // Confirmation runs, kept out of the fit, judged against it (on its transformed scale when it has one).
+    const judged = judgeConfirmationSets(result.model, confirmationSets(confirmationRowsOfFile(positionals[0], values, result.model.factors)));
+    if (values.json) {
+      return JSON.stringify({ ...analysisJson(result), ...(so ? { secondOrder: secondOrderJson(so) } : {}), ...(judged.length > 0 ? { confirmations: confirmationsJson(judged, result.model.factors) } : {}) }, null, 2);
+    }
     const text = analysisText(result, { ...(data.unit ? { unit: data.unit } : {}), codingFromFileOrder });
-    return so ? `${text}\n\n${secondOrderText(so)}` : text;
+    const parts = [text, ...(so ? [secondOrderText(so)] : []), ...(judged.length > 0 ? [confirmationsText(judged, result.model.factors)] : [])];
+    return parts.join('\n\n');
   },
 };

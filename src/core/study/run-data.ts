@@ -40,6 +40,11 @@ function plural(n: number, one: string, many: string): string {
  */
 export const JUDGED_KINDS: readonly RunKind[] = ['path', 'confirmation'];
 
+/** The message for n path or confirmation runs left out of the fit. Example: judgedKeptOut(3) -> "3 path and confirmation runs kept out of the model (they are judged against it)". */
+export function judgedKeptOut(n: number): string {
+  return `${plural(n, 'path or confirmation run', 'path and confirmation runs')} kept out of the model (they are judged against it)`;
+}
+
 export interface RunDataOptions {
   /** Also fit the path and confirmation runs (JUDGED_KINDS); default false. */
   readonly includeJudged?: boolean;
@@ -93,7 +98,7 @@ export function responseDataFromRuns(study: StudyPlan, runs: readonly LoggedRun[
     labels.push(k === 1 ? String(run.plannedRun) : `${run.plannedRun}#${k}`);
   }
   const messages: string[] = [];
-  if (judged > 0) messages.push(`${plural(judged, 'path or confirmation run', 'path and confirmation runs')} kept out of the model (they are judged against it)`);
+  if (judged > 0) messages.push(judgedKeptOut(judged));
   if (excluded > 0) messages.push(`${plural(excluded, 'excluded run', 'excluded runs')} skipped`);
   if (missing > 0) messages.push(`${plural(missing, 'run', 'runs')} without a value for ${response.name} skipped`);
   if (repeated > 0) {

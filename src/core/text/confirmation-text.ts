@@ -2,7 +2,11 @@
  * The sentence that says what a set of confirmation runs found, for the screens and the exports
  * (see core/predict/confirm-runs.ts for the comparison and its source).
  */
+import type { Factor } from '../factor/factor.ts';
+import { toReal } from '../factor/coding.ts';
 import type { ConfirmationComparison } from '../predict/confirm-runs.ts';
+import type { JudgedSet } from '../predict/confirmation-sets.ts';
+import { formatSetting } from '../predict/parse-settings.ts';
 import { shortNumber } from './number-text.ts';
 
 /**
@@ -23,4 +27,30 @@ export function confirmationStatement(c: ConfirmationComparison): string {
   return c.outcome === 'confirmed'
     ? `Confirmed: ${mean}, lies inside ${where}.`
     : `Not confirmed: ${mean}, lies outside ${where}. The model does not hold at this setting; do not rely on its predictions here.`;
+}
+
+/**
+ * Where a set of confirmation runs was made, in words. Cost O(k).
+ * Example: "Confirmation runs 12 to 14 (block 3) at Oven temperature 190 °C, Line speed 2.5 m/min".
+ */
+export function confirmationSetPlace(j: JudgedSet, factors: readonly Factor[]): string {
+  const r = j.set.runs;
+  const runs = r.length === 1 ? `Confirmation run ${r[0]}` : `Confirmation runs ${r[0]} to ${r[r.length - 1]}`;
+  const at = factors.map((f, i) => `${f.name} ${formatSetting(toReal(f, j.set.coded[i]), f.kind === 'numeric' ? f.unit : undefined)}`).join(', ');
+  return `${runs} (block ${j.set.block}) at ${at}`;
+}
+
+/**
+ * A set's verdict in one line: its place, then the statement, the core's message, or that none is
+ * logged yet. Cost O(k).
+ * Example: "Confirmation runs 12 to 14 (block 3) at ...: Confirmed: the mean of the 3 confirmation runs, ...".
+ */
+export function confirmationSetLine(j: JudgedSet, factors: readonly Factor[]): string {
+  const what = j.comparison ? confirmationStatement(j.comparison) : j.problem !== null ? `Cannot judge: ${j.problem}` : 'None logged yet with a value for this response; log them to see the verdict.';
+  return `${confirmationSetPlace(j, factors)}: ${what}`;
+}
+
+/** The token of a set's verdict for files: confirmed, not-confirmed, no-noise, not-logged or cannot-judge. Example: "confirmed". */
+export function confirmationToken(j: JudgedSet): string {
+  return j.comparison ? j.comparison.outcome : j.problem !== null ? 'cannot-judge' : 'not-logged';
 }

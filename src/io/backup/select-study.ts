@@ -9,6 +9,7 @@ import { withAddedBlocks } from '../../core/study/added-block.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
 import { responseDataFromRuns } from '../../core/study/run-data.ts';
 import { currentRun, type LoggedRun, type RunRevision, type StudyRecord } from '../../core/study/study.ts';
+import { withAddedBlocks } from '../../core/study/added-block.ts';
 import { readBackupSync, type Backup } from './backup.ts';
 
 /** Text compared as a person means it: Unicode form C (a composed and a decomposed "é" agree), surrounding spaces ignored. */
@@ -28,7 +29,8 @@ function refuseSeveral(ref: string, found: readonly StudyRecord[], how: string):
  * Throws InputError when none matches (listing the studies) or when two or more match at the
  * first step that finds any (listing them with their ids, so the person can give one).
  * Example: with studies "Oven trial May" and "Oven trial June", "june" picks the second and
- * "oven" is refused, naming both.
+ * "oven" is refused, naming both. The study comes with its added blocks' runs in its plan
+ * (withAddedBlocks), so path and confirmation runs are known for what they are.
  */
 export function selectStudy(backup: Pick<Backup, 'payload'>, ref: string): StudyRecord {
   return withAddedBlocks(selectOwnStudy(backup, ref), backup.payload.blocks ?? []);
@@ -37,8 +39,10 @@ export function selectStudy(backup: Pick<Backup, 'payload'>, ref: string): Study
 function selectOwnStudy(backup: Pick<Backup, 'payload'>, ref: string): StudyRecord {
   const studies = backup.payload.studies;
   const key = nfc(ref);
+  // The plan as the app reads it: the study's runs with the runs of its added blocks (path, foldover, confirmation).
+  const whole = (s: StudyRecord) => withAddedBlocks(s, backup.payload.blocks ?? []);
   const byId = studies.find((s) => s.id === key);
-  if (byId) return byId;
+  if (byId) return whole(byId);
   const lower = key.toLowerCase();
   const steps: [string, (title: string) => boolean][] = [
     ['is the title of', (t) => t === key],
@@ -47,7 +51,7 @@ function selectOwnStudy(backup: Pick<Backup, 'payload'>, ref: string): StudyReco
   ];
   for (const [how, match] of steps) {
     const found = studies.filter((s) => match(nfc(s.title)));
-    if (found.length === 1) return found[0];
+    if (found.length === 1) return whole(found[0]);
     if (found.length > 1) refuseSeveral(ref, found, how);
   }
   const list = studies.map((s) => `"${s.title}" (${s.id})`).join(', ');

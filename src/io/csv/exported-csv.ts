@@ -11,6 +11,7 @@ import { InputError } from '../../core/errors.ts';
 import { parseNumber, toCoded } from '../../core/factor/coding.ts';
 import { defineFactors, type FactorSpec } from '../../core/factor/factor.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
+import { JUDGED_KINDS, judgedKeptOut } from '../../core/study/run-data.ts';
 import { cellNumber, isNonFiniteNumberText, responseMagnitudeProblem, whyNotANumber } from './cell-number.ts';
 import { bareColumnName, columnUnit, readTable, rowNumber, uniqueColumn, type Table } from './read-table.ts';
 
@@ -25,6 +26,7 @@ export interface ExportedCsvLayout {
   readonly excluded: number;
   readonly run: number;
   readonly block: number;
+  readonly kind: number;
 }
 
 /** The columns of a Trialbook export, or null when the table is not one. */
@@ -47,7 +49,7 @@ export function exportedCsvLayout(table: Table): ExportedCsvLayout | null {
   });
   const excluded = at('excluded');
   if (factors.length === 0 || excluded < 0 || at('run') < 0 || at('kind') < 0) return null;
-  return { factors, responses, excluded, run: at('run'), block: at('block') };
+  return { factors, responses, excluded, run: at('run'), block: at('block'), kind: at('kind') };
 }
 
 const round12 = (x: number) => Number(x.toPrecision(12));
@@ -132,8 +134,11 @@ export function exportedCsvResponseData(csvText: string, responseName: string, f
     : layout.factors;
   let excluded = 0;
   let missing = 0;
+  let judged = 0;
   const used: number[] = [];
   table.rows.forEach((_, r) => {
+    // Path and confirmation runs are judged against the model, never fitted into it (as in the app).
+    if ((JUDGED_KINDS as readonly string[]).includes(cell(table, r, layout.kind))) return void judged++;
     const ex = cell(table, r, layout.excluded).toLowerCase();
     if (ex === 'yes') return void excluded++;
     if (ex !== 'no' && ex !== '') throw new InputError(`${where(table, r, layout.excluded)}: needs yes or no, got "${table.rows[r][layout.excluded]}"`);
@@ -165,6 +170,7 @@ export function exportedCsvResponseData(csvText: string, responseName: string, f
     if (!Number.isInteger(b) || b < 1) throw new InputError(`${where(table, used[i], layout.block)}: the block needs a whole number from 1, got "${table.rows[used[i]][layout.block]}"`);
   });
   const messages: string[] = [...(table.messages ?? [])];
+  if (judged > 0) messages.push(judgedKeptOut(judged));
   if (excluded > 0) messages.push(`${excluded} excluded run${excluded === 1 ? '' : 's'} skipped`);
   if (missing > 0) messages.push(`${missing} run${missing === 1 ? '' : 's'} without a value for ${response.name} skipped`);
   const unit = columnUnit(table.header[response.value]);

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { analyze } from '../../../src/core/fit/analyze.ts';
 import { compareConfirmation } from '../../../src/core/predict/confirm-runs.ts';
 import { parseSettings } from '../../../src/core/predict/parse-settings.ts';
-import { confirmationStatement } from '../../../src/core/text/confirmation-text.ts';
+import { confirmationSetLine, confirmationSetPlace, confirmationStatement, confirmationToken } from '../../../src/core/text/confirmation-text.ts';
 import { fixtureData } from '../../helpers/fixtures.ts';
 
 // Montgomery, Design and Analysis of Experiments, 8th ed., section 6.8 data (2^2 + 5 center runs).
@@ -23,5 +23,21 @@ describe('confirmationStatement', () => {
   it('a saturated model: cannot judge, and says what to do', () => {
     const sat = analyze({ ...data, coded: data.coded.slice(0, 4), y: data.y.slice(0, 4), labels: data.labels.slice(0, 4), points: null }, { terms: [1, 2, 3] }).model;
     expect(confirmationStatement(compareConfirmation(sat, at, [41]))).toMatch(/^Cannot judge: .*Refit with fewer terms first\.$/);
+  });
+});
+
+describe('confirmation set lines (for reports and files)', () => {
+  const factors = [
+    { kind: 'numeric', name: 'Time', letter: 'A', low: 30, high: 40, unit: 'min' },
+    { kind: 'numeric', name: 'Temperature', letter: 'B', low: 150, high: 160 },
+  ] as const;
+  const set = { block: 2, runs: [10, 11, 12], coded: [1, 1], values: [] };
+  it('say where, and that none is logged yet', () => {
+    expect(confirmationSetLine({ set, comparison: null, problem: null }, factors)).toBe(
+      'Confirmation runs 10 to 12 (block 2) at Time 40 min, Temperature 160: None logged yet with a value for this response; log them to see the verdict.',
+    );
+    expect(confirmationToken({ set, comparison: null, problem: null })).toBe('not-logged');
+    expect(confirmationToken({ set, comparison: null, problem: 'x' })).toBe('cannot-judge');
+    expect(confirmationSetPlace({ set: { ...set, runs: [7] }, comparison: null, problem: null }, factors)).toMatch(/^Confirmation run 7 \(block 2\)/);
   });
 });

@@ -19,6 +19,8 @@ import { num, setting, withUnit } from '../../lib/format.ts';
 import { NextRunsModel } from '../../models/next-runs-model.ts';
 import { openStudyAnalysis } from '../../models/study-analysis-model.ts';
 import { CAUTION } from '../../../core/predict/caution.ts';
+import { FoldoverPart, isFraction } from './foldover-part.tsx';
+import { PathChart } from '../../components/path-chart/index.tsx';
 import './style.css';
 
 export type NextRunsScreenProps = { readonly store: Store; readonly studyId: string };
@@ -174,7 +176,9 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
           </>
         )}
         {model.pathPoints.value.map((pts, k) => (
-          <table class="path-table" key={k} aria-label={`Path runs ${pts[0]?.run ?? ''} to ${pts[pts.length - 1]?.run ?? ''}: observed against predicted`}>
+          <div key={k}>
+          {pts.some((p) => p.observed !== null) && <PathChart points={pts} response={`${response.name}${response.unit ? ` (${response.unit})` : ''}`} title={`Path runs ${pts[0]?.run ?? ''} to ${pts[pts.length - 1]?.run ?? ''}: observed and predicted ${response.name} by step`} />}
+          <table class="path-table" aria-label={`Path runs ${pts[0]?.run ?? ''} to ${pts[pts.length - 1]?.run ?? ''}: observed against predicted`}>
             <thead>
               <tr>
                 <th scope="col">Run</th>
@@ -194,8 +198,11 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
               ))}
             </tbody>
           </table>
+          </div>
         ))}
       </section>
+
+      {isFraction(study) && <FoldoverPart store={store} study={study} onAdded={() => Promise.all([shared.load(), model.refreshBlocks(study.id)]).then(() => undefined)} />}
 
       <section class="next-part" aria-labelledby="confirm-h">
         <h3 id="confirm-h">Confirmation runs</h3>

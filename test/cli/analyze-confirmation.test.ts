@@ -1,0 +1,137 @@
+/**
+ * The confirmation verdict in the analyze report, from a backup and from the CSV the app exports.
+ * The study is the INVENTED demo backup with three INVENTED confirmation runs added as a block at
+ * Oven temperature 200 °C, Line speed 3 m/min, Powder flow 40 g/min. The expected interval is
+ * computed independently here, y-hat +- t(0.975, df) s sqrt(1/m + x0'(X'X)^-1 x0) (Montgomery,
+ * Design and Analysis of Experiments, 8th ed., section 10.6, from memory), with t from jstat and
+ * the fit and (X'X)^-1 from a general-purpose regression library
+ * (ml-regression-multivariate-linear) over the runs the app fits.
+ */
+import { describe, expect, it } from 'vitest';
+import jStat from 'jstat';
+import MLR from 'ml-regression-multivariate-linear';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { analyze } from '../../src/cli/commands/analyze.ts';
+import { csv } from '../../src/cli/commands/csv.ts';
+import { readBackupSync, writeBackup, type BackupPayload } from '../../src/io/backup/backup.ts';
+import { backupResponseData } from '../../src/io/backup/select-study.ts';
+import { fixturePath } from '../helpers/fixtures.ts';
+
+const original = readFileSync(fixturePath('trialbook-demo-backup.json'), 'utf8');
+const STUDY = 'Invented demo: powder-coating cure trial';
+const READINGS = [93.1, 92.4, 94.0]; // Gloss, invented
+
+async function withConfirmation(): Promise<string> {
+  const b = readBackupSync(original);
+  const study = b.payload.studies[0];
+  const first = Math.max(...study.design.runs.map((r) => r.run)) + 1;
+  const block = Math.max(...study.design.runs.map((r) => r.block)) + 1;
+  const runs = READINGS.map((_, i) => ({ run: first + i, standardOrder: null, replicate: 1, block, originBlock: block, kind: 'confirmation' as const, coded: [1, 0, 0] }));
+  const revisions = READINGS.map((g, i) => ({
+    id: `00000000-0000-4000-8000-00000000000${i}`,
+    runId: `00000000-0000-4000-8000-00000000010${i}`,
+    studyId: study.id,
+    plannedRun: first + i,
+    rev: 1,
+    device: b.device,
+    parents: [],
+    restoredFrom: null,
+    savedAt: '2024-05-03T10:00:00.000Z',
+    actual: [200, 3, 40],
+    readings: [[70], [g]],
+    loggedAt: '2024-05-03T10:00:00.000Z',
+    operator: 'Shift A (invented)',
+    notes: '',
+    excluded: false,
+    reason: '',
+  }));
+  const payload = {
+    studies: b.payload.studies,
+    revisions: [...b.payload.revisions, ...revisions],
+    blocks: [{ id: '00000000-0000-4000-8000-000000000200', studyId: study.id, device: b.device, createdAt: '2024-05-03T09:00:00.000Z', purpose: 'confirmation', note: 'invented', runs }],
+  } as unknown as BackupPayload;
+  return writeBackup(payload, { device: b.device, exportedAt: '2024-05-03T11:00:00.000Z', scope: 'all' });
+}
+
+describe('analyze: the confirmation verdict', async () => {
+  const dir = mkdtempSync(join(tmpdir(), 'trialbook-'));
+  const backupFile = join(dir, 'with-confirmation.json');
+  const text = await withConfirmation();
+  writeFileSync(backupFile, text);
+
+  it('keeps the confirmation runs out of the fit: the same fit as without them', async () => {
+    const before = JSON.parse(await analyze.run([fixturePath('trialbook-demo-backup.json'), '--study', STUDY, '--response', 'Gloss', '--order', '1', '--json']));
+    const after = JSON.parse(await analyze.run([backupFile, '--study', STUDY, '--response', 'Gloss', '--order', '1', '--json']));
+    expect(after.n).toBe(before.n);
+    after.terms.forEach((t: { coef: number }, i: number) => expect(t.coef).toBeCloseTo(before.terms[i].coef, 12));
+    expect(after.warnings.join(' ')).toMatch(/3 path and confirmation runs kept out of the model/);
+    expect(before.confirmations).toBeUndefined();
+  });
+
+  it('JSON: the mean of 3 runs and the interval for the mean of 3 new runs, checked against a reference regression', async () => {
+    const out = JSON.parse(await analyze.run([backupFile, '--study', STUDY, '--response', 'Gloss', '--order', '1', '--json']));
+    expect(out.confirmations).toHaveLength(1);
+    const c = out.confirmations[0];
+    expect(c.runs).toEqual([12, 13, 14]);
+    expect(c.settings).toEqual({ 'Oven temperature': 200, 'Line speed': 3, 'Powder flow': 40 });
+    expect(c.m).toBe(3);
+    expect(c.mean).toBeCloseTo((93.1 + 92.4 + 94.0) / 3, 12);
+
+    // Reference: the main-effects fit of the runs the app uses, by ml-regression-multivariate-linear.
+    const data = backupResponseData(original, STUDY, 'Gloss');
+    const X = data.coded.map((x) => [...x]);
+    const reg = new MLR(X, data.y.map((y) => [y]));
+    const x0 = [1, 0, 0];
+    const fit = reg.predict(x0)[0];
+    const n = X.length;
+    const df = n - 4;
+    const resid = data.y.map((y, i) => y - reg.predict(X[i])[0]);
+    const s = Math.sqrt(resid.reduce((a, r) => a + r * r, 0) / df);
+    // x0'(X'X)^-1 x0 over the columns 1, A, B, C, by jstat's matrix inverse.
+    const A = X.map((r) => [1, ...r]);
+    const xtx = [0, 1, 2, 3].map((i) => [0, 1, 2, 3].map((j) => A.reduce((acc, r) => acc + r[i] * r[j], 0)));
+    const inv = jStat.inv(xtx) as number[][];
+    const v = [1, ...x0];
+    const q = v.reduce((acc, vi, i) => acc + vi * v.reduce((a2, vj, j) => a2 + inv[i][j] * vj, 0), 0);
+    const half = jStat.studentt.inv(0.975, df) * s * Math.sqrt(1 / 3 + q);
+    expect(c.predicted).toBeCloseTo(fit, 8);
+    expect(c.interval[0]).toBeCloseTo(fit - half, 8);
+    expect(c.interval[1]).toBeCloseTo(fit + half, 8);
+    expect(c.outcome).toBe(c.mean >= fit - half && c.mean <= fit + half ? 'confirmed' : 'not-confirmed');
+    expect(c.statement).toMatch(/^(Confirmed|Not confirmed): the mean of the 3 confirmation runs/);
+  });
+
+  it('text: a section of its own with the verdict and the caution', async () => {
+    const out = await analyze.run([backupFile, '--study', STUDY, '--response', 'Gloss', '--order', '1']);
+    expect(out).toMatch(/Confirmation runs \(kept out of the fit, judged against it\)\n {2}- Confirmation runs 12 to 14 \(block 2\) at Oven temperature 200 °C, Line speed 3 m\/min, Powder flow 40 g\/min: (Confirmed|Not confirmed)/);
+    expect(out).toMatch(/Caution\n {2}- A prediction is a statistical estimate/);
+  });
+
+  it('the CSV the app exports gives the same verdict', async () => {
+    const csvFile = join(dir, 'export.csv');
+    writeFileSync(csvFile, await csv.run([backupFile, '--study', STUDY]));
+    const fromBackup = JSON.parse(await analyze.run([backupFile, '--study', STUDY, '--response', 'Gloss', '--order', '1', '--json']));
+    const fromCsv = JSON.parse(await analyze.run([csvFile, '--response', 'Gloss', '--order', '1', '--json']));
+    expect(fromCsv.n).toBe(fromBackup.n);
+    expect(fromCsv.confirmations).toHaveLength(1);
+    expect(fromCsv.confirmations[0].mean).toBeCloseTo(fromBackup.confirmations[0].mean, 10);
+    expect(fromCsv.confirmations[0].interval[0]).toBeCloseTo(fromBackup.confirmations[0].interval[0], 8);
+    expect(fromCsv.confirmations[0].outcome).toBe(fromBackup.confirmations[0].outcome);
+  });
+
+  it('a confirmation row whose value is not a number is refused with its row and column (degenerate input)', async () => {
+    const csvFile = join(dir, 'bad.csv');
+    const good = await csv.run([backupFile, '--study', STUDY]);
+    const lines = good.split(/\r?\n/);
+    const header = lines[0].split(',');
+    const col = header.findIndex((h) => /^Gloss( \(GU\))?$/.test(h));
+    const i = lines.findIndex((l) => l.split(',')[4] === 'confirmation');
+    const cells = lines[i].split(',');
+    cells[col] = 'ninety';
+    lines[i] = cells.join(',');
+    writeFileSync(csvFile, lines.join('\n'));
+    await expect(analyze.run([csvFile, '--response', 'Gloss', '--order', '1'])).rejects.toThrow(/Gloss needs a number, got "ninety"/);
+  });
+});
