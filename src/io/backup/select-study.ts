@@ -9,7 +9,6 @@ import { withAddedBlocks } from '../../core/study/added-block.ts';
 import type { ResponseData } from '../../core/study/response-data.ts';
 import { responseDataFromRuns } from '../../core/study/run-data.ts';
 import { currentRun, type LoggedRun, type RunRevision, type StudyRecord } from '../../core/study/study.ts';
-import { withAddedBlocks } from '../../core/study/added-block.ts';
 import { readBackupSync, type Backup } from './backup.ts';
 
 /** Text compared as a person means it: Unicode form C (a composed and a decomposed "é" agree), surrounding spaces ignored. */
@@ -33,10 +32,6 @@ function refuseSeveral(ref: string, found: readonly StudyRecord[], how: string):
  * (withAddedBlocks), so path and confirmation runs are known for what they are.
  */
 export function selectStudy(backup: Pick<Backup, 'payload'>, ref: string): StudyRecord {
-  return withAddedBlocks(selectOwnStudy(backup, ref), backup.payload.blocks ?? []);
-}
-
-function selectOwnStudy(backup: Pick<Backup, 'payload'>, ref: string): StudyRecord {
   const studies = backup.payload.studies;
   const key = nfc(ref);
   // The plan as the app reads it: the study's runs with the runs of its added blocks (path, foldover, confirmation).
