@@ -79,7 +79,7 @@ const runtimePackagesAllowed: Record<string, RegExp> = {
   io: /^(papaparse)$/,
   store: /^(dexie)$/,
   cli: /^(node:.*)$/,
-  ui: /^(preact|preact\/.*|@preact\/signals|uplot|uplot\/dist\/uPlot\.min\.css|workbox-window)$/,
+  ui: /^(preact|preact\/.*|@preact\/signals|uplot|uplot\/dist\/uPlot\.min\.css|workbox-window|d3-contour)$/,
 };
 
 describe('layers', () => {
