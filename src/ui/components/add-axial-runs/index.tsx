@@ -13,6 +13,7 @@ import type { StudyAnalysis } from '../../models/study-analysis-model.ts';
 import { CautionBox } from '../caution-box/index.tsx';
 import { ChoiceButtons } from '../choice-buttons/index.tsx';
 import { CountStepper } from '../count-stepper/index.tsx';
+import { SaveOutcome } from '../save-outcome/index.tsx';
 import './style.css';
 
 export type AddAxialRunsProps = { readonly store: Store; readonly shared: StudyAnalysis };
@@ -36,16 +37,7 @@ export function AddAxialRuns({ store, shared }: AddAxialRunsProps) {
       <p class="quiet">
         Turns this two-level study into a central composite design, for a model with squares: runs on each axis and more center runs, added to the run sheet as a new block. The runs already logged are kept and used.
       </p>
-      {model.saved.value && (
-        <p class="saved-note" role="status">
-          {model.saved.value}
-        </p>
-      )}
-      {model.saveProblem.value && (
-        <p class="problem input" role="alert">
-          {model.saveProblem.value}
-        </p>
-      )}
+      <SaveOutcome saved={model.saved.value} problem={model.saveProblem.value} />
       {existing.length > 0 ? (
         !model.saved.value && (
           <p class="quiet" data-testid="axial-done">

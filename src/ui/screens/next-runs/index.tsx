@@ -21,6 +21,7 @@ import { openStudyAnalysis } from '../../models/study-analysis-model.ts';
 import { CAUTION } from '../../../core/predict/caution.ts';
 import { FoldoverPart, isFraction } from './foldover-part.tsx';
 import { PathChart } from '../../components/path-chart/index.tsx';
+import { SaveOutcome } from '../../components/save-outcome/index.tsx';
 import './style.css';
 
 export type NextRunsScreenProps = { readonly store: Store; readonly studyId: string };
@@ -59,16 +60,7 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
           {model.modelProblem.value} Log more runs, then come back here.
         </p>
       )}
-      {model.saved.value && (
-        <p class="saved-note" role="status">
-          {model.saved.value}
-        </p>
-      )}
-      {model.saveProblem.value && (
-        <p class="problem input" role="alert">
-          {model.saveProblem.value}
-        </p>
-      )}
+      <SaveOutcome saved={model.saved.value} problem={model.saveProblem.value} />
 
       <section class="next-part" aria-labelledby="solve-h">
         <h3 id="solve-h">Solve for a target</h3>
