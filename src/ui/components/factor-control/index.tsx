@@ -1,14 +1,17 @@
 /**
  * One factor's setting on the quick card: a numeric factor by a slider (in coded units, so a log
- * scale spreads evenly) and a number field in real units with the coded value beside it; a
+ * scale spreads evenly) and a number field in real units with the coded value beside it (and a
+ * sign button where the setting may be negative: core/factor/negative-allowed.ts); a
  * categorical factor by its two levels as two buttons.
  */
 import { toReal } from '../../../core/factor/coding.ts';
 import type { Factor } from '../../../core/factor/factor.ts';
+import { negativeAllowed } from '../../../core/factor/negative-allowed.ts';
 import { isOutside } from '../../../core/predict/outside-range.ts';
 import type { Setting } from '../../../core/study/study.ts';
 import { coded as codedText, setting as settingText } from '../../lib/format.ts';
 import { ChoiceButtons } from '../choice-buttons/index.tsx';
+import { SignToggle } from '../sign-toggle/index.tsx';
 import './style.css';
 
 export type FactorControlProps = {
@@ -66,6 +69,7 @@ export function FactorControl({ factor, index, value, text, coded, error, reach,
           onInput={(e) => onText((e.currentTarget as HTMLInputElement).value)}
         />
         {factor.unit && <span class="unit">{factor.unit}</span>}
+        {negativeAllowed({ kind: 'setting', factor }) && <SignToggle text={text} what={factor.name} controls={id} onText={onText} />}
         <span class="coded" data-testid={`coded-${index}`}>
           coded {codedText(coded)}
         </span>

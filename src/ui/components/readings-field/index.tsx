@@ -3,9 +3,11 @@
  * no space key, so each repeat reading gets its own box), a button to add another, and their
  * mean when there are several.
  */
+import { negativeAllowed } from '../../../core/factor/negative-allowed.ts';
 import { nameWithUnit } from '../../../core/study/name-with-unit.ts';
 import type { Response } from '../../../core/study/response.ts';
 import { withUnit } from '../../lib/format.ts';
+import { SignToggle } from '../sign-toggle/index.tsx';
 import './style.css';
 
 export type ReadingsFieldProps = {
@@ -22,29 +24,35 @@ export type ReadingsFieldProps = {
 
 export function ReadingsField({ response, index, boxes, mean, error, disabled, onReading, onAdd, onRemove }: ReadingsFieldProps) {
   const name = nameWithUnit(response.name, response.unit);
+  // A sign button where a reading may be negative (no lower bound at or above zero).
+  const signed = negativeAllowed({ kind: 'reading', response });
   return (
     <fieldset class="readings" disabled={disabled}>
       <legend>{name}</legend>
-      {boxes.map((b, j) => (
-        <div class="reading" key={j}>
-          <input
-            class="num"
-            type="text"
-            inputMode="decimal"
-            autocomplete="off"
-            aria-label={boxes.length === 1 ? `${response.name} reading` : `${response.name} reading ${j + 1}`}
-            id={`reading-${index}-${j}`}
-            value={b}
-            aria-invalid={error ? true : undefined}
-            onInput={(e) => onReading(j, (e.currentTarget as HTMLInputElement).value)}
-          />
-          {boxes.length > 1 && (
-            <button type="button" class="btn ghost square" aria-label={`Remove ${response.name} reading ${j + 1}`} onClick={() => onRemove(j)}>
-              ✕
-            </button>
-          )}
-        </div>
-      ))}
+      {boxes.map((b, j) => {
+        const what = boxes.length === 1 ? `${response.name} reading` : `${response.name} reading ${j + 1}`;
+        return (
+          <div class="reading" key={j}>
+            <input
+              class="num"
+              type="text"
+              inputMode="decimal"
+              autocomplete="off"
+              aria-label={what}
+              id={`reading-${index}-${j}`}
+              value={b}
+              aria-invalid={error ? true : undefined}
+              onInput={(e) => onReading(j, (e.currentTarget as HTMLInputElement).value)}
+            />
+            {signed && <SignToggle text={b} what={what} controls={`reading-${index}-${j}`} onText={(t) => onReading(j, t)} />}
+            {boxes.length > 1 && (
+              <button type="button" class="btn ghost square" aria-label={`Remove ${response.name} reading ${j + 1}`} onClick={() => onRemove(j)}>
+                ✕
+              </button>
+            )}
+          </div>
+        );
+      })}
       <div class="readings-foot">
         <button type="button" class="btn ghost" onClick={onAdd}>
           + Another reading

@@ -1,11 +1,13 @@
 /**
  * The quick card: what the fitted model predicts at the settings on the sliders, before anyone
  * changes a setting on the machine. The predicted value with its 95% intervals stays at the top
- * while the sliders move; the caution is always shown with it.
+ * while the sliders move, in a dense block (so the first setting shows below it on a small phone);
+ * the caution is always shown with it, in one short line with the full text a tap away.
  */
 import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
 import type { Prediction } from '../../../core/predict/predict.ts';
+import { CAUTION_MORE, CAUTION_SHORT } from '../../../core/text/caution-short.ts';
 import { intervalText } from '../../../core/text/interval-text.ts';
 import type { Response } from '../../../core/study/response.ts';
 import type { Store } from '../../../store/store.ts';
@@ -95,7 +97,8 @@ export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
       {/* The prediction and the caution stay on screen together while the sliders move. */}
       <div class="sticky-top" ref={stickyRef}>
         {p && <PredictionPanel p={p} response={response} />}
-        <CautionBox lines={model.caution.value} compact />
+        {/* The caution in one short line that stays visible; its full text is one tap on that line. */}
+        <CautionBox lines={model.caution.value} short={{ line: CAUTION_SHORT, more: CAUTION_MORE }} />
       </div>
       <h3>Settings</h3>
       {study.factors.map((f, i) => (

@@ -6,6 +6,7 @@
 import { useModel, useSignal } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
 import { RUN_KIND_NAMES } from '../../../core/design/design.ts';
+import { negativeAllowed } from '../../../core/factor/negative-allowed.ts';
 import type { Store } from '../../../store/store.ts';
 import { AxialWarning } from '../../components/axial-warning/index.tsx';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
@@ -14,6 +15,7 @@ import { OtherTyping } from '../../components/other-typing/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
 import { ReadingsField } from '../../components/readings-field/index.tsx';
 import { RunHistory } from '../../components/run-history/index.tsx';
+import { SignToggle } from '../../components/sign-toggle/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { setting, when } from '../../lib/format.ts';
 import { fileName, mimeOf, saveText } from '../../lib/save-file.ts';
@@ -157,6 +159,7 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
                       onInput={(e) => model.setActual(i, (e.currentTarget as HTMLInputElement).value)}
                     />
                     {f.unit && <span class="unit">{f.unit}</span>}
+                    {negativeAllowed({ kind: 'setting', factor: f }) && <SignToggle text={typed} what={`${f.name} actual`} controls={`actual-${i}`} disabled={busy} onText={(t) => model.setActual(i, t)} />}
                   </div>
                 ) : (
                   <ChoiceButtons label={`${f.name} actual`} hideLabel options={f.levels.map((l) => ({ value: l, label: l }))} value={typed} onChoose={(v) => model.setActual(i, v)} />
