@@ -1,12 +1,18 @@
 /**
  * A residual chart: each run's residual (observed minus fitted value) against something else,
- * the fitted value or the run's place in the run order, with a line at zero. Runs the caller
- * marks are ringed and named on the chart; the caller says so in words as well, since a ring
- * alone is easy to miss. A table of the same numbers, folded away under the chart, serves a
- * screen reader. Drawn with uPlot, loaded only when the chart is first shown.
+ * the fitted value or the run's place in the run order, with a line at zero. Every point is named
+ * by its run beside it, placed so that no two names overlap (place-labels.ts); the runs whose
+ * name found no room are listed under the chart, so no run goes unnamed. Runs the caller marks
+ * are ringed, named first and in bold; the caller says so in words as well, since a ring alone
+ * is easy to miss. A table of the same numbers, folded away under the chart, serves a screen
+ * reader. Drawn with uPlot, loaded only when the chart is first shown; the names are elements
+ * over the plot (their boxes are the ones the placement chose).
  */
+import { useSignal } from '@preact/signals';
+import type UPlotType from 'uplot';
 import { useUplot } from '../../lib/use-uplot.ts';
 import { num } from '../../lib/format.ts';
+import { placeLabels, type Box, type LabelRequest } from './place-labels.ts';
 import './style.css';
 
 export type ResidualChartProps = {
@@ -37,9 +43,55 @@ const DOT = '#1d5fa8';
 const MARK = '#b4501a';
 /** Tick labels with a true minus sign, as everywhere else in the app. */
 const tickText = (_u: unknown, splits: number[]) => splits.map((v) => num(v));
+/** The run names' font and line height (CSS px); style.css sets the same on .run-label. */
+const LABEL_FONT = 'bold 14px system-ui, sans-serif';
+const LABEL_HEIGHT = 18;
+/** Radii in CSS px: a point's dot (size 12), a mark's ring (11, drawn 3 wide), and a name's distance from the centre. */
+const DOT_R = 7;
+const RING_R = 13;
+const LABEL_GAP = 14;
+
+type Point = ResidualChartProps['points'][number];
+
+/**
+ * Names the points over the plot without overlaps: marked runs first, then the rest by the size
+ * of their residual. Returns the points left unnamed, in that order.
+ */
+function nameRuns(u: UPlotType, sorted: readonly Point[]): Point[] {
+  const over = u.over;
+  for (const old of over.querySelectorAll('.run-label')) old.remove();
+  const at = sorted.map((p) => ({ p, x: u.valToPos(p.x, 'x'), y: u.valToPos(p.residual, 'y') }));
+  const order = [...at].sort((a, b) => Number(b.p.marked) - Number(a.p.marked) || Math.abs(b.p.residual) - Math.abs(a.p.residual));
+  const ctx = u.ctx;
+  ctx.save();
+  ctx.font = LABEL_FONT;
+  const requests: LabelRequest[] = order.map(({ p, x, y }, i) => ({ id: String(i), x, y, w: Math.ceil(ctx.measureText(p.label).width) + 2, h: LABEL_HEIGHT }));
+  ctx.restore();
+  const circle = (x: number, y: number, r: number): Box => ({ x: x - r, y: y - r, w: 2 * r, h: 2 * r });
+  const bounds: Box = { x: 0, y: 0, w: over.clientWidth, h: over.clientHeight };
+  const layout = placeLabels(requests, {
+    bounds,
+    gap: LABEL_GAP,
+    keepClear: at.filter((a) => a.p.marked).map((a) => circle(a.x, a.y, RING_R)),
+    avoid: at.map((a) => circle(a.x, a.y, DOT_R)),
+  });
+  for (const { id, box } of layout.placed) {
+    const { p } = order[Number(id)];
+    const el = document.createElement('span');
+    el.className = p.marked ? 'run-label marked' : 'run-label';
+    el.textContent = p.label;
+    el.style.left = `${box.x}px`;
+    el.style.top = `${box.y}px`;
+    el.style.width = `${box.w}px`;
+    over.append(el);
+  }
+  return layout.left.map((id) => order[Number(id)].p);
+}
 
 export function ResidualChart({ points, title, xLabel, yLabel, xColumn, caption, order }: ResidualChartProps) {
   const key = JSON.stringify([points, xLabel, yLabel, order]);
+  // The runs whose names found no room on the chart, listed under it.
+  const unnamed = useSignal<readonly Point[]>([]);
   const { box, state } = useUplot((UPlot, el) => {
     const font = '16px system-ui, sans-serif';
     // uPlot wants x ascending: sort a copy, keeping each point's label and mark.
@@ -95,26 +147,19 @@ export function ResidualChart({ points, title, xLabel, yLabel, xColumn, caption,
           ],
           draw: [
             (u) => {
-              // Marked runs: a ring and the run's name beside it.
+              // Marked runs: a ring (their names come with the others').
               const ctx = u.ctx;
               ctx.save();
               ctx.strokeStyle = MARK;
-              ctx.fillStyle = MARK;
               ctx.lineWidth = 3 * devicePixelRatio;
-              ctx.font = `bold ${Math.round(15 * devicePixelRatio)}px system-ui, sans-serif`;
-              const mid = u.bbox.left + u.bbox.width * 0.6;
               sorted.forEach((p, i) => {
                 if (!p.marked) return;
-                const x = u.valToPos(xs[i], 'x', true);
-                const y = u.valToPos(ys[i], 'y', true);
                 ctx.beginPath();
-                ctx.arc(x, y, 11 * devicePixelRatio, 0, 2 * Math.PI);
+                ctx.arc(u.valToPos(xs[i], 'x', true), u.valToPos(ys[i], 'y', true), 11 * devicePixelRatio, 0, 2 * Math.PI);
                 ctx.stroke();
-                const right = x < mid;
-                ctx.textAlign = right ? 'left' : 'right';
-                ctx.fillText(`Run ${p.label}`, x + (right ? 15 : -15) * devicePixelRatio, y + 5 * devicePixelRatio);
               });
               ctx.restore();
+              unnamed.value = nameRuns(u, sorted);
             },
           ],
         },
@@ -128,6 +173,18 @@ export function ResidualChart({ points, title, xLabel, yLabel, xColumn, caption,
       <div ref={box} class="chart-box" role="img" aria-label={`${title}, ${points.length} runs`} />
       {state.value === 'loading' && <p class="quiet">Drawing the chart…</p>}
       {state.value === 'failed' && <p class="quiet">The chart could not be drawn here; the table below has the same values.</p>}
+      {state.value === 'ready' && (
+        <p class="run-names">
+          Each point is named by its run.
+          {unnamed.value.length > 0 && (
+            <>
+              {' '}
+              No room on the chart for {unnamed.value.length === 1 ? 'run' : 'runs'}{' '}
+              <span data-testid="unnamed-runs">{unnamed.value.map((p) => `${p.label} (${p.residualShown})`).join(', ')}</span>.
+            </>
+          )}
+        </p>
+      )}
       <figcaption>{caption}</figcaption>
       <details class="residual-numbers">
         <summary>The numbers behind this chart</summary>
