@@ -54,8 +54,9 @@ const LABEL_GAP = 14;
 type Point = ResidualChartProps['points'][number];
 
 /**
- * Names the points over the plot without overlaps: marked runs first, then the rest by the size
- * of their residual. Returns the points left unnamed, in that order.
+ * Names the points over the plot without overlaps, never over a point and never nearer another
+ * point than its own: marked runs first, then the rest by the size of their residual. Returns
+ * the points left unnamed, in that order.
  */
 function nameRuns(u: UPlotType, sorted: readonly Point[]): Point[] {
   const over = u.over;
@@ -72,8 +73,8 @@ function nameRuns(u: UPlotType, sorted: readonly Point[]): Point[] {
   const layout = placeLabels(requests, {
     bounds,
     gap: LABEL_GAP,
-    keepClear: at.filter((a) => a.p.marked).map((a) => circle(a.x, a.y, RING_R)),
-    avoid: at.map((a) => circle(a.x, a.y, DOT_R)),
+    keepClear: at.map((a) => circle(a.x, a.y, a.p.marked ? RING_R : DOT_R)),
+    points: at,
   });
   for (const { id, box } of layout.placed) {
     const { p } = order[Number(id)];
@@ -82,7 +83,6 @@ function nameRuns(u: UPlotType, sorted: readonly Point[]): Point[] {
     el.textContent = p.label;
     el.style.left = `${box.x}px`;
     el.style.top = `${box.y}px`;
-    el.style.width = `${box.w}px`;
     over.append(el);
   }
   return layout.left.map((id) => order[Number(id)].p);
@@ -179,7 +179,7 @@ export function ResidualChart({ points, title, xLabel, yLabel, xColumn, caption,
           {unnamed.value.length > 0 && (
             <>
               {' '}
-              No room on the chart for {unnamed.value.length === 1 ? 'run' : 'runs'}{' '}
+              No room on the chart for {unnamed.value.length === 1 ? 'run' : 'runs (largest residual first)'}{' '}
               <span data-testid="unnamed-runs">{unnamed.value.map((p) => `${p.label} (${p.residualShown})`).join(', ')}</span>.
             </>
           )}

@@ -4,9 +4,10 @@
  * "An empirical study of algorithms for point-feature label placement", ACM Transactions on
  * Graphics 14(3), 1995, whose simplest method this is). Each label, in the order given (the
  * caller puts the most important first), takes the first of eight spots around its point that
- * stays inside the plot, overlaps no label already placed and covers no marked point; among
- * those, a spot covering fewer plain points wins. A label with no such spot is left out, and the
- * caller lists it beside the chart so that no run goes unnamed.
+ * stays inside the plot, overlaps no label already placed, covers no point, and lies nearer its
+ * own point than any other point (so a reader can tell whose name it is); among those, a spot
+ * touching fewer areas to avoid wins. A label with no such spot is left out, and the caller lists
+ * it beside the chart so that no run goes unnamed.
  * Cost O(n^2 * 8) for n labels and points: a chart has at most a few hundred runs.
  * Pure geometry in CSS pixels; no DOM.
  */
@@ -36,8 +37,10 @@ export type PlaceOptions = {
   readonly bounds: Box;
   /** Distance from the point's centre to the label's nearest edge (clear of its ring). */
   readonly gap: number;
-  /** Areas a label must never cover (the rings of marked points). */
+  /** Areas a label must never cover (the points, and the rings of marked points). */
   readonly keepClear?: readonly Box[];
+  /** Every point's centre: a label may not lie nearer to another point than to its own. */
+  readonly points?: readonly { readonly x: number; readonly y: number }[];
   /** Areas a label should avoid covering when it can (plain points). */
   readonly avoid?: readonly Box[];
 };
@@ -46,6 +49,13 @@ export type PlaceOptions = {
 export function overlaps(a: Box, b: Box): boolean {
   if (!(a.w > 0 && a.h > 0 && b.w > 0 && b.h > 0)) return false;
   return a.x < b.x + b.w && b.x < a.x + a.w && a.y < b.y + b.h && b.y < a.y + a.h;
+}
+
+/** Distance from a point to the nearest point of a box (0 inside it). */
+export function distanceToBox(x: number, y: number, b: Box): number {
+  const dx = Math.max(b.x - x, 0, x - (b.x + b.w));
+  const dy = Math.max(b.y - y, 0, y - (b.y + b.h));
+  return Math.hypot(dx, dy);
 }
 
 function inside(a: Box, b: Box): boolean {
@@ -76,7 +86,7 @@ function spots(r: LabelRequest, gap: number): Box[] {
  * first goes right of it ({ x: 110, y: 92 }), the second left ({ x: 50, y: 92 }), none left out.
  */
 export function placeLabels(requests: readonly LabelRequest[], options: PlaceOptions): LabelLayout {
-  const { bounds, gap, keepClear = [], avoid = [] } = options;
+  const { bounds, gap, keepClear = [], avoid = [], points = [] } = options;
   const placed: { id: string; box: Box }[] = [];
   const left: string[] = [];
   for (const r of requests) {
@@ -89,6 +99,8 @@ export function placeLabels(requests: readonly LabelRequest[], options: PlaceOpt
     for (const s of spots(r, gap)) {
       if (!inside(s, bounds)) continue;
       if (placed.some((p) => overlaps(p.box, s)) || keepClear.some((k) => overlaps(k, s))) continue;
+      const own = distanceToBox(r.x, r.y, s);
+      if (points.some((q) => distanceToBox(q.x, q.y, s) < own)) continue;
       const cost = avoid.reduce((c, a) => c + (overlaps(a, s) ? 1 : 0), 0);
       if (cost < bestCost) (best = s), (bestCost = cost);
       if (cost === 0) break;
