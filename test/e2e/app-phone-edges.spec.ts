@@ -33,7 +33,10 @@ function offsetStudy(): BackupPayload {
   return { studies: [study], revisions };
 }
 
-/** INVENTED: the demo's 2^3 replicated four times (32 runs), so that every fitted value is shared by four runs and their names crowd. */
+/**
+ * INVENTED: the demo's 2^3 replicated four times (32 runs), so that every fitted value is shared
+ * by four runs and their names crowd; run 13 reads 2.5 µm high, so it stands out and is ringed.
+ */
 function crowdedStudy(): BackupPayload {
   const template = backup.payload.revisions.find((r) => r.rev === 1 && !r.excluded)!;
   const runs = [];
@@ -46,7 +49,7 @@ function crowdedStudy(): BackupPayload {
       const coded = [0, 1, 2].map((k) => (((s - 1) >> k) & 1 ? 1 : -1));
       runs.push({ run: n, standardOrder: s, replicate: rep, block: 1, originBlock: 1, kind: 'factorial' as const, coded });
       // Invented readings: a plane plus a small fixed wobble per run.
-      const wobble = Math.sin(n * 12.9898) * 0.3;
+      const wobble = Math.sin(n * 12.9898) * 0.3 + (n === 13 ? 2.5 : 0);
       revisions.push({
         ...template,
         id: `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`,
@@ -78,10 +81,14 @@ async function checkRunNames(chart: Locator, runs: number) {
       expect(overlap, `run names ${i} and ${j} overlap: ${JSON.stringify([a, b])}`).toBe(false);
     }
   }
+  // A run that stands out is named first, so it is always on the chart, in its own style.
+  const marked = await chart.locator('.residual-table tr.marked th').allTextContents();
+  const markedNames = await chart.locator('.run-label.marked').allTextContents();
+  expect(markedNames.sort()).toEqual(marked.map((t) => t.replace(' (stands out)', '')).sort());
   const unnamed = chart.getByTestId('unnamed-runs');
   const listed = (await unnamed.count()) === 0 ? 0 : (await unnamed.textContent())!.split(', ').length;
   expect(boxes.length + listed).toBe(runs);
-  return { named: boxes.length, listed };
+  return { named: boxes.length, listed, marked: marked.length };
 }
 
 for (const size of [
@@ -212,7 +219,8 @@ for (const size of [
       await expect(charts.first().locator('.residual-table tbody tr')).toHaveCount(32);
       for (let i = 0; i < 2; i++) {
         await charts.nth(i).scrollIntoViewIfNeeded();
-        const { named, listed } = await checkRunNames(charts.nth(i), 32);
+        const { named, listed, marked } = await checkRunNames(charts.nth(i), 32);
+        expect(marked).toBe(1); // run 13
         console.log(`crowded residual chart ${i + 1} at ${size.width} px: ${named} runs named on the chart, ${listed} listed under it`);
       }
       await charts.first().screenshot({ path: join(shots, `trialbook-residuals-crowded-${size.width}.png`) });
