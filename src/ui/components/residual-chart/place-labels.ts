@@ -1,8 +1,8 @@
 /**
- * Where to write the names of marked points on a chart so that no two names overlap: a greedy
+ * Where to write the names of points on a chart so that no two names overlap: a greedy
  * placement (common practice in map and chart labelling; cf. Christensen, Marks and Shieber,
  * "An empirical study of algorithms for point-feature label placement", ACM Transactions on
- * Graphics 14(3), 1995, whose simplest method this is). Each label, in the order given (the
+ * Graphics 14(3), 1995, from memory: the simplest method it compares). Each label, in the order given (the
  * caller puts the most important first), takes the first of eight spots around its point that
  * stays inside the plot, overlaps no label already placed, covers no point, and lies nearer its
  * own point than any other point (so a reader can tell whose name it is); among those, a spot
