@@ -70,30 +70,36 @@ function typed(x: number): string {
 }
 
 /**
- * The entry a response starts with: its goal as the study records it, and values spanning what
- * was logged for it (a starting choice of this tool, for the person to change): maximize,
- * acceptable = the lowest logged value, ideal = the highest; minimize, the mirror image; a
- * target T, lowest and highest acceptable at T -/+ the largest distance of a logged value from T
- * (so every logged value lies inside). Values are rounded to 4 significant digits. Where the
- * logged values cannot give two different numbers (none, or all equal to each other or to T),
- * the value fields start empty for the person to fill. Importance and shapes start at 1.
+ * The entry a response starts with: its goal as the study records it (or `goal`, when the person
+ * picks another), and values spanning what was logged for it (a starting choice of this tool, for
+ * the person to change): maximize, acceptable = the lowest logged value, ideal = the highest;
+ * minimize, the mirror image; a target T (the study's, else the middle of the logged values),
+ * lowest and highest acceptable at T -/+ the largest distance of a logged value from T (so every
+ * logged value lies inside). Values are rounded to 4 significant digits. Where the logged values
+ * cannot give two different numbers (none, or all equal to each other or to T), the value fields
+ * start empty for the person to fill. Importance and shapes start at 1; 'ignore' keeps the
+ * values of the study's goal.
  * Cost O(n). Example: defaultDesirabilityEntry({ name: 'Gloss', goal: 'maximize' }, [71, 88, 80])
  * -> goal 'max', acceptable '71', ideal '88'.
  */
-export function defaultDesirabilityEntry(response: Response, logged: readonly number[]): DesirabilityEntry {
+export function defaultDesirabilityEntry(response: Response, logged: readonly number[], goal?: DesirabilityGoalChoice): DesirabilityEntry {
   const ys = logged.filter((y) => Number.isFinite(y));
   const lo = ys.length ? Math.min(...ys) : NaN;
   const hi = ys.length ? Math.max(...ys) : NaN;
   const base = { highest: '', weight: '1', shape: '1', shapeAbove: '1' };
-  if (response.goal === 'target' && response.target !== undefined && Number.isFinite(response.target)) {
-    const T = response.target;
+  const studyTarget = response.goal === 'target' && response.target !== undefined && Number.isFinite(response.target) ? response.target : null;
+  const studyGoal: DesirabilityGoalChoice = studyTarget !== null ? 'target' : response.goal === 'minimize' ? 'min' : 'max';
+  const want = goal ?? studyGoal;
+  if (want === 'ignore') return { ...defaultDesirabilityEntry(response, logged, studyGoal), goal: 'ignore' };
+  if (want === 'target') {
+    const T = studyTarget ?? (ys.length ? Number(((lo + hi) / 2).toPrecision(4)) : NaN);
+    if (!Number.isFinite(T)) return { ...base, goal: 'target', acceptable: '', ideal: '' };
     const half = ys.length ? Math.max(hi - T, T - lo) : 0;
     const lowest = Number((T - half).toPrecision(4));
     const highest = Number((T + half).toPrecision(4));
     if (!(half > 0 && lowest < T && T < highest)) return { ...base, goal: 'target', acceptable: '', ideal: typed(T) };
     return { ...base, goal: 'target', acceptable: typed(lowest), ideal: typed(T), highest: typed(highest) };
   }
-  const goal = response.goal === 'minimize' ? 'min' : 'max';
-  if (!(hi > lo) || typed(hi) === typed(lo)) return { ...base, goal, acceptable: '', ideal: '' };
-  return goal === 'max' ? { ...base, goal, acceptable: typed(lo), ideal: typed(hi) } : { ...base, goal, acceptable: typed(hi), ideal: typed(lo) };
+  if (!(hi > lo) || typed(hi) === typed(lo)) return { ...base, goal: want, acceptable: '', ideal: '' };
+  return want === 'max' ? { ...base, goal: want, acceptable: typed(lo), ideal: typed(hi) } : { ...base, goal: want, acceptable: typed(hi), ideal: typed(lo) };
 }

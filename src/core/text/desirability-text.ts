@@ -89,6 +89,21 @@ export function goalMeaning(goal: DesirabilityGoalChoice): string {
 export const WEIGHT_SHAPE_MEANING =
   'Importance weighs this response in the overall desirability (2 counts it twice as much as 1). A shape above 1 asks for values nearer the ideal before d rises; below 1, d rises sooner.';
 
+/** Under the screen's heading. */
+export const SEVERAL_INTRO = 'Set what you want of each response; the best compromise inside the tested box is below. Each response uses the model chosen for it on the Effects screen.';
+
+/** When a prediction interval cannot be given at the best setting. */
+export const NO_INTERVAL = 'not available (no runs left over to estimate the noise)';
+
+/**
+ * How the best setting was found, from the search's own description.
+ * Example: howFound('compass search ...', 'a corner of the box') -> 'Found by compass search ...;
+ * it started from a corner of the box. It is the best found, not a proven optimum.'
+ */
+export function howFound(method: string, bestStart: string): string {
+  return `Found by ${method}; it started from ${bestStart}. It is the best found, not a proven optimum.`;
+}
+
 /** When every response is set to ignore. */
 export const NOTHING_TO_OPTIMIZE = 'Every response is set to Ignore: give at least one response a goal to find a best setting.';
 

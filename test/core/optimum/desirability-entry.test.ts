@@ -62,6 +62,14 @@ describe('defaultDesirabilityEntry', () => {
     expect(() => readDesirabilityEntry('Thickness', e)).not.toThrow();
   });
 
+  it('another goal picked: its own starting values; a target without one in the study sits mid-range; ignore keeps the values', () => {
+    const gloss = { name: 'Gloss', goal: 'maximize' as const };
+    expect(defaultDesirabilityEntry(gloss, [71, 89], 'min')).toMatchObject({ goal: 'min', acceptable: '89', ideal: '71' });
+    expect(defaultDesirabilityEntry(gloss, [71, 89], 'target')).toMatchObject({ goal: 'target', acceptable: '71', ideal: '80', highest: '89' });
+    expect(defaultDesirabilityEntry(gloss, [71, 89], 'ignore')).toMatchObject({ goal: 'ignore', acceptable: '71', ideal: '89' });
+    expect(defaultDesirabilityEntry(gloss, [], 'target')).toMatchObject({ goal: 'target', acceptable: '', ideal: '' });
+  });
+
   it('degenerate: no values, or all equal, leave the value fields empty for the person', () => {
     expect(defaultDesirabilityEntry({ name: 'Gloss', goal: 'maximize' }, [])).toMatchObject({ acceptable: '', ideal: '' });
     expect(defaultDesirabilityEntry({ name: 'Gloss', goal: 'maximize' }, [5, 5, Number.NaN])).toMatchObject({ acceptable: '', ideal: '' });
