@@ -146,13 +146,14 @@ export interface Shortfall {
  * Example: noSettingMeetsAll([{ name: 'Gloss', unit: 'GU', fit: 62, limit: 70, side: 'below' }])
  * -> 'No setting inside the tested box brings every response within its acceptable values
  * (overall desirability 0). At the nearest setting found, Gloss is predicted at 62 GU, below its
- * acceptable 70 GU. Widen that limit, set a response to Ignore, or plan runs beyond the tested box.'
+ * acceptable 70 GU. Widen that limit, set a response to Ignore, or, where the machine's rated
+ * limits allow, plan runs beyond the tested box.'
  */
 export function noSettingMeetsAll(short: readonly Shortfall[]): string {
   const head = 'No setting inside the tested box brings every response within its acceptable values (overall desirability 0).';
   const parts = short.map((s) => `${s.name} is predicted at ${withUnit(s.fit, s.unit)}, ${s.side} its acceptable ${withUnit(s.limit, s.unit)}`);
   const which = parts.length === 0 ? '' : ` At the nearest setting found, ${parts.length === 1 ? parts[0] : `${parts.slice(0, -1).join('; ')} and ${parts[parts.length - 1]}`}.`;
-  return `${head}${which} Widen ${short.length > 1 ? 'those limits' : 'that limit'}, set a response to Ignore, or plan runs beyond the tested box.`;
+  return `${head}${which} Widen ${short.length > 1 ? 'those limits' : 'that limit'}, set a response to Ignore, or, where the machine's rated limits allow, plan runs beyond the tested box.`;
 }
 
 /**

@@ -8,7 +8,7 @@
  */
 import { computed, createModel, signal } from '@preact/signals';
 import type { FittedModel } from '../../core/fit/analysis.ts';
-import { defaultDesirabilityEntry, readDesirabilityEntry, type DesirabilityEntry } from '../../core/optimum/desirability-entry.ts';
+import { defaultDesirabilityEntry, desirabilityEntryProblem, readDesirabilityEntry, type DesirabilityEntry, type EntryProblem } from '../../core/optimum/desirability-entry.ts';
 import { maximizeDesirability, type DesirabilityOptimum } from '../../core/optimum/desirability-search.ts';
 import { desirabilityShortfalls } from '../../core/optimum/desirability-shortfall.ts';
 import type { DesirabilitySpec } from '../../core/optimum/desirability.ts';
@@ -26,6 +26,8 @@ export interface ResponseRow {
   readonly entry: DesirabilityEntry;
   /** Why the typed values cannot be used (the result keeps the values before), or null. */
   readonly error: string | null;
+  /** The field the problem is in ('order': the value fields together), or null. */
+  readonly errorField: EntryProblem['field'] | null;
   /** Why the response's model cannot be used (not fitted, transformed), or null. */
   readonly unusable: string | null;
 }
@@ -53,14 +55,11 @@ export const SeveralResponsesModel = createModel((shared: StudyAnalysis) => {
       const result = ra.result.value;
       const logged = result.ok ? result.data.y : [];
       const entry = typed.value.get(ra.response.name) ?? defaultDesirabilityEntry(ra.response, logged);
-      let error: string | null = null;
-      try {
-        readDesirabilityEntry(ra.response.name, entry);
-      } catch (err) {
-        error = problemOf(err).message;
-      }
+      const problem = desirabilityEntryProblem(ra.response.name, entry);
+      // A sentence of its own, so the note after it reads on.
+      const error = problem ? (/[.!?]$/.test(problem.message) ? problem.message : `${problem.message}.`) : null;
       const unusable = !result.ok ? notFittedMessage(ra.response.name, result.message) : ra.settings.value.transform !== 'none' ? transformedMessage(ra.response.name) : null;
-      return { index: ra.index, name: ra.response.name, ...(ra.response.unit ? { unit: ra.response.unit } : {}), entry, error, unusable };
+      return { index: ra.index, name: ra.response.name, ...(ra.response.unit ? { unit: ra.response.unit } : {}), entry, error, errorField: problem?.field ?? null, unusable };
     }),
   );
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { defaultDesirabilityEntry, readDesirabilityEntry, type DesirabilityEntry } from '../../../src/core/optimum/desirability-entry.ts';
+import { defaultDesirabilityEntry, desirabilityEntryProblem, readDesirabilityEntry, type DesirabilityEntry } from '../../../src/core/optimum/desirability-entry.ts';
 import { checkDesirability, desirability } from '../../../src/core/optimum/desirability.ts';
 import { InputError } from '../../../src/core/errors.ts';
 
@@ -46,6 +46,22 @@ describe('readDesirabilityEntry', () => {
     expect(() => readDesirabilityEntry('Gloss', { ...base, weight: '0' })).toThrow('Gloss: the importance must be a number above 0, got 0. 1 is the usual choice.');
     expect(() => readDesirabilityEntry('Gloss', { ...base, shape: '-1' })).toThrow(InputError);
     expect(() => readDesirabilityEntry('T', { ...base, goal: 'target', acceptable: '60', ideal: '70', highest: '80', shapeAbove: '0' })).toThrow(/the shape above the target must be a number above 0/);
+  });
+});
+
+describe('desirabilityEntryProblem', () => {
+  it('names the field of the first problem in screen order, "order" for values out of order, null when the entry reads', () => {
+    expect(desirabilityEntryProblem('Gloss', base)).toBeNull();
+    expect(desirabilityEntryProblem('Gloss', { ...base, goal: 'ignore', ideal: 'x' })).toBeNull();
+    expect(desirabilityEntryProblem('Gloss', { ...base, ideal: 'x', weight: '0' })).toEqual({ field: 'ideal', message: 'Gloss: the ideal value needs a number (digits, with a point or a comma for decimals), got "x"' });
+    expect(desirabilityEntryProblem('Gloss', { ...base, weight: '0' })?.field).toBe('weight');
+    expect(desirabilityEntryProblem('Gloss', { ...base, shape: '0' })?.field).toBe('shape');
+    expect(desirabilityEntryProblem('T', { ...base, goal: 'target', acceptable: '60', ideal: '70', highest: '80', shapeAbove: '-2' })?.field).toBe('shapeAbove');
+    expect(desirabilityEntryProblem('T', { ...base, goal: 'target', acceptable: '60', ideal: '70', highest: '' })?.field).toBe('highest');
+    const order = desirabilityEntryProblem('Gloss', { ...base, acceptable: '80', ideal: '70' });
+    expect(order?.field).toBe('order');
+    // The same message as the reader gives.
+    expect(() => readDesirabilityEntry('Gloss', { ...base, acceptable: '80', ideal: '70' })).toThrow(order!.message);
   });
 });
 

@@ -6,7 +6,7 @@ import { entryOrderMessage, goalMeaning, noSettingMeetsAll, notFittedMessage, ov
 describe('desirability text', () => {
   it('no setting meets all limits: names each response that misses, with its value and limit', () => {
     expect(noSettingMeetsAll([{ name: 'Gloss', unit: 'GU', fit: 62.04, limit: 70, side: 'below' }])).toBe(
-      'No setting inside the tested box brings every response within its acceptable values (overall desirability 0). At the nearest setting found, Gloss is predicted at 62.04 GU, below its acceptable 70 GU. Widen that limit, set a response to Ignore, or plan runs beyond the tested box.',
+      'No setting inside the tested box brings every response within its acceptable values (overall desirability 0). At the nearest setting found, Gloss is predicted at 62.04 GU, below its acceptable 70 GU. Widen that limit, set a response to Ignore, or, where the machine\'s rated limits allow, plan runs beyond the tested box.',
     );
     const two = noSettingMeetsAll([
       { name: 'A', fit: 1, limit: 2, side: 'below' },

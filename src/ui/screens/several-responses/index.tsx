@@ -33,6 +33,25 @@ const GOALS: readonly { readonly value: DesirabilityGoalChoice; readonly label: 
 
 type Field = Exclude<keyof DesirabilityEntry, 'goal'>;
 
+const VALUE_FIELDS: readonly Field[] = ['acceptable', 'ideal', 'highest'];
+
+/** Whether a field holds the entry's problem ('order' is the value fields together). */
+function invalid(row: ResponseRow, field: Field): boolean {
+  return row.errorField === field || (row.errorField === 'order' && VALUE_FIELDS.includes(field));
+}
+
+/** The problem's message, where it belongs: under the value fields, or under importance and shape. */
+function ErrorNote({ row, part }: { row: ResponseRow; part: 'values' | 'more' }) {
+  if (row.error === null || row.entry.goal === 'ignore' || row.errorField === null) return null;
+  const inValues = row.errorField === 'order' || VALUE_FIELDS.includes(row.errorField);
+  if (inValues !== (part === 'values')) return null;
+  return (
+    <p class="field-error" id={`mr-${row.index}-error`} role="alert">
+      {row.error} {STILL_USES_BEFORE}
+    </p>
+  );
+}
+
 function NumberField({ m, row, field, label }: { m: SeveralResponses; row: ResponseRow; field: Field; label: string }) {
   const id = `mr-${row.index}-${field}`;
   return (
@@ -48,8 +67,8 @@ function NumberField({ m, row, field, label }: { m: SeveralResponses; row: Respo
         inputMode="decimal"
         autocomplete="off"
         value={row.entry[field]}
-        aria-invalid={row.error !== null}
-        aria-describedby={row.error !== null ? `mr-${row.index}-error` : undefined}
+        aria-invalid={invalid(row, field)}
+        aria-describedby={invalid(row, field) ? `mr-${row.index}-error` : undefined}
         onInput={(e) => m.setField(row.name, field, (e.currentTarget as HTMLInputElement).value)}
       />
     </div>
@@ -87,14 +106,11 @@ function ResponseCard({ m, row }: { m: SeveralResponses; row: ResponseRow }) {
           )}
         </div>
       )}
-      {row.error !== null && g !== 'ignore' && (
-        <p class="field-error" id={`mr-${row.index}-error`} role="alert">
-          {row.error} {STILL_USES_BEFORE}
-        </p>
-      )}
+      <ErrorNote row={row} part="values" />
       <p class="quiet mr-meaning">{goalMeaning(g)}</p>
       {g !== 'ignore' && (
-        <details class="mr-more">
+        // Opened when its fields hold the problem, so the message is never folded away.
+        <details class="mr-more" open={row.errorField !== null && !VALUE_FIELDS.includes(row.errorField as Field) && row.errorField !== 'order' ? true : undefined}>
           <summary>Importance and shape</summary>
           <p class="quiet">{WEIGHT_SHAPE_MEANING}</p>
           <div class={g === 'target' ? 'mr-fields three' : 'mr-fields'}>
@@ -102,6 +118,7 @@ function ResponseCard({ m, row }: { m: SeveralResponses; row: ResponseRow }) {
             <NumberField m={m} row={row} field="shape" label={g === 'target' ? 'Shape below' : 'Shape'} />
             {g === 'target' && <NumberField m={m} row={row} field="shapeAbove" label="Shape above" />}
           </div>
+          <ErrorNote row={row} part="more" />
         </details>
       )}
     </fieldset>
