@@ -119,7 +119,7 @@ test('from curvature to axial runs, the quadratic model, the contour chart and s
   problems.push(...(await axe(page, 'quick card')));
 
   // Several responses: the best compromise has D above 0 and keeps every setting inside the box.
-  await page.getByRole('link', { name: 'Weigh all 2 responses at once ›' }).click();
+  await page.getByRole('link', { name: 'All 2 responses at once ›' }).click();
   const D = parseFloat(await page.getByTestId('mr-D').innerText());
   expect(D).toBeGreaterThan(0);
   expect(D).toBeLessThanOrEqual(1);

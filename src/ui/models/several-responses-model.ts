@@ -16,7 +16,7 @@ import { cachedPredictor } from '../../core/predict/compiled-predictor.ts';
 import { CAUTION } from '../../core/predict/caution.ts';
 import { NOTHING_TO_OPTIMIZE, noSettingMeetsAll, notFittedMessage, transformedMessage } from '../../core/text/desirability-text.ts';
 import { problemOf } from '../lib/problem.ts';
-import type { StudyAnalysis } from './study-analysis-model.ts';
+import { MODEL_CHOICES, QUADRATIC_CHOICE, type StudyAnalysis } from './study-analysis-model.ts';
 
 /** One response's row on the screen: what is typed, its message, and whether it can take part. */
 export interface ResponseRow {
@@ -28,6 +28,8 @@ export interface ResponseRow {
   readonly error: string | null;
   /** The field the problem is in ('order': the value fields together), or null. */
   readonly errorField: EntryProblem['field'] | null;
+  /** The model chosen for it on the Effects screen, as that screen names it. */
+  readonly modelLabel: string;
   /** Why the response's model cannot be used (not fitted, transformed), or null. */
   readonly unusable: string | null;
 }
@@ -59,7 +61,7 @@ export const SeveralResponsesModel = createModel((shared: StudyAnalysis) => {
       // A sentence of its own, so the note after it reads on.
       const error = problem ? (/[.!?]$/.test(problem.message) ? problem.message : `${problem.message}.`) : null;
       const unusable = !result.ok ? notFittedMessage(ra.response.name, result.message) : ra.settings.value.transform !== 'none' ? transformedMessage(ra.response.name) : null;
-      return { index: ra.index, name: ra.response.name, ...(ra.response.unit ? { unit: ra.response.unit } : {}), entry, error, errorField: problem?.field ?? null, unusable };
+      return { index: ra.index, name: ra.response.name, ...(ra.response.unit ? { unit: ra.response.unit } : {}), entry, error, errorField: problem?.field ?? null, modelLabel: [...MODEL_CHOICES, QUADRATIC_CHOICE].find((c) => c.value === ra.settings.value.model)?.label ?? '', unusable };
     }),
   );
 

@@ -82,7 +82,7 @@ export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
     <section class="quick">
       <StudyHeader study={study} current="quickCard" />
       <h2>Quick card</h2>
-      {study.responses.length > 1 && <a class="btn ghost" href={hrefTo('severalResponses', { studyId })}>Weigh all {study.responses.length} responses at once ›</a>}
+      {study.responses.length > 1 && <a class="btn ghost" href={hrefTo('severalResponses', { studyId })}>All {study.responses.length} responses at once ›</a>}
       <ChoiceButtons
         label="Response"
         options={study.responses.map((r, i) => ({ value: i, label: r.name }))}

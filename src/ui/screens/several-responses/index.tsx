@@ -84,6 +84,7 @@ function ResponseCard({ m, row }: { m: SeveralResponses; row: ResponseRow }) {
         {row.name}
         {row.unit && <span class="mr-unit"> {row.unit}</span>}
       </h4>
+      <p class="quiet mr-model">Model: {row.modelLabel.toLowerCase()}</p>
       <ChoiceButtons label={`Goal for ${row.name}`} hideLabel options={GOALS} value={g} onChoose={(v) => m.setGoal(row.name, v)} />
       {row.unusable && g !== 'ignore' && (
         <p class="problem" role="alert">
