@@ -9,5 +9,6 @@ export const READY: Record<(typeof ROUTE_NAMES)[number], readonly [string, RegEx
   analysis: ['h2', /^Effects$/],
   quickCard: ['h2', /^Quick card$/],
   nextRuns: ['h2', /^Next runs$/],
+  severalResponses: ['h2', /^Several responses at once$/],
   export: ['h2', /^Export$/],
 };

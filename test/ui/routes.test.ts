@@ -11,6 +11,7 @@ const KNOWN: readonly [string, Route][] = [
   ['#/study/abc/run/3', { name: 'runForm', params: { studyId: 'abc', plannedRun: 3 } }],
   ['#/study/abc/analysis', { name: 'analysis', params: { studyId: 'abc' } }],
   ['#/study/abc/predict', { name: 'quickCard', params: { studyId: 'abc' } }],
+  ['#/study/abc/responses', { name: 'severalResponses', params: { studyId: 'abc' } }],
   ['#/study/abc/export', { name: 'export', params: { studyId: 'abc' } }],
   ['#/export', { name: 'export', params: {} }],
 ];

@@ -18,6 +18,7 @@ const SCREENS: { readonly [N in RouteName]: LazyScreen<RouteParams<N> & { readon
   analysis: lazyScreen(() => import('../screens/analysis/index.tsx').then((m) => m.AnalysisScreen)),
   quickCard: lazyScreen(() => import('../screens/quick-card/index.tsx').then((m) => m.QuickCardScreen)),
   nextRuns: lazyScreen(() => import('../screens/next-runs/index.tsx').then((m) => m.NextRunsScreen)),
+  severalResponses: lazyScreen(() => import('../screens/several-responses/index.tsx').then((m) => m.SeveralResponsesScreen)),
   export: lazyScreen(() => import('../screens/export/index.tsx').then((m) => m.ExportScreen)),
 };
 

@@ -27,6 +27,8 @@ export const ROUTES = {
   analysis: { paths: ['/study/:studyId/analysis'], tab: 'Effects' },
   quickCard: { paths: ['/study/:studyId/predict'], tab: 'Predict' },
   nextRuns: { paths: ['/study/:studyId/next'], tab: 'Next' },
+  // Several responses weighed at once; reached from the quick card, no tab of its own.
+  severalResponses: { paths: ['/study/:studyId/responses'] },
   // One screen, two addresses: a study's files, or every study's.
   export: { paths: ['/study/:studyId/export', '/export'], tab: 'Export' },
 } as const satisfies Record<string, RouteSpec>;

@@ -2,6 +2,8 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { checkDesirability, desirability, overallDesirability, type DesirabilitySpec } from '../../../src/core/optimum/desirability.ts';
 import { InputError } from '../../../src/core/errors.ts';
+import { desirabilityAt, maximizeDesirability } from '../../../src/core/optimum/desirability-search.ts';
+import { syntheticModel } from './helpers.ts';
 
 // Every expected number below follows from the definitions of Derringer and Suich (1980),
 // Journal of Quality Technology 12, 214-219, worked by hand.
@@ -71,5 +73,55 @@ describe('desirability: the definitions at and beyond each limit', () => {
     expect(() => desirability(max, Number.NaN)).toThrow(InputError);
     expect(() => overallDesirability([], [])).toThrow(/at least one response/);
     expect(() => overallDesirability([1.2], [1])).toThrow(/between 0 and 1, got 1.2/);
+  });
+});
+
+// Derringer and Suich (1980), Journal of Quality Technology 12, 214-219: the tire tread compound,
+// four responses fitted as full quadratics in three coded factors (silica x1, silane x2, sulfur
+// x3) from a 20-run central composite design. Goals as printed: PICO abrasion index y1 maximize,
+// d = 0 at 120 and 1 at 170; 200% modulus y2 maximize, 1000 to 1300; elongation at break y3
+// target 500 within 400 to 600; hardness y4 target 67.5 within 60 to 75; all shapes 1. The
+// published compromise x = (-0.05, 0.145, -0.868) with y1 = 129.4, y3 = 465.7, y4 = 68, d1 =
+// 0.189, d2 = 1, d3 = 0.656, d4 = 0.932 and D = 0.583. The coefficients and the printed figures
+// are from memory (not checked against the page in this session).
+describe('desirability: the published tire tread compromise (Derringer and Suich 1980, from memory)', () => {
+  // [b0, x1, x2, x3, x1^2, x2^2, x3^2, x1x2, x1x3, x2x3], from memory.
+  const fits = {
+    pico: [139.12, 16.49, 17.88, 10.91, 4.01, -3.45, -1.57, 5.13, 7.13, 7.88],
+    modulus: [1261.13, 268.15, 246.5, -102.6, -83.57, -124.82, 199.2, 69.38, -104.38, -94.13],
+    elongation: [400.38, -99.67, -31.4, -73.92, 7.93, 17.31, 0.43, 8.75, 6.25, 1.25],
+    hardness: [68.91, -1.41, 4.32, 1.63, 1.56, 0.06, -0.32, -1.63, 0.13, -0.25],
+  };
+  const model = (c: number[], name: string) => ({
+    ...syntheticModel(3, 1, { b0: c[0], b: [c[1], c[2], c[3]], B: [[c[4], c[7] / 2, c[8] / 2], [c[7] / 2, c[5], c[9] / 2], [c[8] / 2, c[9] / 2, c[6]]] }),
+    response: name,
+  });
+  const models = [model(fits.pico, 'PICO'), model(fits.modulus, 'Modulus'), model(fits.elongation, 'Elongation'), model(fits.hardness, 'Hardness')];
+  const specs: DesirabilitySpec[] = [
+    { name: 'PICO', goal: 'max', low: 120, high: 170 },
+    { name: 'Modulus', goal: 'max', low: 1000, high: 1300 },
+    { name: 'Elongation', goal: 'target', low: 400, target: 500, high: 600 },
+    { name: 'Hardness', goal: 'target', low: 60, target: 67.5, high: 75 },
+  ];
+  const published = [-0.05, 0.145, -0.868];
+
+  it('the printed predictions, individual desirabilities and D at the published setting', () => {
+    const p = desirabilityAt(models, specs, published);
+    const [y1, y2, y3, y4] = p.responses;
+    expect(y1.fit).toBeCloseTo(129.4, 0); // printed 129.4
+    expect(y3.fit).toBeCloseTo(465.7, 0); // printed 465.7
+    expect(y4.fit).toBeCloseTo(68, 1); // printed 68
+    expect(y2.fit).toBeGreaterThan(1300); // at or above HIGH: d2 = 1 as printed
+    expect(y1.d).toBeCloseTo(0.189, 2);
+    expect(y2.d).toBe(1);
+    expect(y3.d).toBeCloseTo(0.656, 2);
+    expect(y4.d).toBeCloseTo(0.932, 2);
+    expect(p.D).toBeCloseTo(0.583, 3); // printed D = 0.583
+  });
+
+  it('the search inside the box [-1, 1]^3, which holds the published point, does at least as well', () => {
+    const best = maximizeDesirability(models, specs);
+    expect(best.D).toBeGreaterThanOrEqual(desirabilityAt(models, specs, published).D - 1e-9);
+    for (const c of best.coded) expect(Math.abs(c)).toBeLessThanOrEqual(1);
   });
 });

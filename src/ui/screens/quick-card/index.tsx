@@ -11,6 +11,7 @@ import { CAUTION_MORE, CAUTION_SHORT } from '../../../core/text/caution-short.ts
 import { intervalText } from '../../../core/text/interval-text.ts';
 import type { Response } from '../../../core/study/response.ts';
 import type { Store } from '../../../store/store.ts';
+import { hrefTo } from '../../app/routes.ts';
 import { BarList } from '../../components/bar-list/index.tsx';
 import { CautionBox } from '../../components/caution-box/index.tsx';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
@@ -83,6 +84,7 @@ export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
     <section class="quick">
       <StudyHeader study={study} current="quickCard" />
       <h2>Quick card</h2>
+      {study.responses.length > 1 && <a class="btn ghost" href={hrefTo('severalResponses', { studyId })}>All {study.responses.length} responses at once ›</a>}
       <ChoiceButtons
         label="Response"
         options={study.responses.map((r, i) => ({ value: i, label: r.name }))}
