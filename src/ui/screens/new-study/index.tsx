@@ -16,6 +16,7 @@ import { SecondOrderFacts } from '../../components/second-order-facts/index.tsx'
 import { SecondOrderFields } from '../../components/second-order-fields/index.tsx';
 import { categoricalNames, type DesignFamily } from '../../models/second-order-choice.ts';
 import { secondOrderNeedsNumeric } from '../../../core/text/second-order-text.ts';
+import { aliasListText, catalogGeneratorsHint, hardToChangeText, NO_HARD_FACTOR_TEXT, spaced } from '../../../core/text/plan-form-text.ts';
 import { BLOCK_CHOICES, choiceName, FORM_MAX_FACTORS, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
 import './style.css';
 
@@ -40,6 +41,8 @@ const FAMILY_CHOICES: readonly { value: DesignFamily; label: string }[] = [
   { value: 'central composite', label: 'Central composite' },
   { value: 'Box-Behnken', label: 'Box-Behnken' },
 ];
+/** Alias chains listed in the preview before "and N more" (a design choice: a short list on a phone). */
+const ALIASES_SHOWN = 8;
 const SHOWN_WITH_FACTS = new Set<string | undefined>(['axial-outside', 'standing-caution']);
 const ORDER_CHOICES = [
   { value: 'random' as const, label: 'Randomized' },
@@ -132,6 +135,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
           const letter = letters[i];
           const message = model.factorMessages.value[i];
           const show = message !== null && (model.tried.value || filledIn(f));
+          const reversed = model.factorProblems.value[i]?.kind === 'reversed';
           return (
             <div class="plan-card" key={f.key} data-factor={letter}>
               <div class="plan-card-head">
@@ -157,9 +161,14 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
                 </div>
               )}
               {show && (
-                <p class="field-error" role="alert">
+                <p class="field-error" role="alert" id={`ns-f${f.key}-error`}>
                   {message}
                 </p>
+              )}
+              {show && reversed && (
+                <button type="button" class="btn block swap-levels" aria-describedby={`ns-f${f.key}-error`} onClick={() => model.swapLevels(i)}>
+                  Swap low and high
+                </button>
               )}
             </div>
           );
@@ -209,6 +218,34 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
         <ChoiceButtons label="Runs of the factorial" options={model.options.value.map((o) => ({ value: o.value, label: o.label }))} value={model.fraction.value} onChoose={(v) => model.chooseFraction(v)} />
         {factors.length >= 2 && factors.length < 4 && <p class="quiet field-hint">Fractions from the catalog start at 8 runs, so they need 4 factors or more.</p>}
         {!model.fractionOffered.value && <p class="field-error">{choiceName(model.fraction.value).replace(/^t/, 'T')} is not offered for {factors.length} factors; choose one of the above.</p>}
+        {model.catalogGenerators.value !== null && model.fractionOffered.value && (
+          <div class="field">
+            <label for="ns-generators" class="field-name">
+              Generators (optional)
+            </label>
+            <p class="quiet field-hint" id="ns-generators-hint">
+              {catalogGeneratorsHint(model.catalogGenerators.value)}
+            </p>
+            <input
+              id="ns-generators"
+              class="text"
+              type="text"
+              autocomplete="off"
+              autocapitalize="characters"
+              spellcheck={false}
+              placeholder={model.catalogGenerators.value.map(spaced).join(', ')}
+              value={model.generatorsText.value}
+              aria-describedby={model.generatorsProblem.value ? 'ns-generators-hint ns-generators-error' : 'ns-generators-hint'}
+              aria-invalid={model.generatorsProblem.value ? true : undefined}
+              onInput={(e) => model.setGeneratorsText(valueOf(e))}
+            />
+            {model.generatorsProblem.value && (
+              <p class="field-error" role="alert" id="ns-generators-error">
+                {model.generatorsProblem.value}
+              </p>
+            )}
+          </div>
+        )}
         <CountStepper id="ns-center" label="Center runs" hint="Per replicate; numeric factors at the middle of their ranges." value={model.centerRuns.value} min={0} onChange={(v) => model.setCenterRuns(v)} />
         <CountStepper id="ns-replicates" label="Replicates" hint="Times the whole design is run." value={model.replicates.value} min={1} onChange={(v) => model.setReplicates(v)} />
         <div class="choice-compact">
@@ -227,6 +264,23 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
             onBlocks={(n) => model.chooseSecondOrderBlocks(n)}
             onCenterRuns={(v) => model.setSecondOrderCenterRuns(v)}
           />
+        )}
+        {family === 'two-level' && (
+          <>
+            <ChoiceButtons
+              label="Hard-to-change factor"
+              options={[{ value: 0, label: 'None' }, ...factors.map((f, i) => ({ value: f.key, label: f.name.trim() ? `${letters[i]} · ${f.name.trim()}` : letters[i] }))]}
+              value={model.hardFactor.value ?? 0}
+              onChoose={(key) => model.chooseHardFactor(key === 0 ? null : key)}
+            />
+            <p class="quiet field-hint hard-factor-cost" role="status">
+              {model.hardChanges.value
+                ? hardToChangeText(model.hardChanges.value.label, model.hardChanges.value.changes, model.hardChanges.value.unsorted, model.hardChanges.value.seed)
+                : model.hardIndex.value === null
+                  ? NO_HARD_FACTOR_TEXT
+                  : ''}
+            </p>
+          </>
         )}
         <ChoiceButtons label="Run order" options={ORDER_CHOICES} value={model.randomize.value ? 'random' : 'standard'} onChoose={(v) => model.setRandomize(v === 'random')} />
         {model.randomize.value && (
@@ -312,6 +366,16 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
                 <div>
                   <dt>Generators</dt>
                   <dd>{design.generators.join(', ')}</dd>
+                </div>
+              )}
+              {design.aliases.some((c) => c.length > 1) && !design.screening && (
+                <div>
+                  <dt>Aliases</dt>
+                  <dd class="plan-aliases">
+                    {aliasListText(design.aliases, ALIASES_SHOWN).map((line) => (
+                      <span key={line}>{line}</span>
+                    ))}
+                  </dd>
                 </div>
               )}
               {design.blockWords.length > 0 && (
