@@ -45,9 +45,13 @@ const row = (over: Partial<Parameters<typeof factorMessage>[0]>) => ({ key: 1, k
 describe('factorMessage: the planning form refuses what a new factor may not be', () => {
   it('a range too narrow to code reliably is refused at planning, naming the factor', () => {
     expect(factorMessage(row({}), 0)).toBeNull();
-    expect(factorMessage(row({ low: '1000', high: '1000.0000001' }), 0)).toMatch(/^Pressure: the range 1000 to 1000.0000001 is too narrow to code reliably/);
+    expect(factorMessage(row({ low: '1000', high: '1000.0000001' }), 0)).toMatch(/^Factor A \(Pressure\): the range 1000 to 1000.0000001 is too narrow to code reliably/);
   });
   it('a name the command line could not use is refused (the same rule as design --factor)', () => {
-    expect(factorMessage(row({ name: 'Temp, C' }), 0)).toMatch(/contains a comma/);
+    expect(factorMessage(row({ name: 'Temp, C' }), 0)).toMatch(/^Factor A \(Temp, C\): its name "Temp, C" contains a comma/);
+  });
+  it('names the factor by the letter of its row, as the fields do (never "Factor 1")', () => {
+    expect(factorMessage(row({ name: '' }), 2)).toBe('Factor C: type a name for this factor, such as Temperature.');
+    expect(factorMessage(row({ low: '200', high: '160' }), 8)).toMatch(/^Factor J \(Pressure\): the low setting \(200\) is above the high setting \(160\)/);
   });
 });
