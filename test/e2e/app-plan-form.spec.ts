@@ -41,6 +41,13 @@ async function firstSettings(page: Page, runs: number): Promise<string[]> {
   return page.locator('.run-card').evaluateAll((cards) => cards.map((c) => c.querySelector('.setting dd')?.textContent?.trim() ?? ''));
 }
 
+/** True when the element is on screen above the plan bar held at the foot (not covered by it). */
+async function clearOfBar(page: Page, selector: string): Promise<boolean> {
+  const el = (await page.locator(selector).boundingBox())!;
+  const bar = (await page.locator('.plan-bar').boundingBox())!;
+  return el.y >= 0 && el.y + el.height <= bar.y + 1;
+}
+
 const changes = (xs: readonly string[]) => xs.slice(1).filter((x, i) => x !== xs[i]).length;
 
 for (const size of [
@@ -72,6 +79,8 @@ for (const size of [
       await page.getByLabel('Factor A high').fill('160');
       const reversed = 'Factor A (Oven temperature): the low setting (200) is above the high setting (160). The low must be the smaller number: tap "Swap low and high", or type them again.';
       await expect(page.locator('[data-factor="A"] .field-error')).toHaveText(reversed);
+      // Seen while typing: not under the plan bar.
+      expect(await clearOfBar(page, '[data-factor="A"] .field-error')).toBe(true);
       await expect(preview(page)).toContainText(`Not ready yet: ${reversed}`);
       const swap = page.getByRole('button', { name: 'Swap low and high' });
       await swap.scrollIntoViewIfNeeded();
@@ -116,6 +125,7 @@ for (const size of [
       const bad = 'In "E = ABXD", "X" is not the letter of a factor above. Use the letters A, B, C, D, E (a minus sign may come before the product).';
       await expect(page.locator('#ns-generators-error')).toHaveText(bad);
       await expect(box).toHaveAttribute('aria-invalid', 'true');
+      expect(await clearOfBar(page, '#ns-generators-error')).toBe(true);
       await expect(preview(page)).toContainText(`Not ready yet: ${bad}`);
       await page.screenshot({ path: shot(`plan-form-generators-bad-${size.width}`) });
       await page.getByRole('button', { name: 'Create study' }).click();

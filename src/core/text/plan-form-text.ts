@@ -76,9 +76,9 @@ export function catalogGeneratorsHint(generators: readonly string[]): string {
   return `Blank: the catalog's generators (${generators.map(spaced).join(', ')}) are used. Type your own to replace them.`;
 }
 
-/** "E=ABCD" written as people read it: "E = ABCD". */
+/** "E=ABCD" written as people read it: "E = ABCD" (no-break spaces, so a line never breaks inside it). */
 export function spaced(generator: string): string {
-  return generator.replace('=', ' = ');
+  return generator.replace('=', '\u00a0=\u00a0');
 }
 
 /** A generator without exactly one equals sign or without a side. */

@@ -39,7 +39,8 @@ describe('the planning form names a factor as its fields do', () => {
   it('no message on the form reads "got" or "expected" (written for a person, not a developer)', () => {
     const texts = [countText('Center runs', 0, '-1'), seedText('12a'), generatorCountText(2, 1, '1/2'), catalogGeneratorsHint(['E=ABCD'])];
     for (const t of texts) expect(t).not.toMatch(/\bgot\b|\bexpected\b/);
-    expect(catalogGeneratorsHint(['E=ABC', 'F=BCD'])).toContain('(E = ABC, F = BCD)');
+    // No-break spaces keep each generator on one line.
+    expect(catalogGeneratorsHint(['E=ABC', 'F=BCD'])).toContain('(E\u00a0=\u00a0ABC, F\u00a0=\u00a0BCD)');
   });
 });
 

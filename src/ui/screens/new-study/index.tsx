@@ -104,6 +104,14 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
     void model.loadNoiseSources();
   }, [model]);
   const power = model.power.value;
+  const shownMessages = `${model.factorMessages.value.join('|')}|${model.generatorsProblem.value ?? ''}`;
+  // A message that appears under the box being typed in is scrolled clear of the plan bar held
+  // at the foot (the root's scroll-padding-bottom); 'nearest' leaves it alone when it is in view.
+  useEffect(() => {
+    const active = document.activeElement;
+    const holder = active instanceof HTMLElement ? (active.closest('.plan-card') ?? active.closest('.field')) : null;
+    holder?.querySelector('.field-error')?.scrollIntoView({ block: 'nearest' });
+  }, [shownMessages]);
 
   async function create() {
     const made = await model.create();
@@ -136,6 +144,19 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
           const message = model.factorMessages.value[i];
           const show = message !== null && (model.tried.value || filledIn(f));
           const reversed = model.factorProblems.value[i]?.kind === 'reversed';
+          // Right under the settings it is about, so the plan bar at the foot does not cover it while typing.
+          const rowMessage = show && (
+            <>
+              <p class="field-error" role="alert" id={`ns-f${f.key}-error`}>
+                {message}
+              </p>
+              {reversed && (
+                <button type="button" class="btn block swap-levels" aria-describedby={`ns-f${f.key}-error`} onClick={() => model.swapLevels(i)}>
+                  Swap low and high
+                </button>
+              )}
+            </>
+          );
           return (
             <div class="plan-card" key={f.key} data-factor={letter}>
               <div class="plan-card-head">
@@ -152,6 +173,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
                     <TextField id={`ns-f${f.key}-low`} label={`Factor ${letter} low`} numeric value={f.low} onInput={(v) => model.setFactor(i, { low: v })} invalid={show} />
                     <TextField id={`ns-f${f.key}-high`} label={`Factor ${letter} high`} numeric value={f.high} onInput={(v) => model.setFactor(i, { high: v })} invalid={show} />
                   </div>
+                  {rowMessage}
                   <TextField id={`ns-f${f.key}-unit`} label={`Factor ${letter} unit`} value={f.unit} placeholder="e.g. °C" onInput={(v) => model.setFactor(i, { unit: v })} />
                 </>
               ) : (
@@ -160,16 +182,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
                   <TextField id={`ns-f${f.key}-b`} label={`Factor ${letter} level 2`} value={f.levelB} onInput={(v) => model.setFactor(i, { levelB: v })} invalid={show} />
                 </div>
               )}
-              {show && (
-                <p class="field-error" role="alert" id={`ns-f${f.key}-error`}>
-                  {message}
-                </p>
-              )}
-              {show && reversed && (
-                <button type="button" class="btn block swap-levels" aria-describedby={`ns-f${f.key}-error`} onClick={() => model.swapLevels(i)}>
-                  Swap low and high
-                </button>
-              )}
+              {f.kind === 'categorical' && rowMessage}
             </div>
           );
         })}
