@@ -280,13 +280,15 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
         )}
         {family === 'two-level' && (
           <>
+            <div class="hard-choice">
             <ChoiceButtons
               label="Hard-to-change factor"
               options={[{ value: 0, label: 'None' }, ...factors.map((f, i) => ({ value: f.key, label: f.name.trim() ? `${letters[i]} · ${f.name.trim()}` : letters[i] }))]}
               value={model.hardFactor.value ?? 0}
               onChoose={(key) => model.chooseHardFactor(key === 0 ? null : key)}
             />
-            <p class="quiet field-hint hard-factor-cost" role="status">
+            </div>
+            <p class={model.hardChanges.value ? 'hard-factor-cost marked' : 'quiet field-hint hard-factor-cost'} role="status">
               {model.hardChanges.value
                 ? hardToChangeText(model.hardChanges.value.label, model.hardChanges.value.changes, model.hardChanges.value.unsorted, model.hardChanges.value.seed)
                 : model.hardIndex.value === null
@@ -378,7 +380,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
               {design.generators.length > 0 && (
                 <div>
                   <dt>Generators</dt>
-                  <dd>{design.generators.join(', ')}</dd>
+                  <dd>{design.generators.map(spaced).join(', ')}</dd>
                 </div>
               )}
               {design.aliases.some((c) => c.length > 1) && !design.screening && (
