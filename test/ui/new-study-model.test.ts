@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { buildDesign } from '../../src/core/design/build-design.ts';
 import { planPower } from '../../src/core/plan/power.ts';
 import { powerInWords } from '../../src/core/plan/power-words.ts';
-import { choiceName, factorMessage, fractionOptions, plackettBurmanRunsOf, powerView } from '../../src/ui/models/new-study-model.ts';
+import { choiceName, factorMessage, fractionOptions, plackettBurmanRunsOf, powerView, responsesOf } from '../../src/ui/models/new-study-model.ts';
 
 const three = ['A1', 'B1', 'C1'].map((name) => ({ kind: 'numeric' as const, name, low: 0, high: 1 }));
 
@@ -53,5 +53,17 @@ describe('factorMessage: the planning form refuses what a new factor may not be'
   it('names the factor by the letter of its row, as the fields do (never "Factor 1")', () => {
     expect(factorMessage(row({ name: '' }), 2)).toBe('Factor C: type a name for this factor, such as Temperature.');
     expect(factorMessage(row({ low: '200', high: '160' }), 8)).toMatch(/^Factor J \(Pressure\): the low setting \(200\) is above the high setting \(160\)/);
+  });
+});
+
+const response = (over: Partial<Parameters<typeof responsesOf>[0][number]>) => ({ key: 1, name: 'Gloss', unit: 'GU', goal: 'maximize' as const, target: '', floor: 'none' as const, lowerBound: '', ...over });
+
+describe('responsesOf: the form says in plain words what a response row lacks', () => {
+  it('no response, no name, two of one name, a target that is not a number', () => {
+    expect(() => responsesOf([])).toThrow('Add a response: what you will measure at each run.');
+    expect(() => responsesOf([response({}), response({ name: ' ' })])).toThrow('Response 2: type a name for what you will measure, such as Thickness.');
+    expect(() => responsesOf([response({}), response({ name: 'gloss' })])).toThrow('Response 1 and response 2 are both called "gloss". Give each response a name of its own.');
+    expect(() => responsesOf([response({ goal: 'target', target: '7o' })])).toThrow('Gloss: the target "7o" is not a number. Type digits, with a point or a comma for decimals.');
+    expect(responsesOf([response({ goal: 'target', target: '7,5' })])[0].target).toBe(7.5);
   });
 });

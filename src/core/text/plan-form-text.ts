@@ -143,3 +143,34 @@ export function hardToChangeText(who: string, changes: number, unsortedChanges: 
 
 /** The choice of "no hard-to-change factor". */
 export const NO_HARD_FACTOR_TEXT = 'None: every factor is randomized.';
+
+// Responses and the design choice.
+
+/** No response left on the form. */
+export const NO_RESPONSE_TEXT = 'Add a response: what you will measure at each run.';
+
+/** A response row without a name. Example: responseNameText(2) -> 'Response 2: type a name for what you will measure, such as Thickness.' */
+export function responseNameText(n: number): string {
+  return `Response ${n}: type a name for what you will measure, such as Thickness.`;
+}
+
+/** Two responses with one name. */
+export function sameResponseNamesText(a: number, b: number, name: string): string {
+  return `Response ${a} and response ${b} are both called "${name.trim()}". Give each response a name of its own.`;
+}
+
+/** A response's target or lowest value that is not a number. */
+export function responseNumberText(name: string, what: 'target' | 'lowest value', typed: string): string {
+  return `${name.trim()}: the ${what} "${typed.trim()}" is not a number. Type digits, with a point or a comma for decimals.`;
+}
+
+/** "Another lowest value" chosen with its box left blank. */
+export function responseLowestMissingText(name: string): string {
+  return `${name.trim() || 'A response'}: type the lowest value it can take, or choose "No lowest value".`;
+}
+
+/** A design choice kept from before that the form no longer offers for this many factors. */
+export function notOfferedText(choice: string, factors: number): string {
+  const what = choice.charAt(0).toUpperCase() + choice.slice(1);
+  return `${what} is not offered for ${factors} factors; choose one of the above.`;
+}

@@ -10,7 +10,7 @@ import { catalogFraction } from '../../core/design/catalog.ts';
 import { parseFraction } from '../../core/design/fractional.ts';
 import { readTypedGenerators } from '../../core/design/typed-generators.ts';
 import { settingChanges } from '../../core/design/setting-changes.ts';
-import { countText, factorCalled, factorRowText, NO_TITLE_TEXT, sameFactorNamesText, seedText as seedProblemText, tooFewFactorsText } from '../../core/text/plan-form-text.ts';
+import { countText, factorCalled, factorRowText, NO_RESPONSE_TEXT, NO_TITLE_TEXT, responseLowestMissingText, responseNameText, responseNumberText, sameResponseNamesText, sameFactorNamesText, seedText as seedProblemText, tooFewFactorsText } from '../../core/text/plan-form-text.ts';
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { buildDesign, type DesignSpec } from '../../core/design/build-design.ts';
 import { catalogChoices, plackettBurmanChoices } from '../../core/design/catalog-choices.ts';
@@ -22,7 +22,7 @@ import { MAX_DESIGN_FACTORS } from '../../core/design/max-design-factors.ts';
 import type { Design } from '../../core/design/design.ts';
 import { drawSeed } from '../../core/design/random.ts';
 import { InputError } from '../../core/errors.ts';
-import { readNumber } from '../../core/factor/read-setting.ts';
+import { parseTypedNumber, readNumber } from '../../core/factor/read-setting.ts';
 import { defineFactors, type FactorSpec } from '../../core/factor/factor.ts';
 import { defineResponses } from '../../core/study/define-responses.ts';
 import type { Response } from '../../core/study/response.ts';
@@ -108,6 +108,17 @@ export function factorMessage(f: FactorDraft, i: number): string | null {
 
 /** The responses as the study keeps them (the core's rules, defineResponses); throws InputError with a clear message. */
 export function responsesOf(drafts: readonly ResponseDraft[]): Response[] {
+  // What a person can get wrong on the form, in plain words before the core's own checks.
+  if (drafts.length === 0) throw new InputError(NO_RESPONSE_TEXT);
+  drafts.forEach((r, i) => {
+    if (r.name.trim() === '') throw new InputError(responseNameText(i + 1));
+  });
+  const twins = sameNames(drafts.map((r) => r.name));
+  if (twins) throw new InputError(sameResponseNamesText(twins[0] + 1, twins[1] + 1, drafts[twins[1]].name));
+  for (const r of drafts) {
+    if (r.goal === 'target' && r.target.trim() !== '' && !Number.isFinite(parseTypedNumber(r.target))) throw new InputError(responseNumberText(r.name, 'target', r.target));
+    if (r.floor === 'other' && r.lowerBound.trim() !== '' && !Number.isFinite(parseTypedNumber(r.lowerBound))) throw new InputError(responseNumberText(r.name, 'lowest value', r.lowerBound));
+  }
   return defineResponses(
     drafts.map((r) => ({ name: r.name, unit: r.unit, goal: r.goal, target: r.target, lowerBound: r.floor === 'zero' ? 0 : r.floor === 'other' ? lowestTyped(r) : null })),
   );
@@ -115,7 +126,7 @@ export function responsesOf(drafts: readonly ResponseDraft[]): Response[] {
 
 /** The typed lowest value; an empty box under "another lowest value" is a clear message, not "no bound". */
 function lowestTyped(r: ResponseDraft): string {
-  if (r.lowerBound.trim() === '') throw new InputError(`${r.name.trim() || 'A response'}: type the lowest value it can take, or choose "No lowest value"`);
+  if (r.lowerBound.trim() === '') throw new InputError(responseLowestMissingText(r.name));
   return r.lowerBound;
 }
 

@@ -7,7 +7,13 @@ import {
   factorRowText,
   generatorCountText,
   hardToChangeText,
+  NO_RESPONSE_TEXT,
+  notOfferedText,
+  responseLowestMissingText,
+  responseNameText,
+  responseNumberText,
   sameFactorNamesText,
+  sameResponseNamesText,
   seedText,
   tooFewFactorsText,
 } from '../../../src/core/text/plan-form-text.ts';
@@ -59,5 +65,16 @@ describe('hardToChangeText', () => {
     expect(t).toContain('seed 4242 is recorded with the plan');
     expect(t).toContain('the runs are not fully randomized');
     expect(hardToChangeText('Factor B', 2, null, null)).toContain('standard order within each of its settings');
+  });
+});
+
+describe('responses and the design choice on the form', () => {
+  it('each says what to do, naming the response by its number or name', () => {
+    expect(responseNameText(2)).toBe('Response 2: type a name for what you will measure, such as Thickness.');
+    expect(sameResponseNamesText(1, 3, 'Gloss ')).toBe('Response 1 and response 3 are both called "Gloss". Give each response a name of its own.');
+    expect(responseNumberText('Thickness', 'target', ' abc ')).toBe('Thickness: the target "abc" is not a number. Type digits, with a point or a comma for decimals.');
+    expect(responseLowestMissingText('')).toBe('A response: type the lowest value it can take, or choose "No lowest value".');
+    expect(notOfferedText('the 1/4 fraction', 4)).toBe('The 1/4 fraction is not offered for 4 factors; choose one of the above.');
+    expect(NO_RESPONSE_TEXT).not.toMatch(/\bgot\b/);
   });
 });

@@ -16,7 +16,7 @@ import { SecondOrderFacts } from '../../components/second-order-facts/index.tsx'
 import { SecondOrderFields } from '../../components/second-order-fields/index.tsx';
 import { categoricalNames, type DesignFamily } from '../../models/second-order-choice.ts';
 import { secondOrderNeedsNumeric } from '../../../core/text/second-order-text.ts';
-import { aliasListText, catalogGeneratorsHint, hardToChangeText, NO_HARD_FACTOR_TEXT, spaced } from '../../../core/text/plan-form-text.ts';
+import { aliasListText, catalogGeneratorsHint, hardToChangeText, NO_HARD_FACTOR_TEXT, notOfferedText, spaced } from '../../../core/text/plan-form-text.ts';
 import { BLOCK_CHOICES, choiceName, FORM_MAX_FACTORS, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
 import './style.css';
 
@@ -230,7 +230,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
           <>
         <ChoiceButtons label="Runs of the factorial" options={model.options.value.map((o) => ({ value: o.value, label: o.label }))} value={model.fraction.value} onChoose={(v) => model.chooseFraction(v)} />
         {factors.length >= 2 && factors.length < 4 && <p class="quiet field-hint">Fractions from the catalog start at 8 runs, so they need 4 factors or more.</p>}
-        {!model.fractionOffered.value && <p class="field-error">{choiceName(model.fraction.value).replace(/^t/, 'T')} is not offered for {factors.length} factors; choose one of the above.</p>}
+        {!model.fractionOffered.value && <p class="field-error">{notOfferedText(choiceName(model.fraction.value), factors.length)}</p>}
         {model.catalogGenerators.value !== null && model.fractionOffered.value && (
           <div class="field">
             <label for="ns-generators" class="field-name">
