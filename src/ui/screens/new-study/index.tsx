@@ -284,7 +284,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
             <ChoiceButtons
               label="Hard-to-change factor"
               options={[{ value: 0, label: 'None' }, ...factors.map((f, i) => ({ value: f.key, label: f.name.trim() ? `${letters[i]} · ${f.name.trim()}` : letters[i] }))]}
-              value={model.hardFactor.value ?? 0}
+              value={model.hardIndex.value === null ? 0 : model.hardFactor.value ?? 0}
               onChoose={(key) => model.chooseHardFactor(key === 0 ? null : key)}
             />
             </div>
