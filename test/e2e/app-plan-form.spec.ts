@@ -186,6 +186,11 @@ for (const size of [
       const width = await page.evaluate(() => document.documentElement.scrollWidth);
       expect(width).toBeLessThanOrEqual(size.width);
       await page.screenshot({ path: shot(`plan-form-full-${size.width}`), fullPage: true });
+      // Removing the hard-to-change factor leaves none marked, and says so.
+      await page.getByRole('button', { name: 'Remove factor B' }).click();
+      const hard = page.getByRole('group', { name: 'Hard-to-change factor' });
+      await expect(hard.getByRole('button', { name: 'None' })).toHaveAttribute('aria-pressed', 'true');
+      await expect(page.locator('.hard-factor-cost')).toHaveText('None: every factor is randomized.');
     });
   });
 }
