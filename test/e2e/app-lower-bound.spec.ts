@@ -46,7 +46,7 @@ for (const size of [
       await floor.getByRole('button', { name: 'Another lowest value' }).click();
       // An empty box under "another lowest value" is explained and nothing is created.
       await page.getByRole('button', { name: 'Create study' }).click();
-      await expect(page.locator('.problem')).toHaveText('Roughness: type the lowest value it can take, or choose "No lowest value"');
+      await expect(page.locator('.problem')).toHaveText('Roughness: type the lowest value it can take, or choose "No lowest value".');
       await expect(page).toHaveURL(/#\/new$/);
       await floor.getByRole('button', { name: 'Cannot be negative' }).click();
       await expect(floor.getByRole('button', { name: 'Cannot be negative' })).toHaveAttribute('aria-pressed', 'true');

@@ -103,7 +103,7 @@ test('a factor with equal low and high shows the core message and creates nothin
   await fillFactor(page, 'A', 'Oven temperature', '180', '180', '°C');
   await fillFactor(page, 'B', 'Line speed', '2', '4', 'm/min');
   await page.getByLabel('Response 1 name').fill('Gloss');
-  const message = 'Oven temperature needs two different levels, got 180 and 180';
+  const message = 'Factor A (Oven temperature): the low and the high setting are both 180. Type two different settings, the smaller as the low.';
   await expect(page.locator('[data-factor="A"] .field-error')).toHaveText(message);
   await expect(page.getByLabel('Factor A low')).toHaveAttribute('aria-invalid', 'true');
   await expect(preview(page)).toContainText(`Not ready yet: ${message}`);

@@ -147,7 +147,7 @@ test('a categorical factor rules out the second-order designs with a plain messa
   await page.getByRole('group', { name: 'Factor B levels are' }).getByRole('button', { name: 'Named levels' }).click();
   await page.getByLabel('Factor B level 1').fill('old die');
   await page.getByLabel('Factor B level 2').fill('new die');
-  await expect(page.locator('.new-study .field-error').first()).toContainText('so they need numeric factors: Speed has named levels');
+  await expect(page.locator('.new-study .field-error').first()).toContainText('so they need numeric factors: Factor B (Speed) has named levels');
   await expect(preview(page)).toContainText('Not ready yet');
   const before = await page.evaluate(() => location.hash);
   await page.getByRole('button', { name: 'Create study' }).click();

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { buildDesign } from '../../src/core/design/build-design.ts';
 import { planPower } from '../../src/core/plan/power.ts';
 import { powerInWords } from '../../src/core/plan/power-words.ts';
-import { choiceName, factorMessage, fractionOptions, plackettBurmanRunsOf, powerView } from '../../src/ui/models/new-study-model.ts';
+import { choiceName, factorMessage, fractionOptions, plackettBurmanRunsOf, powerView, responsesOf } from '../../src/ui/models/new-study-model.ts';
 
 const three = ['A1', 'B1', 'C1'].map((name) => ({ kind: 'numeric' as const, name, low: 0, high: 1 }));
 
@@ -45,9 +45,25 @@ const row = (over: Partial<Parameters<typeof factorMessage>[0]>) => ({ key: 1, k
 describe('factorMessage: the planning form refuses what a new factor may not be', () => {
   it('a range too narrow to code reliably is refused at planning, naming the factor', () => {
     expect(factorMessage(row({}), 0)).toBeNull();
-    expect(factorMessage(row({ low: '1000', high: '1000.0000001' }), 0)).toMatch(/^Pressure: the range 1000 to 1000.0000001 is too narrow to code reliably/);
+    expect(factorMessage(row({ low: '1000', high: '1000.0000001' }), 0)).toMatch(/^Factor A \(Pressure\): the range 1000 to 1000.0000001 is too narrow to code reliably/);
   });
   it('a name the command line could not use is refused (the same rule as design --factor)', () => {
-    expect(factorMessage(row({ name: 'Temp, C' }), 0)).toMatch(/contains a comma/);
+    expect(factorMessage(row({ name: 'Temp, C' }), 0)).toMatch(/^Factor A \(Temp, C\): its name "Temp, C" contains a comma/);
+  });
+  it('names the factor by the letter of its row, as the fields do (never "Factor 1")', () => {
+    expect(factorMessage(row({ name: '' }), 2)).toBe('Factor C: type a name for this factor, such as Temperature.');
+    expect(factorMessage(row({ low: '200', high: '160' }), 8)).toMatch(/^Factor J \(Pressure\): the low setting \(200\) is above the high setting \(160\)/);
+  });
+});
+
+const response = (over: Partial<Parameters<typeof responsesOf>[0][number]>) => ({ key: 1, name: 'Gloss', unit: 'GU', goal: 'maximize' as const, target: '', floor: 'none' as const, lowerBound: '', ...over });
+
+describe('responsesOf: the form says in plain words what a response row lacks', () => {
+  it('no response, no name, two of one name, a target that is not a number', () => {
+    expect(() => responsesOf([])).toThrow('Add a response: what you will measure at each run.');
+    expect(() => responsesOf([response({}), response({ name: ' ' })])).toThrow('Response 2: type a name for what you will measure, such as Thickness.');
+    expect(() => responsesOf([response({}), response({ name: 'gloss' })])).toThrow('Response 1 and response 2 are both called "gloss". Give each response a name of its own.');
+    expect(() => responsesOf([response({ goal: 'target', target: '7o' })])).toThrow('Gloss: the target "7o" is not a number. Type digits, with a point or a comma for decimals.');
+    expect(responsesOf([response({ goal: 'target', target: '7,5' })])[0].target).toBe(7.5);
   });
 });

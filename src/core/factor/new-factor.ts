@@ -62,28 +62,42 @@ function suggestion(text: string): string {
  *   'Temperature: the low setting (200) is above the high setting (160); the low is coded -1 ...'.
  */
 export function checkNewFactor(spec: FactorSpec): void {
+  checkFactor(spec, true);
+}
+
+/**
+ * checkNewFactor with messages that leave the factor's name out, for a caller that names the
+ * factor its own way (the planning form: "Factor A (Temperature): ...").
+ * Example: checkNewFactorUnnamed({kind:'numeric', name:'Temp, C', low:1, high:2}) throws 'its name "Temp, C" contains a comma ...'.
+ */
+export function checkNewFactorUnnamed(spec: FactorSpec): void {
+  checkFactor(spec, false);
+}
+
+function checkFactor(spec: FactorSpec, named: boolean): void {
   const name = spec.name.trim();
-  const problem = namingProblem(name, `The factor name "${name}"`);
+  const lead = named ? `${name}: ` : '';
+  const problem = namingProblem(name, named ? `The factor name "${name}"` : `its name "${name}"`);
   if (problem) throw new InputError(problem);
   if (spec.kind === 'categorical') {
     for (const level of spec.levels) {
-      const p = namingProblem(level.trim(), `The level "${level.trim()}" of ${name}`);
+      const p = namingProblem(level.trim(), named ? `The level "${level.trim()}" of ${name}` : `its level "${level.trim()}"`);
       if (p) throw new InputError(p);
     }
     return;
   }
   const unit = CONTROL.exec(spec.unit ?? '');
-  if (unit) throw new InputError(`The unit of ${name} contains the control character U+${unit[0].charCodeAt(0).toString(16).toUpperCase().padStart(4, '0')}, which cannot be typed or shown; remove it`);
+  if (unit) throw new InputError(`${named ? `The unit of ${name}` : 'its unit'} contains the control character U+${unit[0].charCodeAt(0).toString(16).toUpperCase().padStart(4, '0')}, which cannot be typed or shown; remove it`);
   if (spec.low > spec.high) {
     throw new InputError(
-      `${name}: the low setting (${spec.low}) is above the high setting (${spec.high}); the low is coded -1 and must be the smaller, so give ${spec.high} as the low and ${spec.low} as the high`,
+      `${lead}the low setting (${spec.low}) is above the high setting (${spec.high}); the low is coded -1 and must be the smaller, so give ${spec.high} as the low and ${spec.low} as the high`,
     );
   }
   const size = Math.max(Math.abs(spec.low), Math.abs(spec.high));
   const half = spec.high / 2 - spec.low / 2;
   if (spec.low < spec.high && Number.EPSILON * size > SETTING_TOLERANCE * half) {
     throw new InputError(
-      `${name}: the range ${spec.low} to ${spec.high} is too narrow to code reliably: coding divides by half the range (${half}), so the round-off of settings near ${size} ` +
+      `${lead}the range ${spec.low} to ${spec.high} is too narrow to code reliably: coding divides by half the range (${half}), so the round-off of settings near ${size} ` +
         `would exceed the ${SETTING_TOLERANCE} within which two coded settings count as the same; widen the range, or give the factor as an offset from a reference (for example 0 to ${spec.high - spec.low} above ${spec.low})`,
     );
   }

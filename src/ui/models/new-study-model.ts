@@ -4,7 +4,13 @@
  * The plan is built by the core's buildDesign on every change, so the preview shows exactly what
  * "Create study" will store. A wrong entry gets a message and nothing is created.
  */
-import { checkNewFactor } from '../../core/factor/new-factor.ts';
+import { factorRowProblem, factorRowSpec, sameNames, swapLowHigh, type FactorRowProblem } from '../../core/factor/factor-row-problem.ts';
+import { factorLetters } from '../../core/factor/letters.ts';
+import { catalogFraction } from '../../core/design/catalog.ts';
+import { parseFraction } from '../../core/design/fractional.ts';
+import { readTypedGenerators } from '../../core/design/typed-generators.ts';
+import { settingChanges } from '../../core/design/setting-changes.ts';
+import { countText, factorCalled, factorRowText, NO_RESPONSE_TEXT, NO_TITLE_TEXT, responseLowestMissingText, responseNameText, responseNumberText, sameResponseNamesText, sameFactorNamesText, seedText as seedProblemText, tooFewFactorsText } from '../../core/text/plan-form-text.ts';
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { buildDesign, type DesignSpec } from '../../core/design/build-design.ts';
 import { catalogChoices, plackettBurmanChoices } from '../../core/design/catalog-choices.ts';
@@ -16,7 +22,7 @@ import { MAX_DESIGN_FACTORS } from '../../core/design/max-design-factors.ts';
 import type { Design } from '../../core/design/design.ts';
 import { drawSeed } from '../../core/design/random.ts';
 import { InputError } from '../../core/errors.ts';
-import { readNumber } from '../../core/factor/read-setting.ts';
+import { parseTypedNumber, readNumber } from '../../core/factor/read-setting.ts';
 import { defineFactors, type FactorSpec } from '../../core/factor/factor.ts';
 import { defineResponses } from '../../core/study/define-responses.ts';
 import type { Response } from '../../core/study/response.ts';
@@ -90,34 +96,29 @@ function blankResponse(): ResponseDraft {
 }
 
 /** A factor row as the core's factor declaration; throws InputError for a low or high that is not a number. */
-export function factorSpecOf(f: FactorDraft, label = f.name.trim()): FactorSpec {
-  if (f.kind === 'categorical') return { kind: 'categorical', name: f.name, levels: [f.levelA, f.levelB] };
-  const unit = f.unit.trim();
-  return { kind: 'numeric', name: f.name, low: readNumber(f.low, `${label}: the low setting`), high: readNumber(f.high, `${label}: the high setting`), ...(unit ? { unit } : {}) };
+export function factorSpecOf(f: FactorDraft): FactorSpec {
+  return factorRowSpec(f);
 }
 
-/** The message for one factor row on its own, or null when it is complete and valid. */
+/** The message for row `i` on its own, naming the factor by its letter and name as its fields do, or null when it is complete and valid. */
 export function factorMessage(f: FactorDraft, i: number): string | null {
-  const label = f.name.trim() || `Factor ${i + 1}`;
-  if (f.kind === 'numeric') {
-    for (const [text, which] of [[f.low, 'low'], [f.high, 'high']] as const) {
-      if (text.trim() === '') return `${label} needs a ${which} setting`;
-    }
-  }
-  try {
-    const spec = factorSpecOf(f, label);
-    defineFactors([spec]);
-    // The rules of a new factor (usable names, low below high, a range wide enough to code).
-    checkNewFactor(spec);
-    return null;
-  } catch (err) {
-    if (err instanceof InputError) return err.message.replace(/^Factor 1 /, `Factor ${i + 1} `);
-    throw err;
-  }
+  const p = factorRowProblem(f);
+  return p === null ? null : factorRowText(p, factorLetters(i + 1)[i], f.name);
 }
 
 /** The responses as the study keeps them (the core's rules, defineResponses); throws InputError with a clear message. */
 export function responsesOf(drafts: readonly ResponseDraft[]): Response[] {
+  // What a person can get wrong on the form, in plain words before the core's own checks.
+  if (drafts.length === 0) throw new InputError(NO_RESPONSE_TEXT);
+  drafts.forEach((r, i) => {
+    if (r.name.trim() === '') throw new InputError(responseNameText(i + 1));
+  });
+  const twins = sameNames(drafts.map((r) => r.name));
+  if (twins) throw new InputError(sameResponseNamesText(twins[0] + 1, twins[1] + 1, drafts[twins[1]].name));
+  for (const r of drafts) {
+    if (r.goal === 'target' && r.target.trim() !== '' && !Number.isFinite(parseTypedNumber(r.target))) throw new InputError(responseNumberText(r.name, 'target', r.target));
+    if (r.floor === 'other' && r.lowerBound.trim() !== '' && !Number.isFinite(parseTypedNumber(r.lowerBound))) throw new InputError(responseNumberText(r.name, 'lowest value', r.lowerBound));
+  }
   return defineResponses(
     drafts.map((r) => ({ name: r.name, unit: r.unit, goal: r.goal, target: r.target, lowerBound: r.floor === 'zero' ? 0 : r.floor === 'other' ? lowestTyped(r) : null })),
   );
@@ -125,14 +126,14 @@ export function responsesOf(drafts: readonly ResponseDraft[]): Response[] {
 
 /** The typed lowest value; an empty box under "another lowest value" is a clear message, not "no bound". */
 function lowestTyped(r: ResponseDraft): string {
-  if (r.lowerBound.trim() === '') throw new InputError(`${r.name.trim() || 'A response'}: type the lowest value it can take, or choose "No lowest value"`);
+  if (r.lowerBound.trim() === '') throw new InputError(responseLowestMissingText(r.name));
   return r.lowerBound;
 }
 
 /** A count typed in a box: a whole number, or InputError saying what is needed. */
 function wholeCount(text: string, what: string, min: number): number {
   const s = text.trim();
-  if (!/^\d+$/.test(s) || Number(s) < min) throw new InputError(`${what} must be a whole number, ${min} or more, got "${s}"`);
+  if (!/^\d+$/.test(s) || Number(s) < min) throw new InputError(countText(what, min, s));
   return Number(s);
 }
 
@@ -226,28 +227,52 @@ export const NewStudyModel = createModel((store: Store) => {
     return /^\d+$/.test(s) && Number.isSafeInteger(Number(s)) ? Number(s) : Number.NaN;
   });
 
-  const factorMessages = computed(() => factors.value.map((f, i) => factorMessage(f, i)));
+  const factorProblems = computed<(FactorRowProblem | null)[]>(() => factors.value.map((f) => factorRowProblem(f)));
+  const factorMessages = computed(() => {
+    const letters = factorLetters(factors.value.length);
+    return factors.value.map((f, i) => {
+      const p = factorProblems.value[i];
+      return p === null ? null : factorRowText(p, letters[i], f.name);
+    });
+  });
+  /** Typed generators for a catalog fraction ("E = ABCD"); blank keeps the catalog's. */
+  const generatorsText = signal('');
+  /** The key of the factor kept sorted as hard to change, or null. */
+  const hardFactor = signal<number | null>(null);
+  /** The index of the hard-to-change factor among the rows, or null (also when its row was removed). */
+  const hardIndex = computed(() => {
+    const i = factors.value.findIndex((f) => f.key === hardFactor.value);
+    return i < 0 ? null : i;
+  });
 
   /** The factor rows as the core's declarations and the seed, or InputError for what cannot be read. */
   function factorsAndSeed(): { specs: FactorSpec[]; seed: number | null } {
     const rows = factors.value;
+    if (rows.length < 2) throw new InputError(tooFewFactorsText(rows.length));
     rows.forEach((f, i) => {
       const m = factorMessages.value[i];
       if (m) throw new InputError(m);
     });
+    const twins = sameNames(rows.map((f) => f.name));
+    if (twins) {
+      const letters = factorLetters(rows.length);
+      throw new InputError(sameFactorNamesText([letters[twins[0]], letters[twins[1]]], rows[twins[1]].name));
+    }
     const s = seed.value;
-    if (s !== null && !Number.isFinite(s)) throw new InputError(`The seed must be a whole number, or left blank to draw one; got "${seedText.value.trim()}"`);
+    if (s !== null && !Number.isFinite(s)) throw new InputError(seedProblemText(seedText.value));
     return { specs: rows.map((f) => factorSpecOf(f)), seed: s };
   }
 
-  /** The design spec, or InputError for what cannot be read. */
-  function spec(): DesignSpec {
-    const rows = factors.value;
-    const s = factorsAndSeed().seed;
+  /** The design spec, or InputError for what cannot be read; `sorted` false leaves out the hard-to-change factor (for the comparison). */
+  function spec(sorted = true): DesignSpec {
+    const { specs, seed: s } = factorsAndSeed();
     const pb = plackettBurmanRunsOf(fraction.value);
+    const typed = pb === null && fraction.value !== 'full' ? readTypedGenerators(generatorsText.value, defineFactors(specs), fraction.value, parseFraction(fraction.value)) : null;
+    const hard = hardIndex.value;
     return {
-      factors: rows.map((f) => factorSpecOf(f)),
-      ...(pb !== null ? { plackettBurman: pb } : fraction.value === 'full' ? {} : { fraction: fraction.value }),
+      factors: specs,
+      ...(pb !== null ? { plackettBurman: pb } : fraction.value === 'full' ? {} : typed ? { generators: typed } : { fraction: fraction.value }),
+      ...(sorted && hard !== null ? { sortBy: [factorLetters(specs.length)[hard]] } : {}),
       centerRuns: wholeCount(centerRuns.value, 'Center runs', 0),
       replicates: wholeCount(replicates.value, 'Replicates', 1),
       blocks: blocks.value,
@@ -266,6 +291,57 @@ export const NewStudyModel = createModel((store: Store) => {
       return { design: buildDesign(spec()), error: null };
     } catch (err) {
       if (err instanceof InputError) return { design: null, error: err.message };
+      throw err;
+    }
+  });
+
+  /**
+   * The hard-to-change factor's changes in the planned order, and in the order the same seed
+   * gives without sorting (null in standard order, where the comparison says nothing).
+   */
+  const hardChanges = computed<{ readonly index: number; readonly label: string; readonly changes: number; readonly unsorted: number | null; readonly seed: number | null } | null>(() => {
+    const i = hardIndex.value;
+    const d = preview.value.design;
+    if (i === null || d === null || family.value !== 'two-level') return null;
+    let unsorted: number | null = null;
+    if (d.seed !== null) {
+      try {
+        unsorted = settingChanges(buildDesign(spec(false)).runs, i);
+      } catch (err) {
+        if (!(err instanceof InputError)) throw err;
+      }
+    }
+    return { index: i, label: factorCalled(factorLetters(i + 1)[i], factors.value[i].name), changes: settingChanges(d.runs, i), unsorted, seed: d.seed };
+  });
+
+  /** The catalog's generators for the chosen fraction (shown under a blank Generators box), or null. */
+  const catalogGenerators = computed<readonly string[] | null>(() => {
+    const f = fraction.value;
+    if (f === 'full' || plackettBurmanRunsOf(f) !== null) return null;
+    try {
+      return catalogFraction(factors.value.length, parseFraction(f)).generators;
+    } catch (err) {
+      if (err instanceof InputError) return null;
+      throw err;
+    }
+  });
+
+  /** What is wrong with the typed generators, shown beside their box; null when they are blank, valid, or the factors are not ready. */
+  const generatorsProblem = computed<string | null>(() => {
+    const f = fraction.value;
+    if (generatorsText.value.trim() === '' || f === 'full' || plackettBurmanRunsOf(f) !== null) return null;
+    let specs: FactorSpec[];
+    try {
+      specs = factorsAndSeed().specs;
+    } catch (err) {
+      if (err instanceof InputError) return null;
+      throw err;
+    }
+    try {
+      readTypedGenerators(generatorsText.value, defineFactors(specs), f, parseFraction(f));
+      return null;
+    } catch (err) {
+      if (err instanceof InputError) return err.message;
       throw err;
     }
   });
@@ -345,6 +421,30 @@ export const NewStudyModel = createModel((store: Store) => {
     /** True when the seed in use was drawn here (the box is blank). */
     seedDrawn: computed(() => randomize.value && seedText.value.trim() === ''),
     factorMessages,
+    /** Each row's typed problem (a reversed low and high offers the swap), or null. */
+    factorProblems,
+    /** Exchanges the low and high of row i (or its two level names); nothing else changes. */
+    swapLevels(i: number) {
+      const next = [...factors.peek()];
+      next[i] = swapLowHigh(next[i]);
+      factors.value = next;
+      edit();
+    },
+    generatorsText: generatorsText as ReadonlySignal<string>,
+    setGeneratorsText(v: string) {
+      generatorsText.value = v;
+      edit();
+    },
+    catalogGenerators,
+    generatorsProblem,
+    hardFactor: hardFactor as ReadonlySignal<number | null>,
+    hardIndex,
+    /** Marks the factor with this key as hard to change (null: none); one at most. */
+    chooseHardFactor(key: number | null) {
+      hardFactor.value = key;
+      edit();
+    },
+    hardChanges,
     responseProblem,
     preview,
     effectText: effectText as ReadonlySignal<string>,
@@ -437,7 +537,7 @@ export const NewStudyModel = createModel((store: Store) => {
       problem.value = null;
       try {
         const name = title.peek().trim();
-        if (name === '') throw new InputError('Give the study a title, so it can be found in the list of studies');
+        if (name === '') throw new InputError(NO_TITLE_TEXT);
         const p = preview.peek();
         if (p.error !== null) throw new InputError(p.error);
         const plan = studyPlan(name, purpose.peek().trim(), responsesOf(responses.peek()), p.design);

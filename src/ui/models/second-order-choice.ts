@@ -11,6 +11,8 @@ import type { SecondOrderPlan } from '../../core/design/second-order-plan.ts';
 import { InputError } from '../../core/errors.ts';
 import type { FactorSpec } from '../../core/factor/factor.ts';
 import { secondOrderNeedsNumeric } from '../../core/text/second-order-text.ts';
+import { countText, factorCalled } from '../../core/text/plan-form-text.ts';
+import { factorLetters } from '../../core/factor/letters.ts';
 
 /** The design families the form offers. */
 export type DesignFamily = 'two-level' | 'central composite' | 'Box-Behnken';
@@ -33,9 +35,10 @@ export function defaultCenterRuns(family: SecondOrderChoice['family'], blocks: 1
   return blocks === 2 ? DEFAULT_CCD_CENTER_RUNS.perBlock : DEFAULT_CCD_CENTER_RUNS.unblocked;
 }
 
-/** The categorical factors' names (empty when every factor is numeric). */
+/** The categorical factors, named by letter and name as the form's fields are (empty when every factor is numeric). */
 export function categoricalNames(specs: readonly { readonly kind: string; readonly name: string }[]): string[] {
-  return specs.filter((s) => s.kind === 'categorical').map((s) => s.name.trim() || 'A factor');
+  const letters = factorLetters(specs.length);
+  return specs.flatMap((s, i) => (s.kind === 'categorical' ? [factorCalled(letters[i], s.name)] : []));
 }
 
 function axialOf(choice: SecondOrderChoice): AxialDistance {
@@ -46,7 +49,7 @@ function axialOf(choice: SecondOrderChoice): AxialDistance {
 
 function centerCount(text: string): number {
   const s = text.trim();
-  if (!/^\d+$/.test(s)) throw new InputError(`Center runs must be a whole number, 0 or more, got "${s}"`);
+  if (!/^\d+$/.test(s)) throw new InputError(countText('Center runs', 0, s));
   return Number(s);
 }
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { checkNewFactor, namingProblem, RESERVED_NAME_CHARACTERS } from '../../../src/core/factor/new-factor.ts';
+import { checkNewFactor, checkNewFactorUnnamed, namingProblem, RESERVED_NAME_CHARACTERS } from '../../../src/core/factor/new-factor.ts';
 import { InputError } from '../../../src/core/errors.ts';
 
 describe('namingProblem', () => {
@@ -59,5 +59,14 @@ describe('checkNewFactor', () => {
   });
   it('degenerate input: an equal pair is left to defineFactors (nothing to say here)', () => {
     expect(() => checkNewFactor({ kind: 'numeric', name: 'T', low: 5, high: 5 })).not.toThrow();
+  });
+});
+
+describe('checkNewFactorUnnamed', () => {
+  it('the same rules, in messages that leave the name out for a caller that names the factor itself', () => {
+    expect(() => checkNewFactorUnnamed({ kind: 'numeric', name: 'A,B', low: 1, high: 2 })).toThrow(/^its name "A,B" contains a comma/);
+    expect(() => checkNewFactorUnnamed({ kind: 'categorical', name: 'Powder', levels: ['matte', 'gloss:fine'] })).toThrow(/^its level "gloss:fine" contains a colon/);
+    expect(() => checkNewFactorUnnamed({ kind: 'numeric', name: 'T', low: 2, high: 1 })).toThrow(/^the low setting \(2\) is above the high setting \(1\)/);
+    expect(() => checkNewFactorUnnamed({ kind: 'numeric', name: 'T', low: 1, high: 2 })).not.toThrow();
   });
 });

@@ -89,6 +89,11 @@ describe('verdictText: one sentence per verdict', () => {
 
 /** Fragments of the design builder's sentences (core/text/design-text.ts). */
 const designFragments = [
+  // The planning form's sentences (core/text/plan-form-text.ts).
+  'is not the letter of a factor above',
+  'in the fully randomized order of the same seed',
+  'the low and the high setting are both',
+  'Give each factor a name of its own',
   'Generators from the minimum aberration catalog',
   'in standard order are',
   'It separates no pair of main effects',

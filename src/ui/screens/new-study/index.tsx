@@ -16,6 +16,7 @@ import { SecondOrderFacts } from '../../components/second-order-facts/index.tsx'
 import { SecondOrderFields } from '../../components/second-order-fields/index.tsx';
 import { categoricalNames, type DesignFamily } from '../../models/second-order-choice.ts';
 import { secondOrderNeedsNumeric } from '../../../core/text/second-order-text.ts';
+import { aliasListText, catalogGeneratorsHint, hardToChangeText, NO_HARD_FACTOR_TEXT, notOfferedText, spaced } from '../../../core/text/plan-form-text.ts';
 import { BLOCK_CHOICES, choiceName, FORM_MAX_FACTORS, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
 import './style.css';
 
@@ -40,6 +41,8 @@ const FAMILY_CHOICES: readonly { value: DesignFamily; label: string }[] = [
   { value: 'central composite', label: 'Central composite' },
   { value: 'Box-Behnken', label: 'Box-Behnken' },
 ];
+/** Alias chains listed in the preview before "and N more" (a design choice: a short list on a phone). */
+const ALIASES_SHOWN = 8;
 const SHOWN_WITH_FACTS = new Set<string | undefined>(['axial-outside', 'standing-caution']);
 const ORDER_CHOICES = [
   { value: 'random' as const, label: 'Randomized' },
@@ -101,6 +104,14 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
     void model.loadNoiseSources();
   }, [model]);
   const power = model.power.value;
+  const shownMessages = `${model.factorMessages.value.join('|')}|${model.generatorsProblem.value ?? ''}`;
+  // A message that appears under the box being typed in is scrolled clear of the plan bar held
+  // at the foot (the root's scroll-padding-bottom); 'nearest' leaves it alone when it is in view.
+  useEffect(() => {
+    const active = document.activeElement;
+    const holder = active instanceof HTMLElement ? (active.closest('.plan-card') ?? active.closest('.field')) : null;
+    holder?.querySelector('.field-error')?.scrollIntoView({ block: 'nearest' });
+  }, [shownMessages]);
 
   async function create() {
     const made = await model.create();
@@ -132,6 +143,20 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
           const letter = letters[i];
           const message = model.factorMessages.value[i];
           const show = message !== null && (model.tried.value || filledIn(f));
+          const reversed = model.factorProblems.value[i]?.kind === 'reversed';
+          // Right under the settings it is about, so the plan bar at the foot does not cover it while typing.
+          const rowMessage = show && (
+            <>
+              <p class="field-error" role="alert" id={`ns-f${f.key}-error`}>
+                {message}
+              </p>
+              {reversed && (
+                <button type="button" class="btn block swap-levels" aria-describedby={`ns-f${f.key}-error`} onClick={() => model.swapLevels(i)}>
+                  Swap low and high
+                </button>
+              )}
+            </>
+          );
           return (
             <div class="plan-card" key={f.key} data-factor={letter}>
               <div class="plan-card-head">
@@ -148,6 +173,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
                     <TextField id={`ns-f${f.key}-low`} label={`Factor ${letter} low`} numeric value={f.low} onInput={(v) => model.setFactor(i, { low: v })} invalid={show} />
                     <TextField id={`ns-f${f.key}-high`} label={`Factor ${letter} high`} numeric value={f.high} onInput={(v) => model.setFactor(i, { high: v })} invalid={show} />
                   </div>
+                  {rowMessage}
                   <TextField id={`ns-f${f.key}-unit`} label={`Factor ${letter} unit`} value={f.unit} placeholder="e.g. °C" onInput={(v) => model.setFactor(i, { unit: v })} />
                 </>
               ) : (
@@ -156,11 +182,7 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
                   <TextField id={`ns-f${f.key}-b`} label={`Factor ${letter} level 2`} value={f.levelB} onInput={(v) => model.setFactor(i, { levelB: v })} invalid={show} />
                 </div>
               )}
-              {show && (
-                <p class="field-error" role="alert">
-                  {message}
-                </p>
-              )}
+              {f.kind === 'categorical' && rowMessage}
             </div>
           );
         })}
@@ -208,7 +230,35 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
           <>
         <ChoiceButtons label="Runs of the factorial" options={model.options.value.map((o) => ({ value: o.value, label: o.label }))} value={model.fraction.value} onChoose={(v) => model.chooseFraction(v)} />
         {factors.length >= 2 && factors.length < 4 && <p class="quiet field-hint">Fractions from the catalog start at 8 runs, so they need 4 factors or more.</p>}
-        {!model.fractionOffered.value && <p class="field-error">{choiceName(model.fraction.value).replace(/^t/, 'T')} is not offered for {factors.length} factors; choose one of the above.</p>}
+        {!model.fractionOffered.value && <p class="field-error">{notOfferedText(choiceName(model.fraction.value), factors.length)}</p>}
+        {model.catalogGenerators.value !== null && model.fractionOffered.value && (
+          <div class="field">
+            <label for="ns-generators" class="field-name">
+              Generators (optional)
+            </label>
+            <p class="quiet field-hint" id="ns-generators-hint">
+              {catalogGeneratorsHint(model.catalogGenerators.value)}
+            </p>
+            <input
+              id="ns-generators"
+              class="text"
+              type="text"
+              autocomplete="off"
+              autocapitalize="characters"
+              spellcheck={false}
+              placeholder={model.catalogGenerators.value.map(spaced).join(', ')}
+              value={model.generatorsText.value}
+              aria-describedby={model.generatorsProblem.value ? 'ns-generators-hint ns-generators-error' : 'ns-generators-hint'}
+              aria-invalid={model.generatorsProblem.value ? true : undefined}
+              onInput={(e) => model.setGeneratorsText(valueOf(e))}
+            />
+            {model.generatorsProblem.value && (
+              <p class="field-error" role="alert" id="ns-generators-error">
+                {model.generatorsProblem.value}
+              </p>
+            )}
+          </div>
+        )}
         <CountStepper id="ns-center" label="Center runs" hint="Per replicate; numeric factors at the middle of their ranges." value={model.centerRuns.value} min={0} onChange={(v) => model.setCenterRuns(v)} />
         <CountStepper id="ns-replicates" label="Replicates" hint="Times the whole design is run." value={model.replicates.value} min={1} onChange={(v) => model.setReplicates(v)} />
         <div class="choice-compact">
@@ -227,6 +277,25 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
             onBlocks={(n) => model.chooseSecondOrderBlocks(n)}
             onCenterRuns={(v) => model.setSecondOrderCenterRuns(v)}
           />
+        )}
+        {family === 'two-level' && (
+          <>
+            <div class="hard-choice">
+            <ChoiceButtons
+              label="Hard-to-change factor"
+              options={[{ value: 0, label: 'None' }, ...factors.map((f, i) => ({ value: f.key, label: f.name.trim() ? `${letters[i]} · ${f.name.trim()}` : letters[i] }))]}
+              value={model.hardIndex.value === null ? 0 : model.hardFactor.value ?? 0}
+              onChoose={(key) => model.chooseHardFactor(key === 0 ? null : key)}
+            />
+            </div>
+            <p class={model.hardChanges.value ? 'hard-factor-cost marked' : 'quiet field-hint hard-factor-cost'} role="status">
+              {model.hardChanges.value
+                ? hardToChangeText(model.hardChanges.value.label, model.hardChanges.value.changes, model.hardChanges.value.unsorted, model.hardChanges.value.seed)
+                : model.hardIndex.value === null
+                  ? NO_HARD_FACTOR_TEXT
+                  : ''}
+            </p>
+          </>
         )}
         <ChoiceButtons label="Run order" options={ORDER_CHOICES} value={model.randomize.value ? 'random' : 'standard'} onChoose={(v) => model.setRandomize(v === 'random')} />
         {model.randomize.value && (
@@ -311,7 +380,17 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
               {design.generators.length > 0 && (
                 <div>
                   <dt>Generators</dt>
-                  <dd>{design.generators.join(', ')}</dd>
+                  <dd>{design.generators.map(spaced).join(', ')}</dd>
+                </div>
+              )}
+              {design.aliases.some((c) => c.length > 1) && !design.screening && (
+                <div>
+                  <dt>Aliases</dt>
+                  <dd class="plan-aliases">
+                    {aliasListText(design.aliases, ALIASES_SHOWN).map((line) => (
+                      <span key={line}>{line}</span>
+                    ))}
+                  </dd>
                 </div>
               )}
               {design.blockWords.length > 0 && (
