@@ -92,34 +92,36 @@ export function ContourChart({ grid, levels, xName, yName, xLabel, yLabel, respo
         ) : null}
         . Lines join settings with the same predicted {responseLabel}.{othersNote ? ` ${othersNote}` : ''}
       </figcaption>
-      <table class="chart-table contour-table" data-testid="contour-table">
-        <caption>
-          Predicted {responseLabel}: {yName} down, {xName} across
-        </caption>
-        <thead>
-          <tr>
-            <th scope="col">
-              <span class="visually-hidden">{yName} \ {xName}</span>
-            </th>
-            {idx.map((i) => (
-              <th scope="col" key={i}>
-                {xLabel(grid.xs[i])}
+      <div class="contour-table-wrap">
+        <table class="chart-table contour-table" data-testid="contour-table">
+          <caption>
+            Predicted {responseLabel}: {yName} down, {xName} across
+          </caption>
+          <thead>
+            <tr>
+              <th scope="col">
+                <span class="visually-hidden">{yName} \ {xName}</span>
               </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {[...idx].reverse().map((j) => (
-            <tr key={j}>
-              <th scope="row">{yLabel(grid.ys[j])}</th>
-              {idx.map((i) => {
-                const v = grid.values[i + j * n];
-                return <td key={i}>{Number.isNaN(v) ? '–' : num(v)}</td>;
-              })}
+              {idx.map((i) => (
+                <th scope="col" key={i}>
+                  {xLabel(grid.xs[i])}
+                </th>
+              ))}
             </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {[...idx].reverse().map((j) => (
+              <tr key={j}>
+                <th scope="row">{yLabel(grid.ys[j])}</th>
+                {idx.map((i) => {
+                  const v = grid.values[i + j * n];
+                  return <td key={i}>{Number.isNaN(v) ? '–' : num(v)}</td>;
+                })}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
       <p class="quiet" data-testid="contour-levels">
         Lines drawn at {levels.length === 0 ? 'no level (the predicted response is the same everywhere here)' : levels.map((v) => num(v)).join(', ')}.
       </p>

@@ -18,6 +18,7 @@ import { categoricalNames, type DesignFamily } from '../../models/second-order-c
 import { secondOrderNeedsNumeric } from '../../../core/text/second-order-text.ts';
 import { aliasListText, catalogGeneratorsHint, hardToChangeText, NO_HARD_FACTOR_TEXT, notOfferedText, spaced } from '../../../core/text/plan-form-text.ts';
 import { BLOCK_CHOICES, choiceName, FORM_MAX_FACTORS, NewStudyModel, type FactorDraft, type ResponseDraft } from '../../models/new-study-model.ts';
+import { SignToggle } from '../../components/sign-toggle/index.tsx';
 import './style.css';
 
 export type NewStudyScreenProps = { readonly store: Store };
@@ -61,25 +62,42 @@ type TextFieldProps = {
   readonly numeric?: boolean;
   readonly invalid?: boolean;
   readonly placeholder?: string;
+  /** A number that may be negative: a sign button beside it, for keypads without a minus. */
+  readonly signed?: boolean;
 };
 
-function TextField({ id, label, value, onInput, numeric, invalid, placeholder }: TextFieldProps) {
+/** "Factor A low" -> "Factor A's low", so the sign button's name never repeats the field's own label. */
+function possessive(label: string): string {
+  return label.replace(/^(\S+ \S+) /, "$1's ");
+}
+
+function TextField({ id, label, value, onInput, numeric, invalid, placeholder, signed }: TextFieldProps) {
+  const input = (
+    <input
+      id={id}
+      class={numeric ? 'num' : 'text'}
+      type="text"
+      inputMode={numeric ? 'decimal' : undefined}
+      autocomplete="off"
+      value={value}
+      placeholder={placeholder}
+      aria-invalid={invalid ? true : undefined}
+      onInput={(e) => onInput(valueOf(e))}
+    />
+  );
   return (
     <div class="field">
       <label for={id} class="field-name">
         {label}
       </label>
-      <input
-        id={id}
-        class={numeric ? 'num' : 'text'}
-        type="text"
-        inputMode={numeric ? 'decimal' : undefined}
-        autocomplete="off"
-        value={value}
-        placeholder={placeholder}
-        aria-invalid={invalid ? true : undefined}
-        onInput={(e) => onInput(valueOf(e))}
-      />
+      {signed ? (
+        <div class="signed-entry">
+          {input}
+          <SignToggle text={value} what={possessive(label)} controls={id} onText={onInput} />
+        </div>
+      ) : (
+        input
+      )}
     </div>
   );
 }
@@ -170,8 +188,8 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
               {f.kind === 'numeric' ? (
                 <>
                   <div class="pair">
-                    <TextField id={`ns-f${f.key}-low`} label={`Factor ${letter} low`} numeric value={f.low} onInput={(v) => model.setFactor(i, { low: v })} invalid={show} />
-                    <TextField id={`ns-f${f.key}-high`} label={`Factor ${letter} high`} numeric value={f.high} onInput={(v) => model.setFactor(i, { high: v })} invalid={show} />
+                    <TextField id={`ns-f${f.key}-low`} label={`Factor ${letter} low`} numeric signed value={f.low} onInput={(v) => model.setFactor(i, { low: v })} invalid={show} />
+                    <TextField id={`ns-f${f.key}-high`} label={`Factor ${letter} high`} numeric signed value={f.high} onInput={(v) => model.setFactor(i, { high: v })} invalid={show} />
                   </div>
                   {rowMessage}
                   <TextField id={`ns-f${f.key}-unit`} label={`Factor ${letter} unit`} value={f.unit} placeholder="e.g. °C" onInput={(v) => model.setFactor(i, { unit: v })} />
@@ -205,10 +223,10 @@ export function NewStudyScreen({ store }: NewStudyScreenProps) {
             <TextField id={`ns-r${r.key}-name`} label={`Response ${i + 1} name`} value={r.name} onInput={(v) => model.setResponse(i, { name: v })} />
             <TextField id={`ns-r${r.key}-unit`} label={`Response ${i + 1} unit`} value={r.unit} onInput={(v) => model.setResponse(i, { unit: v })} />
             <ChoiceButtons label={`Response ${i + 1} goal`} options={GOAL_CHOICES} value={r.goal} onChoose={(goal) => model.setResponse(i, { goal })} />
-            {r.goal === 'target' && <TextField id={`ns-r${r.key}-target`} label={`Response ${i + 1} target`} numeric value={r.target} onInput={(v) => model.setResponse(i, { target: v })} />}
+            {r.goal === 'target' && <TextField id={`ns-r${r.key}-target`} label={`Response ${i + 1} target`} numeric signed value={r.target} onInput={(v) => model.setResponse(i, { target: v })} />}
             <ChoiceButtons label={`Response ${i + 1} lowest value it can take`} options={FLOOR_CHOICES} value={r.floor} onChoose={(floor) => model.setResponse(i, { floor })} />
             {r.floor === 'other' && (
-              <TextField id={`ns-r${r.key}-floor`} label={`Response ${i + 1} lowest value`} numeric value={r.lowerBound} onInput={(v) => model.setResponse(i, { lowerBound: v })} />
+              <TextField id={`ns-r${r.key}-floor`} label={`Response ${i + 1} lowest value`} numeric signed value={r.lowerBound} onInput={(v) => model.setResponse(i, { lowerBound: v })} />
             )}
           </div>
         ))}
