@@ -10,55 +10,22 @@
 import { describe, expect, it } from 'vitest';
 import jStat from 'jstat';
 import MLR from 'ml-regression-multivariate-linear';
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { analyze } from '../../src/cli/commands/analyze.ts';
 import { csv } from '../../src/cli/commands/csv.ts';
-import { readBackupSync, writeBackup, type BackupPayload } from '../../src/io/backup/backup.ts';
 import { backupResponseData } from '../../src/io/backup/select-study.ts';
+import { demoWithConfirmation, DEMO_BACKUP, DEMO_STUDY } from '../helpers/confirmation-backup.ts';
 import { fixturePath } from '../helpers/fixtures.ts';
 
-const original = readFileSync(fixturePath('trialbook-demo-backup.json'), 'utf8');
-const STUDY = 'Invented demo: powder-coating cure trial';
-const READINGS = [93.1, 92.4, 94.0]; // Gloss, invented
-
-async function withConfirmation(): Promise<string> {
-  const b = readBackupSync(original);
-  const study = b.payload.studies[0];
-  const first = Math.max(...study.design.runs.map((r) => r.run)) + 1;
-  const block = Math.max(...study.design.runs.map((r) => r.block)) + 1;
-  const runs = READINGS.map((_, i) => ({ run: first + i, standardOrder: null, replicate: 1, block, originBlock: block, kind: 'confirmation' as const, coded: [1, 0, 0] }));
-  const revisions = READINGS.map((g, i) => ({
-    id: `00000000-0000-4000-8000-00000000000${i}`,
-    runId: `00000000-0000-4000-8000-00000000010${i}`,
-    studyId: study.id,
-    plannedRun: first + i,
-    rev: 1,
-    device: b.device,
-    parents: [],
-    restoredFrom: null,
-    savedAt: '2024-05-03T10:00:00.000Z',
-    actual: [200, 3, 40],
-    readings: [[70], [g]],
-    loggedAt: '2024-05-03T10:00:00.000Z',
-    operator: 'Shift A (invented)',
-    notes: '',
-    excluded: false,
-    reason: '',
-  }));
-  const payload = {
-    studies: b.payload.studies,
-    revisions: [...b.payload.revisions, ...revisions],
-    blocks: [{ id: '00000000-0000-4000-8000-000000000200', studyId: study.id, device: b.device, createdAt: '2024-05-03T09:00:00.000Z', purpose: 'confirmation', note: 'invented', runs }],
-  } as unknown as BackupPayload;
-  return writeBackup(payload, { device: b.device, exportedAt: '2024-05-03T11:00:00.000Z', scope: 'all' });
-}
+const original = DEMO_BACKUP;
+const STUDY = DEMO_STUDY;
 
 describe('analyze: the confirmation verdict', async () => {
   const dir = mkdtempSync(join(tmpdir(), 'trialbook-'));
   const backupFile = join(dir, 'with-confirmation.json');
-  const text = await withConfirmation();
+  const text = await demoWithConfirmation();
   writeFileSync(backupFile, text);
 
   it('keeps the confirmation runs out of the fit: the same fit as without them', async () => {

@@ -41,13 +41,30 @@ export function confirmationSetPlace(j: JudgedSet, factors: readonly Factor[]): 
 }
 
 /**
- * A set's verdict in one line: its place, then the statement, the core's message, or that none is
- * logged yet. Cost O(k).
+ * What a set of confirmation runs found, in words: the statement, the core's message, or that none
+ * is logged yet. The screens' cards and the command line's report both show it. Cost O(1).
+ * Example: "Confirmed: the mean of the 3 confirmation runs, 41.53, lies inside ...".
+ */
+export function confirmationVerdict(j: JudgedSet): string {
+  return j.comparison ? confirmationStatement(j.comparison) : j.problem !== null ? `Cannot judge: ${j.problem}` : 'None logged yet with a value for this response; log them to see the verdict.';
+}
+
+/**
+ * A set's verdict in one line: its place, then its verdict. Cost O(k).
  * Example: "Confirmation runs 12 to 14 (block 3) at ...: Confirmed: the mean of the 3 confirmation runs, ...".
  */
 export function confirmationSetLine(j: JudgedSet, factors: readonly Factor[]): string {
-  const what = j.comparison ? confirmationStatement(j.comparison) : j.problem !== null ? `Cannot judge: ${j.problem}` : 'None logged yet with a value for this response; log them to see the verdict.';
-  return `${confirmationSetPlace(j, factors)}: ${what}`;
+  return `${confirmationSetPlace(j, factors)}: ${confirmationVerdict(j)}`;
+}
+
+/**
+ * How many of a set's planned runs have a value yet, while some are missing; null once all have. Cost O(1).
+ * Example: 2 of runs 12 to 14 logged -> "2 of 3 confirmation runs logged with a value for this response."
+ */
+export function confirmationProgress(j: JudgedSet): string | null {
+  const n = j.set.runs.length;
+  const k = j.set.values.length;
+  return k >= n ? null : `${k} of ${n} confirmation run${n === 1 ? '' : 's'} logged with a value for this response.`;
 }
 
 /** The token of a set's verdict for files: confirmed, not-confirmed, no-noise, not-logged or cannot-judge. Example: "confirmed". */

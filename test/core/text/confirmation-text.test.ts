@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { analyze } from '../../../src/core/fit/analyze.ts';
 import { compareConfirmation } from '../../../src/core/predict/confirm-runs.ts';
 import { parseSettings } from '../../../src/core/predict/parse-settings.ts';
-import { confirmationSetLine, confirmationSetPlace, confirmationStatement, confirmationToken } from '../../../src/core/text/confirmation-text.ts';
+import { confirmationProgress, confirmationSetLine, confirmationSetPlace, confirmationStatement, confirmationToken, confirmationVerdict } from '../../../src/core/text/confirmation-text.ts';
 import { fixtureData } from '../../helpers/fixtures.ts';
 
 // Montgomery, Design and Analysis of Experiments, 8th ed., section 6.8 data (2^2 + 5 center runs).
@@ -39,5 +39,16 @@ describe('confirmation set lines (for reports and files)', () => {
     expect(confirmationToken({ set, comparison: null, problem: null })).toBe('not-logged');
     expect(confirmationToken({ set, comparison: null, problem: 'x' })).toBe('cannot-judge');
     expect(confirmationSetPlace({ set: { ...set, runs: [7] }, comparison: null, problem: null }, factors)).toMatch(/^Confirmation run 7 \(block 2\)/);
+  });
+  it('the verdict is the line after its place, for a judged set and for a problem', () => {
+    const judged = { set: { ...set, values: [41.2, 41.8, 41.6] }, comparison: compareConfirmation(model, at, [41.2, 41.8, 41.6]), problem: null }; // invented readings
+    expect(confirmationSetLine(judged, factors)).toBe(`${confirmationSetPlace(judged, factors)}: ${confirmationVerdict(judged)}`);
+    expect(confirmationVerdict(judged)).toMatch(/^Confirmed: /);
+    expect(confirmationVerdict({ set, comparison: null, problem: 'The log transform needs readings above 0.' })).toBe('Cannot judge: The log transform needs readings above 0.');
+  });
+  it('progress: how many of the planned runs have a value, null once all have', () => {
+    expect(confirmationProgress({ set: { ...set, values: [41.2, 41.8] }, comparison: null, problem: null })).toBe('2 of 3 confirmation runs logged with a value for this response.');
+    expect(confirmationProgress({ set: { ...set, runs: [7], values: [] }, comparison: null, problem: null })).toBe('0 of 1 confirmation run logged with a value for this response.');
+    expect(confirmationProgress({ set: { ...set, values: [1, 2, 3] }, comparison: null, problem: null })).toBeNull();
   });
 });

@@ -1,0 +1,117 @@
+/**
+ * The Next screen's confirmation cards and the command line's confirmation verdict, on the same
+ * study: the INVENTED demo backup with three INVENTED confirmation runs (test/helpers/
+ * confirmation-backup.ts). Both come from core/predict/confirmation-sets.ts, so the card's
+ * "place: verdict" must be the report's line word for word, with the same model and transform.
+ * The interval is also computed here independently from the prediction interval for the mean of
+ * m new runs, y-hat +- t(0.975, df) s sqrt(1/m + x0'(X'X)^-1 x0) (Montgomery, Design and Analysis
+ * of Experiments, 8th ed., section 10.6, from memory), with the fit from
+ * ml-regression-multivariate-linear and t and (X'X)^-1 from jstat, on the log scale for a
+ * log-transformed response.
+ */
+import 'fake-indexeddb/auto';
+import { describe, expect, it } from 'vitest';
+import jStat from 'jstat';
+import MLR from 'ml-regression-multivariate-linear';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { analyze } from '../../src/cli/commands/analyze.ts';
+import { backupResponseData } from '../../src/io/backup/select-study.ts';
+import { shortNumber } from '../../src/core/text/number-text.ts';
+import { importBackup } from '../../src/store/files.ts';
+import { NextRunsModel } from '../../src/ui/models/next-runs-model.ts';
+import { openStudyAnalysis } from '../../src/ui/models/study-analysis-model.ts';
+import { CONFIRMATION_GLOSS, demoWithConfirmation, DEMO_BACKUP, DEMO_STUDY } from '../helpers/confirmation-backup.ts';
+import { freshStore } from '../store/helpers.ts';
+
+const studyId = (JSON.parse(DEMO_BACKUP) as { payload: { studies: { id: string }[] } }).payload.studies[0].id;
+
+async function opened(text: string) {
+  const store = await freshStore();
+  await importBackup(store, text);
+  const shared = openStudyAnalysis(store, studyId);
+  await shared.load();
+  shared.show(1); // Gloss
+  const model = new NextRunsModel(store, shared);
+  await model.refreshBlocks(studyId);
+  return { shared, model };
+}
+
+/** The command line's line for the one confirmation set, from its text report. */
+async function cliLine(file: string, options: string[]): Promise<string> {
+  const out = await analyze.run([file, '--study', DEMO_STUDY, '--response', 'Gloss', ...options]);
+  const lines = out.split('\n').filter((l) => l.startsWith('  - Confirmation run'));
+  expect(lines).toHaveLength(1);
+  return lines[0].slice(4);
+}
+
+/** Half-width and fit of the interval for the mean of m new runs at coded (1, 0, 0), from reference libraries. */
+function reference(y: readonly number[], columns: (x: readonly number[]) => number[], m: number) {
+  const data = backupResponseData(DEMO_BACKUP, DEMO_STUDY, 'Gloss');
+  const X = data.coded.map(columns);
+  const reg = new MLR(X, y.map((v) => [v]));
+  const x0 = columns([1, 0, 0]);
+  const fit = reg.predict(x0)[0];
+  const df = X.length - (x0.length + 1);
+  const s = Math.sqrt(y.reduce((a, v, i) => a + (v - reg.predict(X[i])[0]) ** 2, 0) / df);
+  const A = X.map((r) => [1, ...r]);
+  const p = A[0].length;
+  const xtx = Array.from({ length: p }, (_, i) => Array.from({ length: p }, (_, j) => A.reduce((acc, r) => acc + r[i] * r[j], 0)));
+  const inv = jStat.inv(xtx) as number[][];
+  const v = [1, ...x0];
+  const q = v.reduce((acc, vi, i) => acc + vi * v.reduce((a2, vj, j) => a2 + inv[i][j] * vj, 0), 0);
+  return { fit, half: jStat.studentt.inv(0.975, df) * s * Math.sqrt(1 / m + q) };
+}
+
+describe('Next screen confirmation cards: the same verdict as the command line', async () => {
+  const dir = mkdtempSync(join(tmpdir(), 'trialbook-'));
+  const file = join(dir, 'with-confirmation.json');
+  const text = await demoWithConfirmation();
+  writeFileSync(file, text);
+
+  it('main effects: the card reads as the report line, and its interval is the reference one', async () => {
+    const { shared, model } = await opened(text);
+    shared.chooseModel(1, 'main');
+    const cards = model.confirmations.value;
+    expect(cards).toHaveLength(1);
+    const c = cards[0];
+    expect(`${c.place}: ${c.verdict}`).toBe(await cliLine(file, ['--order', '1']));
+    expect(c.note).toBe('invented');
+    expect(c.progress).toBeNull();
+    const { fit, half } = reference(backupResponseData(DEMO_BACKUP, DEMO_STUDY, 'Gloss').y, (x) => [...x], 3);
+    const mean = CONFIRMATION_GLOSS.reduce((a, b) => a + b, 0) / 3;
+    expect(c.verdict).toContain(`${shortNumber(mean)}, lies ${Math.abs(mean - fit) <= half ? 'inside' : 'outside'} the 95% interval for the mean of 3 new runs, ${shortNumber(fit - half)} to ${shortNumber(fit + half)} (predicted ${shortNumber(fit)})`);
+    expect(c.outcome).toBe(Math.abs(mean - fit) <= half ? 'confirmed' : 'not-confirmed');
+  });
+
+  it('log transform with interactions: judged on the log scale, as the report is', async () => {
+    const { shared, model } = await opened(text);
+    shared.chooseTransform(1, 'log');
+    const c = model.confirmations.value[0];
+    expect(`${c.place}: ${c.verdict}`).toBe(await cliLine(file, ['--transform', 'log']));
+    // Main effects and the three two-factor interactions, on ln(Gloss).
+    const two = (x: readonly number[]) => [x[0], x[1], x[2], x[0] * x[1], x[0] * x[2], x[1] * x[2]];
+    const { fit, half } = reference(backupResponseData(DEMO_BACKUP, DEMO_STUDY, 'Gloss').y.map(Math.log), two, 3);
+    const mean = CONFIRMATION_GLOSS.map(Math.log).reduce((a, b) => a + b, 0) / 3;
+    expect(c.verdict).toContain(`the mean of the 3 confirmation runs, ${shortNumber(mean)}, lies ${Math.abs(mean - fit) <= half ? 'inside' : 'outside'} the 95% interval for the mean of 3 new runs, ${shortNumber(fit - half)} to ${shortNumber(fit + half)}`);
+  });
+
+  it('runs planned but not all logged: the count on the card, the same verdict as the report', async () => {
+    const noneFile = join(dir, 'none-logged.json');
+    writeFileSync(noneFile, await demoWithConfirmation(0));
+    const { model: none } = await opened(await demoWithConfirmation(0));
+    const c0 = none.confirmations.value[0];
+    expect(`${c0.place}: ${c0.verdict}`).toBe(await cliLine(noneFile, []));
+    expect(c0.outcome).toBe('not-logged');
+    expect(c0.progress).toBe('0 of 3 confirmation runs logged with a value for this response.');
+    const { model: two } = await opened(await demoWithConfirmation(2));
+    expect(two.confirmations.value[0].progress).toBe('2 of 3 confirmation runs logged with a value for this response.');
+    expect(two.confirmations.value[0].verdict).toMatch(/^(Confirmed|Not confirmed): the mean of the 2 confirmation runs/);
+  });
+
+  it('a study with no confirmation runs has no card (degenerate input)', async () => {
+    const { model } = await opened(DEMO_BACKUP);
+    expect(model.confirmations.value).toEqual([]);
+  });
+});
