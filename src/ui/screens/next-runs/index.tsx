@@ -12,11 +12,11 @@ import { AddAxialRuns } from '../../components/add-axial-runs/index.tsx';
 import { CautionBox } from '../../components/caution-box/index.tsx';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { CountStepper } from '../../components/count-stepper/index.tsx';
-import { ProblemBox } from '../../components/problem-box/index.tsx';
+import { StudyPending } from '../../components/study-pending/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { num, setting, withUnit } from '../../lib/format.ts';
 import { NextRunsModel } from '../../models/next-runs-model.ts';
-import { openStudyAnalysis } from '../../models/study-analysis-model.ts';
+import { shownStudy, useStudyAnalysis } from '../../lib/use-study-analysis.ts';
 import { CAUTION } from '../../../core/predict/caution.ts';
 import { FoldoverPart, isFraction } from './foldover-part.tsx';
 import { PathChart } from '../../components/path-chart/index.tsx';
@@ -30,19 +30,12 @@ function range(i: readonly [number, number] | null, unit: string | undefined): s
 }
 
 export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
-  const shared = openStudyAnalysis(store, studyId);
+  const shared = useStudyAnalysis(store, studyId);
   const model = useModel(() => new NextRunsModel(store, shared));
-  useEffect(() => {
-    void shared.load();
-    void model.refreshBlocks(studyId);
-  }, []);
-  const d = shared.data.value;
-  const problem = shared.problem.value;
-  const shown = shared.shown.value;
-  if (problem) return <ProblemBox problem={problem} />;
-  if (!d || !shown) return <p class="quiet">Reading the runs…</p>;
-  const { study } = d;
-  const { response } = shown;
+  useEffect(() => void model.refreshBlocks(studyId), []);
+  const open = shownStudy(shared);
+  if (!open) return <StudyPending shared={shared} />;
+  const { study, shown, response } = open;
   const numeric = study.factors.flatMap((f, i) => (f.kind === 'numeric' ? [{ value: i, label: f.name }] : []));
   const path = model.path.value;
   const solution = model.solution.value;
