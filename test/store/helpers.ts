@@ -5,9 +5,9 @@
  * the design builder.
  */
 import { defineFactors, type FactorSpec } from '../../src/core/factor/factor.ts';
-import type { DesignRun } from '../../src/core/design/design.ts';
 import type { StudyPlan } from '../../src/core/study/study.ts';
 import { openStore, type Store, type StoreOptions } from '../../src/store/store.ts';
+import { factorialRuns, plainDesign } from '../helpers/plain-design.ts';
 
 let counter = 0;
 
@@ -17,17 +17,7 @@ export async function freshStore(options: StoreOptions = {}): Promise<Store> {
   return openStore({ name: `test-${process.pid}-${counter}-${Math.random().toString(36).slice(2)}`, storage: null, ...options });
 }
 
-/** A 2^k full factorial in standard order (A fastest), `replicates` times, then `centers` center runs. */
-export function factorialRuns(k: number, replicates = 1, centers = 0): DesignRun[] {
-  const runs: DesignRun[] = [];
-  for (let rep = 1; rep <= replicates; rep++) {
-    for (let i = 0; i < 2 ** k; i++) {
-      runs.push({ run: runs.length + 1, standardOrder: i + 1, replicate: rep, block: 1, originBlock: 1, kind: 'factorial', coded: Array.from({ length: k }, (_, j) => ((i >> j) & 1 ? 1 : -1)) });
-    }
-  }
-  for (let c = 0; c < centers; c++) runs.push({ run: runs.length + 1, standardOrder: null, replicate: 1, block: 1, originBlock: 1, kind: 'center', coded: Array.from({ length: k }, () => 0) });
-  return runs;
-}
+export { factorialRuns };
 
 const COATING: FactorSpec[] = [
   { kind: 'numeric', name: 'Oven temperature', low: 160, high: 200, unit: '°C' },
@@ -46,18 +36,7 @@ export function coatingPlan(title = 'Invented demo: coating line trial', replica
       { name: 'Film thickness', unit: 'µm', goal: 'target', target: 70 },
       { name: 'Gloss', unit: 'GU', goal: 'maximize' },
     ],
-    design: {
-      runs: factorialRuns(3, replicates, centers),
-      generators: [],
-      definingRelation: [],
-      resolution: null,
-      wordLengths: {},
-      aliases: [],
-      blockWords: [],
-      seed: null,
-      summary: 'Full factorial in 3 factors, standard order, with center runs (test plan).',
-      notes: [],
-    },
+    design: plainDesign(factorialRuns(3, replicates, centers), 'Full factorial in 3 factors, standard order, with center runs (test plan).'),
   };
 }
 
