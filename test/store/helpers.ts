@@ -5,6 +5,8 @@
  * the design builder.
  */
 import { defineFactors, type FactorSpec } from '../../src/core/factor/factor.ts';
+import { parseRunForm } from '../../src/core/study/run-form.ts';
+import { openNewRun, openRun, saveRun } from '../../src/store/runs.ts';
 import type { StudyPlan } from '../../src/core/study/study.ts';
 import { openStore, type Store, type StoreOptions } from '../../src/store/store.ts';
 import { factorialRuns, plainDesign } from '../helpers/plain-design.ts';
@@ -53,4 +55,16 @@ export function brandPlan(): StudyPlan {
     responses: [{ name: 'Gloss', unit: 'GU', goal: 'maximize' }],
     design: { ...coatingPlan().design, runs: factorialRuns(2, 2, 0), summary: 'Full factorial in 2 factors, 2 replicates (test plan).' },
   };
+}
+
+/** Logs a planned run of the coating study through the run form, with the film thickness readings typed as `thickness` and no gloss. */
+export async function logThickness(store: Store, studyId: string, plannedRun: number, thickness: string) {
+  const state = await openNewRun(store, studyId, plannedRun);
+  return saveRun(store, { ...state, studyId, values: parseRunForm(state.study, { ...state.form, readings: [thickness, ''] }) });
+}
+
+/** Saves a new revision of a logged run of the coating study with the film thickness typed as `thickness`. */
+export async function editThickness(store: Store, runId: string, thickness: string) {
+  const state = await openRun(store, runId);
+  return saveRun(store, { ...state, studyId: state.study.id, values: parseRunForm(state.study, { ...state.form, readings: [thickness, ''] }) });
 }
