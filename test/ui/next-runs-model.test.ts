@@ -6,13 +6,11 @@
  * The interval is also computed here independently from the prediction interval for the mean of
  * m new runs, y-hat +- t(0.975, df) s sqrt(1/m + x0'(X'X)^-1 x0) (Montgomery, Design and Analysis
  * of Experiments, 8th ed., section 10.6, from memory), with the fit from
- * ml-regression-multivariate-linear and t and (X'X)^-1 from jstat, on the log scale for a
- * log-transformed response.
+ * ml-regression-multivariate-linear and t and (X'X)^-1 from jstat (test/helpers/
+ * reference-interval.ts), on the log scale for a log-transformed response.
  */
 import 'fake-indexeddb/auto';
 import { describe, expect, it } from 'vitest';
-import jStat from 'jstat';
-import MLR from 'ml-regression-multivariate-linear';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -23,6 +21,7 @@ import { importBackup } from '../../src/store/files.ts';
 import { NextRunsModel } from '../../src/ui/models/next-runs-model.ts';
 import { openStudyAnalysis } from '../../src/ui/models/study-analysis-model.ts';
 import { CONFIRMATION_GLOSS, demoWithConfirmation, DEMO_BACKUP, DEMO_STUDY } from '../helpers/confirmation-backup.ts';
+import { referenceInterval } from '../helpers/reference-interval.ts';
 import { freshStore } from '../store/helpers.ts';
 
 const studyId = (JSON.parse(DEMO_BACKUP) as { payload: { studies: { id: string }[] } }).payload.studies[0].id;
@@ -46,22 +45,9 @@ async function cliLine(file: string, options: string[]): Promise<string> {
   return lines[0].slice(4);
 }
 
-/** Half-width and fit of the interval for the mean of m new runs at coded (1, 0, 0), from reference libraries. */
+/** Fit and half-width of the interval for the mean of m new runs at coded (1, 0, 0), from reference libraries (test/helpers/reference-interval.ts). */
 function reference(y: readonly number[], columns: (x: readonly number[]) => number[], m: number) {
-  const data = backupResponseData(DEMO_BACKUP, DEMO_STUDY, 'Gloss');
-  const X = data.coded.map(columns);
-  const reg = new MLR(X, y.map((v) => [v]));
-  const x0 = columns([1, 0, 0]);
-  const fit = reg.predict(x0)[0];
-  const df = X.length - (x0.length + 1);
-  const s = Math.sqrt(y.reduce((a, v, i) => a + (v - reg.predict(X[i])[0]) ** 2, 0) / df);
-  const A = X.map((r) => [1, ...r]);
-  const p = A[0].length;
-  const xtx = Array.from({ length: p }, (_, i) => Array.from({ length: p }, (_, j) => A.reduce((acc, r) => acc + r[i] * r[j], 0)));
-  const inv = jStat.inv(xtx) as number[][];
-  const v = [1, ...x0];
-  const q = v.reduce((acc, vi, i) => acc + vi * v.reduce((a2, vj, j) => a2 + inv[i][j] * vj, 0), 0);
-  return { fit, half: jStat.studentt.inv(0.975, df) * s * Math.sqrt(1 / m + q) };
+  return referenceInterval(backupResponseData(DEMO_BACKUP, DEMO_STUDY, 'Gloss').coded.map(columns), y, columns([1, 0, 0]), m);
 }
 
 describe('Next screen confirmation cards: the same verdict as the command line', async () => {

@@ -6,15 +6,12 @@ import { describe, expect, it } from 'vitest';
 import { InputError } from '../../../src/core/errors.ts';
 import { RUN_KINDS } from '../../../src/core/design/design.ts';
 import { checkStudy } from '../../../src/core/records/check-study.ts';
+import { inventedStudy } from '../../helpers/invented-study.ts';
 import { factorialRuns, plainDesign } from '../../helpers/plain-design.ts';
 
 function study(): any {
   return {
-    id: 's-1',
-    device: 'dev-1',
-    createdAt: '2024-05-02T10:00:00.000Z',
-    title: 'Invented demo: two-factor trial',
-    purpose: 'INVENTED DEMO DATA.',
+    ...inventedStudy(),
     factors: [
       { kind: 'numeric', name: 'Temperature', letter: 'A', low: 160, high: 200, unit: '°C' },
       { kind: 'categorical', name: 'Powder', letter: 'B', levels: ['matte', 'gloss'] },
