@@ -14,7 +14,7 @@ import { join } from 'node:path';
 import { analyze } from '../../src/cli/commands/analyze.ts';
 import { csv } from '../../src/cli/commands/csv.ts';
 import { backupResponseData } from '../../src/io/backup/select-study.ts';
-import { demoWithConfirmation, DEMO_BACKUP, DEMO_STUDY } from '../helpers/confirmation-backup.ts';
+import { demoFileWithConfirmation, DEMO_BACKUP, DEMO_STUDY } from '../helpers/confirmation-backup.ts';
 import { fixturePath } from '../helpers/fixtures.ts';
 import { referenceInterval } from '../helpers/reference-interval.ts';
 
@@ -22,10 +22,8 @@ const original = DEMO_BACKUP;
 const STUDY = DEMO_STUDY;
 
 describe('analyze: the confirmation verdict', async () => {
+  const { file: backupFile } = await demoFileWithConfirmation();
   const dir = mkdtempSync(join(tmpdir(), 'trialbook-'));
-  const backupFile = join(dir, 'with-confirmation.json');
-  const text = await demoWithConfirmation();
-  writeFileSync(backupFile, text);
 
   it('keeps the confirmation runs out of the fit: the same fit as without them', async () => {
     const before = JSON.parse(await analyze.run([fixturePath('trialbook-demo-backup.json'), '--study', STUDY, '--response', 'Gloss', '--order', '1', '--json']));

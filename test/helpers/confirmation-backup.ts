@@ -4,7 +4,9 @@
  * 40 g/min (coded 1, 0, 0): Film thickness 70 µm each, Gloss as given. Shared by the command
  * line's and the Next screen model's confirmation tests, so both judge the same study.
  */
-import { readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { readBackupSync, writeBackup, type BackupPayload } from '../../src/io/backup/backup.ts';
 import { fixturePath } from './fixtures.ts';
 
@@ -45,4 +47,12 @@ export async function demoWithConfirmation(logged = CONFIRMATION_GLOSS.length): 
     blocks: [{ id: '00000000-0000-4000-8000-000000000200', studyId: study.id, device: b.device, createdAt: '2024-05-03T09:00:00.000Z', purpose: 'confirmation', note: 'invented', runs }],
   } as unknown as BackupPayload;
   return writeBackup(payload, { device: b.device, exportedAt: '2024-05-03T11:00:00.000Z', scope: 'all' });
+}
+
+/** The same backup written to a file of its own in a new temporary folder, for the command line to read. */
+export async function demoFileWithConfirmation(logged = CONFIRMATION_GLOSS.length): Promise<{ readonly file: string; readonly text: string }> {
+  const text = await demoWithConfirmation(logged);
+  const file = join(mkdtempSync(join(tmpdir(), 'trialbook-')), 'with-confirmation.json');
+  writeFileSync(file, text);
+  return { file, text };
 }

@@ -11,16 +11,13 @@
  */
 import 'fake-indexeddb/auto';
 import { describe, expect, it } from 'vitest';
-import { mkdtempSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { analyze } from '../../src/cli/commands/analyze.ts';
 import { backupResponseData } from '../../src/io/backup/select-study.ts';
 import { shortNumber } from '../../src/core/text/number-text.ts';
 import { importBackup } from '../../src/store/files.ts';
 import { NextRunsModel } from '../../src/ui/models/next-runs-model.ts';
 import { openStudyAnalysis } from '../../src/ui/models/study-analysis-model.ts';
-import { CONFIRMATION_GLOSS, demoWithConfirmation, DEMO_BACKUP, DEMO_STUDY } from '../helpers/confirmation-backup.ts';
+import { CONFIRMATION_GLOSS, demoFileWithConfirmation, demoWithConfirmation, DEMO_BACKUP, DEMO_STUDY } from '../helpers/confirmation-backup.ts';
 import { referenceInterval } from '../helpers/reference-interval.ts';
 import { freshStore } from '../store/helpers.ts';
 
@@ -51,10 +48,7 @@ function reference(y: readonly number[], columns: (x: readonly number[]) => numb
 }
 
 describe('Next screen confirmation cards: the same verdict as the command line', async () => {
-  const dir = mkdtempSync(join(tmpdir(), 'trialbook-'));
-  const file = join(dir, 'with-confirmation.json');
-  const text = await demoWithConfirmation();
-  writeFileSync(file, text);
+  const { file, text } = await demoFileWithConfirmation();
 
   it('main effects: the card reads as the report line, and its interval is the reference one', async () => {
     const { shared, model } = await opened(text);
@@ -84,9 +78,9 @@ describe('Next screen confirmation cards: the same verdict as the command line',
   });
 
   it('runs planned but not all logged: the count on the card, the same verdict as the report', async () => {
-    const noneFile = join(dir, 'none-logged.json');
-    writeFileSync(noneFile, await demoWithConfirmation(0));
-    const { model: none } = await opened(await demoWithConfirmation(0));
+    const noneLogged = await demoFileWithConfirmation(0);
+    const noneFile = noneLogged.file;
+    const { model: none } = await opened(noneLogged.text);
     const c0 = none.confirmations.value[0];
     expect(`${c0.place}: ${c0.verdict}`).toBe(await cliLine(noneFile, []));
     expect(c0.outcome).toBe('not-logged');
