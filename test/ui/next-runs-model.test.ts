@@ -34,9 +34,13 @@ async function opened(text: string) {
   return { shared, model };
 }
 
+function cliText(file: string, options: string[]): Promise<string> {
+  return analyze.run([file, '--study', DEMO_STUDY, '--response', 'Gloss', ...options]);
+}
+
 /** The command line's line for the one confirmation set, from its text report. */
 async function cliLine(file: string, options: string[]): Promise<string> {
-  const out = await analyze.run([file, '--study', DEMO_STUDY, '--response', 'Gloss', ...options]);
+  const out = await cliText(file, options);
   const lines = out.split('\n').filter((l) => l.startsWith('  - Confirmation run'));
   expect(lines).toHaveLength(1);
   return lines[0].slice(4);
@@ -59,6 +63,7 @@ describe('Next screen confirmation cards: the same verdict as the command line',
     expect(`${c.place}: ${c.verdict}`).toBe(await cliLine(file, ['--order', '1']));
     expect(c.note).toBe('invented');
     expect(c.progress).toBeNull();
+    expect(model.confirmationScale.value).toBeNull();
     const { fit, half } = reference(backupResponseData(DEMO_BACKUP, DEMO_STUDY, 'Gloss').y, (x) => [...x], 3);
     const mean = CONFIRMATION_GLOSS.reduce((a, b) => a + b, 0) / 3;
     expect(c.verdict).toContain(`${shortNumber(mean)}, lies ${Math.abs(mean - fit) <= half ? 'inside' : 'outside'} the 95% interval for the mean of 3 new runs, ${shortNumber(fit - half)} to ${shortNumber(fit + half)} (predicted ${shortNumber(fit)})`);
@@ -70,6 +75,9 @@ describe('Next screen confirmation cards: the same verdict as the command line',
     shared.chooseTransform(1, 'log');
     const c = model.confirmations.value[0];
     expect(`${c.place}: ${c.verdict}`).toBe(await cliLine(file, ['--transform', 'log']));
+    // Both say which scale the figures are on.
+    expect(model.confirmationScale.value).toBe('The figures are on the scale the model is fitted on, ln(Gloss), not in Gloss itself.');
+    expect(await cliText(file, ['--transform', 'log'])).toContain(`\n  ${model.confirmationScale.value}\n`);
     // Main effects and the three two-factor interactions, on ln(Gloss).
     const two = (x: readonly number[]) => [x[0], x[1], x[2], x[0] * x[1], x[0] * x[2], x[1] * x[2]];
     const { fit, half } = reference(backupResponseData(DEMO_BACKUP, DEMO_STUDY, 'Gloss').y.map(Math.log), two, 3);
@@ -84,7 +92,8 @@ describe('Next screen confirmation cards: the same verdict as the command line',
     const c0 = none.confirmations.value[0];
     expect(`${c0.place}: ${c0.verdict}`).toBe(await cliLine(noneFile, []));
     expect(c0.outcome).toBe('not-logged');
-    expect(c0.progress).toBe('0 of 3 confirmation runs logged with a value for this response.');
+    expect(c0.progress).toBeNull();
+    expect(c0.verdict).toBe('None logged yet with a value for this response; log them to see the verdict.');
     const { model: two } = await opened(await demoWithConfirmation(2));
     expect(two.confirmations.value[0].progress).toBe('2 of 3 confirmation runs logged with a value for this response.');
     expect(two.confirmations.value[0].verdict).toMatch(/^(Confirmed|Not confirmed): the mean of the 2 confirmation runs/);

@@ -3,6 +3,7 @@
  * (see core/predict/confirm-runs.ts for the comparison and its source).
  */
 import type { Factor } from '../factor/factor.ts';
+import type { FitTransform } from '../fit/analysis.ts';
 import { toReal } from '../factor/coding.ts';
 import type { ConfirmationComparison } from '../predict/confirm-runs.ts';
 import type { JudgedSet } from '../predict/confirmation-sets.ts';
@@ -58,13 +59,27 @@ export function confirmationSetLine(j: JudgedSet, factors: readonly Factor[]): s
 }
 
 /**
- * How many of a set's planned runs have a value yet, while some are missing; null once all have. Cost O(1).
+ * How many of a set's planned runs have a value yet, once some have and while some are missing;
+ * null before any has (the verdict says so) and once all have. Cost O(1).
  * Example: 2 of runs 12 to 14 logged -> "2 of 3 confirmation runs logged with a value for this response."
  */
 export function confirmationProgress(j: JudgedSet): string | null {
   const n = j.set.runs.length;
   const k = j.set.values.length;
-  return k >= n ? null : `${k} of ${n} confirmation run${n === 1 ? '' : 's'} logged with a value for this response.`;
+  return k === 0 || k >= n ? null : `${k} of ${n} confirmation run${n === 1 ? '' : 's'} logged with a value for this response.`;
+}
+
+/**
+ * Which scale a transformed model's confirmation figures are on, since its mean, prediction and
+ * interval are not in the response's units (fit/response-transform.ts: ln(y - L) for the log,
+ * ((y - L)^lambda - 1) / lambda otherwise); null for a model of the response as measured. Cost O(1).
+ * Example: log of Gloss -> "The figures are on the scale the model is fitted on, ln(Gloss), not in Gloss itself."
+ */
+export function confirmationScale(t: FitTransform | undefined, response: string): string | null {
+  if (!t || t.lambda === 1) return null;
+  const y = t.lowerBound ? `${response} − ${shortNumber(t.lowerBound)}` : response;
+  const scale = t.lambda === 0 ? `ln(${y})` : `((${y})^${shortNumber(t.lambda)} − 1) / ${shortNumber(t.lambda)}`;
+  return `The figures are on the scale the model is fitted on, ${scale}, not in ${response} itself.`;
 }
 
 /** The token of a set's verdict for files: confirmed, not-confirmed, no-noise, not-logged or cannot-judge. Example: "confirmed". */

@@ -17,7 +17,7 @@ import { solveForTarget, type Solution } from '../../core/predict/solve-for-targ
 import { pathSenseForGoal, steepestPath, type PathSense, type SteepestPath } from '../../core/predict/steepest-path.ts';
 import type { AddedBlock } from '../../core/study/added-block.ts';
 import { meanReading } from '../../core/study/study.ts';
-import { confirmationProgress, confirmationSetPlace, confirmationToken, confirmationVerdict } from '../../core/text/confirmation-text.ts';
+import { confirmationProgress, confirmationScale, confirmationSetPlace, confirmationToken, confirmationVerdict } from '../../core/text/confirmation-text.ts';
 import { addPlannedRuns, listBlocks } from '../../store/added-blocks.ts';
 import type { Store } from '../../store/store.ts';
 import { setting } from '../lib/format.ts';
@@ -246,6 +246,11 @@ export const NextRunsModel = createModel((store: Store, shared: StudyAnalysis) =
     solution,
     confirmCountText: computed(() => confirmCountText.value),
     confirmations,
+    /** Which scale the cards' figures are on, when the shown model is of a transformed response (as the report says it). */
+    confirmationScale: computed(() => {
+      const m = model.value;
+      return m ? confirmationScale(m.transform, m.response) : null;
+    }),
 
     setPathBase: (i: number) => void (pathBase.value = i),
     setPathStep: (t: string) => void (pathStepText.value = t),

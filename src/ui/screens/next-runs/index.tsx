@@ -201,6 +201,7 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
             <p class={c.outcome === 'confirmed' ? 'verdict good' : c.outcome === 'not-confirmed' ? 'verdict bad' : c.outcome === 'cannot-judge' ? 'problem input' : ''} role={c.outcome === 'cannot-judge' ? 'alert' : undefined}>
               {c.verdict}
             </p>
+            {model.confirmationScale.value && (c.outcome === 'confirmed' || c.outcome === 'not-confirmed') && <p class="quiet">{model.confirmationScale.value}</p>}
           </div>
         ))}
       </section>
