@@ -3,63 +3,27 @@
  * The study is the INVENTED demo backup with three INVENTED confirmation runs added as a block at
  * Oven temperature 200 °C, Line speed 3 m/min, Powder flow 40 g/min. The expected interval is
  * computed independently here, y-hat +- t(0.975, df) s sqrt(1/m + x0'(X'X)^-1 x0) (Montgomery,
- * Design and Analysis of Experiments, 8th ed., section 10.6, from memory), with t from jstat and
- * the fit and (X'X)^-1 from a general-purpose regression library
- * (ml-regression-multivariate-linear) over the runs the app fits.
+ * Design and Analysis of Experiments, 8th ed., section 10.6, from memory), with the fit from
+ * ml-regression-multivariate-linear and t and (X'X)^-1 from jstat over the runs the app fits
+ * (test/helpers/reference-interval.ts).
  */
 import { describe, expect, it } from 'vitest';
-import jStat from 'jstat';
-import MLR from 'ml-regression-multivariate-linear';
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { analyze } from '../../src/cli/commands/analyze.ts';
 import { csv } from '../../src/cli/commands/csv.ts';
-import { readBackupSync, writeBackup, type BackupPayload } from '../../src/io/backup/backup.ts';
 import { backupResponseData } from '../../src/io/backup/select-study.ts';
+import { demoFileWithConfirmation, DEMO_BACKUP, DEMO_STUDY } from '../helpers/confirmation-backup.ts';
 import { fixturePath } from '../helpers/fixtures.ts';
+import { referenceInterval } from '../helpers/reference-interval.ts';
 
-const original = readFileSync(fixturePath('trialbook-demo-backup.json'), 'utf8');
-const STUDY = 'Invented demo: powder-coating cure trial';
-const READINGS = [93.1, 92.4, 94.0]; // Gloss, invented
-
-async function withConfirmation(): Promise<string> {
-  const b = readBackupSync(original);
-  const study = b.payload.studies[0];
-  const first = Math.max(...study.design.runs.map((r) => r.run)) + 1;
-  const block = Math.max(...study.design.runs.map((r) => r.block)) + 1;
-  const runs = READINGS.map((_, i) => ({ run: first + i, standardOrder: null, replicate: 1, block, originBlock: block, kind: 'confirmation' as const, coded: [1, 0, 0] }));
-  const revisions = READINGS.map((g, i) => ({
-    id: `00000000-0000-4000-8000-00000000000${i}`,
-    runId: `00000000-0000-4000-8000-00000000010${i}`,
-    studyId: study.id,
-    plannedRun: first + i,
-    rev: 1,
-    device: b.device,
-    parents: [],
-    restoredFrom: null,
-    savedAt: '2024-05-03T10:00:00.000Z',
-    actual: [200, 3, 40],
-    readings: [[70], [g]],
-    loggedAt: '2024-05-03T10:00:00.000Z',
-    operator: 'Shift A (invented)',
-    notes: '',
-    excluded: false,
-    reason: '',
-  }));
-  const payload = {
-    studies: b.payload.studies,
-    revisions: [...b.payload.revisions, ...revisions],
-    blocks: [{ id: '00000000-0000-4000-8000-000000000200', studyId: study.id, device: b.device, createdAt: '2024-05-03T09:00:00.000Z', purpose: 'confirmation', note: 'invented', runs }],
-  } as unknown as BackupPayload;
-  return writeBackup(payload, { device: b.device, exportedAt: '2024-05-03T11:00:00.000Z', scope: 'all' });
-}
+const original = DEMO_BACKUP;
+const STUDY = DEMO_STUDY;
 
 describe('analyze: the confirmation verdict', async () => {
+  const { file: backupFile } = await demoFileWithConfirmation();
   const dir = mkdtempSync(join(tmpdir(), 'trialbook-'));
-  const backupFile = join(dir, 'with-confirmation.json');
-  const text = await withConfirmation();
-  writeFileSync(backupFile, text);
 
   it('keeps the confirmation runs out of the fit: the same fit as without them', async () => {
     const before = JSON.parse(await analyze.run([fixturePath('trialbook-demo-backup.json'), '--study', STUDY, '--response', 'Gloss', '--order', '1', '--json']));
@@ -79,23 +43,9 @@ describe('analyze: the confirmation verdict', async () => {
     expect(c.m).toBe(3);
     expect(c.mean).toBeCloseTo((93.1 + 92.4 + 94.0) / 3, 12);
 
-    // Reference: the main-effects fit of the runs the app uses, by ml-regression-multivariate-linear.
+    // Reference: the main-effects fit of the runs the app uses (columns A, B, C), by general-purpose libraries.
     const data = backupResponseData(original, STUDY, 'Gloss');
-    const X = data.coded.map((x) => [...x]);
-    const reg = new MLR(X, data.y.map((y) => [y]));
-    const x0 = [1, 0, 0];
-    const fit = reg.predict(x0)[0];
-    const n = X.length;
-    const df = n - 4;
-    const resid = data.y.map((y, i) => y - reg.predict(X[i])[0]);
-    const s = Math.sqrt(resid.reduce((a, r) => a + r * r, 0) / df);
-    // x0'(X'X)^-1 x0 over the columns 1, A, B, C, by jstat's matrix inverse.
-    const A = X.map((r) => [1, ...r]);
-    const xtx = [0, 1, 2, 3].map((i) => [0, 1, 2, 3].map((j) => A.reduce((acc, r) => acc + r[i] * r[j], 0)));
-    const inv = jStat.inv(xtx) as number[][];
-    const v = [1, ...x0];
-    const q = v.reduce((acc, vi, i) => acc + vi * v.reduce((a2, vj, j) => a2 + inv[i][j] * vj, 0), 0);
-    const half = jStat.studentt.inv(0.975, df) * s * Math.sqrt(1 / 3 + q);
+    const { fit, half } = referenceInterval(data.coded, data.y, [1, 0, 0], 3);
     expect(c.predicted).toBeCloseTo(fit, 8);
     expect(c.interval[0]).toBeCloseTo(fit - half, 8);
     expect(c.interval[1]).toBeCloseTo(fit + half, 8);

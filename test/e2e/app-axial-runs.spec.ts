@@ -1,15 +1,12 @@
 import { test, expect } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
-import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import { CAUTION } from '../../src/core/predict/caution.ts';
+import { demoStudy as study } from './demo-fixture.ts';
 
 // "Add axial runs" on the Next screen: the demo study (invented data, a 2^3 with 3 center runs)
 // augmented into a central composite design in the same study. The preview's axial settings are
 // checked against the Box and Hunter (1957) axial distance worked out here by hand, and the
 // added runs join the run sheet as a new block. Phone sizes 390x844 and 360x740.
-const fixtureText = readFileSync(fileURLToPath(new URL('../fixtures/trialbook-demo-backup.json', import.meta.url)), 'utf8');
-const study = (JSON.parse(fixtureText) as { payload: { studies: { id: string; design: { runs: unknown[] } }[] } }).payload.studies[0];
 // Box and Hunter (1957): alpha = sqrt(k (1 + ns0/ns) / (1 + nc0/nc)); k = 3, nc = 8, nc0 = 3, ns = 6, ns0 = 3.
 const alpha = Math.sqrt((3 * (1 + 3 / 6)) / (1 + 3 / 8));
 const real = (low: number, high: number, x: number) => String(Number(((low + high) / 2 + (x * (high - low)) / 2).toPrecision(4)));

@@ -1,15 +1,12 @@
 import { test, expect } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
-import { readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { demoStudy as study } from './demo-fixture.ts';
 
 // The path chart: once path runs of the INVENTED demo study are logged, observed and predicted
 // Gloss are drawn by step (uPlot, loaded when first shown); before any is logged there is only
 // the table, which stays under the chart. Phone sizes 390x844 and 360x740.
-const fixtureText = readFileSync(fileURLToPath(new URL('../fixtures/trialbook-demo-backup.json', import.meta.url)), 'utf8');
-const study = (JSON.parse(fixtureText) as { payload: { studies: { id: string; design: { runs: unknown[] } }[] } }).payload.studies[0];
 const shot = (name: string) => join(tmpdir(), `trialbook-${name}.png`);
 
 for (const size of [

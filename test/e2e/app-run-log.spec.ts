@@ -1,27 +1,12 @@
 import { test, expect, type Page } from '@playwright/test';
-import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
-import { readBackupSync, writeBackup } from '../../src/io/backup/backup.ts';
+import { demoBackup as backup, demoStudy as study, openDemoSheet as openSheet, serveDemoWithout } from './demo-fixture.ts';
 
 // Logging runs from the run sheet: the form shows planned beside actual settings, keeps the
 // typing as a draft, says "Saved" only once the save is on disk, refuses bad input without
 // writing, and what was saved is there after a reload.
-const fixtureText = readFileSync(fileURLToPath(new URL('../fixtures/trialbook-demo-backup.json', import.meta.url)), 'utf8');
-const backup = readBackupSync(fixtureText);
-const study = backup.payload.studies[0];
 
 /** The demo without its logged run 10, served as the demo file, so run 10 is still to be logged. */
-async function demoWithoutRun10(page: Page) {
-  const payload = { studies: backup.payload.studies, revisions: backup.payload.revisions.filter((r) => r.plannedRun !== 10) };
-  const text = await writeBackup(payload, { device: backup.device, exportedAt: backup.exportedAt, scope: 'all' });
-  await page.route('**/demo-study.json', (route) => route.fulfill({ status: 200, contentType: 'application/json', body: text }));
-}
-
-async function openSheet(page: Page) {
-  await page.goto('/');
-  await page.getByRole('link', { name: `Open ${study.title}` }).click();
-  await expect(page.locator('.run-card')).toHaveCount(study.design.runs.length);
-}
+const demoWithoutRun10 = (page: Page) => serveDemoWithout(page, 10);
 
 const run10 = (page: Page) => page.locator('.run-card[data-run="10"]');
 

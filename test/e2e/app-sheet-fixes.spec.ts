@@ -1,22 +1,13 @@
 import { test, expect, type Page } from '@playwright/test';
-import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import { toReal } from '../../src/core/factor/coding.ts';
 import { currentRun } from '../../src/core/study/study.ts';
-import { readBackupSync, writeBackup } from '../../src/io/backup/backup.ts';
+import { demoBackup as backup, demoStudy as study, openDemoSheet, serveDemoWithout } from './demo-fixture.ts';
 
 // Fixes from a first tryout on phones (390x844 and 360x740): a decimal comma typed in the run
 // form is saved and shown back with a point; the run sheet shows the actual setting beside the
 // planned one where they differ; an excluded run is marked in words and by its card's outline.
-const fixtureText = readFileSync(fileURLToPath(new URL('../fixtures/trialbook-demo-backup.json', import.meta.url)), 'utf8');
-const backup = readBackupSync(fixtureText);
-const study = backup.payload.studies[0];
 
-async function demoWithoutRun10(page: Page) {
-  const payload = { studies: backup.payload.studies, revisions: backup.payload.revisions.filter((r) => r.plannedRun !== 10) };
-  const text = await writeBackup(payload, { device: backup.device, exportedAt: backup.exportedAt, scope: 'all' });
-  await page.route('**/demo-study.json', (route) => route.fulfill({ status: 200, contentType: 'application/json', body: text }));
-}
+const demoWithoutRun10 = (page: Page) => serveDemoWithout(page, 10);
 
 /** Run numbers whose logged oven temperature differs from the plan, from the file itself. */
 function differing() {
@@ -40,8 +31,7 @@ for (const size of [
 
     test('a decimal comma typed in the run form is saved and shown back with a point', async ({ page }) => {
       await demoWithoutRun10(page);
-      await page.goto('/');
-      await page.getByRole('link', { name: `Open ${study.title}` }).click();
+      await openDemoSheet(page);
       await page.locator('.run-card[data-run="10"]').getByRole('link', { name: 'Log run 10' }).click();
       await page.getByRole('textbox', { name: 'Film thickness reading' }).fill('62,9');
       await page.getByRole('textbox', { name: 'Gloss reading' }).fill('80,25');

@@ -1,6 +1,7 @@
 /** An INVENTED study for tests of planned runs added later: a 2^2 plan with one center run in one block (standard order as in Montgomery, 8th ed., section 6.2). */
 import type { AddedBlock } from '../../src/core/study/added-block.ts';
 import type { StudyRecord } from '../../src/core/study/study.ts';
+import { factorialRuns, plainDesign } from './plain-design.ts';
 
 export function inventedStudy(): StudyRecord {
   return {
@@ -14,24 +15,7 @@ export function inventedStudy(): StudyRecord {
       { kind: 'numeric', name: 'Time', letter: 'B', low: 10, high: 20, unit: 's' },
     ],
     responses: [{ name: 'Gloss', goal: 'maximize', lowerBound: null }],
-    design: {
-      runs: [
-        { run: 1, standardOrder: 1, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, -1] },
-        { run: 2, standardOrder: 2, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, -1] },
-        { run: 3, standardOrder: 3, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, 1] },
-        { run: 4, standardOrder: 4, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, 1] },
-        { run: 5, standardOrder: null, replicate: 1, block: 1, originBlock: 1, kind: 'center', coded: [0, 0] },
-      ],
-      generators: [],
-      definingRelation: [],
-      resolution: null,
-      wordLengths: {},
-      aliases: [],
-      blockWords: [],
-      seed: null,
-      summary: 'Invented 2^2 with a center run.',
-      notes: [],
-    },
+    design: plainDesign(factorialRuns(2, 1, 1), 'Invented 2^2 with a center run.'),
   };
 }
 

@@ -7,19 +7,12 @@
 import 'fake-indexeddb/auto';
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/core/errors.ts';
-import { parseRunForm } from '../../src/core/study/run-form.ts';
 import { readBackup } from '../../src/io/backup/backup.ts';
 import { addPlannedRuns, listBlocks } from '../../src/store/added-blocks.ts';
 import { exportBackup, exportStudyCsv, importBackup, payloadOf } from '../../src/store/files.ts';
-import { listRuns, openNewRun, saveRun } from '../../src/store/runs.ts';
+import { listRuns, openNewRun } from '../../src/store/runs.ts';
 import { createStudy, getStudy } from '../../src/store/studies.ts';
-import type { Store } from '../../src/store/store.ts';
-import { coatingPlan, freshStore } from './helpers.ts';
-
-async function log(store: Store, studyId: string, plannedRun: number, thickness: string) {
-  const state = await openNewRun(store, studyId, plannedRun);
-  return saveRun(store, { ...state, studyId, values: parseRunForm(state.study, { ...state.form, readings: [thickness, ''] }) });
-}
+import { coatingPlan, freshStore, logThickness as log } from './helpers.ts';
 
 const PATH = [
   { kind: 'path' as const, coded: [1.5, -0.5, 0.25] },

@@ -1,30 +1,30 @@
 import 'fake-indexeddb/auto';
 import { describe, expect, it } from 'vitest';
-import { parseRunForm } from '../../src/core/study/run-form.ts';
 import { BACKUP_VERSION, readBackup } from '../../src/io/backup/backup.ts';
 import { canonicalJson } from '../../src/core/records/canonical-json.ts';
 import { exportBackup, importBackup, payloadOf } from '../../src/store/files.ts';
 import { createStudy } from '../../src/store/studies.ts';
-import { excludeRun, getRun, listDivergedRuns, openNewRun, openRun, saveRun } from '../../src/store/runs.ts';
+import { excludeRun, getRun, listDivergedRuns } from '../../src/store/runs.ts';
 import { safetyStatus, persistenceAnswer } from '../../src/store/status.ts';
 import type { Store } from '../../src/store/store.ts';
-import { coatingPlan, freshStore } from './helpers.ts';
-
-async function log(store: Store, studyId: string, plannedRun: number, thickness: string) {
-  const state = await openNewRun(store, studyId, plannedRun);
-  return saveRun(store, { ...state, studyId, values: parseRunForm(state.study, { ...state.form, readings: [thickness, ''] }) });
-}
-
-async function edit(store: Store, runId: string, thickness: string) {
-  const state = await openRun(store, runId);
-  return saveRun(store, { ...state, studyId: state.study.id, values: parseRunForm(state.study, { ...state.form, readings: [thickness, ''] }) });
-}
+import { coatingPlan, freshStore, logThickness as log, editThickness as edit } from './helpers.ts';
 
 /** Everything a store holds, in a form to compare. */
 async function dump(store: Store) {
   const p = await payloadOf(store);
   const runs = await store.db.runs.toArray();
   return canonicalJson({ studies: [...p.studies].sort((a, b) => (a.id < b.id ? -1 : 1)), revisions: [...p.revisions].sort((a, b) => (a.id < b.id ? -1 : 1)), runs: runs.sort((a, b) => (a.id < b.id ? -1 : 1)) });
+}
+
+/** A store with the coating study and run 1 logged, and a second store that imported its backup. */
+async function copied() {
+  const a = await freshStore();
+  const study = await createStudy(a, coatingPlan());
+  const r = await log(a, study.id, 1, '70');
+  const text = await exportBackup(a);
+  const b = await freshStore();
+  await importBackup(b, text);
+  return { a, b, study, r, text };
 }
 
 describe('backup export and import', () => {
@@ -46,12 +46,7 @@ describe('backup export and import', () => {
   });
 
   it('importing the same file twice changes nothing the second time', async () => {
-    const a = await freshStore();
-    const study = await createStudy(a, coatingPlan());
-    await log(a, study.id, 1, '70');
-    const text = await exportBackup(a);
-    const b = await freshStore();
-    await importBackup(b, text);
+    const { b, text } = await copied();
     const once = await dump(b);
     const second = await importBackup(b, text);
     expect(second).toMatchObject({ studiesAdded: 0, revisionsAdded: 0, runsAdded: 0, studiesUnchanged: 1, revisionsUnchanged: 1 });
@@ -60,11 +55,7 @@ describe('backup export and import', () => {
   });
 
   it('two phones merge into their union, in either order, and a conflicting edit keeps both revisions', async () => {
-    const phoneA = await freshStore();
-    const study = await createStudy(phoneA, coatingPlan());
-    const shared = await log(phoneA, study.id, 1, '70');
-    const phoneB = await freshStore();
-    await importBackup(phoneB, await exportBackup(phoneA));
+    const { a: phoneA, b: phoneB, study, r: shared } = await copied();
     // Both phones go on offline: each logs its own runs and both change run 1.
     await log(phoneA, study.id, 2, '71');
     await edit(phoneA, shared.run.id, '70.4');
@@ -106,12 +97,7 @@ describe('backup export and import', () => {
   });
 
   it('an altered or damaged file is refused with a clear message and changes nothing', async () => {
-    const a = await freshStore();
-    const study = await createStudy(a, coatingPlan());
-    await log(a, study.id, 1, '70');
-    const text = await exportBackup(a);
-    const b = await freshStore();
-    await importBackup(b, text);
+    const { b, text } = await copied();
     const before = await dump(b);
     const tampered = text.replace('"70"', '"71"').replace(/\[\s*70\s*\]/, '[71]');
     expect(tampered).not.toBe(text);
@@ -124,11 +110,7 @@ describe('backup export and import', () => {
   });
 
   it('a revision with a stored id but other content is set aside with the field that differs; the rest imports; both are kept', async () => {
-    const a = await freshStore();
-    const study = await createStudy(a, coatingPlan());
-    const r = await log(a, study.id, 1, '70');
-    const b = await freshStore();
-    await importBackup(b, await exportBackup(a));
+    const { a, b, study, r } = await copied();
     await log(b, study.id, 2, '75');
     const storedBefore = await b.db.revisions.get(r.revision.id);
     // On a: a later edit of run 1 (built on the revision that will be altered) and a new run 3.

@@ -5,9 +5,11 @@
  * the design builder.
  */
 import { defineFactors, type FactorSpec } from '../../src/core/factor/factor.ts';
-import type { DesignRun } from '../../src/core/design/design.ts';
+import { parseRunForm } from '../../src/core/study/run-form.ts';
+import { openNewRun, openRun, saveRun } from '../../src/store/runs.ts';
 import type { StudyPlan } from '../../src/core/study/study.ts';
 import { openStore, type Store, type StoreOptions } from '../../src/store/store.ts';
+import { factorialRuns, plainDesign } from '../helpers/plain-design.ts';
 
 let counter = 0;
 
@@ -17,17 +19,7 @@ export async function freshStore(options: StoreOptions = {}): Promise<Store> {
   return openStore({ name: `test-${process.pid}-${counter}-${Math.random().toString(36).slice(2)}`, storage: null, ...options });
 }
 
-/** A 2^k full factorial in standard order (A fastest), `replicates` times, then `centers` center runs. */
-export function factorialRuns(k: number, replicates = 1, centers = 0): DesignRun[] {
-  const runs: DesignRun[] = [];
-  for (let rep = 1; rep <= replicates; rep++) {
-    for (let i = 0; i < 2 ** k; i++) {
-      runs.push({ run: runs.length + 1, standardOrder: i + 1, replicate: rep, block: 1, originBlock: 1, kind: 'factorial', coded: Array.from({ length: k }, (_, j) => ((i >> j) & 1 ? 1 : -1)) });
-    }
-  }
-  for (let c = 0; c < centers; c++) runs.push({ run: runs.length + 1, standardOrder: null, replicate: 1, block: 1, originBlock: 1, kind: 'center', coded: Array.from({ length: k }, () => 0) });
-  return runs;
-}
+export { factorialRuns };
 
 const COATING: FactorSpec[] = [
   { kind: 'numeric', name: 'Oven temperature', low: 160, high: 200, unit: '°C' },
@@ -46,18 +38,7 @@ export function coatingPlan(title = 'Invented demo: coating line trial', replica
       { name: 'Film thickness', unit: 'µm', goal: 'target', target: 70 },
       { name: 'Gloss', unit: 'GU', goal: 'maximize' },
     ],
-    design: {
-      runs: factorialRuns(3, replicates, centers),
-      generators: [],
-      definingRelation: [],
-      resolution: null,
-      wordLengths: {},
-      aliases: [],
-      blockWords: [],
-      seed: null,
-      summary: 'Full factorial in 3 factors, standard order, with center runs (test plan).',
-      notes: [],
-    },
+    design: plainDesign(factorialRuns(3, replicates, centers), 'Full factorial in 3 factors, standard order, with center runs (test plan).'),
   };
 }
 
@@ -74,4 +55,16 @@ export function brandPlan(): StudyPlan {
     responses: [{ name: 'Gloss', unit: 'GU', goal: 'maximize' }],
     design: { ...coatingPlan().design, runs: factorialRuns(2, 2, 0), summary: 'Full factorial in 2 factors, 2 replicates (test plan).' },
   };
+}
+
+/** Logs a planned run of the coating study through the run form, with the film thickness readings typed as `thickness` and no gloss. */
+export async function logThickness(store: Store, studyId: string, plannedRun: number, thickness: string) {
+  const state = await openNewRun(store, studyId, plannedRun);
+  return saveRun(store, { ...state, studyId, values: parseRunForm(state.study, { ...state.form, readings: [thickness, ''] }) });
+}
+
+/** Saves a new revision of a logged run of the coating study with the film thickness typed as `thickness`. */
+export async function editThickness(store: Store, runId: string, thickness: string) {
+  const state = await openRun(store, runId);
+  return saveRun(store, { ...state, studyId: state.study.id, values: parseRunForm(state.study, { ...state.form, readings: [thickness, ''] }) });
 }

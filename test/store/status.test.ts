@@ -1,22 +1,9 @@
 import 'fake-indexeddb/auto';
 import { describe, expect, it } from 'vitest';
-import { parseRunForm } from '../../src/core/study/run-form.ts';
 import { exportBackup, importBackup } from '../../src/store/files.ts';
-import { openNewRun, openRun, saveRun } from '../../src/store/runs.ts';
 import { BACKUP_REMINDER_MS, safetyStatus } from '../../src/store/status.ts';
 import { createStudy } from '../../src/store/studies.ts';
-import type { Store } from '../../src/store/store.ts';
-import { coatingPlan, freshStore } from './helpers.ts';
-
-async function log(store: Store, studyId: string, plannedRun: number, thickness: string) {
-  const state = await openNewRun(store, studyId, plannedRun);
-  return saveRun(store, { ...state, studyId, values: parseRunForm(state.study, { ...state.form, readings: [thickness, ''] }) });
-}
-
-async function edit(store: Store, runId: string, thickness: string) {
-  const state = await openRun(store, runId);
-  return saveRun(store, { ...state, studyId: state.study.id, values: parseRunForm(state.study, { ...state.form, readings: [thickness, ''] }) });
-}
+import { coatingPlan, freshStore, logThickness as log, editThickness as edit } from './helpers.ts';
 
 const DAY = 24 * 60 * 60 * 1000;
 

@@ -48,7 +48,7 @@ export const analyze: Command = {
       return JSON.stringify({ ...analysisJson(result), ...(so ? { secondOrder: secondOrderJson(so) } : {}), ...(judged.length > 0 ? { confirmations: confirmationsJson(judged, result.model.factors) } : {}) }, null, 2);
     }
     const text = analysisText(result, { ...(data.unit ? { unit: data.unit } : {}), codingFromFileOrder });
-    const parts = [text, ...(so ? [secondOrderText(so)] : []), ...(judged.length > 0 ? [confirmationsText(judged, result.model.factors)] : [])];
+    const parts = [text, ...(so ? [secondOrderText(so)] : []), ...(judged.length > 0 ? [confirmationsText(judged, result.model)] : [])];
     return parts.join('\n\n');
   },
 };

@@ -5,14 +5,17 @@
  * sentences from core/text/confirmation-text.ts), with the standing caution.
  */
 import type { Factor } from '../../core/factor/factor.ts';
+import type { FittedModel } from '../../core/fit/analysis.ts';
 import { toReal } from '../../core/factor/coding.ts';
 import { CAUTION } from '../../core/predict/caution.ts';
 import type { JudgedSet } from '../../core/predict/confirmation-sets.ts';
-import { confirmationSetLine, confirmationStatement, confirmationToken } from '../../core/text/confirmation-text.ts';
+import { confirmationScale, confirmationSetLine, confirmationStatement, confirmationToken } from '../../core/text/confirmation-text.ts';
 
-export function confirmationsText(judged: readonly JudgedSet[], factors: readonly Factor[]): string {
+export function confirmationsText(judged: readonly JudgedSet[], model: Pick<FittedModel, 'factors' | 'transform' | 'response'>): string {
   const out = ['Confirmation runs (kept out of the fit, judged against it)'];
-  for (const j of judged) out.push(`  - ${confirmationSetLine(j, factors)}`);
+  for (const j of judged) out.push(`  - ${confirmationSetLine(j, model.factors)}`);
+  const scale = confirmationScale(model.transform, model.response);
+  if (scale) out.push(`  ${scale}`);
   out.push('', 'Caution');
   for (const c of CAUTION) out.push(`  - ${c}`);
   return out.join('\n');

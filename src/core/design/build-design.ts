@@ -12,7 +12,8 @@ import { defaultAliasOrder, designAliasChains } from './alias-structure.ts';
 import { blockConfounded, blockOf, defaultBlocking, parseBlockWords } from './blocking.ts';
 import { catalogFraction } from './catalog.ts';
 import { centerSet, spreadOverBlocks } from './center-runs.ts';
-import { definingRelation, resolution as resolutionOf, wordLengthPattern } from './defining-relation.ts';
+import { definingRelation, resolution as resolutionOf } from './defining-relation.ts';
+import { fractionFields } from './fraction-fields.ts';
 import type { Design, DesignRun } from './design.ts';
 import { foldPoints, foldRelation, separatedPairs, type Foldover } from './foldover.ts';
 import { basicFactors, fractionalFactorial, parseFraction, type FactorialPoint } from './fractional.ts';
@@ -243,10 +244,7 @@ export function buildDesign(spec: DesignSpec): Design {
   return {
     factors,
     runs,
-    generators: generators.map((g) => g.text),
-    definingRelation: relation.map((w) => formatWord(w, letters)),
-    resolution: res,
-    wordLengths: wordLengthPattern(relation),
+    ...fractionFields(generators, relation, letters),
     aliases: chains.map((c) => c.map((w) => formatWord(w, letters))),
     blockWords: blockWords.map((w) => formatWord(w, letters)),
     seed,

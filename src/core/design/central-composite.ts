@@ -12,14 +12,15 @@ import { InputError } from '../errors.ts';
 import { defineFactors, type FactorSpec, type NumericFactor } from '../factor/factor.ts';
 import { axialDistance, type AxialDistance } from './axial-distance.ts';
 import { catalogFraction } from './catalog.ts';
-import { definingRelation, resolution as resolutionOf, romanResolution, wordLengthPattern } from './defining-relation.ts';
+import { definingRelation, resolution as resolutionOf, romanResolution } from './defining-relation.ts';
+import { fractionFields } from './fraction-fields.ts';
 import type { Design, DesignRun, RunKind } from './design.ts';
 import { fractionalFactorial, parseFraction } from './fractional.ts';
 import { generatorWord, parseGenerators, type Generator } from './generators.ts';
 import { drawSeed, MAX_SEED } from './random.ts';
 import { orderRuns } from './run-order.ts';
 import { secondOrderProperties, type SecondOrderPlan } from './second-order-plan.ts';
-import { formatWord, lettersOf } from './word.ts';
+import { lettersOf } from './word.ts';
 
 export const MIN_CCD_FACTORS = 2;
 export const MAX_CCD_FACTORS = 8;
@@ -151,10 +152,7 @@ export function centralComposite(spec: CentralCompositeSpec): SecondOrderPlan {
   const design: Design = {
     factors,
     runs,
-    generators: generators.map((g) => g.text),
-    definingRelation: relation.map((w) => formatWord(w, letters)),
-    resolution: res,
-    wordLengths: wordLengthPattern(relation),
+    ...fractionFields(generators, relation, letters),
     aliases: [],
     blockWords: [],
     seed,

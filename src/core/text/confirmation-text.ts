@@ -3,6 +3,7 @@
  * (see core/predict/confirm-runs.ts for the comparison and its source).
  */
 import type { Factor } from '../factor/factor.ts';
+import type { FitTransform } from '../fit/analysis.ts';
 import { toReal } from '../factor/coding.ts';
 import type { ConfirmationComparison } from '../predict/confirm-runs.ts';
 import type { JudgedSet } from '../predict/confirmation-sets.ts';
@@ -41,13 +42,44 @@ export function confirmationSetPlace(j: JudgedSet, factors: readonly Factor[]): 
 }
 
 /**
- * A set's verdict in one line: its place, then the statement, the core's message, or that none is
- * logged yet. Cost O(k).
+ * What a set of confirmation runs found, in words: the statement, the core's message, or that none
+ * is logged yet. The screens' cards and the command line's report both show it. Cost O(1).
+ * Example: "Confirmed: the mean of the 3 confirmation runs, 41.53, lies inside ...".
+ */
+export function confirmationVerdict(j: JudgedSet): string {
+  return j.comparison ? confirmationStatement(j.comparison) : j.problem !== null ? `Cannot judge: ${j.problem}` : 'None logged yet with a value for this response; log them to see the verdict.';
+}
+
+/**
+ * A set's verdict in one line: its place, then its verdict. Cost O(k).
  * Example: "Confirmation runs 12 to 14 (block 3) at ...: Confirmed: the mean of the 3 confirmation runs, ...".
  */
 export function confirmationSetLine(j: JudgedSet, factors: readonly Factor[]): string {
-  const what = j.comparison ? confirmationStatement(j.comparison) : j.problem !== null ? `Cannot judge: ${j.problem}` : 'None logged yet with a value for this response; log them to see the verdict.';
-  return `${confirmationSetPlace(j, factors)}: ${what}`;
+  return `${confirmationSetPlace(j, factors)}: ${confirmationVerdict(j)}`;
+}
+
+/**
+ * How many of a set's planned runs have a value yet, once some have and while some are missing;
+ * null before any has (the verdict says so) and once all have. Cost O(1).
+ * Example: 2 of runs 12 to 14 logged -> "2 of 3 confirmation runs logged with a value for this response."
+ */
+export function confirmationProgress(j: JudgedSet): string | null {
+  const n = j.set.runs.length;
+  const k = j.set.values.length;
+  return k === 0 || k >= n ? null : `${k} of ${n} confirmation run${n === 1 ? '' : 's'} logged with a value for this response.`;
+}
+
+/**
+ * Which scale a transformed model's confirmation figures are on, since its mean, prediction and
+ * interval are not in the response's units (fit/response-transform.ts: ln(y - L) for the log,
+ * ((y - L)^lambda - 1) / lambda otherwise); null for a model of the response as measured. Cost O(1).
+ * Example: log of Gloss -> "The figures are on the scale the model is fitted on, ln(Gloss), not in Gloss itself."
+ */
+export function confirmationScale(t: FitTransform | undefined, response: string): string | null {
+  if (!t || t.lambda === 1) return null;
+  const y = t.lowerBound ? `${response} − ${shortNumber(t.lowerBound)}` : response;
+  const scale = t.lambda === 0 ? `ln(${y})` : `((${y})^${shortNumber(t.lambda)} − 1) / ${shortNumber(t.lambda)}`;
+  return `The figures are on the scale the model is fitted on, ${scale}, not in ${response} itself.`;
 }
 
 /** The token of a set's verdict for files: confirmed, not-confirmed, no-noise, not-logged or cannot-judge. Example: "confirmed". */

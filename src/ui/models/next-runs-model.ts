@@ -10,13 +10,14 @@ import { computed, createModel, signal } from '@preact/signals';
 import { toReal } from '../../core/factor/coding.ts';
 import type { Factor } from '../../core/factor/factor.ts';
 import { readNumber } from '../../core/factor/read-setting.ts';
-import { compareConfirmation, type ConfirmationComparison } from '../../core/predict/confirm-runs.ts';
+import { confirmationRowsOf, confirmationSets, judgeConfirmationSets } from '../../core/predict/confirmation-sets.ts';
 import { parseSettings } from '../../core/predict/parse-settings.ts';
 import { predict } from '../../core/predict/predict.ts';
 import { solveForTarget, type Solution } from '../../core/predict/solve-for-target.ts';
 import { pathSenseForGoal, steepestPath, type PathSense, type SteepestPath } from '../../core/predict/steepest-path.ts';
 import type { AddedBlock } from '../../core/study/added-block.ts';
 import { meanReading } from '../../core/study/study.ts';
+import { confirmationProgress, confirmationScale, confirmationSetPlace, confirmationToken, confirmationVerdict } from '../../core/text/confirmation-text.ts';
 import { addPlannedRuns, listBlocks } from '../../store/added-blocks.ts';
 import type { Store } from '../../store/store.ts';
 import { setting } from '../lib/format.ts';
@@ -25,11 +26,22 @@ import type { StudyAnalysis } from './study-analysis-model.ts';
 
 export type Outcome<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly message: string };
 
-/** A confirmation block with its logged runs judged (null while none of its runs has a reading). */
-export interface JudgedBlock {
-  readonly block: AddedBlock;
-  readonly logged: number;
-  readonly judged: Outcome<ConfirmationComparison> | null;
+/**
+ * One set of confirmation runs as its card shows it, all from the core's judgement
+ * (core/predict/confirmation-sets.ts, the one the command line's report uses) and its words
+ * (core/text/confirmation-text.ts): `${place}: ${verdict}` is the report's line for the set.
+ */
+export interface ConfirmationCard {
+  readonly key: string;
+  /** Where the runs were made: run numbers, block and setting. */
+  readonly place: string;
+  /** The note of the block the runs were added in, when found. */
+  readonly note: string | null;
+  readonly verdict: string;
+  /** The verdict's token: confirmed, not-confirmed, no-noise, not-logged or cannot-judge. */
+  readonly outcome: string;
+  /** How many runs have a value yet, while some are missing. */
+  readonly progress: string | null;
 }
 
 /** A path block's runs: predicted by the model, observed when logged. */
@@ -147,29 +159,25 @@ export const NextRunsModel = createModel((store: Store, shared: StudyAnalysis) =
     });
   }
 
-  const judged = computed<readonly JudgedBlock[]>(() => {
+  // The comparison the core gives (and the command line reports): the mean of each set's runs
+  // against the 95% interval for the mean of that many new runs from the shown model, which is
+  // fitted without them, on its transformed scale when it has a transform.
+  const confirmations = computed<readonly ConfirmationCard[]>(() => {
     const d = shared.data.value;
     const m = model.value;
     const shown = shared.shown.value;
     if (!d || !shown) return [];
-    return blocks.value
-      .filter((b) => b.purpose === 'confirmation')
-      .map((block) => {
-        const nums = new Set(block.runs.map((r) => r.run));
-        const values = d.runs
-          .filter((r) => nums.has(r.plannedRun) && !r.excluded)
-          .map((r) => meanReading(r.readings[shown.index] ?? []))
-          .filter((y): y is number => y !== null);
-        if (values.length === 0 || !m) return { block, logged: values.length, judged: null };
-        return {
-          block,
-          logged: values.length,
-          judged: attempt(() => {
-            const real = m.factors.map((f, j) => [f.name, toReal(f, block.runs[0].coded[j])] as [string, number | string]);
-            return compareConfirmation(m, parseSettings(m.factors, real), values);
-          }),
-        };
-      });
+    const sets = confirmationSets(confirmationRowsOf(d.study, d.runs, shown.index));
+    // Without a model (too few runs logged) a set with values cannot be judged: the model's own message says why.
+    const judged = m ? judgeConfirmationSets(m, sets) : sets.map((set) => ({ set, comparison: null, problem: set.values.length > 0 ? modelProblem.value : null }));
+    return judged.map((j) => ({
+      key: `${j.set.block}|${j.set.runs[0]}`,
+      place: confirmationSetPlace(j, d.study.factors),
+      note: blocks.value.find((b) => b.purpose === 'confirmation' && b.runs.some((r) => r.run === j.set.runs[0]))?.note ?? null,
+      verdict: confirmationVerdict(j),
+      outcome: confirmationToken(j),
+      progress: confirmationProgress(j),
+    }));
   });
 
   const pathPoints = computed<readonly (readonly PathPoint[])[]>(() => {
@@ -237,7 +245,12 @@ export const NextRunsModel = createModel((store: Store, shared: StudyAnalysis) =
     targetText: computed(() => targetText.value),
     solution,
     confirmCountText: computed(() => confirmCountText.value),
-    judged,
+    confirmations,
+    /** Which scale the cards' figures are on, when the shown model is of a transformed response (as the report says it). */
+    confirmationScale: computed(() => {
+      const m = model.value;
+      return m ? confirmationScale(m.transform, m.response) : null;
+    }),
 
     setPathBase: (i: number) => void (pathBase.value = i),
     setPathStep: (t: string) => void (pathStepText.value = t),

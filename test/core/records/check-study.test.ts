@@ -6,14 +6,12 @@ import { describe, expect, it } from 'vitest';
 import { InputError } from '../../../src/core/errors.ts';
 import { RUN_KINDS } from '../../../src/core/design/design.ts';
 import { checkStudy } from '../../../src/core/records/check-study.ts';
+import { inventedStudy } from '../../helpers/invented-study.ts';
+import { factorialRuns, plainDesign } from '../../helpers/plain-design.ts';
 
 function study(): any {
   return {
-    id: 's-1',
-    device: 'dev-1',
-    createdAt: '2024-05-02T10:00:00.000Z',
-    title: 'Invented demo: two-factor trial',
-    purpose: 'INVENTED DEMO DATA.',
+    ...inventedStudy(),
     factors: [
       { kind: 'numeric', name: 'Temperature', letter: 'A', low: 160, high: 200, unit: '°C' },
       { kind: 'categorical', name: 'Powder', letter: 'B', levels: ['matte', 'gloss'] },
@@ -22,25 +20,9 @@ function study(): any {
       { name: 'Thickness', unit: 'µm', goal: 'target', target: 70, lowerBound: 0 },
       { name: 'Gloss', goal: 'maximize', lowerBound: null },
     ],
-    design: {
-      // Standard order of a 2^2 (Montgomery, 8th ed., section 6.2): (1), a, b, ab; then a center run.
-      runs: [
-        { run: 1, standardOrder: 1, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, -1] },
-        { run: 2, standardOrder: 2, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, -1] },
-        { run: 3, standardOrder: 3, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [-1, 1] },
-        { run: 4, standardOrder: 4, replicate: 1, block: 1, originBlock: 1, kind: 'factorial', coded: [1, 1] },
-        { run: 5, standardOrder: null, replicate: 1, block: 1, originBlock: 1, kind: 'center', coded: [0, -1] },
-      ],
-      generators: [],
-      definingRelation: [],
-      resolution: null,
-      wordLengths: {},
-      aliases: [],
-      blockWords: [],
-      seed: null,
-      summary: 'Full factorial in 2 factors (invented test plan).',
-      notes: [],
-    },
+    // Standard order of a 2^2 (Montgomery, 8th ed., section 6.2): (1), a, b, ab; then a center
+    // run, the categorical factor at its first level.
+    design: plainDesign([...factorialRuns(2), { run: 5, standardOrder: null, replicate: 1, block: 1, originBlock: 1, kind: 'center', coded: [0, -1] }], 'Full factorial in 2 factors (invented test plan).'),
   };
 }
 

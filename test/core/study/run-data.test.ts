@@ -6,7 +6,7 @@ import { findResponse, responseDataFromRuns } from '../../../src/core/study/run-
 import type { LoggedRun, StudyPlan } from '../../../src/core/study/study.ts';
 import { defineFactors } from '../../../src/core/factor/factor.ts';
 import { fixturePath } from '../../helpers/fixtures.ts';
-import { factorialRuns } from '../../store/helpers.ts';
+import { factorialRuns, plainDesign } from '../../helpers/plain-design.ts';
 
 // The 2^2 yield example (Montgomery 8th ed., section 6.2; test/fixtures/montgomery-8e-ex6-1-yield-2x2.csv),
 // logged here as four runs with the three readings of each corner as repeat readings.
@@ -20,7 +20,7 @@ const plan: StudyPlan = {
   purpose: 'published example',
   factors,
   responses: [{ name: 'Yield', unit: '%', goal: 'maximize' }, { name: 'Color', goal: 'minimize' }],
-  design: { runs: factorialRuns(2), generators: [], definingRelation: [], resolution: null, wordLengths: {}, aliases: [], blockWords: [], seed: null, summary: '', notes: [] },
+  design: plainDesign(factorialRuns(2), ''),
 };
 const corners = [[15, 1], [25, 1], [15, 2], [25, 2]];
 function logged(plannedRun: number, over: Partial<LoggedRun> = {}): LoggedRun {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { analyze } from '../../../src/core/fit/analyze.ts';
 import { compareConfirmation } from '../../../src/core/predict/confirm-runs.ts';
 import { parseSettings } from '../../../src/core/predict/parse-settings.ts';
-import { confirmationSetLine, confirmationSetPlace, confirmationStatement, confirmationToken } from '../../../src/core/text/confirmation-text.ts';
+import { confirmationProgress, confirmationScale, confirmationSetLine, confirmationSetPlace, confirmationStatement, confirmationToken, confirmationVerdict } from '../../../src/core/text/confirmation-text.ts';
 import { fixtureData } from '../../helpers/fixtures.ts';
 
 // Montgomery, Design and Analysis of Experiments, 8th ed., section 6.8 data (2^2 + 5 center runs).
@@ -39,5 +39,30 @@ describe('confirmation set lines (for reports and files)', () => {
     expect(confirmationToken({ set, comparison: null, problem: null })).toBe('not-logged');
     expect(confirmationToken({ set, comparison: null, problem: 'x' })).toBe('cannot-judge');
     expect(confirmationSetPlace({ set: { ...set, runs: [7] }, comparison: null, problem: null }, factors)).toMatch(/^Confirmation run 7 \(block 2\)/);
+  });
+  it('the verdict is the line after its place, for a judged set and for a problem', () => {
+    const judged = { set: { ...set, values: [41.2, 41.8, 41.6] }, comparison: compareConfirmation(model, at, [41.2, 41.8, 41.6]), problem: null }; // invented readings
+    expect(confirmationSetLine(judged, factors)).toBe(`${confirmationSetPlace(judged, factors)}: ${confirmationVerdict(judged)}`);
+    expect(confirmationVerdict(judged)).toMatch(/^Confirmed: /);
+    expect(confirmationVerdict({ set, comparison: null, problem: 'The log transform needs readings above 0.' })).toBe('Cannot judge: The log transform needs readings above 0.');
+  });
+  it('progress: how many of the planned runs have a value, null once all have', () => {
+    expect(confirmationProgress({ set: { ...set, values: [41.2, 41.8] }, comparison: null, problem: null })).toBe('2 of 3 confirmation runs logged with a value for this response.');
+    expect(confirmationProgress({ set: { ...set, runs: [7, 8], values: [5] }, comparison: null, problem: null })).toBe('1 of 2 confirmation runs logged with a value for this response.');
+    // None logged: the verdict says so, the count would only repeat it.
+    expect(confirmationProgress({ set, comparison: null, problem: null })).toBeNull();
+    expect(confirmationProgress({ set: { ...set, values: [1, 2, 3] }, comparison: null, problem: null })).toBeNull();
+  });
+});
+
+describe('confirmationScale', () => {
+  // The scales of core/fit/response-transform.ts: ln(y - L) for lambda 0, ((y - L)^lambda - 1) / lambda otherwise.
+  it('names the formula of the scale the figures are on', () => {
+    expect(confirmationScale({ token: 'log', lambda: 0, lowerBound: null }, 'Gloss')).toBe('The figures are on the scale the model is fitted on, ln(Gloss), not in Gloss itself.');
+    expect(confirmationScale({ token: 'sqrt', lambda: 0.5, lowerBound: 10 }, 'Gloss')).toBe('The figures are on the scale the model is fitted on, ((Gloss − 10)^0.5 − 1) / 0.5, not in Gloss itself.');
+  });
+  it('says nothing for a model of the response as measured (degenerate: no transform)', () => {
+    expect(confirmationScale(undefined, 'Gloss')).toBeNull();
+    expect(confirmationScale({ token: 'none', lambda: 1, lowerBound: null }, 'Gloss')).toBeNull();
   });
 });

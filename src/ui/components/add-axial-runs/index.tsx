@@ -10,6 +10,7 @@ import type { Store } from '../../../store/store.ts';
 import { setting } from '../../lib/format.ts';
 import { AxialBlockModel, type AxialChoice } from '../../models/axial-block-model.ts';
 import type { StudyAnalysis } from '../../models/study-analysis-model.ts';
+import { shownStudy } from '../../lib/use-study-analysis.ts';
 import { CautionBox } from '../caution-box/index.tsx';
 import { ChoiceButtons } from '../choice-buttons/index.tsx';
 import { CountStepper } from '../count-stepper/index.tsx';
@@ -26,7 +27,7 @@ const DISTANCES: readonly { readonly value: AxialChoice; readonly label: string 
 
 export function AddAxialRuns({ store, shared }: AddAxialRunsProps) {
   const model = useModel(() => new AxialBlockModel(store, shared));
-  const study = shared.data.value?.study;
+  const study = shownStudy(shared)?.study;
   if (!study) return null;
   const existing = model.existing.value;
   const p = model.preview.value;

@@ -5,7 +5,6 @@
  * analysis's warnings.
  */
 import { useModel } from '@preact/signals';
-import { useEffect } from 'preact/hooks';
 import type { Analysis, RunDiagnostics, TermEstimate } from '../../../core/fit/analysis.ts';
 import type { Factor } from '../../../core/factor/factor.ts';
 import { isSquare, termFactors, type Term } from '../../../core/model/term.ts';
@@ -21,7 +20,7 @@ import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { HalfNormalChart } from '../../components/half-normal-chart/index.tsx';
 import { InteractionChart } from '../../components/interaction-chart/index.tsx';
 import { ResidualChart } from '../../components/residual-chart/index.tsx';
-import { ProblemBox } from '../../components/problem-box/index.tsx';
+import { StudyPending } from '../../components/study-pending/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { pPhrase } from '../../../core/text/p-value.ts';
 import { effectWords, LENTH_WORDS, WITHIN_NOISE } from '../../../core/text/effect-words.ts';
@@ -29,7 +28,8 @@ import { effectShown, lenthTableDifferences, lenthTermText } from '../../../core
 import { curvatureStatement } from '../../../core/text/verdict-text.ts';
 import { num, percent, setting, signed, termLabel, withUnit } from '../../lib/format.ts';
 import { AnalysisModel, twoFactorTerms } from '../../models/analysis-model.ts';
-import { modelChoicesFor, openStudyAnalysis, TRANSFORM_CHOICES } from '../../models/study-analysis-model.ts';
+import { modelChoicesFor, TRANSFORM_CHOICES } from '../../models/study-analysis-model.ts';
+import { shownStudy, useStudyAnalysis } from '../../lib/use-study-analysis.ts';
 import { interactionLines } from './interaction-lines.ts';
 import { hrefTo } from '../../app/routes.ts';
 import { boundNote, boxCoxText } from '../../../core/text/bound-text.ts';
@@ -170,16 +170,11 @@ function ResidualSection({ a, response }: { a: Analysis; response: Response }) {
 }
 
 export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
-  const shared = openStudyAnalysis(store, studyId);
+  const shared = useStudyAnalysis(store, studyId);
   const model = useModel(() => new AnalysisModel(shared));
-  useEffect(() => void shared.load(), []);
-  const d = shared.data.value;
-  const problem = shared.problem.value;
-  const shown = shared.shown.value;
-  if (problem) return <ProblemBox problem={problem} />;
-  if (!d || !shown) return <p class="quiet">Reading the runs…</p>;
-  const { study } = d;
-  const { response } = shown;
+  const open = shownStudy(shared);
+  if (!open) return <StudyPending shared={shared} />;
+  const { study, shown, response } = open;
   const result = model.result.value;
   const modelChoices = modelChoicesFor(study);
   const so = result && result.ok && shown.settings.value.model === 'quadratic' ? secondOrderView(result, response) : null;

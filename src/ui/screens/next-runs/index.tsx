@@ -6,18 +6,17 @@
  */
 import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
-import { confirmationStatement } from '../../../core/text/confirmation-text.ts';
 import { intervalText } from '../../../core/text/interval-text.ts';
 import type { Store } from '../../../store/store.ts';
 import { AddAxialRuns } from '../../components/add-axial-runs/index.tsx';
 import { CautionBox } from '../../components/caution-box/index.tsx';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { CountStepper } from '../../components/count-stepper/index.tsx';
-import { ProblemBox } from '../../components/problem-box/index.tsx';
+import { StudyPending } from '../../components/study-pending/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { num, setting, withUnit } from '../../lib/format.ts';
 import { NextRunsModel } from '../../models/next-runs-model.ts';
-import { openStudyAnalysis } from '../../models/study-analysis-model.ts';
+import { shownStudy, useStudyAnalysis } from '../../lib/use-study-analysis.ts';
 import { CAUTION } from '../../../core/predict/caution.ts';
 import { FoldoverPart, isFraction } from './foldover-part.tsx';
 import { PathChart } from '../../components/path-chart/index.tsx';
@@ -31,19 +30,12 @@ function range(i: readonly [number, number] | null, unit: string | undefined): s
 }
 
 export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
-  const shared = openStudyAnalysis(store, studyId);
+  const shared = useStudyAnalysis(store, studyId);
   const model = useModel(() => new NextRunsModel(store, shared));
-  useEffect(() => {
-    void shared.load();
-    void model.refreshBlocks(studyId);
-  }, []);
-  const d = shared.data.value;
-  const problem = shared.problem.value;
-  const shown = shared.shown.value;
-  if (problem) return <ProblemBox problem={problem} />;
-  if (!d || !shown) return <p class="quiet">Reading the runs…</p>;
-  const { study } = d;
-  const { response } = shown;
+  useEffect(() => void model.refreshBlocks(studyId), []);
+  const open = shownStudy(shared);
+  if (!open) return <StudyPending shared={shared} />;
+  const { study, shown, response } = open;
   const numeric = study.factors.flatMap((f, i) => (f.kind === 'numeric' ? [{ value: i, label: f.name }] : []));
   const path = model.path.value;
   const solution = model.solution.value;
@@ -200,23 +192,16 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
         <h3 id="confirm-h">Confirmation runs</h3>
         <p class="quiet">Runs at a chosen setting, judged against the model fitted without them: their mean should fall inside the 95% interval for the mean of that many new runs.</p>
         <CountStepper id="confirm-count" label="How many confirmation runs to plan" value={model.confirmCountText.value} min={1} max={20} onChange={(t) => model.setConfirmCount(t)} />
-        {model.judged.value.length === 0 && <p class="quiet">None planned yet: choose a setting above (a solved setting or a path step).</p>}
-        {model.judged.value.map((j) => (
-          <div class="result-card" key={j.block.id} data-testid="confirmation">
-            <p class="result-main">
-              Runs {j.block.runs[0].run} to {j.block.runs[j.block.runs.length - 1].run}: {j.block.note}
+        {model.confirmations.value.length === 0 && <p class="quiet">None planned yet: choose a setting above (a solved setting or a path step).</p>}
+        {model.confirmations.value.map((c) => (
+          <div class="result-card" key={c.key} data-testid="confirmation">
+            <p class="result-main">{c.place}</p>
+            {c.note && <p class="quiet">{c.note}</p>}
+            {c.progress && <p>{c.progress}</p>}
+            <p class={c.outcome === 'confirmed' ? 'verdict good' : c.outcome === 'not-confirmed' ? 'verdict bad' : c.outcome === 'cannot-judge' ? 'problem input' : ''} role={c.outcome === 'cannot-judge' ? 'alert' : undefined}>
+              {c.verdict}
             </p>
-            {j.judged === null && (
-              <p>
-                {j.logged} of {j.block.runs.length} logged with a value for {response.name}. Log them on the run sheet to see the verdict.
-              </p>
-            )}
-            {j.judged && !j.judged.ok && (
-              <p class="problem input" role="alert">
-                {j.judged.message}
-              </p>
-            )}
-            {j.judged && j.judged.ok && <p class={j.judged.value.outcome === 'confirmed' ? 'verdict good' : 'verdict bad'}>{confirmationStatement(j.judged.value)}</p>}
+            {model.confirmationScale.value && (c.outcome === 'confirmed' || c.outcome === 'not-confirmed') && <p class="quiet">{model.confirmationScale.value}</p>}
           </div>
         ))}
       </section>

@@ -5,7 +5,6 @@
  * the caution is always shown with it, in one short line with the full text a tap away.
  */
 import { useModel } from '@preact/signals';
-import { useEffect } from 'preact/hooks';
 import type { Prediction } from '../../../core/predict/predict.ts';
 import { CAUTION_MORE, CAUTION_SHORT } from '../../../core/text/caution-short.ts';
 import { intervalText } from '../../../core/text/interval-text.ts';
@@ -17,12 +16,13 @@ import { CautionBox } from '../../components/caution-box/index.tsx';
 import { ChoiceButtons } from '../../components/choice-buttons/index.tsx';
 import { ContourCard } from '../../components/contour-card/index.tsx';
 import { FactorControl } from '../../components/factor-control/index.tsx';
-import { ProblemBox } from '../../components/problem-box/index.tsx';
+import { StudyPending } from '../../components/study-pending/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { num, signed, termLabel, withUnit } from '../../lib/format.ts';
 import { useHeightProperty } from '../../lib/use-height-property.ts';
 import { QuickCardModel, SLIDER_REACH } from '../../models/quick-card-model.ts';
-import { MODEL_CHOICES, openStudyAnalysis, QUADRATIC_CHOICE, TRANSFORM_CHOICES } from '../../models/study-analysis-model.ts';
+import { MODEL_CHOICES, QUADRATIC_CHOICE, TRANSFORM_CHOICES } from '../../models/study-analysis-model.ts';
+import { shownStudy, useStudyAnalysis } from '../../lib/use-study-analysis.ts';
 import './style.css';
 
 export type QuickCardScreenProps = { readonly store: Store; readonly studyId: string };
@@ -63,18 +63,13 @@ function PredictionPanel({ p, response }: { p: Prediction; response: Response })
 }
 
 export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
-  const shared = openStudyAnalysis(store, studyId);
+  const shared = useStudyAnalysis(store, studyId);
   const model = useModel(() => new QuickCardModel(shared));
   // Measured for the scroll padding that keeps a focused field clear of the sticky block (style.css).
   const stickyRef = useHeightProperty('--sticky-top-height');
-  useEffect(() => void shared.load(), []);
-  const d = shared.data.value;
-  const problem = shared.problem.value;
-  const shown = shared.shown.value;
-  if (problem) return <ProblemBox problem={problem} />;
-  if (!d || !shown) return <p class="quiet">Reading the runs…</p>;
-  const { study } = d;
-  const { response } = shown;
+  const open = shownStudy(shared);
+  if (!open) return <StudyPending shared={shared} />;
+  const { study, shown, response } = open;
   const result = model.prediction.value;
   const p = result && result.ok ? result.prediction : null;
   const analysis = model.analysis.value;
