@@ -112,6 +112,12 @@ export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): st
     const v = a.verdicts.find((x) => x.kind === 'curvature');
     if (v && v.kind === 'curvature') out.push(`  ${curvatureStatement(v)}`);
   }
+  // A second-order model's curvature is in its squares: their own tests, said in one note.
+  const squares = a.verdicts.find((x) => x.kind === 'squares');
+  if (squares) {
+    out.push('');
+    out.push(verdictText(squares));
+  }
   // A significant lack of fit is among the notes below; the plain statement is given here.
   const lof = a.verdicts.find((x) => x.kind === 'lack-of-fit' && x.outcome === 'not-significant');
   if (lof) {
