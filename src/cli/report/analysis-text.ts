@@ -7,6 +7,7 @@ import { curvatureStatement, lenthStatement, verdictText } from '../../core/text
 import { zeroIfRoundoff } from '../../core/text/roundoff-zero.ts';
 import { lenthTableDifferences, lenthTableText, responseScale } from '../../core/text/lenth-table-effects.ts';
 import { num, table } from './numbers.ts';
+import { boundNoteCommand } from '../../core/text/bound-text.ts';
 
 function anovaText(t: AnovaTable): string {
   return table(
@@ -74,6 +75,7 @@ export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): st
     const minus = a.transform.lowerBound !== null ? ` minus its lower bound ${a.transform.lowerBound}` : '';
     out.push(`Fitted on the ${a.transform.token} scale of ${a.response}${minus}: (y'^L - 1)/L with L = ${a.transform.lambda} (log at 0); effects and tables are on that scale`);
   }
+  if (a.transform.lowerBound !== null) out.push(boundNoteCommand(a.response, a.transform.lowerBound));
   if (a.boxCox) {
     const [lo, hi] = a.boxCox.ci;
     out.push(`Box-Cox power for ${a.response}${a.transform.lowerBound !== null ? ' minus its bound' : ''}: ${num(a.boxCox.lambda)} (95% interval ${lo === null ? 'below -3' : num(lo)} to ${hi === null ? 'above 3' : num(hi)}); suggested transform: ${a.boxCox.suggestion}`);

@@ -15,7 +15,8 @@
  */
 import type { Verdict } from '../fit/verdicts.ts';
 import { isWarning } from '../fit/verdicts.ts';
-import { squaresFinding, verdictText } from './verdict-text.ts';
+import { quadraticNotSupported } from './second-order-text.ts';
+import { curvatureStatement, squaresFinding, verdictText } from './verdict-text.ts';
 
 /** One note of the screen: a sentence, and the items listed under it when it counts some. */
 export interface ScreenNote {
@@ -23,9 +24,19 @@ export interface ScreenNote {
   readonly list?: readonly string[];
 }
 
+/** What the screen offers beside the notes: whether its model buttons hold the quadratic model (core/design/supports-quadratic.ts). */
+export interface ScreenContext {
+  readonly quadraticOffered: boolean;
+}
+
 /** One verdict as the screen says it, or null for one the screen does not show as a note. */
-export function screenVerdictNote(v: Verdict): ScreenNote | null {
+export function screenVerdictNote(v: Verdict, context: ScreenContext = { quadraticOffered: false }): ScreenNote | null {
   switch (v.kind) {
+    case 'curvature':
+      // A significant curvature without squares: the way on is the quadratic model when the
+      // runs support it, else axial runs (and why the model is not offered).
+      if (v.outcome !== 'curved' || (v.squares ?? []).length > 0) return isWarning(v) ? { text: verdictText(v) } : null;
+      return { text: `${curvatureStatement(v)} ${context.quadraticOffered ? 'Choose the quadratic model above to fit it.' : quadraticNotSupported('screen')}` };
     case 'not-orthogonal':
       return { text: 'Some runs are missing, off target or in unequal blocks, so the effects overlap a little: each test on this screen allows for all the other terms.' };
     case 'near-replicates':
@@ -67,12 +78,12 @@ export function screenVerdictNote(v: Verdict): ScreenNote | null {
  * places), then the verdicts in screen words; for a second-order model also the plain statement
  * of lack of fit, which with the squares' tests is what such a model's notes say.
  */
-export function screenNotes(messages: readonly string[], verdicts: readonly Verdict[]): ScreenNote[] {
+export function screenNotes(messages: readonly string[], verdicts: readonly Verdict[], context: ScreenContext = { quadraticOffered: false }): ScreenNote[] {
   const secondOrder = verdicts.some((v) => v.kind === 'squares');
   const out: ScreenNote[] = messages.map((text) => ({ text }));
   for (const v of verdicts) {
     // The curvature test is stated in the fit list above the notes; a significant one is a note too.
-    const note = secondOrder && v.kind === 'lack-of-fit' ? { text: verdictText(v) } : screenVerdictNote(v);
+    const note = secondOrder && v.kind === 'lack-of-fit' ? { text: verdictText(v) } : screenVerdictNote(v, context);
     if (note) out.push(note);
   }
   return out;

@@ -87,7 +87,7 @@ export function analyzeResponse(d: StudyData, responseIndex: number, settings: R
     const k = d.study.factors.length;
     const terms = settings.model === 'quadratic' ? quadraticTerms(d.study.factors) : termsUpToOrder(k, settings.model === 'main' ? 1 : Math.min(2, k));
     const analysis = analyze(data, { terms, transform: parseTransform(settings.transform) });
-    return { ok: true, analysis, data, notes: screenNotes(data.messages, analysis.verdicts) };
+    return { ok: true, analysis, data, notes: screenNotes(data.messages, analysis.verdicts, { quadraticOffered: modelChoicesFor(d.study).includes(QUADRATIC_CHOICE) }) };
   } catch (err) {
     return { ok: false, message: problemOf(err).message };
   }

@@ -3,6 +3,7 @@ import { analyze } from '../../../src/core/fit/analyze.ts';
 import { parseTerms } from '../../../src/core/model/formula.ts';
 import { screenNotes, screenVerdictNote } from '../../../src/core/text/screen-notes-text.ts';
 import { verdictText } from '../../../src/core/text/verdict-text.ts';
+import { quadraticNotSupported } from '../../../src/core/text/second-order-text.ts';
 import { fixtureData } from '../../helpers/fixtures.ts';
 import { laserData } from '../../helpers/half-fraction.ts';
 
@@ -44,6 +45,25 @@ describe('screenNotes: the Effects screen says the verdicts in its own words', (
   it('degenerate input: no verdicts and no messages give no notes; a plain statement is not a note', () => {
     expect(screenNotes([], [])).toEqual([]);
     expect(screenVerdictNote({ kind: 'lack-of-fit', outcome: 'not-significant', p: 0.5, alpha: 0.05 })).toBeNull();
+  });
+});
+
+describe('screenNotes: a significant curvature without squares says the way on', () => {
+  // Montgomery 8th ed., section 6.8 (2^2 with five center runs), with 2 added to the center runs
+  // (an invented shift) so that the curvature test is significant.
+  const data = fixtureData('montgomery-8e-ex6-6-center-points.csv', { factors: ['Time', 'Temperature'], response: 'Yield' });
+  const bent = analyze({ ...data, y: data.y.map((v, i) => (i >= 4 ? v + 2 : v)) });
+
+  it('on runs that cannot fit squares: why the quadratic model is not offered, and axial runs', () => {
+    const text = allText(screenNotes([], bent.verdicts, { quadraticOffered: false }));
+    expect(text).toMatch(/Curvature is significant/);
+    expect(text).toContain(quadraticNotSupported('screen'));
+  });
+
+  it('on runs that can: the quadratic model above, not axial runs', () => {
+    const text = allText(screenNotes([], bent.verdicts, { quadraticOffered: true }));
+    expect(text).toMatch(/Choose the quadratic model above/);
+    expect(text).not.toMatch(/axial/);
   });
 });
 
