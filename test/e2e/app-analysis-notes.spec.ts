@@ -1,0 +1,84 @@
+import 'fake-indexeddb/auto';
+import { test, expect } from '@playwright/test';
+import { readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { buildDesign } from '../../src/core/design/build-design.ts';
+import { parseRunForm } from '../../src/core/study/run-form.ts';
+import { studyPlan } from '../../src/core/study/study.ts';
+import { exportBackup } from '../../src/store/files.ts';
+import { createStudy } from '../../src/store/studies.ts';
+import { openNewRun, saveRun } from '../../src/store/runs.ts';
+import { openStore } from '../../src/store/store.ts';
+import { DEMO_STUDY, demoWithConfirmation } from '../helpers/confirmation-backup.ts';
+
+// The Effects notes in the screen's own words. A half fraction of four factors (D = ABC, so
+// AB = CD, AC = BD, AD = BC: Montgomery, Design and Analysis of Experiments, 8th ed., section 8.2)
+// with three center runs, made by the app's own store code in Node, one setting logged off target
+// (Power 89 where the plan says 90). The responses are INVENTED.
+
+const shot = (name: string) => join(tmpdir(), `trialbook-${name}.png`);
+let backup = '';
+let studyId = '';
+
+test.beforeAll(async () => {
+  const store = await openStore({ name: `e2e-notes-${process.pid}`, storage: null });
+  const design = buildDesign({
+    factors: [
+      { kind: 'numeric', name: 'Power', low: 70, high: 90, unit: '%' },
+      { kind: 'numeric', name: 'Speed', low: 2, high: 4, unit: 'm/min' },
+      { kind: 'numeric', name: 'Focus', low: 0, high: 2, unit: 'mm' },
+      { kind: 'numeric', name: 'Gas flow', low: 10, high: 20, unit: 'l/min' },
+    ],
+    generators: ['D=ABC'],
+    centerRuns: 3,
+    seed: 5,
+  });
+  const study = await createStudy(store, studyPlan('Invented laser cutter half fraction', 'INVENTED DEMO DATA.', [{ name: 'Roughness', unit: 'µm', goal: 'minimize', lowerBound: 0 }], design));
+  studyId = study.id;
+  for (const r of design.runs) {
+    const state = await openNewRun(store, study.id, r.run);
+    const [a, b, c, d] = r.coded;
+    const y = 2 + 0.4 * a - 0.6 * b + 0.25 * c + 0.5 * d + 0.05 * Math.sin(3 * r.run);
+    const actual = state.form.actual.map((v, j) => (j === 0 && r.standardOrder === 2 ? '89' : v));
+    await saveRun(store, { ...state, studyId: study.id, values: parseRunForm(study, { ...state.form, actual, readings: [y.toFixed(3)], loggedAt: '2024-05-02T09:30:00Z' }) });
+  }
+  backup = await exportBackup(store);
+});
+
+for (const size of [{ width: 390, height: 844 }, { width: 360, height: 740 }]) {
+  test(`at ${size.width}x${size.height}: the Effects notes use the screen's sentences, with the inseparable terms listed`, async ({ page }) => {
+    await page.setViewportSize(size);
+    await page.goto('/#/export');
+    await page.locator('input[type="file"]').setInputFiles({ name: 'laser.json', mimeType: 'application/json', buffer: Buffer.from(backup) });
+    await expect(page.getByRole('status')).toContainText('Imported 1 new study, 11 new logged runs');
+    await page.goto(`/#/study/${studyId}/analysis`);
+    const notes = page.getByTestId('analysis-notes');
+    await expect(notes).toContainText('each test on this screen allows for all the other terms');
+    await expect(notes).not.toContainText('adjusted table');
+    await expect(notes).not.toContainText('sequential sums of squares');
+    await expect(notes).toContainText('These runs cannot separate 3 model terms from others');
+    // The count matches the list under it: the three terms the plan confounds with others.
+    await expect(notes.locator('.note-list li')).toHaveCount(3);
+    await expect(notes.locator('.note-list')).toContainText('CD cannot be told apart from AB');
+    await notes.scrollIntoViewIfNeeded();
+    await page.screenshot({ path: shot(`analysis-notes-${size.width}`) });
+    // Big enough to read with gloves on: the note text is not shrunk below the body size.
+    const px = await notes.locator('.note-list li').first().evaluate((el) => parseFloat(getComputedStyle(el).fontSize));
+    expect(px).toBeGreaterThanOrEqual(14);
+  });
+}
+
+test('the export screen saves the confirmation verdicts as a CSV of their own (invented demo data)', async ({ page }) => {
+  await page.goto('/#/export');
+  await page.locator('input[type="file"]').setInputFiles({ name: 'confirm.json', mimeType: 'application/json', buffer: Buffer.from(await demoWithConfirmation()) });
+  await expect(page.getByRole('status')).toContainText('3 new logged runs');
+  const card = page.locator('.card', { hasText: DEMO_STUDY });
+  const [file] = await Promise.all([page.waitForEvent('download'), card.getByRole('button', { name: 'Download confirmation verdicts (CSV)' }).click()]);
+  expect(file.suggestedFilename()).toMatch(/confirmations.*\.csv$/);
+  const lines = readFileSync((await file.path())!, 'utf8').replace(/^\ufeff/, '').split('\r\n').filter((l) => l !== '');
+  expect(lines[0].startsWith('Response,Model,Block,Runs,')).toBe(true);
+  expect(lines.some((l) => l.startsWith('Gloss,') && /,(confirmed|not-confirmed),/.test(l))).toBe(true);
+  await card.scrollIntoViewIfNeeded();
+  await page.screenshot({ path: shot('export-confirmations-390') });
+});
