@@ -4,6 +4,7 @@ import { readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { buildDesign } from '../../src/core/design/build-design.ts';
+import { centralComposite } from '../../src/core/design/central-composite.ts';
 import { parseRunForm } from '../../src/core/study/run-form.ts';
 import { studyPlan } from '../../src/core/study/study.ts';
 import { exportBackup } from '../../src/store/files.ts';
@@ -20,6 +21,8 @@ import { DEMO_STUDY, demoWithConfirmation } from '../helpers/confirmation-backup
 const shot = (name: string) => join(tmpdir(), `trialbook-${name}.png`);
 let backup = '';
 let studyId = '';
+let ccdBackup = '';
+let ccdId = '';
 
 test.beforeAll(async () => {
   const store = await openStore({ name: `e2e-notes-${process.pid}`, storage: null });
@@ -44,6 +47,26 @@ test.beforeAll(async () => {
     await saveRun(store, { ...state, studyId: study.id, values: parseRunForm(study, { ...state.form, actual, readings: [y.toFixed(3)], loggedAt: '2024-05-02T09:30:00Z' }) });
   }
   backup = await exportBackup(store);
+
+  // A rotatable central composite design in two factors with five center runs; its yields are
+  // INVENTED from a surface with a top (y = 80 + x1 + 0.5 x2 - 1.4 x1^2 - x2^2 + 0.25 x1 x2, plus a small wobble).
+  const ccdStore = await openStore({ name: `e2e-notes-ccd-${process.pid}`, storage: null });
+  const ccd = centralComposite({
+    factors: [
+      { kind: 'numeric', name: 'Time', low: 80, high: 90, unit: 'min' },
+      { kind: 'numeric', name: 'Temperature', low: 170, high: 180, unit: 'degF' },
+    ],
+    seed: 3,
+  }).design;
+  const s2 = await createStudy(ccdStore, studyPlan('Invented reactor surface', 'INVENTED DEMO DATA.', [{ name: 'Yield', unit: '%', goal: 'maximize' }], ccd));
+  ccdId = s2.id;
+  for (const r of ccd.runs) {
+    const state = await openNewRun(ccdStore, s2.id, r.run);
+    const [a, b] = r.coded;
+    const y = 80 + a + 0.5 * b - 1.4 * a * a - b * b + 0.25 * a * b + 0.1 * Math.sin(5 * r.run);
+    await saveRun(ccdStore, { ...state, studyId: s2.id, values: parseRunForm(s2, { ...state.form, readings: [y.toFixed(2)], loggedAt: '2024-05-02T09:30:00Z' }) });
+  }
+  ccdBackup = await exportBackup(ccdStore);
 });
 
 for (const size of [{ width: 390, height: 844 }, { width: 360, height: 740 }]) {
@@ -66,6 +89,24 @@ for (const size of [{ width: 390, height: 844 }, { width: 360, height: 740 }]) {
     // Big enough to read with gloves on: the note text is not shrunk below the body size.
     const px = await notes.locator('.note-list li').first().evaluate((el) => parseFloat(getComputedStyle(el).fontSize));
     expect(px).toBeGreaterThanOrEqual(14);
+  });
+}
+
+for (const size of [{ width: 390, height: 844 }, { width: 360, height: 740 }]) {
+  test(`at ${size.width}x${size.height}: a central composite study's quadratic notes speak of its squares and lack of fit, not of Lenth's method`, async ({ page }) => {
+    await page.setViewportSize(size);
+    await page.goto('/#/export');
+    await page.locator('input[type="file"]').setInputFiles({ name: 'ccd.json', mimeType: 'application/json', buffer: Buffer.from(ccdBackup) });
+    await expect(page.getByRole('status')).toContainText('Imported 1 new study');
+    await page.goto(`/#/study/${ccdId}/analysis`);
+    await page.getByRole('button', { name: 'Quadratic (with curvature)' }).click();
+    const notes = page.getByTestId('analysis-notes');
+    await expect(notes).toContainText("The model's squares test the bend along each factor: Time^2 (A^2) p");
+    await expect(notes).toContainText('lack of fit');
+    await expect(notes).not.toContainText('Lenth');
+    await expect(notes).not.toContainText('missing, off target');
+    await notes.scrollIntoViewIfNeeded();
+    await notes.screenshot({ path: shot(`analysis-notes-ccd-${size.width}`) });
   });
 }
 
