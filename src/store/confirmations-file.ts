@@ -7,6 +7,7 @@
 import { InputError } from '../core/errors.ts';
 import { studyConfirmations } from '../core/predict/study-confirmations.ts';
 import { confirmationsCsv } from '../io/csv/confirmations-csv.ts';
+import { noConfirmationRuns } from '../core/text/confirmation-text.ts';
 import type { StudyCsvOptions } from '../io/csv/study-csv.ts';
 import { studyAndRuns } from './files.ts';
 import type { Store } from './store.ts';
@@ -15,6 +16,6 @@ import type { Store } from './store.ts';
 export async function exportConfirmationsCsv(store: Store, studyId: string, options: StudyCsvOptions = {}): Promise<string> {
   const [study, runs] = await studyAndRuns(store, studyId);
   const results = studyConfirmations(study, runs);
-  if (results.length === 0) throw new InputError(`The study "${study.title}" has no confirmation runs planned, so there is no verdict to save; plan them on the Next tab first`);
+  if (results.length === 0) throw new InputError(noConfirmationRuns(study.title, 'app'));
   return confirmationsCsv(study.factors, results, options);
 }

@@ -5,6 +5,7 @@ import { backupDivergedRuns, selectStudy, studyRuns } from '../../io/backup/sele
 import { divergedNote } from '../../core/text/diverged-text.ts';
 import { studyCsv } from '../../io/csv/study-csv.ts';
 import { confirmationsCsv } from '../../io/csv/confirmations-csv.ts';
+import { noConfirmationRuns } from '../../core/text/confirmation-text.ts';
 import { studyConfirmations } from '../../core/predict/study-confirmations.ts';
 import { parseCommandArgs } from '../args.ts';
 import type { Command } from '../command.ts';
@@ -43,7 +44,7 @@ export const csv: Command = {
     for (const d of backupDivergedRuns(backup, runs)) process.stderr.write(visibleText(`trialbook csv: ${divergedNote(study, d)}\n`));
     if (values.confirmations) {
       const results = studyConfirmations(study, runs);
-      if (results.length === 0) throw new InputError(`The study "${study.title}" has no confirmation runs planned, so there is no verdict to write; plan them in the app (Next tab) first`);
+      if (results.length === 0) throw new InputError(noConfirmationRuns(study.title, 'command'));
       return confirmationsCsv(study.factors, results, { bom: values.bom === true });
     }
     return studyCsv(study, runs, { bom: values.bom === true });

@@ -5,7 +5,8 @@
  * numbers, separated by spaces), each factor's setting ("<name> (<unit>) setting", real units),
  * Runs logged (m), Mean, Predicted, Interval low, Interval high (the 95% interval for the mean of
  * m new runs), Level, Outcome (confirmed, not-confirmed, not-logged or cannot-judge, the tokens
- * of `analyze --json`'s confirmations) and Verdict (the sentence). Numbers are in the response's
+ * of `analyze --json`'s confirmations), Verdict (the sentence) and Caution (the standing caution
+ * of every prediction, core/predict/caution.ts, since a verdict leads to a setting). Numbers are in the response's
  * units (the default model has no transform); empty where the runs give none. Written by toCsv
  * (RFC 4180, CRLF, the formula guard), optionally with a UTF-8 byte-order mark.
  * Example: confirmationsCsv(study, studyConfirmations(study, runs)).split('\r\n')[0] ->
@@ -15,8 +16,9 @@ import { toReal } from '../../core/factor/coding.ts';
 import type { Factor } from '../../core/factor/factor.ts';
 import type { ResponseConfirmations } from '../../core/predict/study-confirmations.ts';
 import { factorLabel } from '../../core/study/name-with-unit.ts';
-import { confirmationStatement, confirmationToken } from '../../core/text/confirmation-text.ts';
+import { confirmationStatement, confirmationToken, NOT_LOGGED_YET } from '../../core/text/confirmation-text.ts';
 import { toCsv, type Cell, type Table } from './run-sheet.ts';
+import { CAUTION } from '../../core/predict/caution.ts';
 
 /** Header of a factor's setting column in the confirmations file: "<name> (<unit>) setting". */
 export function settingColumn(f: Factor): string {
@@ -27,8 +29,10 @@ const MODEL_WORDS = { 'two-way': 'main effects and two-factor interactions', mai
 
 /** The file as a table: the header and one row per set and response. */
 export function confirmationsTable(factors: readonly Factor[], results: readonly ResponseConfirmations[]): Table {
-  const header = ['Response', 'Model', 'Block', 'Runs', ...factors.map(settingColumn), 'Runs logged', 'Mean', 'Predicted', 'Interval low', 'Interval high', 'Level', 'Outcome', 'Verdict'];
+  const header = ['Response', 'Model', 'Block', 'Runs', ...factors.map(settingColumn), 'Runs logged', 'Mean', 'Predicted', 'Interval low', 'Interval high', 'Level', 'Outcome', 'Verdict', 'Caution'];
   const rows: Cell[][] = [];
+  // A verdict is read as leave to change a setting: the standing caution goes with every row.
+  const caution = CAUTION.join(' ');
   for (const r of results) {
     for (const j of r.judged) {
       const c = j.comparison;
@@ -45,7 +49,8 @@ export function confirmationsTable(factors: readonly Factor[], results: readonly
         c?.interval ? c.interval[1] : '',
         c ? c.level : '',
         confirmationToken(j),
-        c ? confirmationStatement(c) : j.problem ?? 'None logged yet with a value for this response.',
+        c ? confirmationStatement(c) : j.problem ?? NOT_LOGGED_YET,
+        caution,
       ]);
     }
   }

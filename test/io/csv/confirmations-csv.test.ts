@@ -15,7 +15,7 @@ describe('confirmationsCsv: the verdicts as a small CSV beside the runs file (in
 
   it('opens as one rectangular table (papaparse), one row per set and response, the numbers read back exactly', () => {
     const rows = Papa.parse<string[]>(text.trimEnd(), { header: false }).data;
-    expect(rows[0]).toEqual(['Response', 'Model', 'Block', 'Runs', 'Oven temperature (°C) setting', 'Line speed (m/min) setting', 'Powder flow (g/min) setting', 'Runs logged', 'Mean', 'Predicted', 'Interval low', 'Interval high', 'Level', 'Outcome', 'Verdict']);
+    expect(rows[0]).toEqual(['Response', 'Model', 'Block', 'Runs', 'Oven temperature (°C) setting', 'Line speed (m/min) setting', 'Powder flow (g/min) setting', 'Runs logged', 'Mean', 'Predicted', 'Interval low', 'Interval high', 'Level', 'Outcome', 'Verdict', 'Caution']);
     expect(rows.every((r) => r.length === rows[0].length)).toBe(true);
     expect(rows).toHaveLength(1 + results.length);
     const gloss = rows.find((r) => r[0] === 'Gloss')!;
@@ -25,6 +25,7 @@ describe('confirmationsCsv: the verdicts as a small CSV beside the runs file (in
     expect(Number(gloss[10])).toBe(c.interval![0]);
     expect(gloss[13]).toBe(c.outcome);
     expect(gloss[14]).toMatch(/^(Confirmed|Not confirmed): the mean of the 3 confirmation runs/);
+    expect(gloss[15]).toContain("Settings must stay within the machine's rated limits");
     expect(text.endsWith('\r\n')).toBe(true); // RFC 4180 record ends
   });
 
