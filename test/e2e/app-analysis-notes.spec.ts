@@ -1,5 +1,6 @@
 import 'fake-indexeddb/auto';
 import { test, expect } from '@playwright/test';
+import AxeBuilder from '@axe-core/playwright';
 import { readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -89,6 +90,8 @@ for (const size of [{ width: 390, height: 844 }, { width: 360, height: 740 }]) {
     // Big enough to read with gloves on: the note text is not shrunk below the body size.
     const px = await notes.locator('.note-list li').first().evaluate((el) => parseFloat(getComputedStyle(el).fontSize));
     expect(px).toBeGreaterThanOrEqual(14);
+    const axe = await new AxeBuilder({ page }).include('[data-testid="analysis-notes"]').withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
+    expect(axe.violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join('; ')}`)).toEqual([]);
   });
 }
 
