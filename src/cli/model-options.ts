@@ -13,6 +13,9 @@ import { exportedCsvLayout, exportedCsvResponseData } from '../io/csv/exported-c
 import { backupResponseData } from '../io/backup/select-study.ts';
 import { parseAssignments, type OptionSpec } from './args.ts';
 import { readTextFile } from './read-text-file.ts';
+import { withLowerBound } from './lower-bound-option.ts';
+import { supportsQuadratic } from '../core/design/supports-quadratic.ts';
+import { quadraticNotSupported } from '../core/text/second-order-text.ts';
 
 export const modelOptionSpec = {
   factors: { type: 'string' },
@@ -22,6 +25,7 @@ export const modelOptionSpec = {
   order: { type: 'string' },
   block: { type: 'string' },
   transform: { type: 'string' },
+  'lower-bound': { type: 'string' },
   study: { type: 'string' },
   json: { type: 'boolean' },
 } as const satisfies OptionSpec;
@@ -40,6 +44,10 @@ export const modelOptionUsage = `  FILE                 a CSV with a header row 
   --transform none|log|sqrt|inverse|power=L
                        fit (y'^L - 1)/L, y' = the response minus its lower bound (log at L = 0;
                        default none); predictions come back in the response's units (the median)
+  --lower-bound NAME=L the lowest value the response can take (NAME=0: it cannot be negative);
+                       transforms apply to the response minus L, the report says what the bound
+                       means and the Box-Cox power of the response minus L, and predictions warn
+                       when they or their intervals cross it (a backup's study carries its own)
   --study ID-OR-NAME   with a Trialbook backup (.json): the study to analyze; its own factors,
                        coding and blocks are used. A Trialbook CSV export needs no --factors:
                        its actual settings and coding are read from its columns; excluded runs
@@ -89,12 +97,21 @@ export function loadModelInput(positionals: string[], values: Values): ModelInpu
       codingFromFileOrder = !values.levels;
     }
   }
+  data = withLowerBound(data, values['lower-bound']);
   return { data, terms: modelTerms(data, values), codingFromFileOrder, transform: parseTransform(values.transform) };
 }
 
 export function modelTerms(data: ResponseData, values: Values): Term[] {
   if (values.terms && values.order) throw new InputError('Give either --terms or --order, not both');
-  if (values.terms) return parseTerms(values.terms, data.factors);
+  if (values.terms) {
+    const terms = parseTerms(values.terms, data.factors);
+    // The keyword asks for the full second-order model: refused, saying why, for runs that
+    // cannot estimate it (judged on the plan where the file has one, as the screen does).
+    const keyword = /(^|[^\p{L}\p{N}_])quadratic([^\p{L}\p{N}_]|$)/iu.test(values.terms) && !data.factors.some((f) => f.name.toLowerCase() === 'quadratic');
+    const points = data.coded.map((row, i) => data.planned?.[i] ?? row);
+    if (keyword && !supportsQuadratic(data.factors, points)) throw new InputError(quadraticNotSupported('command'));
+    return terms;
+  }
   if (values.order) {
     const order = Number(values.order);
     if (!Number.isInteger(order) || order < 1) throw new InputError(`--order needs a whole number of 1 or more, got "${values.order}"`);

@@ -188,6 +188,12 @@ export async function importRunsCsv(store: Store, mapped: CsvRunsImport): Promis
 
 /** The CSV export of a study's records (the same text the command line's csv command writes). */
 export async function exportStudyCsv(store: Store, studyId: string, options: StudyCsvOptions = {}): Promise<string> {
+  const [study, runs] = await studyAndRuns(store, studyId);
+  return studyCsv(study, runs, options);
+}
+
+/** A study with its added blocks and its logged runs, read in one transaction; throws InputError for a missing study. */
+export async function studyAndRuns(store: Store, studyId: string) {
   const { db } = store;
   const [study, runs] = await guarded(() =>
     db.transaction('r', [db.studies, db.runs, db.blocks], async () => {
@@ -196,5 +202,5 @@ export async function exportStudyCsv(store: Store, studyId: string, options: Stu
     }),
   );
   if (!study) throw new InputError(`There is no study with id "${studyId}" on this device`);
-  return studyCsv(study, runs, options);
+  return [study, runs] as const;
 }

@@ -56,3 +56,8 @@ export async function demoFileWithConfirmation(logged = CONFIRMATION_GLOSS.lengt
   writeFileSync(file, text);
   return { file, text };
 }
+
+/** The demo backup's text as stored (a fresh read each call). */
+export function demoBackupText(): string {
+  return readFileSync(fixturePath('trialbook-demo-backup.json'), 'utf8');
+}

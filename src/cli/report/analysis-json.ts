@@ -37,6 +37,7 @@ export function analysisJson(a: Analysis): Record<string, unknown> {
     runs: a.runs.map((r) => ({ run: r.label, y: r.y, fitted: r.fitted, residual: r.residual, leverage: r.leverage, studentized: r.studentized, deleted: r.deleted, kind: r.kind })),
     halfNormal: a.halfNormal,
     transform: a.transform.token,
+    lowerBound: a.transform.lowerBound,
     boxCox: a.boxCox ? { lambda: a.boxCox.lambda, ci: a.boxCox.ci, suggestion: a.boxCox.suggestion } : null,
     warnings: a.warnings,
     // The same conclusions as typed data (kind and figures), for programs that read the JSON.

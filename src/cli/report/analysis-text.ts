@@ -7,6 +7,7 @@ import { curvatureStatement, lenthStatement, verdictText } from '../../core/text
 import { zeroIfRoundoff } from '../../core/text/roundoff-zero.ts';
 import { lenthTableDifferences, lenthTableText, responseScale } from '../../core/text/lenth-table-effects.ts';
 import { num, table } from './numbers.ts';
+import { boundNoteCommand } from '../../core/text/bound-text.ts';
 
 function anovaText(t: AnovaTable): string {
   return table(
@@ -74,6 +75,7 @@ export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): st
     const minus = a.transform.lowerBound !== null ? ` minus its lower bound ${a.transform.lowerBound}` : '';
     out.push(`Fitted on the ${a.transform.token} scale of ${a.response}${minus}: (y'^L - 1)/L with L = ${a.transform.lambda} (log at 0); effects and tables are on that scale`);
   }
+  if (a.transform.lowerBound !== null) out.push(boundNoteCommand(a.response, a.transform.lowerBound));
   if (a.boxCox) {
     const [lo, hi] = a.boxCox.ci;
     out.push(`Box-Cox power for ${a.response}${a.transform.lowerBound !== null ? ' minus its bound' : ''}: ${num(a.boxCox.lambda)} (95% interval ${lo === null ? 'below -3' : num(lo)} to ${hi === null ? 'above 3' : num(hi)}); suggested transform: ${a.boxCox.suggestion}`);
@@ -111,6 +113,12 @@ export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): st
     out.push(`Curvature from ${c.nCenter} center runs: factorial minus center, adjusted for the model terms = ${num(c.estimate)}, std error ${num(c.se)}, t ${num(c.t)}, p ${pValue(c.p)}`);
     const v = a.verdicts.find((x) => x.kind === 'curvature');
     if (v && v.kind === 'curvature') out.push(`  ${curvatureStatement(v)}`);
+  }
+  // A second-order model's curvature is in its squares: their own tests, said in one note.
+  const squares = a.verdicts.find((x) => x.kind === 'squares');
+  if (squares) {
+    out.push('');
+    out.push(verdictText(squares));
   }
   // A significant lack of fit is among the notes below; the plain statement is given here.
   const lof = a.verdicts.find((x) => x.kind === 'lack-of-fit' && x.outcome === 'not-significant');

@@ -40,8 +40,14 @@ export type Verdict =
   | { readonly kind: 'lack-of-fit'; readonly outcome: 'significant' | 'not-significant'; readonly p: number; readonly alpha: number }
   /** Lenth's method over fewer contrasts than advised. */
   | { readonly kind: 'lenth-weak'; readonly m: number; readonly advised: number }
-  /** No residual degrees of freedom: no standard errors, t or p. */
-  | { readonly kind: 'no-residual-df' }
+  /** No residual degrees of freedom: no standard errors, t or p (`secondOrder`: the model has squares, so Lenth's method is no way out). */
+  | { readonly kind: 'no-residual-df'; readonly secondOrder?: boolean }
+  /**
+   * A model with squares (a central composite or Box-Behnken study): the squares' own t tests,
+   * each made after all the other terms, take the place of the center-run curvature test and of
+   * the two-level notes on orthogonality and Lenth's method (Montgomery 8th ed., section 11.3).
+   */
+  | { readonly kind: 'squares'; readonly alpha: number; readonly terms: readonly { readonly name: string; readonly letters: string; readonly p: number | null }[] }
   /** A Plackett-Burman plan: main effects partly mixed with two-factor interactions (correlations up to `largestCorrelation`). */
   | { readonly kind: 'partial-aliasing'; readonly runs: number; readonly largestCorrelation: number }
   /** Model terms the runs cannot separate, and what each kept estimate carries. */
@@ -50,6 +56,8 @@ export type Verdict =
       readonly count: number;
       readonly carried: readonly { readonly letters: string; readonly estimates: string }[];
       readonly withInterceptOrBlocks: boolean;
+      /** Each term left out, with the combination of kept columns it equals ("CD" with "AB"), in the list the screen shows. */
+      readonly terms?: readonly { readonly letters: string; readonly equals: string }[];
     };
 
 export type VerdictKind = Verdict['kind'];
@@ -65,6 +73,8 @@ export function isWarning(v: Verdict): boolean {
       return v.outcome === 'curved' ? (v.squares ?? []).length === 0 : v.outcome !== 'flat';
     case 'lack-of-fit':
       return v.outcome === 'significant';
+    case 'squares':
+      return false;
     default:
       return true;
   }

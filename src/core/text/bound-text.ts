@@ -13,6 +13,16 @@ export function boundNote(response: string, bound: number): string {
   return `${head}: the Log, Square root and Inverse scales keep every prediction above ${shortNumber(bound)}; as measured, a prediction may go below it.`;
 }
 
+/**
+ * The same note in the command line's words: its scales are --transform tokens.
+ * Example: boundNoteCommand('Roughness', 0) -> 'Roughness cannot be negative: --transform log, sqrt
+ * and inverse keep every prediction above 0; without a transform, a prediction may go below it.'
+ */
+export function boundNoteCommand(response: string, bound: number): string {
+  const head = bound === 0 ? `${response} cannot be negative` : `${response} cannot go below ${shortNumber(bound)}`;
+  return `${head}: --transform log, sqrt and inverse keep every prediction above ${shortNumber(bound)}; without a transform, a prediction may go below it.`;
+}
+
 /** The Box-Cox line: its suggestion as a scale name, said of the response minus its bound when that is not 0 (minus 0 says nothing). */
 export function boxCoxText(suggestion: string, response: string, bound: number | null): string {
   const names: Record<string, string> = { none: 'as measured', log: 'Log', sqrt: 'Square root', inverse: 'Inverse' };

@@ -47,7 +47,7 @@ export function confirmationSetPlace(j: JudgedSet, factors: readonly Factor[]): 
  * Example: "Confirmed: the mean of the 3 confirmation runs, 41.53, lies inside ...".
  */
 export function confirmationVerdict(j: JudgedSet): string {
-  return j.comparison ? confirmationStatement(j.comparison) : j.problem !== null ? `Cannot judge: ${j.problem}` : 'None logged yet with a value for this response; log them to see the verdict.';
+  return j.comparison ? confirmationStatement(j.comparison) : j.problem !== null ? `Cannot judge: ${j.problem}` : NOT_LOGGED_YET;
 }
 
 /**
@@ -85,4 +85,18 @@ export function confirmationScale(t: FitTransform | undefined, response: string)
 /** The token of a set's verdict for files: confirmed, not-confirmed, no-noise, not-logged or cannot-judge. Example: "confirmed". */
 export function confirmationToken(j: JudgedSet): string {
   return j.comparison ? j.comparison.outcome : j.problem !== null ? 'cannot-judge' : 'not-logged';
+}
+
+/** A set of confirmation runs with no value yet for the response. */
+export const NOT_LOGGED_YET = 'None logged yet with a value for this response; log them to see the verdict.';
+
+/**
+ * Why there is no confirmation verdict to export, with what to do where it was asked.
+ * Example: noConfirmationRuns('Cure trial', 'app') -> 'The study "Cure trial" has no confirmation
+ * runs planned, so there is no verdict to save; plan them on the Next tab first.'
+ */
+export function noConfirmationRuns(title: string, where: 'app' | 'command'): string {
+  return where === 'app'
+    ? `The study "${title}" has no confirmation runs planned, so there is no verdict to save; plan them on the Next tab first.`
+    : `The study "${title}" has no confirmation runs planned, so there is no verdict to write; plan them in the app (Next tab) first.`;
 }

@@ -106,12 +106,19 @@ export function secondOrderNotAvailable(): string {
 }
 
 /**
- * Why the quadratic model is not offered for a study's runs.
+ * Why the quadratic model is not offered for a study's runs (core/design/supports-quadratic.ts),
+ * with what to do where it is asked for: on the Effects screen, the Next tab's axial runs; on the
+ * command line, the terms the runs can estimate or `augment --axial`.
  * Example: quadraticNotSupported() -> 'The quadratic model needs runs at three or more settings
  * of each factor (a central composite or Box-Behnken design) and numeric factors only.'
  */
-export function quadraticNotSupported(): string {
-  return 'The quadratic model needs runs at three or more settings of each factor (a central composite or Box-Behnken design) and numeric factors only.';
+export function quadraticNotSupported(where?: 'screen' | 'command'): string {
+  const need = 'The quadratic model needs runs at three or more settings of each factor (a central composite or Box-Behnken design) and numeric factors only.';
+  if (where === 'screen') return `${need} These runs cannot estimate it: to fit curvature, add axial runs on the Next tab.`;
+  if (where === 'command') {
+    return `${need} These runs cannot estimate it: list the terms they can estimate in --terms (for example "A*B + A^2"), or add axial runs to the study with augment --axial.`;
+  }
+  return need;
 }
 
 /**

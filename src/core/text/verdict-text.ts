@@ -28,7 +28,7 @@ function curvatureModeled(p: number | null, squares: readonly string[]): string 
  * "No clear curvature (p = 0.8137): the 5 center runs agree with the factorial average (difference -0.035)."
  */
 export function curvatureStatement(v: CurvatureVerdict): string {
-  if (v.outcome === 'curved') return curvedFinding(v.p);
+  if (v.outcome === 'curved') return (v.squares ?? []).length > 0 ? curvatureModeled(v.p, v.squares!) : curvedFinding(v.p);
   if (v.outcome === 'flat') {
     return `No clear curvature (${pPhrase(v.p)}): the ${v.nCenter} center run${v.nCenter === 1 ? '' : 's'} agree${v.nCenter === 1 ? 's' : ''} with the factorial average (difference ${shortNumber(v.estimate)}).`;
   }
@@ -85,7 +85,11 @@ export function verdictText(v: Verdict): string {
     case 'lenth-weak':
       return `Lenth's method has only ${v.m} effects to work from (${v.advised} or more are advised), so it is weak here.`;
     case 'no-residual-df':
-      return "No runs are left over to estimate the noise, so standard errors, t and p are not available; use Lenth's method or fewer terms.";
+      return v.secondOrder
+        ? 'No runs are left over to estimate the noise, so standard errors, t and p are not available; fit fewer terms or add runs.'
+        : "No runs are left over to estimate the noise, so standard errors, t and p are not available; use Lenth's method or fewer terms.";
+    case 'squares':
+      return `${squaresFinding(v)} In a second-order design the squares' columns overlap with the intercept and with each other, so sequential sums of squares depend on the order of terms; the adjusted table, like each term's t test, takes each term after all the others.`;
     case 'partial-aliasing':
       return `This is a ${v.runs}-run Plackett-Burman screening design, so the main effects are estimated clear of each other but partly mixed with two-factor interactions (correlations up to ${correlationText(v.largestCorrelation)}). ${PARTIAL_ALIASING_NOTE}`;
     case 'aliased': {
@@ -94,6 +98,17 @@ export function verdictText(v: Verdict): string {
       return `${v.count} model term${v.count > 1 ? 's' : ''} cannot be separated from others with these runs: ${parts.join('; ')}`;
     }
   }
+}
+
+/**
+ * The squares' own tests, as the second-order model's curvature finding (Montgomery 8th ed.,
+ * section 11.3: each coefficient's t test in the fitted second-order model).
+ * Example: for Time^2 p 0.0001 and Temperature^2 p 0.0008 -> "The model's squares test the bend
+ * along each factor: Time^2 (A^2) p < 0.001, Temperature^2 (B^2) p = 0.0008; p below 0.05 shows a bend."
+ */
+export function squaresFinding(v: Extract<Verdict, { kind: 'squares' }>): string {
+  const each = v.terms.map((t) => `${t.name} (${t.letters}) ${t.p === null ? 'without a test' : pPhrase(t.p)}`);
+  return `The model's squares test the bend along each factor: ${listWords(each)}; p below ${v.alpha} shows a bend.`;
 }
 
 /** "2", "2 and 5", "2, 5 and 7". */

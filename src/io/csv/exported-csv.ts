@@ -3,7 +3,9 @@
  * needed: the factors are the "<name> coded" columns; each factor's coding (low and high, linear
  * or log scale, or its two level names) is recovered exactly from its actual settings and their
  * coded values; the actual settings are used, excluded runs skipped, runs without a value for the
- * response skipped, and the messages say how many. Factor and response columns are matched by name
+ * response skipped, and the messages say how many. The "<name> planned" columns, when every
+ * factor has one, are the nominal plan (ResponseData.planned): the plan, not the noise in the
+ * actual settings, decides what can be estimated, as for the same runs read from a backup. Factor and response columns are matched by name
  * with a unit in parentheses ignored.
  * Example: exportedCsvResponseData(studyCsv(study, runs), 'Gloss').y -> the Gloss means of the runs used.
  */
@@ -165,6 +167,23 @@ export function exportedCsvResponseData(csvText: string, responseName: string, f
     if (big) throw new InputError(`${where(table, r, response.value)}: ${response.name} ${big}`);
     return v;
   });
+  // The planned settings ("<name> planned") are the nominal plan that decides what the runs can
+  // estimate (core/fit/nominal-settings.ts); an older export without them is read as before.
+  const withPlan = chosen.every((f) => f.planned >= 0);
+  const planned = withPlan
+    ? used.map((r) =>
+        factors.map((f, j) => {
+          const c = chosen[j].planned;
+          const v = cell(table, r, c);
+          if (v === '') throw new InputError(`${where(table, r, c)}: ${f.name} has no planned setting; give the run's planned setting, or remove the "${table.header[c]}" column to read the runs without a plan`);
+          try {
+            return toCoded(f, v);
+          } catch (err) {
+            throw err instanceof InputError ? new InputError(`${where(table, r, c)}: ${err.message}`) : err;
+          }
+        }),
+      )
+    : null;
   const blocks = layout.block >= 0 ? used.map((r) => parseNumber(cell(table, r, layout.block))) : null;
   if (blocks) blocks.forEach((b, i) => {
     if (!Number.isInteger(b) || b < 1) throw new InputError(`${where(table, used[i], layout.block)}: the block needs a whole number from 1, got "${table.rows[used[i]][layout.block]}"`);
@@ -182,7 +201,8 @@ export function exportedCsvResponseData(csvText: string, responseName: string, f
     y,
     blocks: blocks && blocks.some((b) => b !== 1) ? blocks : null,
     // Runs planned at the same settings are repeats of one point (pure error), whatever their actuals.
-    points: chosen.every((f) => f.planned >= 0) ? used.map((r) => chosen.map((f) => cell(table, r, f.planned)).join('|')) : null,
+    points: withPlan ? used.map((r) => chosen.map((f) => cell(table, r, f.planned)).join('|')) : null,
+    ...(planned ? { planned } : {}),
     labels: used.map((r) => cell(table, r, layout.run)),
     messages,
   };

@@ -42,7 +42,8 @@ function savedSentence(outcome: SaveOutcome, name: string): string {
   return `${name} is downloading. Keep it somewhere other than this phone.`;
 }
 
-export type FileKind = 'json' | 'csv';
+/** The backup, the runs CSV, or the confirmation verdicts' CSV saved beside it. */
+export type FileKind = 'json' | 'csv' | 'confirmations';
 
 export const ExportModel = createModel((store: Store, studyId: string | null) => {
   const studies = signal<StudyRecord[]>([]);
@@ -65,6 +66,12 @@ export const ExportModel = createModel((store: Store, studyId: string | null) =>
     const study = id ? studies.peek().find((s) => s.id === id) : undefined;
     if (id && !study) throw new Error(`there is no study with id "${id}" on this device`);
     const title = study ? study.title : 'all studies';
+    if (kind === 'confirmations') {
+      if (!id) throw new Error('the confirmation verdicts belong to one study; choose a study');
+      // Loaded when asked: it runs the analysis (the first screen's code stays small).
+      const { exportConfirmationsCsv } = await import('../../store/confirmations-file.ts');
+      return { text: await exportConfirmationsCsv(store, id, { bom: true }), name: fileName(`${title} confirmations`, 'csv'), title: `${title}, confirmation verdicts`, noteSaved: async () => undefined };
+    }
     if (kind === 'csv') {
       if (!id) throw new Error('a CSV holds one study; choose a study');
       return { text: await exportStudyCsv(store, id, { bom: true }), name: fileName(title, 'csv'), title, noteSaved: async () => undefined };
@@ -112,7 +119,7 @@ export const ExportModel = createModel((store: Store, studyId: string | null) =>
     save(id: string | null, kind: FileKind) {
       return run(async () => {
         const f = await fileOf(id, kind);
-        const outcome = await saveText(f.text, f.name, mimeOf(kind), `Trialbook: ${f.title}`);
+        const outcome = await saveText(f.text, f.name, mimeOf(kind === 'json' ? 'json' : 'csv'), `Trialbook: ${f.title}`);
         if (outcome !== 'cancelled') await f.noteSaved();
         return savedSentence(outcome, f.name);
       });

@@ -21,6 +21,7 @@ import type { ResponseData } from '../../core/study/response-data.ts';
 import type { Response } from '../../core/study/response.ts';
 import { responseDataFromRuns } from '../../core/study/run-data.ts';
 import { divergedNote } from '../../core/text/diverged-text.ts';
+import { screenNotes, type ScreenNote } from '../../core/text/screen-notes-text.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
 import { loadStudyData, type StudyData } from './study-data.ts';
@@ -66,7 +67,13 @@ export function defaultSettings(study: { readonly design: { readonly screening?:
 }
 
 export type AnalysisResult =
-  | { readonly ok: true; readonly analysis: Analysis; readonly data: ResponseData }
+  | {
+      readonly ok: true;
+      readonly analysis: Analysis;
+      readonly data: ResponseData;
+      /** The notes in the screen's own words (core/text/screen-notes-text.ts), not the command line's `warnings`. */
+      readonly notes: readonly ScreenNote[];
+    }
   | { readonly ok: false; readonly message: string };
 
 /** The analysis of one response with the chosen settings, or the reason there is none. */
@@ -79,7 +86,8 @@ export function analyzeResponse(d: StudyData, responseIndex: number, settings: R
     const data = d.diverged.length === 0 ? read : { ...read, messages: [...read.messages, ...d.diverged.map((x) => divergedNote(d.study, x))] };
     const k = d.study.factors.length;
     const terms = settings.model === 'quadratic' ? quadraticTerms(d.study.factors) : termsUpToOrder(k, settings.model === 'main' ? 1 : Math.min(2, k));
-    return { ok: true, analysis: analyze(data, { terms, transform: parseTransform(settings.transform) }), data };
+    const analysis = analyze(data, { terms, transform: parseTransform(settings.transform) });
+    return { ok: true, analysis, data, notes: screenNotes(data.messages, analysis.verdicts, { quadraticOffered: modelChoicesFor(d.study).includes(QUADRATIC_CHOICE) }) };
   } catch (err) {
     return { ok: false, message: problemOf(err).message };
   }

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { defineFactors } from '../../../src/core/factor/factor.ts';
 import { surfaceNature } from '../../../src/core/optimum/canonical-analysis.ts';
 import {
+  quadraticNotSupported,
   axialRunOutsideText,
   bestSettingHeading,
   natureName,
@@ -44,5 +45,17 @@ describe('second-order sentences', () => {
 
   it('degenerate: an empty list of names still reads as a sentence', () => {
     expect(secondOrderNeedsNumeric([])).toMatch(/^Second-order designs/);
+  });
+});
+
+describe('quadraticNotSupported: the reason, and what to do where the model is asked for', () => {
+  it('the reason alone, then the screen and the command line each add their own way on', () => {
+    const need = quadraticNotSupported();
+    expect(need).toMatch(/three or more settings of each factor/);
+    expect(quadraticNotSupported('screen').startsWith(need)).toBe(true);
+    expect(quadraticNotSupported('screen')).toMatch(/add axial runs on the Next tab/);
+    expect(quadraticNotSupported('command').startsWith(need)).toBe(true);
+    expect(quadraticNotSupported('command')).toMatch(/--terms .*augment --axial/);
+    expect(quadraticNotSupported('screen')).not.toMatch(/--/);
   });
 });

@@ -31,7 +31,17 @@ const samples: Record<VerdictKind, { verdict: Verdict; fragments: string[] }[]> 
     { verdict: { kind: 'lack-of-fit', outcome: 'not-significant', p: 0.8137, alpha: 0.05 }, fragments: ['No clear lack of fit'] },
   ],
   'lenth-weak': [{ verdict: { kind: 'lenth-weak', m: 3, advised: 7 }, fragments: ['has only 3 effects to work from (7 or more are advised)'] }],
-  'no-residual-df': [{ verdict: { kind: 'no-residual-df' }, fragments: ['so standard errors, t and p are not available'] }],
+  'no-residual-df': [
+    { verdict: { kind: 'no-residual-df' }, fragments: ['so standard errors, t and p are not available', "use Lenth's method"] },
+    { verdict: { kind: 'no-residual-df', secondOrder: true }, fragments: ['so standard errors, t and p are not available', 'fit fewer terms or add runs'] },
+  ],
+  squares: [
+    {
+      // p-values invented for the wording only
+      verdict: { kind: 'squares', alpha: 0.05, terms: [{ name: 'Time^2', letters: 'A^2', p: 0.0008 }, { name: 'Temperature^2', letters: 'B^2', p: 0.2 }] },
+      fragments: ["The model's squares test the bend along each factor: Time^2 (A^2) p = 0.0008 and Temperature^2 (B^2) p = 0.2000", "the squares' columns overlap with the intercept"],
+    },
+  ],
   'partial-aliasing': [
     // 1/3 is the largest correlation of a 12-run design (Lin and Draper 1992, from memory).
     { verdict: { kind: 'partial-aliasing', runs: 12, largestCorrelation: 1 / 3 }, fragments: ['This is a 12-run Plackett-Burman screening design', 'partly mixed with two-factor interactions (correlations up to 1/3)'] },
@@ -53,6 +63,10 @@ describe('verdictText: one sentence per verdict', () => {
       });
     }
   }
+
+  it('a second-order no-residual-df note never names Lenth\'s method', () => {
+    expect(verdictText({ kind: 'no-residual-df', secondOrder: true })).not.toMatch(/Lenth/);
+  });
 
   it('an aliasing verdict with nothing carried still reads as a sentence (degenerate input)', () => {
     const text = verdictText({ kind: 'aliased', count: 2, carried: [], withInterceptOrBlocks: true });

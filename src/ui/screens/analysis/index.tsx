@@ -262,12 +262,21 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
             <h3>Residuals</h3>
             <ResidualSection a={result.analysis} response={response} />
           </div>
-          {result.analysis.warnings.length > 0 && (
+          {result.notes.length > 0 && (
             <div class="part part-notes">
               <h3>Notes on these runs</h3>
-              <ul class="warnings">
-                {result.analysis.warnings.map((w) => (
-                  <li key={w}>{w}</li>
+              <ul class="warnings" data-testid="analysis-notes">
+                {result.notes.map((n) => (
+                  <li key={n.text}>
+                    {n.text}
+                    {n.list && (
+                      <ul class="note-list">
+                        {n.list.map((item) => (
+                          <li key={item}>{item}</li>
+                        ))}
+                      </ul>
+                    )}
+                  </li>
                 ))}
               </ul>
             </div>

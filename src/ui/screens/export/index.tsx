@@ -64,6 +64,11 @@ export function ExportScreen({ store, studyId }: ExportScreenProps) {
               <button type="button" class="btn block" disabled={busy} onClick={() => void model.save(s.id, 'csv')}>
                 {share ? 'Save or share CSV' : 'Download CSV'}
               </button>
+              {s.design.runs.some((r) => r.kind === 'confirmation') && (
+                <button type="button" class="btn block" disabled={busy} onClick={() => void model.save(s.id, 'confirmations')}>
+                  {share ? 'Save or share confirmation verdicts (CSV)' : 'Download confirmation verdicts (CSV)'}
+                </button>
+              )}
             </li>
           );
         })}
