@@ -118,6 +118,13 @@ test('from curvature to axial runs, the quadratic model, the contour chart and s
   await look(page, 'quick-390');
   problems.push(...(await axe(page, 'quick card')));
 
+  // The Next tab does not offer a first-order path for a model with squares: it points to the quick card.
+  await page.goto(`${base}/next`);
+  await expect(page.getByTestId('path-needs-first-order')).toContainText('has squares');
+  await expect(page.getByRole('button', { name: 'Larger (ascent)' })).toHaveCount(0);
+  await page.getByTestId('path-needs-first-order').getByRole('link', { name: 'Open the quick card' }).click();
+  await expect(page.getByRole('heading', { name: 'Contour chart' })).toBeVisible();
+
   // Several responses: the best compromise has D above 0 and keeps every setting inside the box.
   await page.getByRole('link', { name: 'All 2 responses at once ›' }).click();
   const D = parseFloat(await page.getByTestId('mr-D').innerText());

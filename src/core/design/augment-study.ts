@@ -90,7 +90,7 @@ export function augmentStudy(study: StudyPlan, logged: readonly LoggedRun[], opt
   const loggedPlanned = new Set(used.map((l) => l.plannedRun));
   const missing = runs.filter((r) => !loggedPlanned.has(r.run)).map((r) => r.run);
   notes.push(
-    `Block ${block} added: ${ns} axial runs at +-${Number(alpha.toPrecision(4))} (coded) and ${ns0} center run${ns0 === 1 ? '' : 's'}, runs ${first} to ${first + added.length - 1}; the ${runs.length} earlier runs are reused` +
+    `New block ${block}: ${ns} axial runs at ±${Number(alpha.toPrecision(4))} (coded) and ${ns0} center run${ns0 === 1 ? '' : 's'}, runs ${first} to ${first + added.length - 1}; the ${runs.length} earlier runs are reused` +
       (missing.length > 0 ? ` (${missing.length} of them not logged yet: ${missing.slice(0, 12).join(', ')}${missing.length > 12 ? ', ...' : ''}).` : '.'),
   );
   if (properties.fullQuadratic) {

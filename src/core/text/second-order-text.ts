@@ -132,3 +132,13 @@ export function squareMeaning(factor: string, response: string, coef: number, un
   const size = `${shortNumber(Math.abs(coef))}${unit ? ` ${unit}` : ''}`;
   return `Curvature of ${factor}: at its low and high settings ${response} sits ${size} ${coef >= 0 ? 'above' : 'below'} a straight line through the center.`;
 }
+
+/**
+ * Why the Next screen offers no path of steepest ascent for a model with squares: the path is the
+ * first-order direction from the center (Montgomery 8th ed., section 11.2), while a second-order
+ * model has its own best setting, found on the fitted surface (section 11.3). Common practice.
+ * Example: pathNeedsFirstOrder('Yield') -> 'The model on Effects has squares, so the best setting for Yield ...'.
+ */
+export function pathNeedsFirstOrder(response: string): string {
+  return `The model on Effects has squares, so the best setting for ${response} is found on the fitted surface: see the quick card's best setting and contour chart. A path of steepest ascent follows a model without squares; choose one on Effects to plan a path.`;
+}

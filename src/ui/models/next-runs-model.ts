@@ -15,6 +15,7 @@ import { parseSettings } from '../../core/predict/parse-settings.ts';
 import { predict } from '../../core/predict/predict.ts';
 import { solveForTarget, type Solution } from '../../core/predict/solve-for-target.ts';
 import { pathSenseForGoal, steepestPath, type PathSense, type SteepestPath } from '../../core/predict/steepest-path.ts';
+import { isSquare } from '../../core/model/term.ts';
 import type { AddedBlock } from '../../core/study/added-block.ts';
 import { meanReading } from '../../core/study/study.ts';
 import { confirmationProgress, confirmationScale, confirmationSetPlace, confirmationToken, confirmationVerdict } from '../../core/text/confirmation-text.ts';
@@ -235,6 +236,8 @@ export const NextRunsModel = createModel((store: Store, shared: StudyAnalysis) =
     pathStepsText: computed(() => pathStepsText.value),
     pathSense,
     path,
+    /** The shown model has squares: its best setting is on the quick card, and the first-order path is not offered. */
+    pathNeedsFirstOrder: computed(() => model.value?.terms.some(isSquare) ?? false),
     /** True when the path on screen was already turned into planned runs. */
     pathAdded: computed(() => {
       const p = path.value;

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { defineFactors } from '../../../src/core/factor/factor.ts';
 import { surfaceNature } from '../../../src/core/optimum/canonical-analysis.ts';
 import {
+  pathNeedsFirstOrder,
   quadraticNotSupported,
   axialRunOutsideText,
   bestSettingHeading,
@@ -57,5 +58,15 @@ describe('quadraticNotSupported: the reason, and what to do where the model is a
     expect(quadraticNotSupported('command').startsWith(need)).toBe(true);
     expect(quadraticNotSupported('command')).toMatch(/--terms .*augment --axial/);
     expect(quadraticNotSupported('screen')).not.toMatch(/--/);
+  });
+});
+
+describe('pathNeedsFirstOrder: the Next screen with a model that has squares', () => {
+  it('names the response, points to the quick card and says how to get a path (Montgomery 8th ed., sections 11.2 and 11.3, from memory)', () => {
+    const s = pathNeedsFirstOrder('Yield');
+    expect(s).toContain('best setting for Yield');
+    expect(s).toContain('quick card');
+    expect(s).toMatch(/model without squares/);
+    expect(s.endsWith('.')).toBe(true);
   });
 });

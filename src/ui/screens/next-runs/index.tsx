@@ -7,6 +7,8 @@
 import { useModel } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
 import { intervalText } from '../../../core/text/interval-text.ts';
+import { pathNeedsFirstOrder } from '../../../core/text/second-order-text.ts';
+import { hrefTo } from '../../app/routes.ts';
 import type { Store } from '../../../store/store.ts';
 import { AddAxialRuns } from '../../components/add-axial-runs/index.tsx';
 import { CautionBox } from '../../components/caution-box/index.tsx';
@@ -96,67 +98,75 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
       <section class="next-part" aria-labelledby="path-h">
         <h3 id="path-h">Path of steepest {model.pathSense.value}</h3>
         <p class="quiet">Steps from the center in the direction the main effects point, to find where {response.name} stops improving.</p>
-        <ChoiceButtons
-          label="Direction"
-          options={[
-            { value: 'ascent', label: 'Larger (ascent)' },
-            { value: 'descent', label: 'Smaller (descent)' },
-          ]}
-          value={model.pathSense.value}
-          onChoose={(s) => model.setPathSense(s)}
-        />
-        {numeric.length > 0 && <ChoiceButtons label="Base factor" options={numeric} value={base ?? -1} onChoose={(i) => model.setPathBase(i)} />}
-        <div class="field">
-          <label class="field-name" for="path-step">
-            Step of {baseFactor?.name ?? 'the base factor'}
-            {baseFactor?.kind === 'numeric' && baseFactor.unit ? ` (${baseFactor.unit})` : ''}
-          </label>
-          <input id="path-step" class="num" type="text" inputMode="decimal" autocomplete="off" value={model.pathStepText.value} onInput={(e) => model.setPathStep((e.currentTarget as HTMLInputElement).value)} />
-        </div>
-        <CountStepper id="path-steps" label="Number of steps" value={model.pathStepsText.value} min={1} max={20} onChange={(t) => model.setPathSteps(t)} />
-        {path && !path.ok && model.pathStepText.value.trim() !== '' && (
-          <p class="problem input" role="alert">
-            {path.message}
+        {model.pathNeedsFirstOrder.value ? (
+          <p class="quiet" data-testid="path-needs-first-order">
+            {pathNeedsFirstOrder(response.name)} <a href={hrefTo('quickCard', { studyId: study.id })}>Open the quick card</a>
           </p>
-        )}
-        {path && path.ok && (
+        ) : (
           <>
-            <ol class="path-steps" data-testid="path-steps">
-              {path.value.steps.map((s) => (
-                <li key={s.step} class={s.outside ? 'path-step outside' : 'path-step'}>
-                  <div class="step-head">
-                    <span class="step-no">{s.step === 0 ? 'Center' : `Step ${s.step}`}</span>
-                    {s.outside && <span class="outside-mark">⚠ outside the tested range</span>}
-                  </div>
-                  <p class="step-settings">
-                    {study.factors.map((f, i) => (
-                      <span class="nowrap" key={f.name}>
-                        {i > 0 ? ' · ' : ''}
-                        {f.name} {setting(s.real[i], f.kind === 'numeric' ? f.unit : undefined)}
-                      </span>
-                    ))}
-                  </p>
-                  <p>
-                    Predicted {withUnit(s.fit, response.unit)}; 95% for one run {range(s.pi, response.unit)}
-                  </p>
-                  {s.step > 0 && (
-                    <button type="button" class="btn ghost" disabled={saving} onClick={() => model.addConfirmation(study.id, { from: 'path', step: s.step })}>
-                      Confirm at step {s.step}
-                    </button>
-                  )}
-                </li>
-              ))}
-            </ol>
-            {path.value.messages.length > 0 && (
-              <ul class="warnings">
-                {path.value.messages.map((m) => (
-                  <li key={m}>{m}</li>
-                ))}
-              </ul>
+            <ChoiceButtons
+              label="Direction"
+              options={[
+                { value: 'ascent', label: 'Larger (ascent)' },
+                { value: 'descent', label: 'Smaller (descent)' },
+              ]}
+              value={model.pathSense.value}
+              onChoose={(s) => model.setPathSense(s)}
+            />
+            {numeric.length > 0 && <ChoiceButtons label="Base factor" options={numeric} value={base ?? -1} onChoose={(i) => model.setPathBase(i)} />}
+            <div class="field">
+              <label class="field-name" for="path-step">
+                Step of {baseFactor?.name ?? 'the base factor'}
+                {baseFactor?.kind === 'numeric' && baseFactor.unit ? ` (${baseFactor.unit})` : ''}
+              </label>
+              <input id="path-step" class="num" type="text" inputMode="decimal" autocomplete="off" value={model.pathStepText.value} onInput={(e) => model.setPathStep((e.currentTarget as HTMLInputElement).value)} />
+            </div>
+            <CountStepper id="path-steps" label="Number of steps" value={model.pathStepsText.value} min={1} max={20} onChange={(t) => model.setPathSteps(t)} />
+            {path && !path.ok && model.pathStepText.value.trim() !== '' && (
+              <p class="problem input" role="alert">
+                {path.message}
+              </p>
             )}
-            <button type="button" class="btn primary block" disabled={saving || model.pathAdded.value} onClick={() => model.addPath(study.id)}>
-              {model.pathAdded.value ? 'These steps are on the run sheet' : `Add the ${path.value.steps.length - 1} steps as planned runs`}
-            </button>
+            {path && path.ok && (
+              <>
+                <ol class="path-steps" data-testid="path-steps">
+                  {path.value.steps.map((s) => (
+                    <li key={s.step} class={s.outside ? 'path-step outside' : 'path-step'}>
+                      <div class="step-head">
+                        <span class="step-no">{s.step === 0 ? 'Center' : `Step ${s.step}`}</span>
+                        {s.outside && <span class="outside-mark">⚠ outside the tested range</span>}
+                      </div>
+                      <p class="step-settings">
+                        {study.factors.map((f, i) => (
+                          <span class="nowrap" key={f.name}>
+                            {i > 0 ? ' · ' : ''}
+                            {f.name} {setting(s.real[i], f.kind === 'numeric' ? f.unit : undefined)}
+                          </span>
+                        ))}
+                      </p>
+                      <p>
+                        Predicted {withUnit(s.fit, response.unit)}; 95% for one run {range(s.pi, response.unit)}
+                      </p>
+                      {s.step > 0 && (
+                        <button type="button" class="btn ghost" disabled={saving} onClick={() => model.addConfirmation(study.id, { from: 'path', step: s.step })}>
+                          Confirm at step {s.step}
+                        </button>
+                      )}
+                    </li>
+                  ))}
+                </ol>
+                {path.value.messages.length > 0 && (
+                  <ul class="warnings">
+                    {path.value.messages.map((m) => (
+                      <li key={m}>{m}</li>
+                    ))}
+                  </ul>
+                )}
+                <button type="button" class="btn primary block" disabled={saving || model.pathAdded.value} onClick={() => model.addPath(study.id)}>
+                  {model.pathAdded.value ? 'These steps are on the run sheet' : `Add the ${path.value.steps.length - 1} steps as planned runs`}
+                </button>
+          </>
+        )}
           </>
         )}
         {model.pathPoints.value.map((pts, k) => (
