@@ -10,4 +10,5 @@ export const READY: Record<(typeof ROUTE_NAMES)[number], readonly [string, RegEx
   quickCard: ['h2', /^Quick card$/],
   nextRuns: ['h2', /^Next runs$/],
   export: ['h2', /^Export$/],
+  setAside: ['h2', /^Set-aside records$/],
 };

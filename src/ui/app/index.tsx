@@ -26,11 +26,18 @@ export function App(_props: AppProps) {
   const app = useModel(AppModel);
   const router = useModel(RouterModel);
   useEffect(() => {
-    void app.start();
-    // The address's screen loads beside the store; the others once the page is idle.
+    // The address's screen loads beside the store; the others once the store is open (and the demo
+    // study added on a first start) and the page is idle, so they do not share the network with
+    // what the first screen shows.
     let cancel = () => {};
-    void preloadScreen(router.route.value).then(() => (cancel = whenIdle(() => void preloadAllScreens())));
-    return () => cancel();
+    let live = true;
+    void Promise.all([app.start(), preloadScreen(router.route.value)]).then(() => {
+      if (live) cancel = whenIdle(() => void preloadAllScreens());
+    });
+    return () => {
+      live = false;
+      cancel();
+    };
   }, []);
   const secure = typeof window !== 'undefined' && window.isSecureContext;
   const store = app.store.value;

@@ -19,6 +19,7 @@ const SCREENS: { readonly [N in RouteName]: LazyScreen<RouteParams<N> & { readon
   quickCard: lazyScreen(() => import('../screens/quick-card/index.tsx').then((m) => m.QuickCardScreen)),
   nextRuns: lazyScreen(() => import('../screens/next-runs/index.tsx').then((m) => m.NextRunsScreen)),
   export: lazyScreen(() => import('../screens/export/index.tsx').then((m) => m.ExportScreen)),
+  setAside: lazyScreen(() => import('../screens/set-aside/index.tsx').then((m) => m.SetAsideScreen)),
 };
 
 export type RouteScreenProps = { readonly route: Route; readonly store: Store };
