@@ -33,6 +33,8 @@ for (const size of [
     await expect(page.getByRole('status')).toContainText('2 records of the file were set aside');
     const line = page.locator('.set-aside-link');
     await expect(line).toContainText('2 records from imported files were set aside, not merged.');
+    await line.scrollIntoViewIfNeeded();
+    await page.screenshot({ path: `/tmp/shell-set-aside-line-${size.width}.png` });
     await line.getByRole('link', { name: 'See the set-aside records' }).click();
 
     await expect(page.getByRole('heading', { level: 2 })).toHaveText('Set-aside records');

@@ -44,7 +44,7 @@ export function setAsideCountLine(n: number): string {
 
 /** The screen's opening paragraph. */
 export const SET_ASIDE_INTRO =
-  'When an imported file holds a record that clashes with one on this device (the same id with other content), or one that depends on such a record, the import keeps the device\'s record as it was and sets the file\'s record aside here. Nothing here is used in any study or analysis. Save them to a file to keep or to show to whoever manages the records.';
+  "These records came in imported files but clash with records on this device (the same id, other content), or depend on such a record. The device's records were kept as they were; these are used in no study or analysis. Save them to a file for whoever manages the records.";
 
 /** When nothing is set aside. */
 export const SET_ASIDE_NONE = 'No records are set aside on this device: every imported record was merged or was already here.';
