@@ -53,3 +53,8 @@ export async function removeSetAside(store: Store, key: string): Promise<boolean
     }),
   );
 }
+
+/** The record on this device with the set-aside record's id (its study or revision), or undefined. */
+export async function storedRecordOf(store: Store, s: Pick<SetAsideRow, 'kind' | 'id'>): Promise<unknown> {
+  return guarded<unknown>(async () => (s.kind === 'study' ? await store.db.studies.get(s.id) : await store.db.revisions.get(s.id)));
+}

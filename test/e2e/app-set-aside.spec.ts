@@ -45,6 +45,8 @@ for (const size of [
     await expect(clash.locator('h3')).toHaveText(`A revision of run ${altered.plannedRun} of "${title}"`);
     await expect(clash).toContainText('(readings[0][0] differs)');
     await expect(clash).toContainText('Written by device other-phone.');
+    // Both values where they differ: the file's (changed by 5) and the device's (the demo's own).
+    await expect(clash.locator('.set-aside-values')).toHaveText(`In the file: ${altered.readings[0][0] + 5}; on this device: ${altered.readings[0][0]}.`);
     await expect(clash.locator('.set-aside-reason')).toContainText(`Revision ${altered.id} of run ${altered.plannedRun} in the file differs`);
     await expect(cards.filter({ hasText: `run ${second.plannedRun} of` })).toContainText('(readings[0][0] differs)');
 

@@ -50,3 +50,16 @@ describe('removing a set-aside record', () => {
     expect((await listSetAside(b)).map((r) => r.key)).toEqual([second.key]);
   });
 });
+
+describe('the record on this device beside a set-aside one', () => {
+  it('is the stored study with the same id, whose title differs from the file\'s where the field says', async () => {
+    const b = await withSetAside();
+    const study = (await listSetAside(b)).find((r) => r.kind === 'study')!;
+    expect(study.field).toBe('title');
+    const { storedRecordOf } = await import('../../src/store/set-aside.ts');
+    const stored = (await storedRecordOf(b, study)) as { title: string };
+    expect(stored.title).not.toBe('Renamed');
+    expect((study.record as { title: string }).title).toBe('Renamed');
+    expect(await storedRecordOf(b, { kind: 'revision', id: 'no-such-id' })).toBeUndefined();
+  });
+});

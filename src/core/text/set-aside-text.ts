@@ -5,6 +5,8 @@
  * Example: setAsideWhat({ kind: 'revision', plannedRun: 3, ... }, 'Cure trial') ->
  * 'A revision of run 3 of "Cure trial"'.
  */
+import type { PathValue } from '../records/value-at-path.ts';
+import { shortNumber } from './number-text.ts';
 
 /** What the sentences need of one set-aside record (the store's row has these fields and more). */
 export interface SetAsideFacts {
@@ -68,4 +70,18 @@ export function setAsideSaved(outcome: 'shared' | 'cancelled' | 'downloaded', na
 /** After a removal. */
 export function setAsideRemoved(what: string): string {
   return `${what} was removed from the set-aside records. The device's own records were not changed.`;
+}
+
+/** One side's value for the values line: numbers short, text quoted, lists and records as JSON cut to 60 characters. */
+function valueText(v: PathValue): string {
+  if (!v.found) return 'nothing';
+  if (typeof v.value === 'number') return shortNumber(v.value);
+  if (typeof v.value === 'string') return JSON.stringify(v.value);
+  const json = JSON.stringify(v.value);
+  return json.length > 60 ? `${json.slice(0, 59)}…` : json;
+}
+
+/** Both sides where the records differ: "In the file: 75.4; on this device: 70.4." */
+export function setAsideValues(inFile: PathValue, onDevice: PathValue): string {
+  return `In the file: ${valueText(inFile)}; on this device: ${valueText(onDevice)}.`;
 }

@@ -5,10 +5,11 @@
  * studies or their runs.
  */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
-import { setAsideRemoved, setAsideSaved, setAsideWhat } from '../../core/text/set-aside-text.ts';
+import { valueAtPath } from '../../core/records/value-at-path.ts';
+import { setAsideRemoved, setAsideSaved, setAsideValues, setAsideWhat } from '../../core/text/set-aside-text.ts';
 import { writeSetAsideFile } from '../../io/backup/set-aside-file.ts';
 import type { SetAsideRow } from '../../store/db.ts';
-import { listSetAside, removeSetAside } from '../../store/set-aside.ts';
+import { listSetAside, removeSetAside, storedRecordOf } from '../../store/set-aside.ts';
 import { listStudies } from '../../store/study-list.ts';
 import type { Store } from '../../store/store.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
@@ -30,9 +31,19 @@ export const SetAsideModel = createModel((store: Store) => {
   /** The record whose removal waits for the person's answer. */
   const confirming = signal<string | null>(null);
 
+  /** For each record that clashes on a field: what the file and this device hold there. */
+  const values = signal<ReadonlyMap<string, string>>(new Map());
+
   async function refresh() {
     const [list, studies] = await Promise.all([listSetAside(store), listStudies(store)]);
+    const both = new Map<string, string>();
+    for (const r of list) {
+      if (r.field === null) continue;
+      const stored = await storedRecordOf(store, r);
+      if (stored !== undefined) both.set(r.key, setAsideValues(valueAtPath(r.record, r.field), valueAtPath(stored, r.field)));
+    }
     titles.value = new Map(studies.map((s) => [s.id, s.title]));
+    values.value = both;
     rows.value = list;
   }
 
@@ -60,6 +71,8 @@ export const SetAsideModel = createModel((store: Store) => {
     confirming: confirming as ReadonlySignal<string | null>,
     /** The study's title when this device holds it, else null. */
     titleOf: (studyId: string): string | null => titles.value.get(studyId) ?? null,
+    /** "In the file: …; on this device: …." for a record that clashes on a field, else null. */
+    valuesOf: (key: string): string | null => values.value.get(key) ?? null,
 
     async load() {
       try {

@@ -47,3 +47,13 @@ describe('set-aside records in plain words', () => {
     expect(setAsideSaved('shared', 'f.json', 2)).toMatch(/^f\.json \(2 set-aside records\) was handed to the share sheet/);
   });
 });
+
+describe('both values where the records differ', () => {
+  it('numbers short, text quoted, a missing side said as nothing', async () => {
+    const { setAsideValues } = await import('../../../src/core/text/set-aside-text.ts');
+    expect(setAsideValues({ found: true, value: 75.4 }, { found: true, value: 70.4 })).toBe('In the file: 75.4; on this device: 70.4.');
+    expect(setAsideValues({ found: true, value: 'Renamed' }, { found: true, value: 'Cure' })).toBe('In the file: "Renamed"; on this device: "Cure".');
+    expect(setAsideValues({ found: false }, { found: true, value: [1, 2] })).toBe('In the file: nothing; on this device: [1,2].');
+    expect(setAsideValues({ found: true, value: { a: 'x'.repeat(80) } }, { found: false })).toMatch(/^In the file: \{"a":"x+…; on this device: nothing\.$/);
+  });
+});

@@ -52,6 +52,7 @@ export function SetAsideScreen({ store }: SetAsideScreenProps) {
             <li key={r.key} class="card set-aside-card" data-key={r.key}>
               <h3 class="card-title">{what}</h3>
               <p class="card-line">{setAsideWhy(r)}</p>
+              {model.valuesOf(r.key) && <p class="card-line set-aside-values">{model.valuesOf(r.key)}</p>}
               <p class="card-line set-aside-reason">{r.reason}</p>
               <p class="card-line quiet">
                 Set aside {when(r.setAsideAt)}. {setAsideFrom(r)}
