@@ -34,7 +34,7 @@ for (const size of [
     const line = page.locator('.set-aside-link');
     await expect(line).toContainText('2 records from imported files were set aside, not merged.');
     await line.scrollIntoViewIfNeeded();
-    await page.screenshot({ path: `/tmp/shell-set-aside-line-${size.width}.png` });
+    await page.screenshot({ path: `test-results/set-aside-line-${size.width}.png` });
     await line.getByRole('link', { name: 'See the set-aside records' }).click();
 
     await expect(page.getByRole('heading', { level: 2 })).toHaveText('Set-aside records');
@@ -54,7 +54,7 @@ for (const size of [
     expect(violations.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join('; ')}`)).toEqual([]);
     // Every button is at least the glove-sized target (tokens.css --target, 48 px).
     for (const b of await page.getByRole('button').all()) expect((await b.boundingBox())!.height).toBeGreaterThanOrEqual(48);
-    await page.screenshot({ path: `/tmp/shell-set-aside-${size.width}.png`, fullPage: true });
+    await page.screenshot({ path: `test-results/set-aside-${size.width}.png`, fullPage: true });
 
     // The file holds both records whole.
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download the 2 records (JSON)' }).click()]);
@@ -69,7 +69,7 @@ for (const size of [
     const ask = clash.getByRole('alertdialog');
     await expect(ask).toContainText('for good?');
     await expect(ask).toContainText('It is in the file you saved on this screen.');
-    await page.screenshot({ path: `/tmp/shell-set-aside-confirm-${size.width}.png`, fullPage: true });
+    await page.screenshot({ path: `test-results/set-aside-confirm-${size.width}.png`, fullPage: true });
     await ask.getByRole('button', { name: 'Keep it' }).click();
     await expect(cards).toHaveCount(2);
     // Asked again and confirmed: that one record goes, the other stays.
