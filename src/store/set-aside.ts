@@ -38,3 +38,23 @@ export async function listSetAside(store: Store): Promise<SetAsideRow[]> {
   const rows = await guarded(() => store.db.setAside.toArray());
   return rows.sort((a, b) => (a.setAsideAt < b.setAsideAt ? -1 : a.setAsideAt > b.setAsideAt ? 1 : a.key < b.key ? -1 : 1));
 }
+
+/**
+ * Removes one set-aside record, only when the person has confirmed it on the screen (the screen
+ * asks first and offers the file of them). Returns false when no such record is kept (already
+ * removed, in another tab): nothing else is touched either way.
+ */
+export async function removeSetAside(store: Store, key: string): Promise<boolean> {
+  return guarded(() =>
+    store.db.transaction('rw', store.db.setAside, async () => {
+      if (!(await store.db.setAside.get(key))) return false;
+      await store.db.setAside.delete(key);
+      return true;
+    }),
+  );
+}
+
+/** The record on this device with the set-aside record's id (its study or revision), or undefined. */
+export async function storedRecordOf(store: Store, s: Pick<SetAsideRow, 'kind' | 'id'>): Promise<unknown> {
+  return guarded<unknown>(async () => (s.kind === 'study' ? await store.db.studies.get(s.id) : await store.db.revisions.get(s.id)));
+}

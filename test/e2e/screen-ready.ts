@@ -11,4 +11,5 @@ export const READY: Record<(typeof ROUTE_NAMES)[number], readonly [string, RegEx
   nextRuns: ['h2', /^Next runs$/],
   severalResponses: ['h2', /^Several responses at once$/],
   export: ['h2', /^Export$/],
+  setAside: ['h2', /^Set-aside records$/],
 };

@@ -17,6 +17,9 @@ import { hrefTo } from './routes.ts';
 
 export type AppProps = Record<string, never>;
 
+/** How long after the store is ready the other screens' code starts to load (common practice: after the first screen has settled). */
+const PRELOAD_AFTER_MS = 1500;
+
 /** Downloads what the open screen holds (and nothing else), at once. */
 function downloadOnScreen() {
   for (const f of onScreenFiles()) downloadText(f.text, f.name, 'application/json');
@@ -26,11 +29,21 @@ export function App(_props: AppProps) {
   const app = useModel(AppModel);
   const router = useModel(RouterModel);
   useEffect(() => {
-    void app.start();
-    // The address's screen loads beside the store; the others once the page is idle.
+    // The address's screen loads beside the store; the others a while after the store is open (and
+    // the demo study added on a first start), when the page is idle, so that they do not share the
+    // network with what the first screen reads and shows (the studies list reads the store after
+    // it opens, and its first card is the page's largest paint).
     let cancel = () => {};
-    void preloadScreen(router.route.value).then(() => (cancel = whenIdle(() => void preloadAllScreens())));
-    return () => cancel();
+    let live = true;
+    void Promise.all([app.start(), preloadScreen(router.route.value)]).then(() => {
+      if (!live) return;
+      const timer = window.setTimeout(() => (cancel = whenIdle(() => void preloadAllScreens())), PRELOAD_AFTER_MS);
+      cancel = () => window.clearTimeout(timer);
+    });
+    return () => {
+      live = false;
+      cancel();
+    };
   }, []);
   const secure = typeof window !== 'undefined' && window.isSecureContext;
   const store = app.store.value;

@@ -52,6 +52,11 @@ export function lazyScreen<P>(load: () => Promise<ComponentType<P>>): LazyScreen
       if (ready) return;
       let live = true;
       void fetchScreen(true).then(() => live && rerender());
+      // A screen opened again after a failure first rendered that old failure; the fetch just
+      // started replaces it with the status line at once, so "Try again" is never on screen while a
+      // fetch is running (a tap then joined the running fetch, made before the network was back,
+      // and the screen failed again though the network had returned).
+      rerender();
       return () => void (live = false);
     }, [ready]);
     if (ready) {

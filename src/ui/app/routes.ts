@@ -31,6 +31,8 @@ export const ROUTES = {
   severalResponses: { paths: ['/study/:studyId/responses'] },
   // One screen, two addresses: a study's files, or every study's.
   export: { paths: ['/study/:studyId/export', '/export'], tab: 'Export' },
+  // The records imports set aside (reached from the export screen when there are any).
+  setAside: { paths: ['/set-aside'] },
 } as const satisfies Record<string, RouteSpec>;
 
 export type RouteName = keyof typeof ROUTES;

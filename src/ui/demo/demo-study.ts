@@ -8,21 +8,15 @@
 import { importBackup, type ImportReport } from '../../store/files.ts';
 import { listStudies } from '../../store/studies.ts';
 import type { Store } from '../../store/store.ts';
+import { demoUrl, fetchDemoText } from './demo-file.ts';
 
-/** Where the built app serves the demo backup (relative to the page). */
-export const DEMO_FILE = 'demo-study.json';
+export { DEMO_FILE } from './demo-file.ts';
 
 /** Imports the demo study when the store holds no study; returns the import report, or null when nothing was done. */
-export async function addDemoIfEmpty(store: Store, fetchText: (url: string) => Promise<string> = fetchDemo): Promise<ImportReport | null> {
+export async function addDemoIfEmpty(store: Store, fetchText: (url: string) => Promise<string> = fetchDemoText): Promise<ImportReport | null> {
   const studies = await listStudies(store);
   if (studies.length > 0) return null;
-  const text = await fetchText(new URL(DEMO_FILE, document.baseURI).href);
+  const text = await fetchText(demoUrl());
   // importBackup checks the whole file (format, checksum) before it writes anything.
   return importBackup(store, text);
-}
-
-async function fetchDemo(url: string): Promise<string> {
-  const res = await fetch(url, { cache: 'no-cache' });
-  if (!res.ok) throw new Error(`the demo study file could not be read (HTTP ${res.status})`);
-  return res.text();
 }

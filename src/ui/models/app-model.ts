@@ -7,11 +7,23 @@ import { createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { openStore, type Store } from '../../store/store.ts';
 import { listStudies } from '../../store/study-list.ts';
 import { problemOf, type Problem } from '../lib/problem.ts';
+import { fetchDemoText } from '../demo/demo-file.ts';
 import { heldStudiesBefore, markHeldStudies, reportCleared } from '../lib/storage-cleared.ts';
 
 /** Said at start when the store is empty but this device held studies before (the browser removed them). */
 export const RECORDS_GONE =
   "The browser removed this device's Trialbook records: this device held studies before, and its storage is now empty. The demo study was not added. Import a backup file (Export screen of a study, or the studies list) to bring the records back.";
+
+/**
+ * The demo file's text and the demo module, both started at once (the file does not wait for the
+ * code). The text's promise is handled here, so a failed read is reported when the demo is added,
+ * never as an unhandled rejection.
+ */
+function loadDemo(): Promise<{ addDemoIfEmpty: typeof import('../demo/demo-study.ts').addDemoIfEmpty; text: Promise<string> }> {
+  const text = fetchDemoText();
+  text.catch(() => undefined);
+  return import('../demo/demo-study.ts').then((m) => ({ addDemoIfEmpty: m.addDemoIfEmpty, text }));
+}
 
 export const AppModel = createModel(() => {
   const store = signal<Store | null>(null);
@@ -39,6 +51,11 @@ export const AppModel = createModel(() => {
     async start() {
       if (started) return;
       started = true;
+      // A device that never held a study is on its first start: the demo's code and file are
+      // fetched beside the store's opening, not after it, because the demo study's card is the
+      // first screen's largest element (its paint is the largest contentful paint).
+      const demo = heldStudiesBefore() ? null : loadDemo();
+      demo?.catch(() => undefined);
       try {
         const s = await openStore({
           onClosed: (m) => (closed.value = m),
@@ -56,7 +73,10 @@ export const AppModel = createModel(() => {
         } else {
           try {
             // Adding the demo brings the backup import with it: loaded only for a device with no study.
-            if (!held) await (await import('../demo/demo-study.ts')).addDemoIfEmpty(s);
+            if (!held) {
+              const { addDemoIfEmpty, text } = await (demo ?? loadDemo());
+              await addDemoIfEmpty(s, () => text);
+            }
           } catch (err) {
             demoProblem.value = `The invented demo study could not be added: ${problemOf(err).message}`;
           }

@@ -10,6 +10,7 @@ import type { StudyRecord } from '../../../core/study/study.ts';
 import type { Store } from '../../../store/store.ts';
 import { DemoBadge } from '../../components/demo-badge/index.tsx';
 import { ProblemBox } from '../../components/problem-box/index.tsx';
+import { SetAsideLink } from '../../components/set-aside-link/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { when } from '../../lib/format.ts';
 import { ExportModel } from '../../models/export-model.ts';
@@ -85,6 +86,7 @@ export function ExportScreen({ store, studyId }: ExportScreenProps) {
           {progressText(model.importProgress.value)}
         </p>
       )}
+      <SetAsideLink store={store} after={model.done.value} />
       <label class="btn block file-pick">
         Choose a backup file
         <input
