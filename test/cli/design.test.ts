@@ -265,7 +265,7 @@ describe('design command: factor names and levels the other commands can use', (
     expect(() => parseFactorOption('A=B=1:2')).toThrow(/--factor "A=B=1:2": expected one "=" between the name and the levels \(NAME=LOW:HIGH\), got 2/);
   });
   it('a comma or colon in a name or level is refused, saying which and why', () => {
-    expect(() => parseFactorOption('Temp, C=160:200')).toThrow(/--factor "Temp, C=160:200": The factor name "Temp, C" contains a comma \(","\), which the command line uses as a separator/);
+    expect(() => parseFactorOption('Temp, C=160:200')).toThrow(/--factor "Temp, C=160:200": The factor name "Temp, C" contains a comma \(","\), which Trialbook keeps as a separator/);
     expect(() => parseFactorOption('Powder=matte,fine:gloss')).toThrow(/The level "matte,fine" of Powder contains a comma/);
     expect(() => parseFactorOption('A:B (s)=1:2')).toThrow(/The factor name "A:B" contains a colon/);
   });

@@ -78,7 +78,7 @@ export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): st
   if (a.transform.lowerBound !== null) out.push(boundNoteCommand(a.response, a.transform.lowerBound));
   if (a.boxCox) {
     const [lo, hi] = a.boxCox.ci;
-    out.push(`Box-Cox power for ${a.response}${a.transform.lowerBound !== null ? ' minus its bound' : ''}: ${num(a.boxCox.lambda)} (95% interval ${lo === null ? 'below -3' : num(lo)} to ${hi === null ? 'above 3' : num(hi)}); suggested transform: ${a.boxCox.suggestion}`);
+    out.push(`Box-Cox power for ${a.response}${a.transform.lowerBound !== null && a.transform.lowerBound !== 0 ? ` minus its bound ${num(a.transform.lowerBound)}` : ''}: ${num(a.boxCox.lambda)} (95% interval ${lo === null ? 'below -3' : num(lo)} to ${hi === null ? 'above 3' : num(hi)}); suggested transform: ${a.boxCox.suggestion}`);
   }
   out.push('');
   out.push('Coding used (real setting -> coded value)');

@@ -34,14 +34,14 @@ const CONTROL = /[\u0000-\u001f\u007f-\u009f\u061c\u200e\u200f\u202a-\u202e\u206
  * What is wrong with a factor name or level label as a new name, or null when nothing is.
  * `what` names it in the message, such as 'The factor name "A,B"'.
  * Example: namingProblem('Temp, C', 'The factor name "Temp, C"') ->
- *   'The factor name "Temp, C" contains a comma, which the command line ...'.
+ *   'The factor name "Temp, C" contains a comma, which Trialbook keeps ...'.
  */
 export function namingProblem(text: string, what: string): string | null {
   const found = RESERVED_NAME_CHARACTERS.filter((r) => text.includes(r.char));
   if (found.length > 0) {
     const words = found.map((r) => `${r.word} ("${r.char}")`).join(' and ');
     const uses = found.map((r) => `${r.word} ${r.use}`).join('; ');
-    return `${what} contains ${words}, which the command line uses as a separator (${uses}); names and levels cannot contain a comma, a colon or an equals sign, so choose another, such as "${suggestion(text)}"`;
+    return `${what} contains ${words}, which Trialbook keeps as a separator (${uses}); names and levels cannot contain a comma, a colon or an equals sign, so choose another, such as "${suggestion(text)}"`;
   }
   const c = CONTROL.exec(text);
   if (c) {

@@ -25,7 +25,9 @@ export function withUnit(x: number | null | undefined, unit: string | undefined,
 
 /** A real setting with its unit ('180 °C', 'gloss'). */
 export function setting(value: number | string, unit?: string): string {
-  return formatSetting(value, unit);
+  const s = formatSetting(value, unit);
+  // The screens write a negative number with the minus sign, as num() does.
+  return typeof value === 'number' && s.startsWith('-') ? '−' + s.slice(1) : s;
 }
 
 /** A coded value with its sign: '+1.5', '−1', '0'. */

@@ -6,7 +6,7 @@ import { InputError } from '../../../src/core/errors.ts';
 describe('namingProblem', () => {
   it('names each separator found and why the command line needs it', () => {
     const p = namingProblem('Temp, C', 'The factor name "Temp, C"');
-    expect(p).toMatch(/^The factor name "Temp, C" contains a comma \(","\), which the command line uses as a separator/);
+    expect(p).toMatch(/^The factor name "Temp, C" contains a comma \(","\), which Trialbook keeps as a separator/);
     expect(p).toMatch(/--factors A,B/);
     expect(p).toMatch(/such as "Temp C"/);
     const both = namingProblem('A=B:1', 'x');
