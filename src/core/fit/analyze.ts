@@ -42,7 +42,7 @@ import { residualSsQr, residualSsYates } from './residual-ss.ts';
 import { RANK_TOLERANCE } from '../tolerance.ts';
 import { NO_TRANSFORM, transformResponses, type ResponseTransform } from './response-transform.ts';
 import { validateResponseData } from './validate-response.ts';
-import { scaleAnalysisBack, scaleExponent, timesPow2 } from './response-scale.ts';
+import { pow2Scaler, scaleAnalysisBack, scaleExponent } from './response-scale.ts';
 import { testedExtent } from '../predict/tested-extent.ts';
 import { columnVifs, VIF_LIMIT, vifDrivers } from './vif.ts';
 import { isWarning } from './verdicts.ts';
@@ -70,7 +70,7 @@ export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analys
   const e = scaleExponent(fitted.y);
   const yp = bound === null ? raw.y : raw.y.map((v) => v - bound);
   const ep = scaleExponent(yp);
-  const inner = analyzeOnScale({ ...fitted, y: fitted.y.map((v) => timesPow2(v, -e)) }, yp.map((v) => timesPow2(v, -ep)), transform, bound, options);
+  const inner = analyzeOnScale({ ...fitted, y: fitted.y.map(pow2Scaler(-e)) }, yp.map(pow2Scaler(-ep)), transform, bound, options);
   const out = scaleAnalysisBack(inner, e);
   return { ...out, warnings: [...fitted.messages, ...out.verdicts.filter(isWarning).map(verdictText)] };
 }

@@ -27,63 +27,67 @@ export function scaleExponent(values: ArrayLike<number>): number {
   return e;
 }
 
-/** x 2^e, in two halves so that 2^e itself never overflows (e up to +-2100). Exact unless the result over- or underflows. */
+/** x 2^e, in two halves when 2^e itself is not a normal double (e outside -1022..1023). Exact unless the result over- or underflows. */
 export function timesPow2(x: number, e: number): number {
+  if (e >= -1022 && e <= 1023) return x * 2 ** e;
   const a = Math.trunc(e / 2);
   return x * 2 ** a * 2 ** (e - a);
+}
+
+/** A multiplier by 2^e, with 2^e worked out once (the scale-back touches every figure). */
+export function pow2Scaler(e: number): (x: number) => number {
+  if (e === 0) return (x) => x;
+  if (e >= -1022 && e <= 1023) {
+    const f = 2 ** e;
+    return (x) => x * f;
+  }
+  const a = Math.trunc(e / 2);
+  const f1 = 2 ** a;
+  const f2 = 2 ** (e - a);
+  return (x) => x * f1 * f2;
 }
 
 /** The smallest normal double (IEEE 754 binary64): below it a number keeps fewer than 53 bits. */
 const SMALLEST_NORMAL = 2 ** -1022;
 
-/** x 2^e where the result is a normal double (or exactly 0), else null: digits would be lost. */
-function scaledOrNull(x: number, e: number): number | null {
-  if (x === 0) return 0;
-  const v = timesPow2(x, e);
-  return Number.isFinite(v) && Math.abs(v) >= SMALLEST_NORMAL ? v : null;
-}
-
-/** A figure in the response's unit, scaled back (exact: within 2^-e of the response's own magnitude). */
-function back(x: number, e: number): number {
-  return timesPow2(x, e);
-}
-
-function estimate<T extends Estimate>(v: T, e: number): T {
-  return { ...v, coef: back(v.coef, e), se: v.se === null ? null : back(v.se, e), ci: v.ci === null ? null : [back(v.ci[0], e), back(v.ci[1], e)] };
-}
-
-function table(t: AnovaTable, e: number): AnovaTable {
-  return { ...t, rows: t.rows.map((r) => ({ ...r, ss: r.ss === null ? null : scaledOrNull(r.ss, 2 * e), ms: r.ms === null ? null : scaledOrNull(r.ms, 2 * e) })) };
-}
-
-function points(list: readonly EffectPoint[], e: number): EffectPoint[] {
-  return list.map((p) => ({ ...p, effect: back(p.effect, e) }));
-}
-
-function verdict(v: Verdict, e: number): Verdict {
-  return v.kind === 'curvature' ? { ...v, estimate: back(v.estimate, e) } : v;
+/** x 2^2e where the result is a normal double (or exactly 0), else null: digits would be lost. */
+function squareScaler(e: number): (x: number) => number | null {
+  const by = pow2Scaler(2 * e);
+  return (x) => {
+    if (x === 0) return 0;
+    const v = by(x);
+    return Number.isFinite(v) && Math.abs(v) >= SMALLEST_NORMAL ? v : null;
+  };
 }
 
 /**
  * An analysis made on y 2^-e, in the unit of y: every figure in that unit times 2^e, sums of
  * squares and mean squares times 2^2e (null where binary64 cannot hold them), the rest as it is.
- * `warnings` is left to the caller, which writes it from the scaled-back verdicts.
+ * `warnings` is left to the caller, which writes it from the scaled-back verdicts. Cost O(n + p).
  */
 export function scaleAnalysisBack(a: Analysis, e: number): Omit<Analysis, 'warnings'> {
-  const model: FittedModel = { ...a.model, coef: a.model.coef.map((c) => back(c, e)), sigma: a.model.sigma === null ? null : back(a.model.sigma, e) };
+  if (e === 0) return a;
+  const s = pow2Scaler(e);
+  const sq = squareScaler(e);
+  const sn = (x: number | null) => (x === null ? null : s(x));
+  const estimate = <T extends Estimate>(v: T): T => ({ ...v, coef: s(v.coef), se: sn(v.se), ci: v.ci === null ? null : [s(v.ci[0]), s(v.ci[1])] });
+  const table = (t: AnovaTable): AnovaTable => ({ ...t, rows: t.rows.map((r) => ({ ...r, ss: r.ss === null ? null : sq(r.ss), ms: r.ms === null ? null : sq(r.ms) })) });
+  const points = (list: readonly EffectPoint[]): EffectPoint[] => list.map((p) => ({ ...p, effect: s(p.effect) }));
+  const verdict = (v: Verdict): Verdict => (v.kind === 'curvature' ? { ...v, estimate: s(v.estimate) } : v);
+  const model: FittedModel = { ...a.model, coef: a.model.coef.map(s), sigma: sn(a.model.sigma) };
   return {
     ...a,
-    intercept: estimate(a.intercept, e),
-    terms: a.terms.map((t) => ({ ...estimate(t, e), effect: back(t.effect, e) })),
-    blocks: a.blocks === null ? null : a.blocks.map((b) => ({ ...b, offset: back(b.offset, e) })),
-    sigma: a.sigma === null ? null : back(a.sigma, e),
-    anova: table(a.anova, e),
-    anovaAdjusted: a.anovaAdjusted === null ? null : table(a.anovaAdjusted, e),
-    lenth: a.lenth === null ? null : { ...a.lenth, pse: back(a.lenth.pse, e), me: back(a.lenth.me, e), sme: back(a.lenth.sme, e), effects: points(a.lenth.effects, e) },
-    curvature: a.curvature === null ? null : { ...a.curvature, estimate: back(a.curvature.estimate, e), se: a.curvature.se === null ? null : back(a.curvature.se, e) },
-    runs: a.runs.map((r) => ({ ...r, y: back(r.y, e), fitted: back(r.fitted, e), residual: back(r.residual, e) })),
-    halfNormal: points(a.halfNormal, e),
-    verdicts: a.verdicts.map((v) => verdict(v, e)),
+    intercept: estimate(a.intercept),
+    terms: a.terms.map((t) => ({ ...estimate(t), effect: s(t.effect) })),
+    blocks: a.blocks === null ? null : a.blocks.map((b) => ({ ...b, offset: s(b.offset) })),
+    sigma: sn(a.sigma),
+    anova: table(a.anova),
+    anovaAdjusted: a.anovaAdjusted === null ? null : table(a.anovaAdjusted),
+    lenth: a.lenth === null ? null : { ...a.lenth, pse: s(a.lenth.pse), me: s(a.lenth.me), sme: s(a.lenth.sme), effects: points(a.lenth.effects) },
+    curvature: a.curvature === null ? null : { ...a.curvature, estimate: s(a.curvature.estimate), se: sn(a.curvature.se) },
+    runs: a.runs.map((r) => ({ ...r, y: s(r.y), fitted: s(r.fitted), residual: s(r.residual) })),
+    halfNormal: points(a.halfNormal),
+    verdicts: a.verdicts.map(verdict),
     model,
   };
 }
