@@ -95,11 +95,14 @@ export const RATIO_TOLERANCE = 1e-12;
 /** Main effects whose variance is within this fraction of the largest count as equally well
  * estimated (a balanced design's columns, up to rounding; common practice). */
 export const EQUAL_VARIANCE_TOLERANCE = 1e-9;
-/** The largest response magnitude the analysis carries: its sums of squares must stay finite in
- * IEEE 754 binary64 (largest 1.797e308, so a square needs |y| < 1.34e154), with room for sums over
- * a million runs (1e150^2 x 1e6 = 1e306). Files are refused above it at reading, naming the cell.
- * Common practice (overflow headroom); raise it when the fit scales the response first. */
-export const MAX_RESPONSE_MAGNITUDE = 1e150;
+/** The largest response magnitude the analysis carries. The fit takes the response's scale out
+ * first (fit/response-scale.ts), so sums of squares no longer bound it; what does is the figures
+ * reported in the response's unit, which reach a few times the largest reading: an effect is a
+ * difference of two means (up to 2 max |y|), an interval adds up to 12.7 standard errors (t for 1
+ * residual df), a prediction sums the model's terms. 1e300 leaves a factor of 1e8 below the largest
+ * binary64 number (1.8e308). Files are refused above it at reading, naming the cell. Our own choice
+ * (overflow headroom, rounding aside). */
+export const MAX_RESPONSE_MAGNITUDE = 1e300;
 /** An eigenvalue of the second-order matrix B, or a pivot of a linear solve, below this fraction
  * of the largest in magnitude counts as zero (the surface has no unique stationary point along
  * it). Common practice: far above rounding, far below any fitted curvature. */

@@ -5,13 +5,15 @@
  * readings, operators, notes that need quoting and some excluded runs (invented bench data).
  * Prints the median and spread over 21 exports after 3 warm-up ones, and the median CPU time;
  * asserts nothing about time.
- *   npx tsx test/bench/csv-export.ts   (called by npm run bench)
+ *   npx tsx test/bench/csv-export.ts   (called by npm run bench; the same export in Chromium:
+ *   csv-export-chromium.bench.ts)
  */
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import type { LoggedRun, StudyRecord } from '../../src/core/study/study.ts';
+import type { StudyRecord } from '../../src/core/study/study.ts';
 import { studyCsv } from '../../src/io/csv/study-csv.ts';
 import { fmtMs } from './timing.ts';
+import { benchCsvRuns } from './csv-runs.ts';
 
 /** The export's target from the performance issue (median, ms). */
 const TARGET_MS = 300;
@@ -24,22 +26,7 @@ const backup = JSON.parse(readFileSync(fileURLToPath(new URL('../fixtures/trialb
 };
 const study = backup.payload.studies[0];
 
-let seed = 2024;
-const rnd = () => (seed = (Math.imul(seed, 1664525) + 1013904223) >>> 0) / 2 ** 32;
-const start = Date.parse('2024-05-02T08:00:00.000Z');
-const runs: LoggedRun[] = Array.from({ length: RUNS }, (_, i) => {
-  const planned = study.design.runs[i % study.design.runs.length];
-  const at = new Date(start + i * 61_000).toISOString();
-  const excluded = i % 97 === 0;
-  return {
-    id: `run-${i}`, revisionId: `rev-${i}`, revisions: 1, heads: [`rev-${i}`],
-    studyId: study.id, plannedRun: planned.run, rev: 1, device: 'bench-device', parents: [], restoredFrom: null, savedAt: at,
-    actual: study.factors.map((f, j) => (f.kind === 'numeric' ? Math.round(((f.low + f.high) / 2 + (planned.coded[j] * (f.high - f.low)) / 2 + (rnd() - 0.5)) * 10) / 10 : f.levels[0])),
-    readings: [[60 + Math.round(rnd() * 200) / 10, 60 + Math.round(rnd() * 200) / 10, 60 + Math.round(rnd() * 200) / 10], [75 + Math.round(rnd() * 150) / 10]],
-    loggedAt: at, operator: `Shift ${'ABC'[i % 3]} (invented)`, notes: i % 5 === 0 ? 'lid re-seated, "tight", checked' : '',
-    excluded, reason: excluded ? 'thermocouple loose' : '',
-  };
-});
+const runs = benchCsvRuns(study, RUNS);
 
 for (let i = 0; i < WARMUP; i++) studyCsv(study, runs, { bom: true });
 const times: number[] = [];

@@ -46,7 +46,8 @@ export interface TermEstimate extends Estimate {
 export interface AnovaRow {
   readonly source: string;
   readonly df: number;
-  readonly ss: number;
+  /** null when the response's scale carries it beyond binary64 (fit/response-scale.ts); F and p stay exact. */
+  readonly ss: number | null;
   readonly ms: number | null;
   readonly f: number | null;
   readonly p: number | null;

@@ -12,6 +12,9 @@
  * each ANOVA table names its type.
  * Sources: Montgomery, Design and Analysis of Experiments, 8th ed., chapters 6-8 and 10;
  * Lenth (1989), Technometrics 31, 469-473; formulas in the files each step calls.
+ * The response's scale is taken out before the fit and put back after it (response-scale.ts): a
+ * change of unit by a power of two scales every effect exactly, and t, F and p stay the same, from
+ * 1e-300 to 1e300; a sum of squares beyond binary64 is null.
  * Cost: dominated by the fit (O(n p^2) by QR) and, when Lenth applies, the saturated fit.
  * Throws InputError for a non-numeric value, a factor with one setting, a constant response,
  * fewer runs than the intercept and main effects need, or a term naming a missing factor.
@@ -39,6 +42,7 @@ import { residualSsQr, residualSsYates } from './residual-ss.ts';
 import { RANK_TOLERANCE } from '../tolerance.ts';
 import { NO_TRANSFORM, transformResponses, type ResponseTransform } from './response-transform.ts';
 import { validateResponseData } from './validate-response.ts';
+import { pow2Scaler, scaleAnalysisBack, scaleExponent } from './response-scale.ts';
 import { testedExtent } from '../predict/tested-extent.ts';
 import { columnVifs, VIF_LIMIT, vifDrivers } from './vif.ts';
 import { isWarning } from './verdicts.ts';
@@ -59,8 +63,20 @@ export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analys
   const transform = options.transform ?? NO_TRANSFORM;
   const bound = raw.lowerBound ?? null;
   // The fit is made on (y'^lambda - 1) / lambda, y' = y - L (response-transform.ts); none leaves y as it is.
-  const data = transform.lambda === 1 ? raw : { ...raw, y: transformResponses(raw.y, transform.lambda, bound ?? 0, raw.response) };
-  if (data !== raw) validateResponseData(data);
+  const fitted = transform.lambda === 1 ? raw : { ...raw, y: transformResponses(raw.y, transform.lambda, bound ?? 0, raw.response) };
+  if (fitted !== raw) validateResponseData(fitted);
+  // The response's scale comes out before the fit and goes back after it (response-scale.ts), so
+  // that sums of squares stay finite at any magnitude and every figure scales exactly.
+  const e = scaleExponent(fitted.y);
+  const yp = bound === null ? raw.y : raw.y.map((v) => v - bound);
+  const ep = scaleExponent(yp);
+  const inner = analyzeOnScale({ ...fitted, y: fitted.y.map(pow2Scaler(-e)) }, yp.map(pow2Scaler(-ep)), transform, bound, options);
+  const out = scaleAnalysisBack(inner, e);
+  return { ...out, warnings: [...fitted.messages, ...out.verdicts.filter(isWarning).map(verdictText)] };
+}
+
+/** The analysis of a response already scaled (largest magnitude in [1, 2)); `yp` the Box-Cox response, scaled alike; warnings left empty. */
+function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: ResponseTransform, bound: number | null, options: AnalyzeOptions): Analysis {
   const { factors, coded, y } = data;
   const alpha = options.alpha ?? 0.05;
   const screening = screeningStep(data);
@@ -101,7 +117,6 @@ export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analys
     partialAliasing: screening?.partialAliasing ?? null,
   });
 
-  const yp = bound === null ? raw.y : raw.y.map((v) => v - bound);
   // Box-Cox refits the same columns to each power of y': one factorisation serves them all.
   const refit = cells ? residualSsYates(cells, factors.length, fit.columns.flatMap((c) => (c.kind === 'term' ? [c.term] : []))) : residualSsQr(fit.qr ?? householderQr(modelMatrix(keptColumns, coded, blocks), y.length, keptColumns.length, RANK_TOLERANCE));
   const bc = boxCoxOn(refit, yp);
@@ -141,7 +156,7 @@ export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analys
     runs: diag.runs,
     halfNormal: lenthOut.halfNormal,
     verdicts,
-    warnings: [...data.messages, ...verdicts.filter(isWarning).map(verdictText)],
+    warnings: [],
     transform: model.transform!,
     boxCox: bc,
     model,

@@ -39,13 +39,15 @@ const ORDER: readonly TermKind[] = ['linear', 'two-factor', 'quadratic'];
  * on (df_kind, df_residual) (fUpperP). A sum of sequential rows is the extra sum of squares only
  * when each kind's terms come together, in the order linear, two-factor, quadratic, as the
  * quadratic model lists them (model/formula.ts quadraticTerms); otherwise, or for an adjusted
- * table, the grouping has no such reading and null is returned. Kinds without a term are left
+ * table, or with a sum of squares beyond binary64 (null), the grouping has no such reading and null is returned. Kinds without a term are left
  * out; F and p are null with no residual df. Cost O(terms).
  * Example: Montgomery 8th ed., Example 11.2 -> linear df 2, SS 10.04; two-factor df 1, SS 0.25;
  * quadratic df 2, SS 17.95 (from memory).
  */
 export function anovaByKind(table: AnovaTable, terms: readonly TermEstimate[]): KindRow[] | null {
   if (table.type !== 'sequential') return null;
+  // A sum of squares beyond binary64 (fit/response-scale.ts) has no sum to add to.
+  if (table.rows.some((r) => r.ss === null)) return null;
   const byName = new Map<string, AnovaRow>(table.rows.map((r) => [r.source, r]));
   const residual = byName.get('Residual');
   const inTable = terms.filter((t) => byName.has(t.name));
@@ -55,13 +57,13 @@ export function anovaByKind(table: AnovaTable, terms: readonly TermEstimate[]): 
     if (at < last) return null;
     last = at;
   }
-  const msRes = residual && residual.df > 0 ? residual.ss / residual.df : null;
+  const msRes = residual && residual.df > 0 ? residual.ss! / residual.df : null;
   const out: KindRow[] = [];
   for (const kind of ORDER) {
     const rows = inTable.filter((t) => termKind(t.term) === kind).map((t) => byName.get(t.name)!);
     if (rows.length === 0) continue;
     const df = rows.reduce((s, r) => s + r.df, 0);
-    const ss = rows.reduce((s, r) => s + r.ss, 0);
+    const ss = rows.reduce((s, r) => s + r.ss!, 0);
     const ms = ss / df;
     const f = msRes !== null && msRes > 0 ? ms / msRes : null;
     out.push({ kind, df, ss, ms, f, p: f === null ? null : fUpperP(f, df, residual!.df) });

@@ -50,8 +50,9 @@ export function saturatedEffects(
   }
   if (!fit) return [];
   // The set comes from the nominal settings (`coded`); the effects, like the model's, from the actual ones.
-  // The lean nominal fit just made is the plan: fitOnPlan need not factorise it again.
-  if (actual) fit = fitOnPlan(fit.columns, new Float64Array(0), modelMatrix(fit.columns, actual, blocks), y, fit);
+  // The lean nominal fit just made is the plan: fitOnPlan need not factorise it again; only the
+  // estimates are read here, so the actual fit is lean as well (no (X'X)^-1, no leverage).
+  if (actual) fit = fitOnPlan(fit.columns, new Float64Array(0), modelMatrix(fit.columns, actual, blocks), y, fit, true);
   const byColumn = new Map<number, { term: Term; weight: number }[]>();
   for (const a of fit.aliased) {
     const c = fit.columns[a.column];

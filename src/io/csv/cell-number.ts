@@ -45,10 +45,11 @@ export function whyNotANumber(text: string, delimiter = ','): string {
 
 /**
  * Why a response value cannot be analyzed although it is a number, as a message part, or '' when
- * it can: a magnitude above MAX_RESPONSE_MAGNITUDE, whose square would overflow.
- * Example: responseMagnitudeProblem(1e200) -> 'is 1e+200, beyond what the analysis can carry ...'.
+ * it can: a magnitude above MAX_RESPONSE_MAGNITUDE, where effects, intervals and predictions
+ * (a few times the largest reading) would leave the range of a double.
+ * Example: responseMagnitudeProblem(1e305) -> 'is 1e+305, beyond what the analysis can carry ...'.
  */
 export function responseMagnitudeProblem(x: number): string {
   if (Math.abs(x) <= MAX_RESPONSE_MAGNITUDE) return '';
-  return `is ${x}, beyond what the analysis can carry (magnitudes up to ${MAX_RESPONSE_MAGNITUDE}, so that sums of squares stay finite): give the response in a larger unit`;
+  return `is ${x}, beyond what the analysis can carry (magnitudes up to ${MAX_RESPONSE_MAGNITUDE}, so that effects, intervals and predictions, which reach a few times the largest reading, stay within the range of a number): give the response in a larger unit`;
 }

@@ -48,7 +48,7 @@ describe('analyze: properties (fast-check)', () => {
           expect(Math.abs(qr.terms[i].coef - t.coef)).toBeLessThan(1e-9 * scale);
           if (t.se !== null) expect(Math.abs(qr.terms[i].se! - t.se)).toBeLessThan(1e-9 * scale);
         });
-        yates.anova.rows.forEach((r, i) => expect(Math.abs(qr.anova.rows[i].ss - r.ss)).toBeLessThan(1e-8 * scale * scale * y.length));
+        yates.anova.rows.forEach((r, i) => expect(Math.abs(qr.anova.rows[i].ss! - r.ss!)).toBeLessThan(1e-8 * scale * scale * y.length));
         yates.runs.forEach((r, i) => {
           expect(Math.abs(qr.runs[i].fitted - r.fitted)).toBeLessThan(1e-9 * scale);
           expect(qr.runs[i].leverage).toBeCloseTo(r.leverage, 10);
@@ -86,7 +86,7 @@ describe('analyze: properties (fast-check)', () => {
         a.terms.forEach((t, i) => expect(b.terms[i].coef).toBeCloseTo(t.coef, 7));
         const ra = a.anova.rows.find((r) => r.source === 'Residual')!;
         const rb = b.anova.rows.find((r) => r.source === 'Residual')!;
-        expect(rb.ss).toBeCloseTo(ra.ss, 5);
+        expect(rb.ss).toBeCloseTo(ra.ss!, 5);
       }),
       { numRuns: 100 },
     );

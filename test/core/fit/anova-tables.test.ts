@@ -41,7 +41,7 @@ describe('anovaTables', () => {
     expect(row(t, 'Lack of fit').df).toBe(1);
     expect(row(t, 'Lack of fit').ss).toBeCloseTo((4 * 5 * 0.035 ** 2) / 9, 10);
     expect(row(t, 'Pure error').ms).toBeCloseTo(0.043, 10);
-    expect(t.lackOfFitP).toBeCloseTo(1 - jStat.centralF.cdf(row(t, 'Lack of fit').ss / 0.043, 1, 4), 9);
+    expect(t.lackOfFitP).toBeCloseTo(1 - jStat.centralF.cdf(row(t, 'Lack of fit').ss! / 0.043, 1, 4), 9);
   });
 
   it('with a missing run the columns are not orthogonal: an adjusted table, whose term SS is b^2 / (X\'X)^-1_jj, and both tables end alike', () => {
@@ -54,7 +54,7 @@ describe('anovaTables', () => {
     expect(t.anovaAdjusted!.rows.slice(-3)).toEqual(seq);
     // Sequential SS of the terms add up to the model SS; adjusted ones in general do not.
     const terms = t.anova.rows.filter((r) => ['Gap', 'Flow', 'Power'].includes(r.source));
-    expect(terms.reduce((s, r) => s + r.ss, 0)).toBeCloseTo(row(t, 'Model').ss, 8);
+    expect(terms.reduce((s, r) => s + r.ss!, 0)).toBeCloseTo(row(t, 'Model').ss!, 8);
   });
 
   it('degenerate input: no residual df leaves every F and p null', () => {

@@ -60,12 +60,14 @@ describe('tableResponseData: hand-edited and foreign files', () => {
 });
 
 describe('tableResponseData: numbers the analysis cannot carry', () => {
-  it('refuses a response above MAX_RESPONSE_MAGNITUDE at reading, with row and column (its square would overflow binary64)', () => {
-    const t = readTable('A,y\n1,5\n2,1e300\n');
+  it('refuses a response above MAX_RESPONSE_MAGNITUDE at reading, with row and column (an interval a few times it would overflow binary64, largest 1.8e308)', () => {
+    const t = readTable('A,y\n1,5\n2,1e305\n');
     expect(() => tableResponseData(t, { factors: ['A'], response: 'y' })).toThrow(
-      'Row 3, column "y": y is 1e+300, beyond what the analysis can carry (magnitudes up to 1e+150, so that sums of squares stay finite): give the response in a larger unit',
+      'Row 3, column "y": y is 1e+305, beyond what the analysis can carry (magnitudes up to 1e+300, so that effects, intervals and predictions, which reach a few times the largest reading, stay within the range of a number): give the response in a larger unit',
     );
-    expect(tableResponseData(readTable('A,y\n1,5\n2,-1e150\n'), { factors: ['A'], response: 'y' }).y).toEqual([5, -1e150]);
+    expect(tableResponseData(readTable('A,y\n1,5\n2,-1e300\n'), { factors: ['A'], response: 'y' }).y).toEqual([5, -1e300]);
+    // 1e200 was refused while the fit squared the response as it came; the fit now scales it first (fit/response-scale.ts).
+    expect(tableResponseData(readTable('A,y\n1,5e199\n2,1e200\n'), { factors: ['A'], response: 'y' }).y).toEqual([5e199, 1e200]);
   });
 });
 
