@@ -54,7 +54,7 @@ describe('augment', () => {
     await expect(augment.run([demo, '--study', TITLE, '--axial', '--out', out])).rejects.toThrow(/already exists \(nothing is overwritten/);
     expect(readFileSync(out, 'utf8')).toBe(first);
     const summary = await augment.run([demo, '--study', TITLE, '--axial', '--seed', '5', '--summary']);
-    expect(summary).toMatch(/6 axial runs at \+-1.809/);
+    expect(summary).toMatch(/6 axial runs at ±1.809/);
     expect(summary).toMatch(/rated limits/);
   });
 
