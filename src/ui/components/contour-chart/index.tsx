@@ -92,7 +92,7 @@ export function ContourChart({ grid, levels, xName, yName, xLabel, yLabel, respo
         ) : null}
         . Lines join settings with the same predicted {responseLabel}.{othersNote ? ` ${othersNote}` : ''}
       </figcaption>
-      <div class="contour-table-wrap">
+      <div class="contour-table-wrap" tabIndex={0} role="region" aria-label={`Table of predicted ${responseLabel}`}>
         <table class="chart-table contour-table" data-testid="contour-table">
           <caption>
             Predicted {responseLabel}: {yName} down, {xName} across
