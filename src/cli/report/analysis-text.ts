@@ -1,4 +1,5 @@
 /** The analyze command's readable report, in Trialbook's own plain-words layout. */
+import { isSquare } from '../../core/model/term.ts';
 import type { Analysis, AnovaTable } from '../../core/fit/analysis.ts';
 import { combinationLabel } from '../../core/fit/combination-label.ts';
 import { effectWords } from '../../core/text/effect-words.ts';
@@ -126,7 +127,9 @@ export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): st
     out.push('');
     out.push(verdictText(lof));
   }
-  if (a.lenth) {
+  // Lenth's method judges the effects of an unreplicated two-level factorial; with squares in the
+  // model the squares' own tests and lack of fit speak instead (the JSON keeps \`lenth\`).
+  if (a.lenth && !a.model.terms.some(isSquare)) {
     const l = a.lenth;
     const effects = l.effects.map((e) => ({ ...e, effect: zeroIfRoundoff(e.effect, scale) }));
     const [figures, marked] = lenthStatement({ ...l, pse: zeroIfRoundoff(l.pse, scale), me: zeroIfRoundoff(l.me, scale), sme: zeroIfRoundoff(l.sme, scale) }, effects);

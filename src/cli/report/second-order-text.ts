@@ -1,5 +1,6 @@
 /** The second-order section of the analyze report: canonical analysis, ridge and the best setting, with the caution. */
 import type { SecondOrderAnalysis } from '../../core/optimum/second-order-analysis.ts';
+import { nameWithUnit } from '../../core/study/name-with-unit.ts';
 import { intervalText } from '../../core/text/interval-text.ts';
 import { num, table } from './numbers.ts';
 
@@ -7,7 +8,7 @@ const interval = (iv: readonly [number, number] | null) => intervalText(iv, (x) 
 
 export function secondOrderText(s: SecondOrderAnalysis): string {
   const factors = s.canonical.surface.factors;
-  const names = factors.map((f) => f.name + (f.unit ? ` (${f.unit})` : ''));
+  const names = factors.map((f) => nameWithUnit(f.name, f.unit));
   const out: string[] = ['Second-order analysis (coded units unless marked real)', ''];
   const st = s.canonical.stationary;
   out.push(`Nature of the surface: ${s.canonical.nature}`);

@@ -7,11 +7,13 @@ import type { Factor } from '../factor/factor.ts';
 
 /**
  * "<name> (<unit>)", or the name alone when the unit is missing or blank; the unit is trimmed.
- * Example: nameWithUnit('Film thickness', 'µm') -> 'Film thickness (µm)'; nameWithUnit('Gloss') -> 'Gloss'.
+ * Example: nameWithUnit('Film thickness', 'µm') -> 'Film thickness (µm)'; nameWithUnit('Gloss') -> 'Gloss';
+ * nameWithUnit('Time (min)', 'min') -> 'Time (min)'.
  */
 export function nameWithUnit(name: string, unit?: string | null): string {
   const u = unit?.trim() ?? '';
-  return u === '' ? name : `${name} (${u})`;
+  // A name read from a CSV header often carries its unit already ("Time (min)"): not twice.
+  return u === '' || name.endsWith(`(${u})`) ? name : `${name} (${u})`;
 }
 
 /**

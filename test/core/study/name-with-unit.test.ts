@@ -8,6 +8,10 @@ describe('nameWithUnit', () => {
     expect(nameWithUnit('Film thickness', 'µm')).toBe('Film thickness (µm)');
     expect(nameWithUnit('Film thickness', '  µm ')).toBe('Film thickness (µm)');
   });
+  it('a name that ends with its unit in parentheses (a CSV header) does not get it twice (common practice)', () => {
+    expect(nameWithUnit('Time (min)', 'min')).toBe('Time (min)');
+    expect(nameWithUnit('Time (min)', 's')).toBe('Time (min) (s)');
+  });
   it('leaves the bare name without a unit (degenerate: missing, empty or blank unit)', () => {
     expect(nameWithUnit('Gloss')).toBe('Gloss');
     expect(nameWithUnit('Gloss', '')).toBe('Gloss');
