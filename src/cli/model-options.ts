@@ -10,7 +10,8 @@ import type { ResponseData } from '../core/study/response-data.ts';
 import { readTable } from '../io/csv/read-table.ts';
 import { tableResponseData } from '../io/csv/table-response-data.ts';
 import { exportedCsvLayout, exportedCsvResponseData } from '../io/csv/exported-csv.ts';
-import { backupResponseData } from '../io/backup/select-study.ts';
+import { backupResponseDataOf } from '../io/backup/select-study.ts';
+import { readBackupFile } from './read-backup-file.ts';
 import { parseAssignments, type OptionSpec } from './args.ts';
 import { readTextFile } from './read-text-file.ts';
 import { withLowerBound } from './lower-bound-option.ts';
@@ -69,7 +70,7 @@ export function loadModelInput(positionals: string[], values: Values): ModelInpu
   const [path] = positionals;
   if (!values.response) throw new InputError('Name the response with --response NAME');
   // A .json file is a backup, measured before it is read; other text is sniffed after reading.
-  const text = readTextFile(path, { backup: /\.json$/i.test(path) });
+  const text = /\.json$/i.test(path) ? '' : readTextFile(path);
   const factors = values.factors?.split(',').map((f) => f.trim()).filter((f) => f !== '');
   let data: ResponseData;
   let codingFromFileOrder = false;
@@ -77,7 +78,7 @@ export function loadModelInput(positionals: string[], values: Values): ModelInpu
     // A Trialbook backup: the study's own factors and coding.
     if (!values.study) throw new InputError('A backup can hold several studies: name one with --study ID-OR-NAME');
     if (values.levels) throw new InputError('A backup carries its own coding: leave out --levels');
-    data = backupResponseData(text, values.study, values.response);
+    data = backupResponseDataOf(readBackupFile(path), values.study, values.response);
   } else {
     const table = readTable(text);
     if (exportedCsvLayout(table) && !values.levels) {

@@ -3,10 +3,9 @@ import { InputError } from '../../core/errors.ts';
 import { analyze as analyzeCore } from '../../core/fit/analyze.ts';
 import { isSecondOrderModel, secondOrderAnalysis } from '../../core/optimum/second-order-analysis.ts';
 import { findResponse } from '../../core/study/run-data.ts';
-import { readBackupSync } from '../../io/backup/backup.ts';
+import { readBackupFile } from '../read-backup-file.ts';
 import { selectStudy } from '../../io/backup/select-study.ts';
 import { parseCommandArgs } from '../args.ts';
-import { readTextFile } from '../read-text-file.ts';
 import type { Command } from '../command.ts';
 import { goalOfResponse, parseGoal } from '../goal-option.ts';
 import { loadModelInput, modelOptionSpec, modelOptionUsage } from '../model-options.ts';
@@ -38,7 +37,7 @@ export const analyze: Command = {
     let goal = values.goal !== undefined ? parseGoal(values.goal) : { kind: 'max' as const };
     if (values.goal === undefined && second && values.study) {
       // A backup's study says what the person wants of the response.
-      const study = selectStudy(readBackupSync(readTextFile(positionals[0], { backup: true })), values.study);
+      const study = selectStudy(readBackupFile(positionals[0]), values.study);
       goal = goalOfResponse(findResponse(study, values.response!).response);
     }
     const so = second ? secondOrderAnalysis(result.model, data.coded, goal) : null;

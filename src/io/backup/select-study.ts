@@ -74,7 +74,11 @@ export function studyRuns(backup: Pick<Backup, 'payload'>, studyId: string): Log
  * Example: backupResponseData(text, 'Invented demo: coating line trial', 'Gloss').y -> [..].
  */
 export function backupResponseData(backupText: string, studyRef: string, responseName: string): ResponseData {
-  const backup = readBackupSync(backupText);
+  return backupResponseDataOf(readBackupSync(backupText), studyRef, responseName);
+}
+
+/** The same, from a backup already read and checked (the command line reads a file once). */
+export function backupResponseDataOf(backup: Pick<Backup, 'payload'>, studyRef: string, responseName: string): ResponseData {
   const study = selectStudy(backup, studyRef);
   const runs = studyRuns(backup, study.id);
   const data = responseDataFromRuns(study, runs, responseName);
