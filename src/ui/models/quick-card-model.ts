@@ -3,8 +3,9 @@
  * number, categorical ones by their two levels), and the prediction of the shown response there
  * from the model fitted in the study's shared analysis (study-analysis-model.ts, so the model
  * chosen on the Effects screen is the one used here), with its intervals, the baseline and each
- * term's contribution, the tested-range check and the standing caution. A number that cannot be
- * read gets a message and leaves the prediction as it was.
+ * term's contribution, the tested-range check and the standing caution; with several responses,
+ * each one's prediction and d and the overall D there (responses-at-settings.ts). A number that
+ * cannot be read gets a message and leaves the prediction as it was.
  */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { toCoded, toReal } from '../../core/factor/coding.ts';
