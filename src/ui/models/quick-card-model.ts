@@ -3,8 +3,9 @@
  * number, categorical ones by their two levels), and the prediction of the shown response there
  * from the model fitted in the study's shared analysis (study-analysis-model.ts, so the model
  * chosen on the Effects screen is the one used here), with its intervals, the baseline and each
- * term's contribution, the tested-range check and the standing caution. A number that cannot be
- * read gets a message and leaves the prediction as it was.
+ * term's contribution, the tested-range check and the standing caution; with several responses,
+ * each one's prediction and d and the overall D there (responses-at-settings.ts). A number that
+ * cannot be read gets a message and leaves the prediction as it was.
  */
 import { computed, createModel, signal, type ReadonlySignal } from '@preact/signals';
 import { toCoded, toReal } from '../../core/factor/coding.ts';
@@ -15,6 +16,7 @@ import { predict, type Prediction } from '../../core/predict/predict.ts';
 import type { Setting } from '../../core/study/study.ts';
 import { setting } from '../lib/format.ts';
 import { problemOf } from '../lib/problem.ts';
+import { responsesAtSettings, type ResponsesAtSettings } from './responses-at-settings.ts';
 import type { AnalysisResult, StudyAnalysis } from './study-analysis-model.ts';
 
 /** How far the sliders reach, in coded units: half a range beyond each tested end. */
@@ -63,6 +65,17 @@ export const QuickCardModel = createModel((shared: StudyAnalysis) => {
     }
   });
 
+  /** Coded value of each factor at the current settings. */
+  const coded = computed<number[]>(() =>
+    factors.value.map((f, i) => {
+      try {
+        return toCoded(f, entry.value.settings[i]);
+      } catch {
+        return 0;
+      }
+    }),
+  );
+
   function update(i: number, patch: { setting?: Setting; text: string; error: string | null }) {
     const e = entry.peek();
     const settings = [...e.settings];
@@ -80,16 +93,9 @@ export const QuickCardModel = createModel((shared: StudyAnalysis) => {
     fieldErrors: computed(() => entry.value.errors),
     analysis,
     prediction,
-    /** Coded value of each factor at the current settings. */
-    coded: computed<number[]>(() =>
-      factors.value.map((f, i) => {
-        try {
-          return toCoded(f, entry.value.settings[i]);
-        } catch {
-          return 0;
-        }
-      }),
-    ),
+    coded,
+    /** With two or more responses: each one's prediction and d, and the overall D, at these settings (null with one). */
+    allResponses: computed<ResponsesAtSettings | null>(() => (shared.responses.value.length > 1 ? responsesAtSettings(shared.responses.value, coded.value) : null)),
     /** The caution lines: the prediction's own, or the standing ones before there is a prediction. */
     caution: computed<readonly string[]>(() => {
       const p = prediction.value;

@@ -8,6 +8,7 @@ import { useModel } from '@preact/signals';
 import type { Prediction } from '../../../core/predict/predict.ts';
 import { CAUTION_MORE, CAUTION_SHORT } from '../../../core/text/caution-short.ts';
 import { intervalText } from '../../../core/text/interval-text.ts';
+import { OVERALL_D_LABEL, RESPONSES_AT_LIMITS, RESPONSES_AT_SETTINGS } from '../../../core/text/responses-at-settings-text.ts';
 import type { Response } from '../../../core/study/response.ts';
 import type { Store } from '../../../store/store.ts';
 import { hrefTo } from '../../app/routes.ts';
@@ -21,6 +22,7 @@ import { StudyHeader } from '../../components/study-header/index.tsx';
 import { num, signed, termLabel, withUnit } from '../../lib/format.ts';
 import { useHeightProperty } from '../../lib/use-height-property.ts';
 import { QuickCardModel, SLIDER_REACH } from '../../models/quick-card-model.ts';
+import type { ResponsesAtSettings } from '../../models/responses-at-settings.ts';
 import { MODEL_CHOICES, QUADRATIC_CHOICE, TRANSFORM_CHOICES } from '../../models/study-analysis-model.ts';
 import { shownStudy, useStudyAnalysis } from '../../lib/use-study-analysis.ts';
 import './style.css';
@@ -59,6 +61,52 @@ function PredictionPanel({ p, response }: { p: Prediction; response: Response })
         </p>
       )}
     </div>
+  );
+}
+
+/** Every response at the card's settings: its prediction and d, then the overall D (a word where there is no number). */
+function AllResponses({ block, href, count }: { block: ResponsesAtSettings; href: string; count: number }) {
+  return (
+    <section class="all-at" aria-labelledby="all-at-h" data-testid="all-at">
+      <h3 id="all-at-h">{RESPONSES_AT_SETTINGS}</h3>
+      <table class="all-at-table">
+        <thead>
+          <tr>
+            <th scope="col">Response</th>
+            <th scope="col">Predicted</th>
+            <th scope="col">d</th>
+          </tr>
+        </thead>
+        <tbody>
+          {block.rows.map((r) => (
+            <tr key={r.name} data-testid="all-at-row">
+              <th scope="row">{r.name}</th>
+              {/* No model to use: one word across both columns. */}
+              {r.fit === null ? (
+                <td class="word" colSpan={2}>
+                  {r.fitWord}
+                </td>
+              ) : (
+                <>
+                  <td class="num">{withUnit(r.fit, r.unit)}</td>
+                  <td class={r.d === null ? 'word' : 'num'}>{r.d === null ? r.dWord : num(r.d, 3)}</td>
+                </>
+              )}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      {block.D !== null ? (
+        <p class="all-at-overall">
+          <span>{OVERALL_D_LABEL}</span>
+          <strong data-testid="all-at-D">{num(block.D, 3)}</strong>
+        </p>
+      ) : (
+        <p class="all-at-missing" data-testid="all-at-missing">{block.missing}</p>
+      )}
+      <p class="quiet">{RESPONSES_AT_LIMITS}</p>
+      <a class="btn ghost block" href={href}>All {count} responses at once ›</a>
+    </section>
   );
 }
 
@@ -124,6 +172,7 @@ export function QuickCardScreen({ store, studyId }: QuickCardScreenProps) {
       <button type="button" class="btn block" onClick={() => model.reset()}>
         Back to the center
       </button>
+      {model.allResponses.value && <AllResponses block={model.allResponses.value} href={hrefTo('severalResponses', { studyId })} count={study.responses.length} />}
       {p && (
         <>
           <h3>Where the prediction comes from</h3>
