@@ -92,7 +92,8 @@ export function ContourChart({ grid, levels, xName, yName, xLabel, yLabel, respo
         ) : null}
         . Lines join settings with the same predicted {responseLabel}.{othersNote ? ` ${othersNote}` : ''}
       </figcaption>
-      <div class="contour-table-wrap" tabIndex={0} role="region" aria-label={`Table of predicted ${responseLabel}`}>
+      {/* Focusable so a keyboard can scroll the table when it is wider than the screen (axe: scrollable-region-focusable). */}
+      <div class="contour-table-wrap" tabIndex={0} role="region" aria-label={`Predicted ${responseLabel}: ${yName} down, ${xName} across`}>
         <table class="chart-table contour-table" data-testid="contour-table">
           <caption>
             Predicted {responseLabel}: {yName} down, {xName} across

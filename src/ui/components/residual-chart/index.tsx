@@ -103,7 +103,11 @@ export function ResidualChart({ points, title, xLabel, yLabel, xColumn, caption,
     const xmax = Math.max(...xs);
     const xpad = (xmax - xmin) * 0.08 || 1;
     const labels = new Map(points.map((p) => [p.x, p.label]));
-    const step = Math.max(1, Math.ceil(points.length / 10));
+    // Every step-th run is named on the axis: at most 10, and no closer than the widest name
+    // needs at 16 px (about 10 px a digit plus a gap): at 360 px "10" and "11" ran together.
+    const plotWidth = Math.max(260, el.clientWidth) - 80;
+    const widest = Math.max(...points.map((p) => p.label.length)) * 10 + 12;
+    const step = Math.max(1, Math.ceil(points.length / 10), Math.ceil((points.length * widest) / plotWidth));
     return new UPlot(
       {
         width: Math.max(260, el.clientWidth),

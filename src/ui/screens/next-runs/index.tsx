@@ -23,6 +23,7 @@ import { CAUTION } from '../../../core/predict/caution.ts';
 import { FoldoverPart, isFraction } from './foldover-part.tsx';
 import { PathChart } from '../../components/path-chart/index.tsx';
 import { SaveOutcome } from '../../components/save-outcome/index.tsx';
+import { logMoreRunsText } from '../../../core/text/log-more-runs.ts';
 import './style.css';
 
 export type NextRunsScreenProps = { readonly store: Store; readonly studyId: string };
@@ -51,7 +52,7 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
       <ChoiceButtons label="Response" options={study.responses.map((r, i) => ({ value: i, label: r.name }))} value={shown.index} onChoose={(i) => shared.show(i)} />
       {model.modelProblem.value && (
         <p class="problem input" role="alert">
-          {model.modelProblem.value} Log more runs, then come back here.
+          {logMoreRunsText(model.modelProblem.value)}
         </p>
       )}
       <SaveOutcome saved={model.saved.value} problem={model.saveProblem.value} />
