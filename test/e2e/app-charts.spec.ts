@@ -111,3 +111,19 @@ test('at phone width nothing on the analysis screen runs off the side', async ({
   expect(widest).toBeLessThanOrEqual(390);
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
 });
+
+test('a chart is drawn again for its new width when the screen turns sideways', async ({ page }) => {
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.goto(`/#/study/${studyId}/analysis`);
+  const canvas = page.locator('.interaction-chart canvas').first();
+  await expect(canvas).toBeVisible();
+  const narrow = await canvas.evaluate((c) => c.getBoundingClientRect().width);
+  await page.setViewportSize({ width: 844, height: 390 });
+  // The chart follows its box: wider than before, and still inside the box (nothing clipped).
+  await expect.poll(async () => canvas.evaluate((c) => c.getBoundingClientRect().width)).toBeGreaterThan(narrow + 100);
+  const fits = await page.locator('.interaction-chart canvas').first().evaluate((c) => {
+    const box = c.closest('figure')!.getBoundingClientRect();
+    return c.getBoundingClientRect().right <= box.right + 1;
+  });
+  expect(fits).toBe(true);
+});

@@ -1,7 +1,7 @@
 /**
  * Draws a uPlot chart into a box, loading uPlot only when the first chart is shown (so it stays
- * out of the first screen's download), redrawing when `deps` change and destroying the chart
- * when the component goes away. The one place the charts share this lifecycle.
+ * out of the first screen's download), redrawing when `deps` change or the box changes width,
+ * and destroying the chart when the component goes away. The one place the charts share this lifecycle.
  */
 import { useSignal, type ReadonlySignal } from '@preact/signals';
 import { useEffect, useRef } from 'preact/hooks';
@@ -20,12 +20,26 @@ export function useUplot(
   useEffect(() => {
     let chart: UPlotType | null = null;
     let canceled = false;
+    let watch: ResizeObserver | null = null;
     import('uplot').then(
       ({ default: UPlot }) => {
         const el = box.current;
         if (canceled || !el) return;
         chart = draw(UPlot, el);
         state.value = 'ready';
+        // A chart is drawn for its box's width: when the box changes width (a phone turned
+        // sideways, a window resized) it is drawn again, so nothing is clipped or left narrow.
+        let width = el.clientWidth;
+        if (typeof ResizeObserver === 'function') {
+          watch = new ResizeObserver(() => {
+            const now = el.clientWidth;
+            if (canceled || Math.abs(now - width) < 2) return;
+            width = now;
+            chart?.destroy();
+            chart = draw(UPlot, el);
+          });
+          watch.observe(el);
+        }
       },
       () => {
         if (!canceled) state.value = 'failed';
@@ -33,6 +47,7 @@ export function useUplot(
     );
     return () => {
       canceled = true;
+      watch?.disconnect();
       chart?.destroy();
     };
   }, deps);
