@@ -113,7 +113,7 @@ export function analysisText(a: Analysis, options: AnalysisTextOptions = {}): st
     out.push('');
     out.push(`Curvature from ${c.nCenter} center runs: factorial minus center, adjusted for the model terms = ${num(c.estimate)}, std error ${num(c.se)}, t ${num(c.t)}, p ${pValue(c.p)}`);
     const v = a.verdicts.find((x) => x.kind === 'curvature');
-    if (v && v.kind === 'curvature') out.push(`  ${curvatureStatement(v)}`);
+    if (v && v.kind === 'curvature') out.push(`  ${curvatureStatement(v, options.unit)}`);
   }
   // A second-order model's curvature is in its squares: their own tests, said in one note.
   const squares = a.verdicts.find((x) => x.kind === 'squares');

@@ -25,12 +25,14 @@ function curvatureModeled(p: number | null, squares: readonly string[]): string 
 /**
  * What the curvature test found, in one sentence (the screens' fit list, the text report).
  * Cost O(1). Example: for p = 0.8137 over 5 center runs and estimate -0.035 ->
- * "No clear curvature (p = 0.8137): the 5 center runs agree with the factorial average (difference -0.035)."
+ * "No clear curvature (p = 0.8137): the 5 center runs agree with the factorial average (difference -0.035)";
+ * with unit '%', "(difference -0.035 %)".
  */
-export function curvatureStatement(v: CurvatureVerdict): string {
+export function curvatureStatement(v: CurvatureVerdict, unit?: string): string {
   if (v.outcome === 'curved') return (v.squares ?? []).length > 0 ? curvatureModeled(v.p, v.squares!) : curvedFinding(v.p);
   if (v.outcome === 'flat') {
-    return `No clear curvature (${pPhrase(v.p)}): the ${v.nCenter} center run${v.nCenter === 1 ? '' : 's'} agree${v.nCenter === 1 ? 's' : ''} with the factorial average (difference ${shortNumber(v.estimate)}).`;
+    const size = `${shortNumber(v.estimate)}${unit ? ` ${unit}` : ''}`;
+    return `No clear curvature (${pPhrase(v.p)}): the ${v.nCenter} center run${v.nCenter === 1 ? '' : 's'} agree${v.nCenter === 1 ? 's' : ''} with the factorial average (difference ${size}).`;
   }
   return v.reason === 'no-spread'
     ? 'The curvature test cannot be made: the repeated runs agree exactly, so pure error is zero.'

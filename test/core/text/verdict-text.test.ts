@@ -80,6 +80,11 @@ describe('verdictText: one sentence per verdict', () => {
     expect(curvatureStatement({ ...flat, nCenter: 1 })).toMatch(/the 1 center run agrees/);
   });
 
+  it('the difference found is given in the response unit when there is one (common practice)', () => {
+    expect(curvatureStatement(flat, '%')).toMatch(/\(difference -0\.035 %\)\.$/);
+    expect(curvatureStatement(flat)).toMatch(/\(difference -0\.035\)\.$/);
+  });
+
   it('predictions and the path open their curvature note with the same finding', () => {
     const finding = curvatureStatement({ ...flat, outcome: 'curved', p: 0.001 });
     expect(curvatureNote(0.001, 'prediction').startsWith(finding)).toBe(true);

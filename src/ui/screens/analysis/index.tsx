@@ -253,7 +253,7 @@ export function AnalysisScreen({ store, studyId }: AnalysisScreenProps) {
               </li>
               {result.analysis.verdicts.map((v) =>
                 v.kind === 'curvature' ? (
-                  <li key="curvature">{v.outcome === 'curved' ? <strong>{curvatureStatement(v)}</strong> : curvatureStatement(v)}</li>
+                  <li key="curvature">{v.outcome === 'curved' ? <strong>{curvatureStatement(v)}</strong> : curvatureStatement(v, response.unit)}</li>
                 ) : null,
               )}
             </ul>
