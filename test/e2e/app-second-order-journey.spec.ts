@@ -126,7 +126,7 @@ test('from curvature to axial runs, the quadratic model, the contour chart and s
   await expect(page.getByRole('heading', { name: 'Contour chart' })).toBeVisible();
 
   // Several responses: the best compromise has D above 0 and keeps every setting inside the box.
-  await page.getByRole('link', { name: 'All 2 responses at once ›' }).click();
+  await page.getByRole('link', { name: 'All 2 responses at once ›' }).first().click();
   const D = parseFloat(await page.getByTestId('mr-D').innerText());
   expect(D).toBeGreaterThan(0);
   expect(D).toBeLessThanOrEqual(1);

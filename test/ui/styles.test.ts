@@ -15,12 +15,26 @@ function cssFiles(dir: string): string[] {
 }
 
 /** Each rule as (selector, property) pairs: one per comma-separated selector and declaration. */
-function declarations(text: string): [string, string][] {
-  const body = text.replace(/\/\*[\s\S]*?\*\//g, '').replace(/@import[^;]*;/g, '');
+function rules(body: string, context: string): [string, string][] {
   return [...body.matchAll(/([^{}]+)\{([^{}]*)\}/g)].flatMap((m) => {
     const props = m[2].split(';').map((d) => d.split(':')[0].trim()).filter((p) => p !== '');
-    return m[1].split(',').flatMap((sel) => props.map((p): [string, string] => [sel.trim().replace(/\s+/g, ' '), p]));
+    return m[1].split(',').flatMap((sel) => props.map((p): [string, string] => [`${context}${sel.trim().replace(/\s+/g, ' ')}`, p]));
   });
+}
+
+/**
+ * The same, with a rule inside an @media block keyed by its condition: a narrow screen's own
+ * size for a selector is a responsive rule, not a patch, but setting it twice under one
+ * condition still is.
+ */
+function declarations(text: string): [string, string][] {
+  let body = text.replace(/\/\*[\s\S]*?\*\//g, '').replace(/@import[^;]*;/g, '');
+  const out: [string, string][] = [];
+  for (const m of [...body.matchAll(/@media([^{]*)\{((?:[^{}]*\{[^{}]*\})*[^{}]*)\}/g)]) {
+    out.push(...rules(m[2], `@media${m[1].trim().replace(/\s+/g, ' ')} `));
+    body = body.replace(m[0], '');
+  }
+  return [...out, ...rules(body, '')];
 }
 
 describe('stylesheets', () => {
