@@ -16,6 +16,7 @@ export interface FactorRow {
   readonly unit: string;
   readonly low: string;
   readonly high: string;
+  /** The two named levels of a categorical factor (the first is coded -1). */
   readonly levelA: string;
   readonly levelB: string;
 }

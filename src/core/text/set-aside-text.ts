@@ -11,12 +11,17 @@ import { shortNumber } from './number-text.ts';
 /** What the sentences need of one set-aside record (the store's row has these fields and more). */
 export interface SetAsideFacts {
   readonly kind: 'study' | 'revision';
+  /** The record's id. */
   readonly id: string;
   readonly studyId: string;
+  /** The planned run of a revision; null for a study. */
   readonly plannedRun: number | null;
-  /** The field that differs from the device's record with the same id; null when it was set aside because it depends on one. */
+  /** The first field that differs from the device's record with the same id ('' for the whole
+   * record); null for a record set aside because it depends on another one. */
   readonly field: string | null;
+  /** Why, in a sentence. */
   readonly reason: string;
+  /** The device that wrote the file, when known. */
   readonly fromDevice: string | null;
 }
 

@@ -15,6 +15,7 @@ import type { AddedBlock } from '../../core/study/added-block.ts';
 import { currentRun, type LoggedRun, type RunRevision, type StudyRecord } from '../../core/study/study.ts';
 import { canonicalJson } from '../../core/records/canonical-json.ts';
 import { firstDifference } from '../../core/records/first-difference.ts';
+import type { SetAsideFacts } from '../../core/text/set-aside-text.ts';
 import type { BackupPayload } from './backup.ts';
 
 /** Runs whose edits diverged: more than one revision that nobody has built on. */
@@ -26,19 +27,8 @@ export interface MergeConflict {
   readonly revisionIds: readonly string[];
 }
 
-/** A record of the file that was not merged, kept apart with the reason. */
-export interface SetAside {
-  readonly kind: 'study' | 'revision';
-  /** The record's id. */
-  readonly id: string;
-  readonly studyId: string;
-  /** The planned run of a revision; null for a study. */
-  readonly plannedRun: number | null;
-  /** The first field that differs from the device's record with the same id ('' for the whole
-   * record); null for a record set aside because it depends on another one. */
-  readonly field: string | null;
-  /** Why, in a sentence. */
-  readonly reason: string;
+/** A record of the file that was not merged, kept apart with the reason (the facts the screens word, and the record; the store adds the device). */
+export interface SetAside extends Omit<SetAsideFacts, 'fromDevice'> {
   /** The file's record, as it came. */
   readonly record: StudyRecord | RunRevision;
 }

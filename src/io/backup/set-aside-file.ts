@@ -9,21 +9,15 @@
 import type { RunRevision, StudyRecord } from '../../core/study/study.ts';
 import { APP_NAME, APP_VERSION } from '../app-version.ts';
 import { payloadChecksum } from './backup.ts';
+import type { SetAside } from './merge.ts';
 
 export const SET_ASIDE_FORMAT = 'trialbook-set-aside';
 export const SET_ASIDE_VERSION = 1;
 
 /** One record as the file holds it (the store's row without its key). */
-export interface SetAsideEntry {
-  readonly kind: 'study' | 'revision';
-  readonly id: string;
-  readonly studyId: string;
-  readonly plannedRun: number | null;
-  readonly field: string | null;
-  readonly reason: string;
+export interface SetAsideEntry extends SetAside {
   readonly fromDevice: string | null;
   readonly setAsideAt: string;
-  readonly record: StudyRecord | RunRevision;
 }
 
 /**

@@ -4,7 +4,7 @@
  * The plan is built by the core's buildDesign on every change, so the preview shows exactly what
  * "Create study" will store. A wrong entry gets a message and nothing is created.
  */
-import { factorRowProblem, factorRowSpec, sameNames, swapLowHigh, type FactorRowProblem } from '../../core/factor/factor-row-problem.ts';
+import { factorRowProblem, factorRowSpec, sameNames, swapLowHigh, type FactorRow, type FactorRowProblem } from '../../core/factor/factor-row-problem.ts';
 import { factorLetters } from '../../core/factor/letters.ts';
 import { catalogFraction } from '../../core/design/catalog.ts';
 import { parseFraction } from '../../core/design/fractional.ts';
@@ -33,16 +33,9 @@ import { problemOf, type Problem } from '../lib/problem.ts';
 import type { SecondOrderProperties } from '../../core/design/second-order-plan.ts';
 import { defaultCenterRuns, secondOrderPlanOf, type AxialChoice, type DesignFamily } from './second-order-choice.ts';
 
-export interface FactorDraft {
+/** A factor row of the form as typed (core/factor/factor-row-problem.ts), with its list key. */
+export interface FactorDraft extends FactorRow {
   readonly key: number;
-  readonly kind: 'numeric' | 'categorical';
-  readonly name: string;
-  readonly unit: string;
-  readonly low: string;
-  readonly high: string;
-  /** The two named levels of a categorical factor (the first is coded -1). */
-  readonly levelA: string;
-  readonly levelB: string;
 }
 
 export interface ResponseDraft {
