@@ -66,6 +66,7 @@ describe('importing a Trialbook CSV export keeps the plan (planned vs actual set
     expect(chains(b)).toEqual(CHAINS);
     expect(chains(c)).toEqual(CHAINS);
     expect(a.aliased).toEqual(b.aliased);
+    expect(a).toEqual(b); // every figure of the analysis, as for the study it came from
     a.terms.forEach((t, j) => {
       expect(t.coef).toBeCloseTo(b.terms[j].coef, 10);
       expect(t.coef).toBeCloseTo(c.terms[j].coef, 10);
