@@ -1,6 +1,11 @@
 import 'fake-indexeddb/auto';
 import { describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { analyze as analyzeCommand } from '../../../src/cli/commands/analyze.ts';
+import { analysisJson } from '../../../src/cli/report/analysis-json.ts';
 import { analyze } from '../../../src/core/fit/analyze.ts';
 import { responseDataFromRuns } from '../../../src/core/study/run-data.ts';
 import { exportedCsvResponseData } from '../../../src/io/csv/exported-csv.ts';
@@ -71,6 +76,11 @@ describe('importing a Trialbook CSV export keeps the plan (planned vs actual set
       expect(t.coef).toBeCloseTo(b.terms[j].coef, 10);
       expect(t.coef).toBeCloseTo(c.terms[j].coef, 10);
     });
+    // `analyze file.csv --json` on the same file prints what the imported study's analysis gives.
+    const file = join(mkdtempSync(join(tmpdir(), 'trialbook-')), 'laser.csv');
+    writeFileSync(file, csv);
+    const printed = JSON.parse(await analyzeCommand.run([file, '--response', 'Roughness', '--json']));
+    expect(printed).toEqual(JSON.parse(JSON.stringify(analysisJson(a))));
   });
 
   it('a planned run not yet logged stays in the plan without a logged run', async () => {
