@@ -44,6 +44,7 @@ describe('a CSV export of the demo study imported back gives the same Effects', 
     const copied = (await listRuns(store, copy.id)).find((r) => r.plannedRun === run.plannedRun)!;
     expect(copied.actual[0]).toBe(off);
     expect(copy.design.runs[run.plannedRun - 1].coded).toEqual(original.design.runs[run.plannedRun - 1].coded);
+    expect(copy.design.runs).toEqual(original.design.runs); // the same plan, run for run
 
     const a = openStudyAnalysis(store, studyId);
     const b = openStudyAnalysis(store, copy.id);

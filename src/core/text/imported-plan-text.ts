@@ -26,6 +26,11 @@ export function runKindUnknown(where: string, got: string, kinds: readonly strin
   return `${where}: the kind of run needs one of ${kinds.join(', ')}, got "${got}"`;
 }
 
+/** A standard-order or replicate cell that is not a whole number from 1. */
+export function wholeNumberNeeded(where: string, what: string, got: string, blankAllowed: boolean): string {
+  return `${where}: ${what} needs a whole number from 1${blankAllowed ? ' (or an empty cell)' : ''}, got "${got}"`;
+}
+
 /** The design summary of a study imported with its planned settings. */
 export function importedWithPlanSummary(rows: number): string {
   return `Imported from a CSV file of ${rows} ${rows === 1 ? 'row' : 'rows'} with each run's planned and actual settings; the plan is the file's planned settings.`;

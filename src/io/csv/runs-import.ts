@@ -34,9 +34,10 @@ import {
   plannedColumnsPartial,
   runKindUnknown,
   unloggedRowsNote,
+  wholeNumberNeeded,
 } from '../../core/text/imported-plan-text.ts';
 
-export type ColumnRole = 'factor' | 'planned' | 'response' | 'block' | 'kind' | 'notes' | 'excluded' | 'reason' | 'operator' | 'time' | 'ignore';
+export type ColumnRole = 'factor' | 'planned' | 'response' | 'block' | 'kind' | 'standardOrder' | 'replicate' | 'notes' | 'excluded' | 'reason' | 'operator' | 'time' | 'ignore';
 
 export interface FactorColumn {
   readonly column: string;
@@ -74,6 +75,9 @@ export interface CsvMapping {
   readonly block?: string;
   /** The column of each run's kind (factorial, center, axial, path, confirmation); from its settings when not given. */
   readonly kind?: string;
+  /** The columns of each run's standard order (empty for none) and replicate; from its settings when not given. */
+  readonly standardOrder?: string;
+  readonly replicate?: string;
   readonly notes?: string;
   readonly excluded?: string;
   readonly reason?: string;
@@ -224,6 +228,10 @@ function exportedInspection(table: Table, title: string): CsvInspection | null {
   readings.forEach((c) => roles.set(c, 'response'));
   roles.set(layout.kind, 'kind');
   if (layout.block >= 0) roles.set(layout.block, 'block');
+  const stdOrder = bare.indexOf('std order');
+  const replicate = bare.indexOf('replicate');
+  if (stdOrder >= 0) roles.set(stdOrder, 'standardOrder');
+  if (replicate >= 0) roles.set(replicate, 'replicate');
   const named = (role: ColumnRole, word: string) => {
     const c = bare.indexOf(word);
     if (c >= 0 && !roles.has(c)) roles.set(c, role);
@@ -244,6 +252,8 @@ function exportedInspection(table: Table, title: string): CsvInspection | null {
     }),
     ...(layout.block >= 0 ? { block: table.header[layout.block] } : {}),
     kind: table.header[layout.kind],
+    ...(stdOrder >= 0 ? { standardOrder: table.header[stdOrder] } : {}),
+    ...(replicate >= 0 ? { replicate: table.header[replicate] } : {}),
     ...Object.fromEntries(Object.entries(optional).filter(([, v]) => v !== undefined)),
   };
   const columns = table.header.map((_, c) => columnInfo(table, c, roles.get(c) ?? 'ignore'));
@@ -287,6 +297,16 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
   const opt = (name: string | undefined, what: string) => (name === undefined ? -1 : claim(name, what));
   const bIdx = opt(mapping.block, 'block');
   const kIdx = opt(mapping.kind, 'kind');
+  const sIdx = opt(mapping.standardOrder, 'standard order');
+  const repIdx = opt(mapping.replicate, 'replicate');
+  /** A whole number from 1 in a cell (empty allowed where `blank` says so), or a message naming the cell. */
+  const wholeCell = (i: number, c: number, what: string, blank: boolean): number | null => {
+    const v = table.rows[i][c].trim();
+    if (v === '' && blank) return null;
+    const n = parseNumber(v);
+    if (!Number.isInteger(n) || n < 1) throw new InputError(wholeNumberNeeded(cellAt(i, table, c), what, v, blank));
+    return n;
+  };
   const nIdx = opt(mapping.notes, 'notes');
   const xIdx = opt(mapping.excluded, 'excluded');
   const reIdx = opt(mapping.reason, 'reason');
@@ -436,11 +456,13 @@ export function mapRunsCsv(text: string, mapping: CsvMapping): CsvRunsImport {
       kind = k as RunKind;
     }
     const key = coded.map((v) => v.toPrecision(12)).join(',');
-    const replicate = (seenPoints.get(key) ?? 0) + 1;
-    seenPoints.set(key, replicate);
+    const counted = (seenPoints.get(key) ?? 0) + 1;
+    seenPoints.set(key, counted);
+    const replicate = repIdx >= 0 ? wholeCell(i, repIdx, 'the replicate', false)! : counted;
+    const standardOrder = sIdx >= 0 ? wholeCell(i, sIdx, 'the standard order', true) : corner ? 1 + coded.reduce((s, v, j) => s + (v > 0 ? 2 ** j : 0), 0) : null;
     designRuns.push({
       run: i + 1,
-      standardOrder: corner ? 1 + coded.reduce((s, v, j) => s + (v > 0 ? 2 ** j : 0), 0) : null,
+      standardOrder,
       replicate,
       block,
       originBlock: block,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { plannedColumnsPartial, unloggedRowsNote, importedWithPlanSummary } from '../../../src/core/text/imported-plan-text.ts';
+import { plannedColumnsPartial, unloggedRowsNote, importedWithPlanSummary, wholeNumberNeeded } from '../../../src/core/text/imported-plan-text.ts';
 
 // Wording checks (plain English agreement of number; common practice).
 describe('imported plan text', () => {
@@ -10,5 +10,7 @@ describe('imported plan text', () => {
     expect(unloggedRowsNote(3)).toMatch(/^3 planned runs have .* they are in the plan/);
     expect(importedWithPlanSummary(1)).toContain('1 row ');
     expect(importedWithPlanSummary(11)).toContain('11 rows ');
+    expect(wholeNumberNeeded('Row 2', 'the replicate', 'x', false)).toBe('Row 2: the replicate needs a whole number from 1, got "x"');
+    expect(wholeNumberNeeded('Row 2', 'the standard order', 'x', true)).toBe('Row 2: the standard order needs a whole number from 1 (or an empty cell), got "x"');
   });
 });

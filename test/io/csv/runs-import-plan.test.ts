@@ -55,7 +55,7 @@ describe('importing a Trialbook CSV export keeps the plan (planned vs actual set
     const imported = await importText(csv);
     expect(imported.study.factors).toEqual(original.study.factors);
     expect(imported.study.design.runs.map((r) => r.coded)).toEqual(original.study.design.runs.map((r) => r.coded));
-    expect(imported.study.design.runs.map((r) => r.kind)).toEqual(original.study.design.runs.map((r) => r.kind));
+    expect(imported.study.design.runs.map((r) => [r.kind, r.standardOrder, r.replicate, r.block])).toEqual(original.study.design.runs.map((r) => [r.kind, r.standardOrder, r.replicate, r.block]));
     expect(imported.runs.map((r) => r.actual)).toEqual(original.runs.map((r) => r.actual));
     expect(imported.runs[1].actual[0]).toBe(89); // planned 90, logged 89
     expect(imported.study.design.runs[1].coded[0]).toBe(1);
@@ -131,6 +131,7 @@ describe('importing a Trialbook CSV export keeps the plan (planned vs actual set
     expect(() => mapRunsCsv(csvOf(rows), { ...mapping, factors: mapping.factors.map((f, j) => (j === 2 ? { ...f, planned: undefined } : f)) })).toThrow(
       'Map a planned-settings column for every factor, or for none: Focus has none',
     );
+    expect(() => mapRunsCsv(edited(1, rows[0].indexOf('Std order'), '2.5'), mapping)).toThrow('Row 2, column 2 ("Std order"): the standard order needs a whole number from 1 (or an empty cell), got "2.5"');
     expect(() => mapRunsCsv(edited(1, rows[0].indexOf('Kind'), 'corner'), mapping)).toThrow(/^Row 2, column 5 \("Kind"\): the kind of run needs one of factorial, center, axial, path, confirmation, got "corner"$/);
     const store = await freshStore();
     expect(await listStudies(store)).toEqual([]);
