@@ -64,8 +64,8 @@ function where(table: Table, r: number, c: number): string {
   return `Row ${rowNumber(table, r)}, column ${c + 1} ("${table.header[c]}")`;
 }
 
-/** Recovers one factor's coding from the rows' actual settings and coded values. */
-function factorSpec(table: Table, f: ExportedCsvLayout['factors'][number], rows: readonly number[]): FactorSpec {
+/** Recovers one factor's coding from the rows' actual settings and coded values (also used by runs-import.ts). */
+export function factorSpec(table: Table, f: ExportedCsvLayout['factors'][number], rows: readonly number[]): FactorSpec {
   const pairs = rows
     .filter((r) => cell(table, r, f.actual) !== '')
     .map((r) => {
