@@ -33,6 +33,8 @@ export interface BoxCox {
 const LAMBDA_MIN = -3;
 const LAMBDA_MAX = 3;
 const GRID_STEP = 0.1;
+/** A local: module bindings are getters under some loaders, and the refinements test it every step. */
+const PRECISION = BOX_COX_PRECISION;
 
 /** `x`: the model matrix, column-major n x p (intercept included); `yp`: the response minus its bound. */
 export function boxCox(x: Float64Array, n: number, p: number, yp: readonly number[]): BoxCox | null {
@@ -105,7 +107,7 @@ export function boxCoxOn(model: ResidualSs, yp: readonly number[]): BoxCox | nul
 /** The maximiser of f on [a, b] to BOX_COX_PRECISION by Brent's method, starting from x in (a, b). */
 function brentMax(f: (x: number) => number, a: number, b: number, x: number): number {
   const golden = (3 - Math.sqrt(5)) / 2;
-  const tol = BOX_COX_PRECISION / 2;
+  const tol = PRECISION / 2;
   let fx = -f(x);
   let w = x;
   let v = x;
@@ -177,7 +179,7 @@ function illinoisRoot(g: (x: number) => number, inside: number, outside: number)
   let ga = g(a);
   let gb = g(b);
   let side = 0;
-  for (let iter = 0; iter < 200 && Math.abs(b - a) > BOX_COX_PRECISION; iter++) {
+  for (let iter = 0; iter < 200 && Math.abs(b - a) > PRECISION; iter++) {
     let c = ga - gb !== 0 ? (a * gb - b * ga) / (gb - ga) : (a + b) / 2;
     if (!(Math.min(a, b) < c && c < Math.max(a, b))) c = (a + b) / 2;
     const gc = g(c);
