@@ -86,8 +86,9 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
   const vifs = columnVifs(fit, coded, blocks);
   const est = estimateTerms(fit, factors, blockLevels, alpha, vifs);
   const keptColumns = Array.from(fit.kept, (j) => fit.columns[j]);
+  const vifLimit = VIF_LIMIT; // a local: module bindings are getters under some loaders, read here once per term
   const collinear = est.terms.flatMap((t) =>
-    t.vif != null && t.vif > VIF_LIMIT ? [{ letters: t.estimates ?? t.letters, vif: t.vif, runs: vifDrivers(keptColumns, coded, blocks, y, keptColumns.findIndex((c) => c.kind === 'term' && c.term === t.term), data.labels) }] : [],
+    t.vif != null && t.vif > vifLimit ? [{ letters: t.estimates ?? t.letters, vif: t.vif, runs: vifDrivers(keptColumns, coded, blocks, y, keptColumns.findIndex((c) => c.kind === 'term' && c.term === t.term), data.labels) }] : [],
   );
   const repeats = findRepeats({ coded, y, points: data.points, blocks, cells, k: factors.length, nominal });
   const pe = repeats.pure;
