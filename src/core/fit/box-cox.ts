@@ -73,13 +73,18 @@ export function boxCoxOn(model: ResidualSs, yp: readonly number[]): BoxCox | nul
   let best = 0;
   for (let s = 0; s <= steps; s++) {
     const lambda = LAMBDA_MIN + s * GRID_STEP;
-    if (Math.abs(lambda) < GRID_STEP / 2) grid[s] = loglik(0);
-    else {
+    // The step to the next power rides in the same pass over the runs as the transform.
+    if (Math.abs(lambda) < GRID_STEP / 2) {
+      grid[s] = loglik(0);
+      for (let i = 0; i < n; i++) power[i] *= stepBy[i];
+    } else {
       const scale = lambda * Math.exp((lambda - 1) * logG);
-      for (let i = 0; i < n; i++) w[i] = (power[i] - 1) / scale;
+      for (let i = 0; i < n; i++) {
+        w[i] = (power[i] - 1) / scale;
+        power[i] *= stepBy[i];
+      }
       grid[s] = toLoglik(model.ss(w));
     }
-    for (let i = 0; i < n; i++) power[i] *= stepBy[i];
     if (grid[s] > grid[best]) best = s;
   }
   // Brent's method (parabolic steps, golden-section when they misbehave) in the grid cells either
