@@ -97,7 +97,9 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
   // On Yates' path every term column is 0 at the center runs and balanced over the factorial
   // ones, so the adjusted curvature is exactly the mean difference (curvature.ts): no side fit.
   const curv = cells ? curvature(kinds, y, pe) : adjustedCurvature(keptColumns, coded, blocks, kinds, y, pe);
-  const lenthOut = lenthStep({ factors, coded, y, points: data.points, blocks, kinds, groups: repeats.groups, terms: est.terms, nominal, ...(screening ? { contrasts: screening.contrasts } : {}) });
+  // The saturated fits of Lenth's step resume from the model's own factorisations where its columns lead theirs.
+  const prefix = { nominal: fit.planQr ?? fit.qr, actual: fit.qr };
+  const lenthOut = lenthStep({ factors, coded, y, points: data.points, blocks, kinds, groups: repeats.groups, terms: est.terms, nominal, prefix, ...(screening ? { contrasts: screening.contrasts } : {}) });
   const terms = fit.dfResidual === 0 && lenthOut.lenth ? withLenthT(est.terms, lenthOut.lenth.pse) : est.terms;
   const diag = runDiagnostics(fit, y, data.labels, kinds, est.sigma, tables.ssTotal);
   const verdicts = analysisVerdicts({
