@@ -23,13 +23,16 @@ function checkDf(d1: number, d2: number, what: string): void {
   }
 }
 
+/** A local: module bindings are getters under some loaders, and tail runs once per p-value. */
+const SERIES_ODDS = TAIL_SERIES_ODDS;
+
 /** P(F <= f) (upper = false) or P(F >= f) (upper = true) for f > 0 finite (validated inputs). */
 function tail(f: number, d1: number, d2: number, upper: boolean): number {
   const a = 0.5 * d1;
   const b = 0.5 * d2;
   if (f <= d2 / d1) {
     const r = (d1 * f) / d2; // odds x / y, at most 1
-    if (r < TAIL_SERIES_ODDS && !upper) {
+    if (r < SERIES_ODDS && !upper) {
       const lnR = Math.log(d1 / d2) + Math.log(f);
       if (lnR < LN_ASYMPTOTE) return Math.exp(a * lnR - Math.log(a) - lnBeta(a, b));
     }
@@ -38,7 +41,7 @@ function tail(f: number, d1: number, d2: number, upper: boolean): number {
     return upper ? incompleteBetaXY(y, x, b, a) : incompleteBetaXY(x, y, a, b);
   }
   const w = d2 / d1 / f; // odds y / x, below 1
-  if (w < TAIL_SERIES_ODDS && upper) {
+  if (w < SERIES_ODDS && upper) {
     const lnW = Math.log(d2 / d1) - Math.log(f);
     if (lnW < LN_ASYMPTOTE) return Math.exp(b * lnW - Math.log(b) - lnBeta(a, b));
   }

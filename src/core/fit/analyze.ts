@@ -86,8 +86,9 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
   const vifs = columnVifs(fit, coded, blocks);
   const est = estimateTerms(fit, factors, blockLevels, alpha, vifs);
   const keptColumns = Array.from(fit.kept, (j) => fit.columns[j]);
+  const vifLimit = VIF_LIMIT; // a local: module bindings are getters under some loaders, read here once per term
   const collinear = est.terms.flatMap((t) =>
-    t.vif != null && t.vif > VIF_LIMIT ? [{ letters: t.estimates ?? t.letters, vif: t.vif, runs: vifDrivers(keptColumns, coded, blocks, y, keptColumns.findIndex((c) => c.kind === 'term' && c.term === t.term), data.labels) }] : [],
+    t.vif != null && t.vif > vifLimit ? [{ letters: t.estimates ?? t.letters, vif: t.vif, runs: vifDrivers(keptColumns, coded, blocks, y, keptColumns.findIndex((c) => c.kind === 'term' && c.term === t.term), data.labels) }] : [],
   );
   const repeats = findRepeats({ coded, y, points: data.points, blocks, cells, k: factors.length, nominal });
   const pe = repeats.pure;
@@ -96,7 +97,9 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
   // On Yates' path every term column is 0 at the center runs and balanced over the factorial
   // ones, so the adjusted curvature is exactly the mean difference (curvature.ts): no side fit.
   const curv = cells ? curvature(kinds, y, pe) : adjustedCurvature(keptColumns, coded, blocks, kinds, y, pe);
-  const lenthOut = lenthStep({ factors, coded, y, points: data.points, blocks, kinds, groups: repeats.groups, terms: est.terms, nominal, ...(screening ? { contrasts: screening.contrasts } : {}) });
+  // The saturated fits of Lenth's step resume from the model's own factorisations where its columns lead theirs.
+  const prefix = { nominal: fit.planQr ?? fit.qr, actual: fit.qr };
+  const lenthOut = lenthStep({ factors, coded, y, points: data.points, blocks, kinds, groups: repeats.groups, terms: est.terms, nominal, prefix, ...(screening ? { contrasts: screening.contrasts } : {}) });
   const terms = fit.dfResidual === 0 && lenthOut.lenth ? withLenthT(est.terms, lenthOut.lenth.pse) : est.terms;
   const diag = runDiagnostics(fit, y, data.labels, kinds, est.sigma, tables.ssTotal);
   const verdicts = analysisVerdicts({

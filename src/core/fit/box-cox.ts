@@ -33,6 +33,8 @@ export interface BoxCox {
 const LAMBDA_MIN = -3;
 const LAMBDA_MAX = 3;
 const GRID_STEP = 0.1;
+/** A local: module bindings are getters under some loaders, and the refinements test it every step. */
+const PRECISION = BOX_COX_PRECISION;
 
 /** `x`: the model matrix, column-major n x p (intercept included); `yp`: the response minus its bound. */
 export function boxCox(x: Float64Array, n: number, p: number, yp: readonly number[]): BoxCox | null {
@@ -71,20 +73,26 @@ export function boxCoxOn(model: ResidualSs, yp: readonly number[]): BoxCox | nul
   let best = 0;
   for (let s = 0; s <= steps; s++) {
     const lambda = LAMBDA_MIN + s * GRID_STEP;
-    if (Math.abs(lambda) < GRID_STEP / 2) grid[s] = loglik(0);
-    else {
+    // The step to the next power rides in the same pass over the runs as the transform.
+    if (Math.abs(lambda) < GRID_STEP / 2) {
+      grid[s] = loglik(0);
+      for (let i = 0; i < n; i++) power[i] *= stepBy[i];
+    } else {
       const scale = lambda * Math.exp((lambda - 1) * logG);
-      for (let i = 0; i < n; i++) w[i] = (power[i] - 1) / scale;
+      for (let i = 0; i < n; i++) {
+        w[i] = (power[i] - 1) / scale;
+        power[i] *= stepBy[i];
+      }
       grid[s] = toLoglik(model.ss(w));
     }
-    for (let i = 0; i < n; i++) power[i] *= stepBy[i];
     if (grid[s] > grid[best]) best = s;
   }
   // Brent's method (parabolic steps, golden-section when they misbehave) in the grid cells either
   // side of the best grid point: Brent, Algorithms for Minimization without Derivatives (1973),
   // chapter 5, as in Press et al., Numerical Recipes, 3rd ed., section 10.3.
-  const lambda = brentMax(loglik, LAMBDA_MIN + Math.max(0, best - 1) * GRID_STEP, LAMBDA_MIN + Math.min(steps, best + 1) * GRID_STEP, LAMBDA_MIN + best * GRID_STEP);
-  const lmax = Math.max(loglik(lambda), grid[best]);
+  // Brent returns L at its answer too (the same number loglik(lambda) would give again).
+  const { x: lambda, fx: atLambda } = brentMax(loglik, LAMBDA_MIN + Math.max(0, best - 1) * GRID_STEP, LAMBDA_MIN + Math.min(steps, best + 1) * GRID_STEP, LAMBDA_MIN + best * GRID_STEP);
+  const lmax = Math.max(atLambda, grid[best]);
   // chi-square(1, 0.95) is the square of the normal 0.975 quantile (3.8415).
   const cut = lmax - normalQuantile(0.975) ** 2 / 2;
   const end = (dir: -1 | 1): number | null => {
@@ -92,7 +100,7 @@ export function boxCoxOn(model: ResidualSs, yp: readonly number[]): BoxCox | nul
     while (s + dir >= 0 && s + dir <= steps && grid[s + dir] >= cut) s += dir;
     if (s + dir < 0 || s + dir > steps) return null;
     const inside = s === best ? lambda : LAMBDA_MIN + s * GRID_STEP;
-    return illinoisRoot((l) => loglik(l) - cut, inside, LAMBDA_MIN + (s + dir) * GRID_STEP);
+    return illinoisRoot((l) => loglik(l) - cut, inside, LAMBDA_MIN + (s + dir) * GRID_STEP, s === best ? atLambda - cut : undefined);
   };
   const lo = end(-1);
   const hi = end(1);
@@ -102,10 +110,10 @@ export function boxCoxOn(model: ResidualSs, yp: readonly number[]): BoxCox | nul
   return { lambda, ci: [lo, hi], suggestion };
 }
 
-/** The maximiser of f on [a, b] to BOX_COX_PRECISION by Brent's method, starting from x in (a, b). */
-function brentMax(f: (x: number) => number, a: number, b: number, x: number): number {
+/** The maximiser x of f on [a, b] to BOX_COX_PRECISION by Brent's method, starting from x in (a, b), with fx = f(x). */
+function brentMax(f: (x: number) => number, a: number, b: number, x: number): { x: number; fx: number } {
   const golden = (3 - Math.sqrt(5)) / 2;
-  const tol = BOX_COX_PRECISION / 2;
+  const tol = PRECISION / 2;
   let fx = -f(x);
   let w = x;
   let v = x;
@@ -162,22 +170,22 @@ function brentMax(f: (x: number) => number, a: number, b: number, x: number): nu
       }
     }
   }
-  return x;
+  return { x, fx: -fx };
 }
 
 /**
  * The root of g between `inside` (g >= 0) and `outside` (g < 0) to BOX_COX_PRECISION by the
  * Illinois variant of false position (Dowell and Jarratt 1971, BIT 11, 168-174): the end kept
  * twice running has its value halved, so both ends close in; a step that leaves the bracket
- * (rounding) bisects instead.
+ * (rounding) bisects instead. `gInside`: g(inside) when the caller has it already.
  */
-function illinoisRoot(g: (x: number) => number, inside: number, outside: number): number {
+function illinoisRoot(g: (x: number) => number, inside: number, outside: number, gInside?: number): number {
   let a = inside;
   let b = outside;
-  let ga = g(a);
+  let ga = gInside ?? g(a);
   let gb = g(b);
   let side = 0;
-  for (let iter = 0; iter < 200 && Math.abs(b - a) > BOX_COX_PRECISION; iter++) {
+  for (let iter = 0; iter < 200 && Math.abs(b - a) > PRECISION; iter++) {
     let c = ga - gb !== 0 ? (a * gb - b * ga) / (gb - ga) : (a + b) / 2;
     if (!(Math.min(a, b) < c && c < Math.max(a, b))) c = (a + b) / 2;
     const gc = g(c);

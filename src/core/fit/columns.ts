@@ -27,6 +27,9 @@ export function modelColumns(levels: readonly number[], terms: readonly Term[]):
   return cols;
 }
 
+/** A local: module bindings are getters under some loaders, and this runs once per matrix entry. */
+const valueOfTerm = termValue;
+
 /** Value of a column at one run: 1, the block contrast, or the term's value (termValue: a product, or x_i^2). */
 export function columnValue(c: Column, coded: ArrayLike<number>, block: number | undefined, lastBlock: number): number {
   switch (c.kind) {
@@ -35,7 +38,7 @@ export function columnValue(c: Column, coded: ArrayLike<number>, block: number |
     case 'block':
       return block === c.block ? 1 : block === lastBlock ? -1 : 0;
     case 'term':
-      return termValue(c.term, coded);
+      return valueOfTerm(c.term, coded);
   }
 }
 

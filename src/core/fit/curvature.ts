@@ -27,14 +27,15 @@ export interface Curvature {
 
 /** Each run's kind by its actual settings: 'factorial', 'center' or 'other'. */
 export function runKinds(factors: readonly Factor[], coded: readonly (readonly number[])[]): ('factorial' | 'center' | 'other')[] {
+  const tol = CENTER_TOLERANCE; // a local: module bindings are getters under some loaders
   return coded.map((row) => {
     let center = true;
     let corner = true;
     for (let f = 0; f < factors.length; f++) {
       const v = row[f];
-      const atCorner = Math.abs(Math.abs(v) - 1) <= CENTER_TOLERANCE;
+      const atCorner = Math.abs(Math.abs(v) - 1) <= tol;
       if (!atCorner) corner = false;
-      if (factors[f].kind === 'numeric' ? Math.abs(v) > CENTER_TOLERANCE : !atCorner) center = false;
+      if (factors[f].kind === 'numeric' ? Math.abs(v) > tol : !atCorner) center = false;
     }
     return corner ? 'factorial' : center ? 'center' : 'other';
   });

@@ -10,24 +10,27 @@
  * two-factor interactions -> 7 kept columns, aliased BC (= AD), BD (= AC), CD (= AB).
  */
 import type { Column } from './columns.ts';
+import type { QrFactor } from '../linalg/householder-qr.ts';
 import { fitQr } from './fit-qr.ts';
 import type { LinearFit } from './linear-fit.ts';
 
 /**
  * `planFit`: the lean fit on the nominal matrix when the caller already has it (saves one
  * factorisation); `lean`: the actual fit is lean too (fit-qr.ts: no (X'X)^-1, no leverage), for a
- * caller that needs only the estimates (the saturated set of Lenth's method).
+ * caller that needs only the estimates (the saturated set of Lenth's method); `actualPrefix`: a
+ * factorisation of the first kept columns on the actual settings, reused when it matches
+ * (householder-qr.ts: the same result, less work).
  */
-export function fitOnPlan(columns: readonly Column[], xNominal: Float64Array, xActual: Float64Array, y: readonly number[], planFit?: LinearFit, lean = false): LinearFit {
+export function fitOnPlan(columns: readonly Column[], xNominal: Float64Array, xActual: Float64Array, y: readonly number[], planFit?: LinearFit, lean = false, actualPrefix?: QrFactor): LinearFit {
   const n = y.length;
   const plan = planFit ?? fitQr(columns, xNominal, y, true);
   const m = plan.kept.length;
   const kept = Array.from(plan.kept, (j) => columns[j]);
   const x = new Float64Array(n * m);
   for (let a = 0; a < m; a++) x.set(xActual.subarray(plan.kept[a] * n, (plan.kept[a] + 1) * n), a * n);
-  const act = fitQr(kept, x, y, lean);
+  const act = fitQr(kept, x, y, lean, actualPrefix);
   const up = (a: number): number => plan.kept[a];
   // Should the actual settings lose a further column (they almost never do), it is listed too.
   const extra = act.aliased.map((al) => ({ column: up(al.column), combination: al.combination.map((w) => ({ column: up(w.column), weight: w.weight })) }));
-  return { ...act, columns, kept: Int32Array.from(act.kept, up), aliased: [...plan.aliased, ...extra] };
+  return { ...act, columns, kept: Int32Array.from(act.kept, up), aliased: [...plan.aliased, ...extra], ...(plan.qr ? { planQr: plan.qr } : {}) };
 }

@@ -7,7 +7,7 @@
  * Cost O(n p^2).
  */
 import { ALIAS_WEIGHT_TOLERANCE, ORTHOGONALITY_TOLERANCE, RANK_TOLERANCE } from '../tolerance.ts';
-import { applyQ, applyQt, householderQr } from '../linalg/householder-qr.ts';
+import { applyQ, applyQt, householderQr, type QrFactor } from '../linalg/householder-qr.ts';
 import { crossInverse, invertUpper, solveUpper } from '../linalg/triangular.ts';
 import type { Column } from './columns.ts';
 import type { AliasedColumn, LinearFit } from './linear-fit.ts';
@@ -16,10 +16,11 @@ import type { AliasedColumn, LinearFit } from './linear-fit.ts';
  * With `lean`, only the coefficients, sums of squares, residuals and aliases are computed
  * (leverage and (X'X)^-1 are left empty): what the saturated fit for Lenth's method needs.
  */
-export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<number>, lean = false): LinearFit {
+export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<number>, lean = false, prefix?: QrFactor): LinearFit {
   const n = y.length;
   const p = columns.length;
-  const f = householderQr(x, n, p, RANK_TOLERANCE);
+  // `prefix`: a factorisation of the first columns of x, reused when it matches (householder-qr.ts).
+  const f = householderQr(x, n, p, RANK_TOLERANCE, prefix);
   const m = f.rank;
   const qty = Float64Array.from(y);
   applyQt(f, qty);

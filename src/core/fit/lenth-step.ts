@@ -21,6 +21,7 @@ import { halfNormalQuantiles } from './half-normal.ts';
 import { lenth, type LenthResult } from './lenth.ts';
 import { labelGroups, settingGroups } from './pure-error.ts';
 import { saturatedEffects } from './saturated-effects.ts';
+import type { QrFactor } from '../linalg/householder-qr.ts';
 
 export interface LenthStep {
   /** Lenth's figures, or null when the factorial runs are replicated or too few (fewer than 2). */
@@ -49,6 +50,8 @@ export interface LenthInput {
    * N - 1 columns, the unused ones included): one value per run, with each column's name and
    * letters. Absent: the saturated set of saturated-effects.ts.
    */
+  /** The model's factorisations, which the saturated fits resume from when its columns lead theirs (saturated-effects.ts). */
+  readonly prefix?: { readonly nominal?: QrFactor; readonly actual?: QrFactor };
   readonly contrasts?: { readonly columns: readonly (readonly number[])[]; readonly labels: readonly { readonly name: string; readonly letters: string }[] };
 }
 
@@ -79,6 +82,7 @@ export function lenthStep(input: LenthInput): LenthStep {
       factorialRows.map((i) => y[i]),
       blocks ? factorialRows.map((i) => blocks[i]) : null,
       nominal ? factorialRows.map((i) => coded[i]) : undefined,
+      input.prefix,
     );
     if (sat.length > 0) {
       result = lenth(sat.map((s) => s.effect));

@@ -36,4 +36,6 @@ export interface LinearFit {
   readonly method: 'qr' | 'yates';
   /** On the QR path, the factorisation of the columns, kept for steps that fit other responses to the same model (residual-ss.ts). */
   readonly qr?: QrFactor;
+  /** On a fit made on the plan (fit-on-plan.ts), the factorisation of the nominal matrix, from which a wider fit on the same plan can resume. */
+  readonly planQr?: QrFactor;
 }

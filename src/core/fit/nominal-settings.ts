@@ -40,7 +40,9 @@ export function nominalSettings(
   coded: readonly (readonly number[])[],
   planned?: readonly (readonly number[] | null)[] | null,
 ): NominalSettings {
+  // Locals: module bindings are getters under some loaders, and these are read per setting.
   const tol = CENTER_TOLERANCE;
+  const exactTol = SETTING_TOLERANCE;
   let moved = 0;
   let away = 0;
   const nominal = coded.map((row, i) => {
@@ -57,7 +59,7 @@ export function nominalSettings(
         if (plan || Math.abs(v) < 1) runAway = true;
         return v;
       }
-      if (Math.abs(v - level) > SETTING_TOLERANCE) moved++;
+      if (Math.abs(v - level) > exactTol) moved++;
       return level;
     });
     if (runAway) away++;

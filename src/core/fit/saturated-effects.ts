@@ -9,12 +9,15 @@
  * With `actual` given, `coded` holds the nominal settings (nominal-settings.ts), which decide
  * the set, and the effects are estimated on the actual settings (fit-on-plan.ts), so that the
  * half-normal chart shows the same kind of estimates as the model's bars.
- * Cost O(n r T) for n factorial runs, rank r and T terms tried.
+ * Cost O(n r T) for n factorial runs, rank r and T terms tried. `prefix`: the model's factorisations
+ * (nominal and actual settings); when the model's columns lead the saturated set on the same runs,
+ * the saturated fits resume from them (householder-qr.ts), with the same result.
  */
 import { compareTerms, termOrder, type Term } from '../model/term.ts';
 import { blockLevels, modelColumns, modelMatrix } from './columns.ts';
 import { fitOnPlan } from './fit-on-plan.ts';
 import { fitQr } from './fit-qr.ts';
+import type { QrFactor } from '../linalg/householder-qr.ts';
 
 export interface SaturatedEffect {
   readonly term: Term;
@@ -29,6 +32,7 @@ export function saturatedEffects(
   y: readonly number[],
   blocks: readonly number[] | null,
   actual?: readonly (readonly number[])[],
+  prefix?: { readonly nominal?: QrFactor; readonly actual?: QrFactor },
 ): SaturatedEffect[] {
   const levels = blockLevels(blocks);
   const target = coded.length; // the most columns the runs can separate
@@ -45,14 +49,14 @@ export function saturatedEffects(
     for (let t = 1; t < 1 << k; t++) if (termOrder(t) <= order) terms.push(t);
     terms.sort(compareTerms);
     const cols = modelColumns(levels, terms);
-    fit = fitQr(cols, modelMatrix(cols, coded, blocks), y, true);
+    fit = fitQr(cols, modelMatrix(cols, coded, blocks), y, true, prefix?.nominal);
     if (fit.kept.length >= target) break;
   }
   if (!fit) return [];
   // The set comes from the nominal settings (`coded`); the effects, like the model's, from the actual ones.
   // The lean nominal fit just made is the plan: fitOnPlan need not factorise it again; only the
   // estimates are read here, so the actual fit is lean as well (no (X'X)^-1, no leverage).
-  if (actual) fit = fitOnPlan(fit.columns, new Float64Array(0), modelMatrix(fit.columns, actual, blocks), y, fit, true);
+  if (actual) fit = fitOnPlan(fit.columns, new Float64Array(0), modelMatrix(fit.columns, actual, blocks), y, fit, true, prefix?.actual);
   const byColumn = new Map<number, { term: Term; weight: number }[]>();
   for (const a of fit.aliased) {
     const c = fit.columns[a.column];

@@ -31,6 +31,7 @@ export function columnVifs(fit: LinearFit, coded: readonly (readonly number[])[]
     for (let a = 0; a < m; a++) out.push(fit.columns[fit.kept[a]].kind === 'term' ? 1 : null);
     return out;
   }
+  const value = columnValue; // a local: module bindings are getters under some loaders
   const v = new Float64Array(n);
   for (let a = 0; a < m; a++) {
     const c = fit.columns[fit.kept[a]];
@@ -39,7 +40,7 @@ export function columnVifs(fit: LinearFit, coded: readonly (readonly number[])[]
       continue;
     }
     let mean = 0;
-    for (let i = 0; i < n; i++) mean += v[i] = columnValue(c, coded[i], blocks?.[i], last);
+    for (let i = 0; i < n; i++) mean += v[i] = value(c, coded[i], blocks?.[i], last);
     mean /= n;
     let s = 0;
     for (let i = 0; i < n; i++) s += (v[i] - mean) ** 2;

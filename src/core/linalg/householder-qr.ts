@@ -30,10 +30,19 @@ export interface QrFactor {
    * the weights b with x_aliased = X_kept b.
    */
   readonly aliasedTop: Float64Array;
+  /** The matrix factorised (a reference; not to be modified), so that a wider one can resume from it. */
+  readonly x: Float64Array;
+  /** The rank tolerance it was made with. */
+  readonly tol: number;
 }
 
-/** Factorises X (column-major, n x p; not modified). */
-export function householderQr(x: Float64Array, n: number, p: number, tol: number = RANK_TOLERANCE): QrFactor {
+/**
+ * Factorises X (column-major, n x p; not modified). With `prefix`, a factor made with the same
+ * tolerance whose matrix equals the first prefix.p columns of X entry for entry, the work on those
+ * columns is taken from it: columns are processed left to right and each depends only on those
+ * before it, so the result is the same to the last bit. A prefix that does not match is ignored.
+ */
+export function householderQr(x: Float64Array, n: number, p: number, tol: number = RANK_TOLERANCE, prefix?: QrFactor): QrFactor {
   const v = new Float64Array(n * Math.min(n, p));
   const beta = new Float64Array(Math.min(n, p));
   const kept: number[] = [];
@@ -42,7 +51,25 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
   const topOfAliased: Float64Array[] = [];
   const col = new Float64Array(n);
   let rank = 0;
-  for (let j = 0; j < p; j++) {
+  let start = 0;
+  if (prefix && prefix.tol === tol && samePrefix(prefix, x, n, p)) {
+    rank = prefix.rank;
+    start = prefix.p;
+    v.set(prefix.v);
+    beta.set(prefix.beta);
+    for (let c = 0; c < rank; c++) {
+      kept.push(prefix.kept[c]);
+      const top = new Float64Array(c + 1);
+      for (let i = 0; i <= c; i++) top[i] = prefix.r[c * rank + i];
+      topOfKept.push(top);
+    }
+    // An aliased column's top was cut at the rank of its time; beyond it the prefix holds zeros, as the result will.
+    for (let a = 0; a < prefix.aliased.length; a++) {
+      aliased.push(prefix.aliased[a]);
+      topOfAliased.push(prefix.aliasedTop.slice(a * rank, (a + 1) * rank));
+    }
+  }
+  for (let j = start; j < p; j++) {
     const off = j * n;
     let norm0 = 0;
     for (let i = 0; i < n; i++) {
@@ -105,7 +132,16 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
     v: v.subarray(0, n * rank),
     beta: beta.subarray(0, rank),
     aliasedTop,
+    x,
+    tol,
   };
+}
+
+/** Whether `prefix` factorised exactly the first prefix.p columns of x (n rows). */
+function samePrefix(prefix: QrFactor, x: Float64Array, n: number, p: number): boolean {
+  if (prefix.n !== n || prefix.p > p || prefix.x.length !== n * prefix.p) return false;
+  for (let i = 0; i < n * prefix.p; i++) if (!Object.is(prefix.x[i], x[i])) return false;
+  return true;
 }
 
 /** y <- Q'y in place (Golub and Van Loan section 5.1.6: apply the reflectors in order). */

@@ -22,12 +22,14 @@ export function testedExtent(factors: readonly Factor[], coded: readonly (readon
   const k = factors.length;
   const pos = new Array<number>(k).fill(0);
   const neg = new Array<number>(k).fill(0);
+  const tol = CENTER_TOLERANCE; // a local: module bindings are getters under some loaders
+  const numeric = factors.map((fac) => fac.kind === 'numeric'); // read k^2 times per run
   for (const row of coded) {
     for (let f = 0; f < k; f++) {
-      if (factors[f].kind !== 'numeric') continue;
+      if (!numeric[f]) continue;
       let onAxis = true;
       for (let g = 0; g < k && onAxis; g++) {
-        if (g !== f && factors[g].kind === 'numeric' && !(Math.abs(row[g]) <= CENTER_TOLERANCE)) onAxis = false;
+        if (g !== f && numeric[g] && !(Math.abs(row[g]) <= tol)) onAxis = false;
       }
       if (!onAxis || !Number.isFinite(row[f])) continue;
       if (row[f] > pos[f]) pos[f] = row[f];

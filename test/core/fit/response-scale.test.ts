@@ -130,6 +130,29 @@ describe('analyze is exact under a power-of-two change of unit, from 1e-300 to 1
   });
 });
 
+describe('scaling back keeps the shape of the analysis (invented data, fast-check)', () => {
+  // The scale-back rebuilds each term and run; an analysis already on scale (largest |y| in [1, 2))
+  // is returned as it is, so its keys are the reference: every term (lenthT, estimates and vif
+  // included when present) and every run must come back with the same keys in the same order.
+  it('terms, runs and the intercept of y 2^k have the keys of those of y, in order', () => {
+    fc.assert(
+      fc.property(experiment, fc.integer({ min: -1000, max: 990 }).filter((v) => v !== 0), ({ k, coded, y }, shift) => {
+        const e = scaleExponent(y);
+        const onScale = y.map((v) => timesPow2(v, -e));
+        const terms = termsUpToOrder(k, k);
+        const a = analyze(data(k, coded, onScale), { terms });
+        const b = analyze(data(k, coded, onScale.map((v) => timesPow2(v, shift))), { terms });
+        expect(b.terms.map((t) => Object.keys(t))).toEqual(a.terms.map((t) => Object.keys(t)));
+        expect(b.runs.map((r) => Object.keys(r))).toEqual(a.runs.map((r) => Object.keys(r)));
+        expect(Object.keys(b.intercept)).toEqual(Object.keys(a.intercept));
+        expect(b.terms.map((t) => t.lenthT ?? null)).toEqual(a.terms.map((t) => t.lenthT ?? null));
+        expect(b.terms.map((t) => t.estimates ?? null)).toEqual(a.terms.map((t) => t.estimates ?? null));
+      }),
+      { numRuns: 100 },
+    );
+  });
+});
+
 describe('analyze: Montgomery, Design and Analysis of Experiments, 8th ed., Example 6.1 (2^3 plasma etch, n = 2) in units 1e200 and 1e-200 apart', () => {
   const base = fixtureData('montgomery-8e-ex6-1-plasma-etch-2x3.csv', { factors: ['Gap', 'Flow', 'Power'], response: 'Etch rate' });
   const terms = termsUpToOrder(3, 3);
