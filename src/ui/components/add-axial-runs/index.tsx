@@ -4,6 +4,7 @@
  * Before the tap it shows what the augmented design can estimate, the axial settings in real
  * units, a warning for each past the factorial range, and the standing caution.
  */
+import { nameWithUnit } from '../../../core/study/name-with-unit.ts';
 import { useModel } from '@preact/signals';
 import { CAUTION } from '../../../core/predict/caution.ts';
 import type { Store } from '../../../store/store.ts';
@@ -76,9 +77,10 @@ export function AddAxialRuns({ store, shared }: AddAxialRunsProps) {
                 <tbody>
                   {p.value.properties.axialSettings.map((s) => (
                     <tr key={s.name} class={s.outside ? 'outside' : ''}>
-                      <th scope="row">{s.name}</th>
-                      <td>{setting(s.low, s.unit)}</td>
-                      <td>{setting(s.high, s.unit)}</td>
+                      {/* The unit goes with the name, so a narrow phone never breaks a number from its unit. */}
+                      <th scope="row">{nameWithUnit(s.name, s.unit)}</th>
+                      <td>{setting(s.low)}</td>
+                      <td>{setting(s.high)}</td>
                     </tr>
                   ))}
                 </tbody>
