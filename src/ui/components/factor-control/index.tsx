@@ -12,6 +12,7 @@ import type { Setting } from '../../../core/study/study.ts';
 import { coded as codedText, setting as settingText } from '../../lib/format.ts';
 import { ChoiceButtons } from '../choice-buttons/index.tsx';
 import { SignToggle } from '../sign-toggle/index.tsx';
+import { NumberInput } from '../number-input/index.tsx';
 import './style.css';
 
 export type FactorControlProps = {
@@ -58,16 +59,7 @@ export function FactorControl({ factor, index, value, text, coded, error, reach,
         {factor.name} ({factor.letter})
       </label>
       <div class="factor-entry">
-        <input
-          id={id}
-          class="num"
-          type="text"
-          inputMode="decimal"
-          autocomplete="off"
-          value={text}
-          aria-invalid={error ? true : undefined}
-          onInput={(e) => onText((e.currentTarget as HTMLInputElement).value)}
-        />
+        <NumberInput id={id} value={text} invalid={!!error} onText={onText} />
         {factor.unit && <span class="unit">{factor.unit}</span>}
         {negativeAllowed({ kind: 'setting', factor }) && <SignToggle text={text} what={factor.name} controls={id} onText={onText} />}
         <span class="coded" data-testid={`coded-${index}`}>

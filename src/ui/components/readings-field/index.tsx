@@ -8,6 +8,7 @@ import { nameWithUnit } from '../../../core/study/name-with-unit.ts';
 import type { Response } from '../../../core/study/response.ts';
 import { withUnit } from '../../lib/format.ts';
 import { SignToggle } from '../sign-toggle/index.tsx';
+import { NumberInput } from '../number-input/index.tsx';
 import './style.css';
 
 export type ReadingsFieldProps = {
@@ -33,17 +34,7 @@ export function ReadingsField({ response, index, boxes, mean, error, disabled, o
         const what = boxes.length === 1 ? `${response.name} reading` : `${response.name} reading ${j + 1}`;
         return (
           <div class="reading" key={j}>
-            <input
-              class="num"
-              type="text"
-              inputMode="decimal"
-              autocomplete="off"
-              aria-label={what}
-              id={`reading-${index}-${j}`}
-              value={b}
-              aria-invalid={error ? true : undefined}
-              onInput={(e) => onReading(j, (e.currentTarget as HTMLInputElement).value)}
-            />
+            <NumberInput id={`reading-${index}-${j}`} ariaLabel={what} value={b} invalid={!!error} onText={(t) => onReading(j, t)} />
             {signed && <SignToggle text={b} what={what} controls={`reading-${index}-${j}`} onText={(t) => onReading(j, t)} />}
             {boxes.length > 1 && (
               <button type="button" class="btn ghost square" aria-label={`Remove ${response.name} reading ${j + 1}`} onClick={() => onRemove(j)}>

@@ -6,6 +6,7 @@
 import type { AxialChoice } from '../../models/second-order-choice.ts';
 import { ChoiceButtons } from '../choice-buttons/index.tsx';
 import { CountStepper } from '../count-stepper/index.tsx';
+import { NumberInput } from '../number-input/index.tsx';
 import './style.css';
 
 export type SecondOrderFieldsProps = {
@@ -51,7 +52,7 @@ export function SecondOrderFields(p: SecondOrderFieldsProps) {
           <label for="ns-so-alpha" class="field-name">
             Axial distance (coded)
           </label>
-          <input id="ns-so-alpha" class="num" type="text" inputMode="decimal" autocomplete="off" value={p.axialText} onInput={(e) => p.onAxialText((e.currentTarget as HTMLInputElement).value)} />
+          <NumberInput id="ns-so-alpha" value={p.axialText} onText={p.onAxialText} />
         </div>
       )}
       <ChoiceButtons label="Blocks" options={BLOCKS} value={p.blocks} onChoose={p.onBlocks} />

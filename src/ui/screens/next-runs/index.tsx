@@ -24,6 +24,7 @@ import { FoldoverPart, isFraction } from './foldover-part.tsx';
 import { PathChart } from '../../components/path-chart/index.tsx';
 import { SaveOutcome } from '../../components/save-outcome/index.tsx';
 import { logMoreRunsText } from '../../../core/text/log-more-runs.ts';
+import { NumberInput } from '../../components/number-input/index.tsx';
 import './style.css';
 
 export type NextRunsScreenProps = { readonly store: Store; readonly studyId: string };
@@ -66,7 +67,7 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
             Target {response.name}
             {response.unit ? ` (${response.unit})` : ''}
           </label>
-          <input id="solve-target" class="num" type="text" inputMode="decimal" autocomplete="off" value={model.targetText.value} onInput={(e) => model.setTarget((e.currentTarget as HTMLInputElement).value)} />
+          <NumberInput id="solve-target" value={model.targetText.value} onText={(t) => model.setTarget(t)} />
         </div>
         {solution && !solution.ok && (
           <p class="problem input" role="alert">
@@ -120,7 +121,7 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
                 Step of {baseFactor?.name ?? 'the base factor'}
                 {baseFactor?.kind === 'numeric' && baseFactor.unit ? ` (${baseFactor.unit})` : ''}
               </label>
-              <input id="path-step" class="num" type="text" inputMode="decimal" autocomplete="off" value={model.pathStepText.value} onInput={(e) => model.setPathStep((e.currentTarget as HTMLInputElement).value)} />
+              <NumberInput id="path-step" value={model.pathStepText.value} onText={(t) => model.setPathStep(t)} />
             </div>
             <CountStepper id="path-steps" label="Number of steps" value={model.pathStepsText.value} min={1} max={20} onChange={(t) => model.setPathSteps(t)} />
             {path && !path.ok && model.pathStepText.value.trim() !== '' && (

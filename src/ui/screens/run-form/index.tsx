@@ -22,6 +22,7 @@ import { fileName, mimeOf, saveText } from '../../lib/save-file.ts';
 import { problemOf } from '../../lib/problem.ts';
 import { readingBoxes, RunFormModel } from '../../models/run-form-model.ts';
 import { hrefTo } from '../../app/routes.ts';
+import { NumberInput } from '../../components/number-input/index.tsx';
 import './style.css';
 
 export type RunFormScreenProps = { readonly store: Store; readonly studyId: string; readonly plannedRun: number };
@@ -148,16 +149,7 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
                 </div>
                 {f.kind === 'numeric' ? (
                   <div class="factor-entry">
-                    <input
-                      id={`actual-${i}`}
-                      class="num"
-                      type="text"
-                      inputMode="decimal"
-                      autocomplete="off"
-                      value={typed}
-                      aria-invalid={error ? true : undefined}
-                      onInput={(e) => model.setActual(i, (e.currentTarget as HTMLInputElement).value)}
-                    />
+                    <NumberInput id={`actual-${i}`} value={typed} invalid={!!error} onText={(t) => model.setActual(i, t)} />
                     {f.unit && <span class="unit">{f.unit}</span>}
                     {negativeAllowed({ kind: 'setting', factor: f }) && <SignToggle text={typed} what={`${f.name} actual`} controls={`actual-${i}`} disabled={busy} onText={(t) => model.setActual(i, t)} />}
                   </div>

@@ -20,6 +20,7 @@ import { StudyHeader } from '../../components/study-header/index.tsx';
 import { coded, num, setting, withUnit } from '../../lib/format.ts';
 import { SeveralResponsesModel, type ResponseRow, type SeveralResponses, type SeveralResult } from '../../models/several-responses-model.ts';
 import { openStudyAnalysis } from '../../models/study-analysis-model.ts';
+import { NumberInput } from '../../components/number-input/index.tsx';
 import './style.css';
 
 export type SeveralResponsesScreenProps = { readonly store: Store; readonly studyId: string };
@@ -60,17 +61,7 @@ function NumberField({ m, row, field, label }: { m: SeveralResponses; row: Respo
         <span class="mr-hidden">{row.name}: </span>
         {label}
       </label>
-      <input
-        id={id}
-        class="num"
-        type="text"
-        inputMode="decimal"
-        autocomplete="off"
-        value={row.entry[field]}
-        aria-invalid={invalid(row, field)}
-        aria-describedby={invalid(row, field) ? `mr-${row.index}-error` : undefined}
-        onInput={(e) => m.setField(row.name, field, (e.currentTarget as HTMLInputElement).value)}
-      />
+      <NumberInput id={id} value={row.entry[field]} invalid={invalid(row, field)} describedBy={invalid(row, field) ? `mr-${row.index}-error` : undefined} onText={(t) => m.setField(row.name, field, t)} />
     </div>
   );
 }
