@@ -31,7 +31,7 @@ import { BOX_COX_PRECISION, RANK_TOLERANCE } from '../tolerance.ts';
 import { residualSsQr, type ResidualSs } from './residual-ss.ts';
 import { transformToken } from './response-transform.ts';
 import { newtonInBracket, secantInBracket } from './bracketed-root.ts';
-import { hermiteLevel, hermiteStationary } from './hermite-cell.ts';
+import { hermiteLevel, hermiteSlopes, hermiteStationary } from './hermite-cell.ts';
 
 export interface BoxCox {
   readonly lambda: number;
@@ -190,7 +190,9 @@ export function boxCoxOn(model: ResidualSs, yp: readonly number[]): BoxCox | nul
     if (s < 0 || s > steps) return null;
     const outside = LAMBDA_MIN + s * GRID_STEP;
     const guess = hermiteLevel(inside, outside, lIn, gridL[s], dIn, gridD[s], cut);
-    return newtonInBracket(crossing, inside, outside, guess, PRECISION / 8);
+    const [d1, d2] = hermiteSlopes(inside, outside, lIn, gridL[s], dIn, gridD[s], guess);
+    // The cubic's curvature near the crossing, with a margin of 4 for its own error.
+    return newtonInBracket(crossing, inside, outside, guess, PRECISION / 8, (4 * Math.abs(d2)) / (2 * Math.abs(d1)));
   };
   const lo = end(-1);
   const hi = end(1);

@@ -11,16 +11,19 @@
  * about C s_k^2 and the secant's about s_k sqrt(|s_k / s_(k-1)|) (orders 2 and 1.618, Atkinson, An
  * Introduction to Numerical Analysis, 2nd ed., sections 2.2-2.3), with C = |s_k| / s_(k-1)^2. The
  * search stops, without a further evaluation, once that estimate is below tol, or when the
- * bracket is narrower than tol. Throws nothing; a value that is not finite ends the search at the
+ * bracket is narrower than tol. Newton's first step has no step before it: a caller that knows
+ * the curvature near the start passes C = |g''| / (2 |g'|) (Atkinson, section 2.2: the error after
+ * a step s is about C s^2), else the first step is taken as its own error estimate. Throws nothing; a value that is not finite ends the search at the
  * bracket's middle.
  * Example: newtonInBracket(x -> [x^2 - 2, 2x], 1, 2, 1.4, 1e-9) -> 1.41421356...
  */
 
 /** `f(x)` returns [g(x), g'(x)]; g(inside) >= 0 > g(outside); `x` a start between them. */
-export function newtonInBracket(f: (x: number) => readonly [number, number], inside: number, outside: number, x: number, tol: number): number {
+export function newtonInBracket(f: (x: number) => readonly [number, number], inside: number, outside: number, x: number, tol: number, curvature = Number.NaN): number {
   let a = inside;
   let b = outside;
   let last = Number.NaN;
+  let c = curvature;
   for (let iter = 0; iter < 100; iter++) {
     if (!within(x, a, b)) x = (a + b) / 2;
     const [g, d] = f(x);
@@ -32,14 +35,17 @@ export function newtonInBracket(f: (x: number) => readonly [number, number], ins
     const next = x + step;
     if (!within(next, a, b)) {
       last = Number.NaN;
+      c = Number.NaN;
       x = (a + b) / 2;
       if (Math.abs(b - a) < tol) return x;
       continue;
     }
     const size = Math.abs(step);
-    const predicted = Number.isFinite(last) && last > 0 ? (size / (last * last)) * size * size : size;
+    if (Number.isFinite(last) && last > 0) c = size / (last * last);
+    const predicted = Number.isFinite(c) ? c * size * size : size;
     if (predicted < tol || Math.abs(b - a) < tol) return next;
     last = size;
+    c = Number.NaN;
     x = next;
   }
   return (a + b) / 2;

@@ -52,3 +52,12 @@ export function hermiteLevel(a: number, b: number, fa: number, fb: number, da: n
   }
   return a + ((lo + hi) / 2) * h;
 }
+
+/** p'(x) and p''(x) of the same cubic: the refinement's estimate of its first Newton step's error (bracketed-root.ts). */
+export function hermiteSlopes(a: number, b: number, fa: number, fb: number, da: number, db: number, x: number): readonly [number, number] {
+  const h = b - a;
+  const t = (x - a) / h;
+  const d1 = ((6 * t * t - 6 * t) * fa + (3 * t * t - 4 * t + 1) * h * da + (-6 * t * t + 6 * t) * fb + (3 * t * t - 2 * t) * h * db) / h;
+  const d2 = ((12 * t - 6) * fa + (6 * t - 4) * h * da + (-12 * t + 6) * fb + (6 * t - 2) * h * db) / (h * h);
+  return [d1, d2];
+}
