@@ -106,21 +106,22 @@ export function residualSsYates(cells: Int32Array, k: number, terms: readonly Te
       return Math.max(0, s - model / nf);
     },
     cross(a, b, out) {
-      let ma = 0;
-      let mb = 0;
-      for (let i = 0; i < n; i++) {
-        ma += a[i];
-        mb += b[i];
-      }
-      ma /= n;
-      mb /= n;
+      // One pass, about the first run's values (a shift changes no contrast but the mean's, and
+      // the sums of squares about the mean follow from the shifted sums: Chan, Golub and LeVeque
+      // 1983, The American Statistician 37, 242-247, the shifted-data algorithm).
+      const a0 = a[0];
+      const b0 = b[0];
       total.fill(0);
       totalB.fill(0);
+      let sa = 0;
+      let sb = 0;
       let aa = 0;
       let ab = 0;
       for (let i = 0; i < n; i++) {
-        const da = a[i] - ma;
-        const db = b[i] - mb;
+        const da = a[i] - a0;
+        const db = b[i] - b0;
+        sa += da;
+        sb += db;
         aa += da * da;
         ab += da * db;
         const c = cells[i];
@@ -129,6 +130,8 @@ export function residualSsYates(cells: Int32Array, k: number, terms: readonly Te
           totalB[c] += db;
         }
       }
+      aa -= (sa * sa) / n;
+      ab -= (sa * sb) / n;
       let modelAa = 0;
       let modelAb = 0;
       if (everyContrast) {
