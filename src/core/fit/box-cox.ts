@@ -21,8 +21,9 @@
  * run (y'^(lambda + h) = y'^lambda y'^h); the refinements use expm1, and a Taylor series where
  * |lambda log y'| < 1e-3 (the closed forms cancel there).
  * Cost O(n p^2) once, then O(n p) (O(n + k 2^k) on Yates' path) per lambda: 13 grid points
- * (multiplications only) and about ten refinements.
- * Null when some y' is not positive or the residual df is 0.
+ * (multiplications only) and about five refinements.
+ * Null when some y' is not positive, the residual df is 0, y'^3 or y'^-3 is beyond binary64 (a
+ * range of more than about 1e100 in y'), or the model fits some power of y' exactly (L unbounded).
  * Example: see test/core/fit/box-cox.test.ts (Box and Cox 1964 poison data).
  */
 import { normalQuantile } from '../dist/normal.ts';
