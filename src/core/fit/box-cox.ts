@@ -3,16 +3,27 @@
  * of transformations", JRSS B 26, 211-252, section 3): with y' = y - L all positive and g their
  * geometric mean, w(lambda) = (y'^lambda - 1) / (lambda g^(lambda - 1)) (g log y' at 0), SSE(lambda)
  * the residual sum of squares of w on the model columns, the profile log-likelihood is
- * L(lambda) = -(n/2) log(SSE(lambda) / n). lambda-hat maximises it on [-3, 3] (a grid of step
- * 0.1, then Brent's method to 1e-6 in the grid cells either side of the best point); the 95% interval is {lambda : L(lambda) >= Lmax -
- * chi-square(1, 0.95) / 2}, each end found by the Illinois method to 1e-6 (an end that reaches -3 or 3 is
- * null). The suggestion is the first of none (1), log (0), sqrt (0.5), inverse (-1) inside the
- * interval, else power=lambda-hat rounded to 0.1.
+ * L(lambda) = -(n/2) log(SSE(lambda) / n). The 95% interval is {lambda : L(lambda) >= Lmax -
+ * chi-square(1, 0.95) / 2} (an end that reaches -3 or 3 is null). The suggestion is the first of
+ * none (1), log (0), sqrt (0.5), inverse (-1) inside the interval, else power=lambda-hat rounded to 0.1.
+ * The search uses the slope of L as well as L. With u = (y'^lambda - 1) / lambda (log y' at 0) and
+ * u' = du/dlambda = (y'^lambda log y' - u) / lambda, SSE = g^(2(1 - lambda)) u'Mu (M the residual
+ * projector), so L = -(n/2) (2 (1 - lambda) log g + log(u'Mu / n)) and
+ * dL/dlambda = n (log g - u'Mu' / u'Mu) (differentiating the quadratic form; M is symmetric).
+ * One pass over the runs gives both (residual-ss.ts cross). lambda-hat: a grid of step 0.5 on
+ * [-3, 3] with L and its slope at each point; every cell where the slope turns from rising to
+ * falling, and an end where L still rises, is a candidate; each interior one is refined by the
+ * bracketed secant method on the slope, and the highest L wins. Each interval end: the grid
+ * cell where L crosses the cut, then Newton's method on L - cut with its slope, bracketed.
+ * Both stop at steps below 1e-6 / 8.
  * One factorisation serves every lambda: only y changes (residual-ss.ts: Q'w, or the contrasts
- * of a complete balanced factorial, gives SSE). On the grid y'^lambda is stepped by one
- * multiplication per run (y'^(lambda + h) = y'^lambda y'^h); the refinements use expm1.
- * Cost O(n p^2) once, then O(n p) (O(n + k 2^k) on Yates' path) per lambda, about 90 of them.
- * Null when some y' is not positive or the residual df is 0.
+ * of a complete balanced factorial). On the grid y'^lambda is stepped by one multiplication per
+ * run (y'^(lambda + h) = y'^lambda y'^h); the refinements use expm1, and a Taylor series where
+ * |lambda log y'| < 1e-3 (the closed forms cancel there).
+ * Cost O(n p^2) once, then O(n p) (O(n + k 2^k) on Yates' path) per lambda: 13 grid points
+ * (multiplications only) and about five refinements.
+ * Null when some y' is not positive, the residual df is 0, y'^3 or y'^-3 is beyond binary64 (a
+ * range of more than about 1e100 in y'), or the model fits some power of y' exactly (L unbounded).
  * Example: see test/core/fit/box-cox.test.ts (Box and Cox 1964 poison data).
  */
 import { normalQuantile } from '../dist/normal.ts';
@@ -20,6 +31,8 @@ import { householderQr } from '../linalg/householder-qr.ts';
 import { BOX_COX_PRECISION, RANK_TOLERANCE } from '../tolerance.ts';
 import { residualSsQr, type ResidualSs } from './residual-ss.ts';
 import { transformToken } from './response-transform.ts';
+import { newtonInBracket, secantInBracket } from './bracketed-root.ts';
+import { hermiteLevel, hermiteSlopes, hermiteStationary } from './hermite-cell.ts';
 
 export interface BoxCox {
   readonly lambda: number;
@@ -30,9 +43,11 @@ export interface BoxCox {
 }
 
 /** The search range of lambda (Box and Cox 1964 plot roughly -1 to 1; a wider range is common practice). */
-const LAMBDA_MIN = -3;
+const LAMBDA_MIN = -3; // the grid's start y'^-3 is taken as (1 / y')^3 below
 const LAMBDA_MAX = 3;
-const GRID_STEP = 0.1;
+const GRID_STEP = 0.5; // its step y'^0.5 as sqrt(y')
+/** Below this |lambda z| the transform and its slope come from their series (box-cox.ts atLambda). */
+const SERIES_T = 1e-3;
 /** A local: module bindings are getters under some loaders, and the refinements test it every step. */
 const PRECISION = BOX_COX_PRECISION;
 
@@ -47,60 +62,138 @@ export function boxCoxOn(model: ResidualSs, yp: readonly number[]): BoxCox | nul
   const n = model.n;
   if (yp.length !== n || n === 0 || model.df <= 0) return null;
   for (let i = 0; i < n; i++) if (!(yp[i] > 0)) return null;
-  const logY = new Float64Array(n);
+  const z = new Float64Array(n);
   let logSum = 0;
-  for (let i = 0; i < n; i++) logSum += logY[i] = Math.log(yp[i]);
+  let zMax = 0;
+  for (let i = 0; i < n; i++) {
+    logSum += z[i] = Math.log(yp[i]);
+    zMax = Math.max(zMax, Math.abs(z[i]));
+  }
   const logG = logSum / n;
-  const w = new Float64Array(n);
-  const toLoglik = (sse: number): number => -(n / 2) * Math.log(sse / n);
-  const loglik = (lambda: number): number => {
-    if (lambda === 0) for (let i = 0; i < n; i++) w[i] = Math.exp(logG) * logY[i];
-    else {
-      const scale = lambda * Math.exp((lambda - 1) * logG);
-      for (let i = 0; i < n; i++) w[i] = Math.expm1(lambda * logY[i]) / scale;
-    }
-    return toLoglik(model.ss(w));
+  const u = new Float64Array(n);
+  const du = new Float64Array(n);
+  const q = new Float64Array(2);
+  const logN = Math.log(n);
+  // L and its slope D at lambda from u and du filled in (see the header); L is +Infinity for a perfect fit.
+  let slope = 0;
+  const finish = (lambda: number): number => {
+    model.cross(u, du, q);
+    slope = n * (logG - q[1] / q[0]);
+    return -(n / 2) * (2 * (1 - lambda) * logG + Math.log(q[0]) - logN);
   };
+  // Near 0 the closed forms cancel: the Taylor series in t = lambda z (four terms: |t| < SERIES_T
+  // leaves a relative error below SERIES_T^4 / 120).
+  const series = (lambda: number): void => {
+    for (let i = 0; i < n; i++) {
+      const zi = z[i];
+      const t = lambda * zi;
+      u[i] = zi * (1 + t * (1 / 2 + t * (1 / 6 + t * (1 / 24 + t / 120))));
+      du[i] = zi * zi * (1 / 2 + t * (1 / 3 + t * (1 / 8 + t * (1 / 30 + t / 144))));
+    }
+  };
+  const atLambda = (lambda: number): number => {
+    if (Math.abs(lambda) * zMax < SERIES_T) series(lambda);
+    else {
+      const inv = 1 / lambda;
+      for (let i = 0; i < n; i++) {
+        const e = Math.expm1(lambda * z[i]);
+        const ui = e * inv;
+        u[i] = ui;
+        du[i] = (z[i] * (e + 1) - ui) * inv;
+      }
+    }
+    return finish(lambda);
+  };
+  // The grid: y'^lambda stepped by one multiplication per run (its rounding, some tens of ulps,
+  // only picks the cells; every answer comes from atLambda).
   const steps = Math.round((LAMBDA_MAX - LAMBDA_MIN) / GRID_STEP);
-  const grid = new Float64Array(steps + 1);
-  // The grid: y'^lambda by repeated multiplication (its rounding, some tens of ulps, only picks the cell).
+  const gridL = new Float64Array(steps + 1);
+  const gridD = new Float64Array(steps + 1);
   const power = new Float64Array(n);
   const stepBy = new Float64Array(n);
+  // y'^-3 and y'^0.5 without exp (the grid's end and step are these two constants).
   for (let i = 0; i < n; i++) {
-    power[i] = Math.exp(LAMBDA_MIN * logY[i]);
-    stepBy[i] = Math.exp(GRID_STEP * logY[i]);
+    const r = 1 / yp[i];
+    power[i] = r * r * r;
+    stepBy[i] = Math.sqrt(yp[i]);
   }
-  let best = 0;
   for (let s = 0; s <= steps; s++) {
     const lambda = LAMBDA_MIN + s * GRID_STEP;
-    // The step to the next power rides in the same pass over the runs as the transform.
-    if (Math.abs(lambda) < GRID_STEP / 2) {
-      grid[s] = loglik(0);
-      for (let i = 0; i < n; i++) power[i] *= stepBy[i];
-    } else {
-      const scale = lambda * Math.exp((lambda - 1) * logG);
+    if (Math.abs(lambda) * zMax < SERIES_T) series(lambda);
+    else {
+      const inv = 1 / lambda;
       for (let i = 0; i < n; i++) {
-        w[i] = (power[i] - 1) / scale;
-        power[i] *= stepBy[i];
+        const v = power[i];
+        const ui = (v - 1) * inv;
+        u[i] = ui;
+        du[i] = (z[i] * v - ui) * inv;
+        power[i] = v * stepBy[i];
       }
-      grid[s] = toLoglik(model.ss(w));
     }
-    if (grid[s] > grid[best]) best = s;
+    if (Math.abs(lambda) * zMax < SERIES_T) for (let i = 0; i < n; i++) power[i] *= stepBy[i];
+    gridL[s] = finish(lambda);
+    gridD[s] = slope;
+    if (!Number.isFinite(gridL[s]) || !Number.isFinite(slope)) return null; // a perfect fit, or beyond binary64
   }
-  // Brent's method (parabolic steps, golden-section when they misbehave) in the grid cells either
-  // side of the best grid point: Brent, Algorithms for Minimization without Derivatives (1973),
-  // chapter 5, as in Press et al., Numerical Recipes, 3rd ed., section 10.3.
-  // Brent returns L at its answer too (the same number loglik(lambda) would give again).
-  const { x: lambda, fx: atLambda } = brentMax(loglik, LAMBDA_MIN + Math.max(0, best - 1) * GRID_STEP, LAMBDA_MIN + Math.min(steps, best + 1) * GRID_STEP, LAMBDA_MIN + best * GRID_STEP);
-  const lmax = Math.max(atLambda, grid[best]);
+  // The candidates for the maximum: each cell where the slope turns from rising to falling, and an
+  // end of the range where L still rises towards it. Each is refined; the highest wins.
+  let lambda = Number.NaN;
+  let lmax = -Infinity;
+  let cell = -1; // the grid index at or just below lambda-hat
+  const consider = (l: number, at: number, s: number): void => {
+    if (at > lmax) {
+      lambda = l;
+      lmax = at;
+      cell = s;
+    }
+  };
+  if (gridD[0] <= 0) consider(LAMBDA_MIN, gridL[0], 0);
+  if (gridD[steps] >= 0) consider(LAMBDA_MAX, gridL[steps], steps);
+  let lastX = 0;
+  let lastL = 0;
+  const slopeAt = (l: number): number => {
+    lastX = l;
+    lastL = atLambda(l);
+    return slope;
+  };
+  for (let s = 0; s < steps; s++) {
+    if (!(gridD[s] > 0 && gridD[s + 1] <= 0)) continue;
+    const a = LAMBDA_MIN + s * GRID_STEP;
+    const b = a + GRID_STEP;
+    if (gridD[s + 1] === 0) {
+      consider(b, atLambda(b), s + 1);
+      continue;
+    }
+    const guess = hermiteStationary(a, b, gridL[s], gridL[s + 1], gridD[s], gridD[s + 1]) ?? a - (gridD[s] * GRID_STEP) / (gridD[s + 1] - gridD[s]);
+    const root = secantInBracket(slopeAt, a, gridD[s], b, gridD[s + 1], guess, PRECISION / 8);
+    // L at the root from the last point evaluated, by the quadratic through it (the step is below
+    // 1e-7, so the cubic term is below 1e-20).
+    consider(root, lastL + (slope * (root - lastX)) / 2, s);
+  }
+  // No candidate, or a lambda at which the model fits exactly (L unbounded): no power to suggest.
+  if (cell < 0 || !Number.isFinite(lmax)) return null;
   // chi-square(1, 0.95) is the square of the normal 0.975 quantile (3.8415).
   const cut = lmax - normalQuantile(0.975) ** 2 / 2;
+  // Each end: walk the grid outwards while L stays above the cut, then Newton's method on L - cut
+  // (its slope is D) inside that cell, from where the cell's Hermite cubic crosses the cut.
+  const crossing = (l: number): readonly [number, number] => [atLambda(l) - cut, slope];
   const end = (dir: -1 | 1): number | null => {
-    let s = best;
-    while (s + dir >= 0 && s + dir <= steps && grid[s + dir] >= cut) s += dir;
-    if (s + dir < 0 || s + dir > steps) return null;
-    const inside = s === best ? lambda : LAMBDA_MIN + s * GRID_STEP;
-    return illinoisRoot((l) => loglik(l) - cut, inside, LAMBDA_MIN + (s + dir) * GRID_STEP, s === best ? atLambda - cut : undefined);
+    let s = dir < 0 ? (LAMBDA_MIN + cell * GRID_STEP === lambda ? cell - 1 : cell) : cell + 1;
+    let inside = lambda;
+    let lIn = lmax;
+    let dIn = LAMBDA_MIN + cell * GRID_STEP === lambda ? gridD[cell] : 0; // lambda-hat inside a cell is where the slope is 0
+    while (s >= 0 && s <= steps && gridL[s] >= cut) {
+      inside = LAMBDA_MIN + s * GRID_STEP;
+      lIn = gridL[s];
+      dIn = gridD[s];
+      s += dir;
+    }
+    if (s < 0 || s > steps) return null;
+    const outside = LAMBDA_MIN + s * GRID_STEP;
+    const guess = hermiteLevel(inside, outside, lIn, gridL[s], dIn, gridD[s], cut);
+    const [d1, d2] = hermiteSlopes(inside, outside, lIn, gridL[s], dIn, gridD[s], guess);
+    // The cubic's curvature near the crossing, with a margin of 4 for its own error.
+    return newtonInBracket(crossing, inside, outside, guess, PRECISION / 8, (4 * Math.abs(d2)) / (2 * Math.abs(d1)));
   };
   const lo = end(-1);
   const hi = end(1);
@@ -108,98 +201,4 @@ export function boxCoxOn(model: ResidualSs, yp: readonly number[]): BoxCox | nul
   const named = [1, 0, 0.5, -1].find(inCi);
   const suggestion = named !== undefined ? transformToken(named) : transformToken(Math.round(lambda * 10) / 10);
   return { lambda, ci: [lo, hi], suggestion };
-}
-
-/** The maximiser x of f on [a, b] to BOX_COX_PRECISION by Brent's method, starting from x in (a, b), with fx = f(x). */
-function brentMax(f: (x: number) => number, a: number, b: number, x: number): { x: number; fx: number } {
-  const golden = (3 - Math.sqrt(5)) / 2;
-  const tol = PRECISION / 2;
-  let fx = -f(x);
-  let w = x;
-  let v = x;
-  let fw = fx;
-  let fv = fx;
-  let d = 0;
-  let e = 0;
-  for (let iter = 0; iter < 200; iter++) {
-    const xm = (a + b) / 2;
-    if (Math.abs(x - xm) <= 2 * tol - (b - a) / 2) break;
-    let parabolic = false;
-    if (Math.abs(e) > tol) {
-      const r = (x - w) * (fx - fv);
-      let q = (x - v) * (fx - fw);
-      let p = (x - v) * q - (x - w) * r;
-      q = 2 * (q - r);
-      if (q > 0) p = -p;
-      else q = -q;
-      const before = e;
-      e = d;
-      if (Math.abs(p) < Math.abs(0.5 * q * before) && p > q * (a - x) && p < q * (b - x)) {
-        d = p / q;
-        const u = x + d;
-        if (u - a < 2 * tol || b - u < 2 * tol) d = xm >= x ? tol : -tol;
-        parabolic = true;
-      }
-    }
-    if (!parabolic) {
-      e = x >= xm ? a - x : b - x;
-      d = golden * e;
-    }
-    const u = Math.abs(d) >= tol ? x + d : x + (d >= 0 ? tol : -tol);
-    const fu = -f(u);
-    if (fu <= fx) {
-      if (u >= x) a = x;
-      else b = x;
-      v = w;
-      fv = fw;
-      w = x;
-      fw = fx;
-      x = u;
-      fx = fu;
-    } else {
-      if (u < x) a = u;
-      else b = u;
-      if (fu <= fw || w === x) {
-        v = w;
-        fv = fw;
-        w = u;
-        fw = fu;
-      } else if (fu <= fv || v === x || v === w) {
-        v = u;
-        fv = fu;
-      }
-    }
-  }
-  return { x, fx: -fx };
-}
-
-/**
- * The root of g between `inside` (g >= 0) and `outside` (g < 0) to BOX_COX_PRECISION by the
- * Illinois variant of false position (Dowell and Jarratt 1971, BIT 11, 168-174): the end kept
- * twice running has its value halved, so both ends close in; a step that leaves the bracket
- * (rounding) bisects instead. `gInside`: g(inside) when the caller has it already.
- */
-function illinoisRoot(g: (x: number) => number, inside: number, outside: number, gInside?: number): number {
-  let a = inside;
-  let b = outside;
-  let ga = gInside ?? g(a);
-  let gb = g(b);
-  let side = 0;
-  for (let iter = 0; iter < 200 && Math.abs(b - a) > PRECISION; iter++) {
-    let c = ga - gb !== 0 ? (a * gb - b * ga) / (gb - ga) : (a + b) / 2;
-    if (!(Math.min(a, b) < c && c < Math.max(a, b))) c = (a + b) / 2;
-    const gc = g(c);
-    if (gc >= 0) {
-      a = c;
-      ga = gc;
-      if (side === -1) gb /= 2;
-      side = -1;
-    } else {
-      b = c;
-      gb = gc;
-      if (side === 1) ga /= 2;
-      side = 1;
-    }
-  }
-  return (a + b) / 2;
 }

@@ -9,7 +9,12 @@
  *   RSS(w) = sum w_i^2 - n wbar^2 - sum_{t in model} C_t^2 / N_f (the sums of squares of
  *   Montgomery, Design and Analysis of Experiments, 8th ed., section 6.6); O(n + k 2^k) per
  *   response. Computed about the mean (w_i - wbar) so that a large common part cancels exactly.
- * `ss` may overwrite its argument. Example: residualSsYates on the 2^2 yield data of Montgomery
+ * `cross(a, b)` gives a'Ma and a'Mb together (M the residual projector, symmetric), the two sums the
+ * Box-Cox search needs for the likelihood and its slope; one pass serves both. When the model holds
+ * every cell contrast of the factorial (a full model), the model part is all but the mean's by
+ * Parseval's identity for the Walsh-Hadamard transform (sum_t A_t B_t = 2^k sum_c a_c b_c), so no
+ * transform is needed.
+ * `ss` and `cross` may overwrite their arguments. Example: residualSsYates on the 2^2 yield data of Montgomery
  * 8th ed. section 6.2 with terms A, B, AB -> the error sum of squares 31.33 (printed 31.34).
  */
 import type { Term } from '../model/term.ts';
@@ -22,6 +27,8 @@ export interface ResidualSs {
   readonly df: number;
   /** RSS of `w` (length n) on the model; `w` may be overwritten. */
   ss(w: Float64Array): number;
+  /** out[0] = a'Ma, out[1] = a'Mb (M the residual projector); `a` and `b` may be overwritten. */
+  cross(a: Float64Array, b: Float64Array, out: Float64Array): void;
 }
 
 export function residualSsQr(f: QrFactor): ResidualSs {
@@ -35,6 +42,35 @@ export function residualSsQr(f: QrFactor): ResidualSs {
       for (let i = rank; i < n; i++) s += w[i] * w[i];
       return s;
     },
+    cross(a, b, out) {
+      // Q'a and Q'b in one pass over each reflector (householder-qr.ts applyQt, twice over).
+      const { v, beta } = f;
+      for (let k = 0; k < rank; k++) {
+        const vo = k * n;
+        let sa = 0;
+        let sb = 0;
+        for (let i = k; i < n; i++) {
+          const vi = v[vo + i];
+          sa += vi * a[i];
+          sb += vi * b[i];
+        }
+        sa *= beta[k];
+        sb *= beta[k];
+        for (let i = k; i < n; i++) {
+          const vi = v[vo + i];
+          a[i] -= sa * vi;
+          b[i] -= sb * vi;
+        }
+      }
+      let aa = 0;
+      let ab = 0;
+      for (let i = rank; i < n; i++) {
+        aa += a[i] * a[i];
+        ab += a[i] * b[i];
+      }
+      out[0] = aa;
+      out[1] = ab;
+    },
   };
 }
 
@@ -46,6 +82,9 @@ export function residualSsYates(cells: Int32Array, k: number, terms: readonly Te
   let nf = 0;
   for (let i = 0; i < n; i++) if (cells[i] >= 0) nf++;
   const list = Int32Array.from(terms);
+  const totalB = new Float64Array(size);
+  // Every contrast but the mean's in the model: the model part needs no transform (Parseval).
+  const everyContrast = new Set(terms).size === size - 1 && !terms.includes(0);
   return {
     n,
     df: n - 1 - list.length,
@@ -65,6 +104,57 @@ export function residualSsYates(cells: Int32Array, k: number, terms: readonly Te
       let model = 0;
       for (let j = 0; j < list.length; j++) model += total[list[j]] * total[list[j]];
       return Math.max(0, s - model / nf);
+    },
+    cross(a, b, out) {
+      // One pass, about the first run's values (a shift changes no contrast but the mean's, and
+      // the sums of squares about the mean follow from the shifted sums: Chan, Golub and LeVeque
+      // 1983, The American Statistician 37, 242-247, the shifted-data algorithm).
+      const a0 = a[0];
+      const b0 = b[0];
+      total.fill(0);
+      totalB.fill(0);
+      let sa = 0;
+      let sb = 0;
+      let aa = 0;
+      let ab = 0;
+      for (let i = 0; i < n; i++) {
+        const da = a[i] - a0;
+        const db = b[i] - b0;
+        sa += da;
+        sb += db;
+        aa += da * da;
+        ab += da * db;
+        const c = cells[i];
+        if (c >= 0) {
+          total[c] += da;
+          totalB[c] += db;
+        }
+      }
+      aa -= (sa * sa) / n;
+      ab -= (sa * sb) / n;
+      let modelAa = 0;
+      let modelAb = 0;
+      if (everyContrast) {
+        let ta = 0;
+        let tb = 0;
+        for (let c = 0; c < size; c++) {
+          modelAa += total[c] * total[c];
+          modelAb += total[c] * totalB[c];
+          ta += total[c];
+          tb += totalB[c];
+        }
+        modelAa = size * modelAa - ta * ta;
+        modelAb = size * modelAb - ta * tb;
+      } else {
+        walshHadamard(total);
+        walshHadamard(totalB);
+        for (let j = 0; j < list.length; j++) {
+          modelAa += total[list[j]] * total[list[j]];
+          modelAb += total[list[j]] * totalB[list[j]];
+        }
+      }
+      out[0] = Math.max(0, aa - modelAa / nf);
+      out[1] = ab - modelAb / nf;
     },
   };
 }

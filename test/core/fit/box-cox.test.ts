@@ -56,6 +56,31 @@ describe('boxCox (Box and Cox 1964)', () => {
     expect(referenceLoglik(b.ci[0]!)).toBeCloseTo(top - 3.8415 / 2, 3);
     expect(referenceLoglik(b.ci[1]!)).toBeCloseTo(top - 3.8415 / 2, 3);
   });
+  it('lambda-hat and the interval ends to 1e-6: a golden-section search and bisection on the reference likelihood agree', () => {
+    // Golden-section search (Press et al., Numerical Recipes, 3rd ed., section 10.2) on [-1.5, 0].
+    let lo = -1.5;
+    let hi = 0;
+    const r = (Math.sqrt(5) - 1) / 2;
+    while (hi - lo > 1e-9) {
+      const c = hi - r * (hi - lo);
+      const d = lo + r * (hi - lo);
+      if (referenceLoglik(c) > referenceLoglik(d)) hi = d;
+      else lo = c;
+    }
+    expect(Math.abs(b.lambda - (lo + hi) / 2)).toBeLessThan(1e-6);
+    const top = referenceLoglik((lo + hi) / 2);
+    const bisect = (inside: number, outside: number): number => {
+      for (let i = 0; i < 60; i++) {
+        const m = (inside + outside) / 2;
+        if (referenceLoglik(m) >= top - 1.959963984540054 ** 2 / 2) inside = m;
+        else outside = m;
+      }
+      return inside;
+    };
+    // chi-square(1, 0.95) = z(0.975)^2, z(0.975) = 1.959963984540054 (the normal table's 1.96, to full precision).
+    expect(Math.abs(b.ci[0]! - bisect(b.lambda, -3))).toBeLessThan(1e-6);
+    expect(Math.abs(b.ci[1]! - bisect(b.lambda, 3))).toBeLessThan(1e-6);
+  });
   it('degenerate input: a non-positive value or no residual df gives null', () => {
     expect(boxCox(x, n, p, y.map((v, i) => (i === 0 ? 0 : v)))).toBeNull();
     const identity = new Float64Array(36).map((_, k) => (k % 7 === 0 ? 1 : 0)); // six runs, six columns

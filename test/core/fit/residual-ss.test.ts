@@ -42,6 +42,24 @@ describe('residualSsYates and residualSsQr', () => {
       expect(qr.ss(Float64Array.from(y)) / ref).toBeCloseTo(1, 10);
     }
   });
+  it("cross: a'Ma and a'Mb by polarisation of the reference library's RSS ((RSS(a + b) - RSS(a - b)) / 4), for a part of the model and for the full model (Parseval), both forms", () => {
+    const coded = [...etch.coded, [0, 0, 0], [0, 0, 0], [0, 0, 0]];
+    const a = [...etch.y, 700, 650, 720];
+    const b = coded.map((_, i) => ((i * 7919) % 13) - 6 + 1e3);
+    for (const model of [[1, 2, 4, 5], termsUpToOrder(3, 3)]) {
+      const yates = residualSsYates(yatesCells(coded, 3)!, 3, model);
+      const cols = modelColumns([], model);
+      const qr = residualSsQr(householderQr(modelMatrix(cols, coded, null), coded.length, cols.length));
+      const aa = referenceRss(coded, model, a);
+      const ab = (referenceRss(coded, model, a.map((v, i) => v + b[i])) - referenceRss(coded, model, a.map((v, i) => v - b[i]))) / 4;
+      for (const form of [yates, qr]) {
+        const out = new Float64Array(2);
+        form.cross(Float64Array.from(a), Float64Array.from(b), out);
+        expect(out[0] / aa).toBeCloseTo(1, 10);
+        expect(Math.abs(out[1] - ab)).toBeLessThan(1e-8 * aa);
+      }
+    }
+  });
   it('degenerate input: a response the model fits exactly gives 0, never a negative sum', () => {
     const yates = residualSsYates(yatesCells(yieldData.coded, 2)!, 2, terms);
     expect(yates.ss(Float64Array.from(yieldData.coded, (r) => 3 + r[0] - 2 * r[0] * r[1]))).toBeGreaterThanOrEqual(0);
