@@ -85,5 +85,7 @@ describe('boxCox (Box and Cox 1964)', () => {
     expect(boxCox(x, n, p, y.map((v, i) => (i === 0 ? 0 : v)))).toBeNull();
     const identity = new Float64Array(36).map((_, k) => (k % 7 === 0 ? 1 : 0)); // six runs, six columns
     expect(boxCox(identity, 6, 6, y.slice(0, 6))).toBeNull();
+    // y' over more than 1e100: (1 / y')^3 is beyond binary64, so no power is suggested rather than a wrong one.
+    expect(boxCox(x, n, p, y.map((v, i) => (i === 0 ? 1e-110 : v)))).toBeNull();
   });
 });
