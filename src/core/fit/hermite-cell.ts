@@ -17,7 +17,7 @@ export function hermiteStationary(a: number, b: number, fa: number, fb: number, 
   const B = -6 * fa - 4 * h * da + 6 * fb - 2 * h * db;
   const C = h * da;
   let t: number;
-  if (Math.abs(A) <= 1e-14 * (Math.abs(B) + Math.abs(C))) {
+  if (A === 0) {
     if (!(B < 0)) return null; // p' linear and rising: a minimum, or no turn
     t = -C / B;
   }
