@@ -41,16 +41,20 @@ export interface QrFactor {
  * tolerance whose matrix equals the first prefix.p columns of X entry for entry, the work on those
  * columns is taken from it: columns are processed left to right and each depends only on those
  * before it, so the result is the same to the last bit. A prefix that does not match is ignored.
+ * Work arrays are allocated once per call, none per column.
  */
 export function householderQr(x: Float64Array, n: number, p: number, tol: number = RANK_TOLERANCE, prefix?: QrFactor): QrFactor {
-  const v = new Float64Array(n * Math.min(n, p));
-  const beta = new Float64Array(Math.min(n, p));
-  const kept: number[] = [];
-  const aliased: number[] = [];
-  const topOfKept: Float64Array[] = [];
-  const topOfAliased: Float64Array[] = [];
+  const mr = Math.min(n, p);
+  const v = new Float64Array(n * mr);
+  const beta = new Float64Array(mr);
+  const kept = new Int32Array(p);
+  const aliased = new Int32Array(p);
+  // Top of each kept column (its R column, rank + 1 entries) and of each aliased one (rank entries), mr apart.
+  const topKept = new Float64Array(mr * mr);
+  const topAliased = new Float64Array(p * mr);
   const col = new Float64Array(n);
   let rank = 0;
+  let na = 0;
   let start = 0;
   if (prefix && prefix.tol === tol && samePrefix(prefix, x, n, p)) {
     rank = prefix.rank;
@@ -58,15 +62,14 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
     v.set(prefix.v);
     beta.set(prefix.beta);
     for (let c = 0; c < rank; c++) {
-      kept.push(prefix.kept[c]);
-      const top = new Float64Array(c + 1);
-      for (let i = 0; i <= c; i++) top[i] = prefix.r[c * rank + i];
-      topOfKept.push(top);
+      kept[c] = prefix.kept[c];
+      for (let i = 0; i <= c; i++) topKept[c * mr + i] = prefix.r[c * rank + i];
     }
     // An aliased column's top was cut at the rank of its time; beyond it the prefix holds zeros, as the result will.
     for (let a = 0; a < prefix.aliased.length; a++) {
-      aliased.push(prefix.aliased[a]);
-      topOfAliased.push(prefix.aliasedTop.slice(a * rank, (a + 1) * rank));
+      aliased[na] = prefix.aliased[a];
+      for (let i = 0; i < rank; i++) topAliased[na * mr + i] = prefix.aliasedTop[a * rank + i];
+      na++;
     }
   }
   for (let j = start; j < p; j++) {
@@ -79,19 +82,13 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
     }
     norm0 = Math.sqrt(norm0);
     // Apply the reflectors found so far.
-    for (let k = 0; k < rank; k++) {
-      const vo = k * n;
-      let s = 0;
-      for (let i = k; i < n; i++) s += v[vo + i] * col[i];
-      s *= beta[k];
-      for (let i = k; i < n; i++) col[i] -= s * v[vo + i];
-    }
+    for (let k = 0; k < rank; k++) reflect(v, k * n, k, n, beta[k], col);
     let tail = 0;
     for (let i = rank; i < n; i++) tail += col[i] * col[i];
     tail = Math.sqrt(tail);
     if (rank >= n || norm0 === 0 || tail <= tol * norm0) {
-      aliased.push(j);
-      topOfAliased.push(col.slice(0, rank));
+      for (let i = 0; i < rank; i++) topAliased[na * mr + i] = col[i];
+      aliased[na++] = j;
       continue;
     }
     // New reflector from rows rank..n-1 (Golub and Van Loan Algorithm 5.1.1, sign chosen to avoid cancellation).
@@ -108,26 +105,21 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
     }
     beta[k] = 2 / vtv;
     col[k] = alpha;
-    topOfKept.push(col.slice(0, k + 1));
-    kept.push(j);
+    for (let i = 0; i <= k; i++) topKept[k * mr + i] = col[i];
+    kept[k] = j;
     rank++;
   }
   const r = new Float64Array(rank * rank);
-  for (let c = 0; c < rank; c++) {
-    const t = topOfKept[c];
-    for (let i = 0; i <= c; i++) r[c * rank + i] = t[i];
-  }
-  const aliasedTop = new Float64Array(aliased.length * rank);
-  for (let a = 0; a < aliased.length; a++) {
-    const t = topOfAliased[a];
-    for (let i = 0; i < t.length; i++) aliasedTop[a * rank + i] = t[i];
-  }
+  for (let c = 0; c < rank; c++) for (let i = 0; i <= c; i++) r[c * rank + i] = topKept[c * mr + i];
+  const aliasedTop = new Float64Array(na * rank);
+  // Entries past an aliased column's own rank stay zero in topAliased (never written), as they must.
+  for (let a = 0; a < na; a++) for (let i = 0; i < rank; i++) aliasedTop[a * rank + i] = topAliased[a * mr + i];
   return {
     n,
     p,
     rank,
-    kept: Int32Array.from(kept),
-    aliased: Int32Array.from(aliased),
+    kept: kept.slice(0, rank),
+    aliased: aliased.slice(0, na),
     r,
     v: v.subarray(0, n * rank),
     beta: beta.subarray(0, rank),
@@ -137,9 +129,18 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
   };
 }
 
+/** col <- (I - beta v v') col over rows k..n-1, v the reflector at offset vo (Golub and Van Loan section 5.1.4). */
+function reflect(v: Float64Array, vo: number, k: number, n: number, beta: number, col: Float64Array): void {
+  let s = 0;
+  for (let i = k; i < n; i++) s += v[vo + i] * col[i];
+  s *= beta;
+  for (let i = k; i < n; i++) col[i] -= s * v[vo + i];
+}
+
 /** Whether `prefix` factorised exactly the first prefix.p columns of x (n rows). */
 function samePrefix(prefix: QrFactor, x: Float64Array, n: number, p: number): boolean {
   if (prefix.n !== n || prefix.p > p || prefix.x.length !== n * prefix.p) return false;
+  if (prefix.x === x) return true;
   for (let i = 0; i < n * prefix.p; i++) if (!Object.is(prefix.x[i], x[i])) return false;
   return true;
 }
@@ -147,23 +148,11 @@ function samePrefix(prefix: QrFactor, x: Float64Array, n: number, p: number): bo
 /** y <- Q'y in place (Golub and Van Loan section 5.1.6: apply the reflectors in order). */
 export function applyQt(f: QrFactor, y: Float64Array): void {
   const { n, v, beta } = f;
-  for (let k = 0; k < f.rank; k++) {
-    const vo = k * n;
-    let s = 0;
-    for (let i = k; i < n; i++) s += v[vo + i] * y[i];
-    s *= beta[k];
-    for (let i = k; i < n; i++) y[i] -= s * v[vo + i];
-  }
+  for (let k = 0; k < f.rank; k++) reflect(v, k * n, k, n, beta[k], y);
 }
 
 /** z <- Q z in place (the reflectors in reverse order). */
 export function applyQ(f: QrFactor, z: Float64Array): void {
   const { n, v, beta } = f;
-  for (let k = f.rank - 1; k >= 0; k--) {
-    const vo = k * n;
-    let s = 0;
-    for (let i = k; i < n; i++) s += v[vo + i] * z[i];
-    s *= beta[k];
-    for (let i = k; i < n; i++) z[i] -= s * v[vo + i];
-  }
+  for (let k = f.rank - 1; k >= 0; k--) reflect(v, k * n, k, n, beta[k], z);
 }
