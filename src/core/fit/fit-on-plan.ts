@@ -28,7 +28,7 @@ export interface PlanColumns {
  * nominal factorisation; `xNominal` is then not read); `lean`: the actual fit is lean too (fit-qr.ts: no (X'X)^-1, no leverage), for a
  * caller that needs only the estimates (the saturated set of Lenth's method); `actualPrefix`: a
  * factorisation of the first kept columns on the actual settings, reused when it matches
- * (householder-qr.ts: the same result, less work).
+ * (householder-qr.ts: the same result, less work). `xActual` holds every column, or the kept ones only.
  */
 export function fitOnPlan(columns: readonly Column[], xNominal: Float64Array, xActual: Float64Array, y: readonly number[], planFit?: PlanColumns, lean = false, actualPrefix?: QrFactor): LinearFit {
   const n = y.length;
@@ -37,9 +37,10 @@ export function fitOnPlan(columns: readonly Column[], xNominal: Float64Array, xA
   const kept = Array.from(plan.kept, (j) => columns[j]);
   let all = m === columns.length;
   for (let a = 0; a < m && all; a++) all = plan.kept[a] === a;
-  // Every column kept: the actual matrix as it is (not modified by the fit).
-  const x = all ? xActual : new Float64Array(n * m);
-  if (!all) for (let a = 0; a < m; a++) x.set(xActual.subarray(plan.kept[a] * n, (plan.kept[a] + 1) * n), a * n);
+  // Every column kept, or only the kept columns given: the actual matrix as it is (not modified by the fit).
+  const given = all || xActual.length === n * m;
+  const x = given ? xActual : new Float64Array(n * m);
+  if (!given) for (let a = 0; a < m; a++) x.set(xActual.subarray(plan.kept[a] * n, (plan.kept[a] + 1) * n), a * n);
   const act = fitQr(kept, x, y, lean, actualPrefix);
   const up = (a: number): number => plan.kept[a];
   // Should the actual settings lose a further column (they almost never do), it is listed too.

@@ -73,8 +73,11 @@ export function walshPlan(columns: readonly Column[], rows: readonly (readonly n
   }
   const missing = new Int32Array(d);
   for (let c = 0, i = 0; c < N; c++) if (!seen[c]) missing[i++] = c;
+  // h_t = H[D, t] for every Walsh column t, d apart.
+  const hs = new Float64Array(N * d);
+  for (let t = 0; t < N; t++) for (let i = 0; i < d; i++) hs[t * d + i] = popParity(t & missing[i]) ? -1 : 1;
   const h = (t: number, out: Float64Array): Float64Array => {
-    for (let i = 0; i < d; i++) out[i] = popParity(t & missing[i]) ? -1 : 1;
+    for (let i = 0; i < d; i++) out[i] = hs[t * d + i];
     return out;
   };
 
@@ -98,9 +101,9 @@ export function walshPlan(columns: readonly Column[], rows: readonly (readonly n
   // Margin: Cholesky of M - MARGIN N I, M = N I - sum over kept h h' (integer entries, exact).
   const m = new Float64Array(d * d);
   for (let i = 0; i < d; i++) m[i * d + i] = N * (1 - MARGIN);
-  for (const j of kept) {
-    h(masks[j], g);
-    for (let a = 0; a < d; a++) for (let b = 0; b < d; b++) m[a * d + b] -= g[a] * g[b];
+  for (let q = 0; q < kept.length; q++) {
+    const o = masks[kept[q]] * d;
+    for (let a = 0; a < d; a++) for (let b = 0; b < d; b++) m[a * d + b] -= hs[o + a] * hs[o + b];
   }
   if (!positiveDefinite(m, d)) return null;
 
@@ -121,10 +124,10 @@ export function walshPlan(columns: readonly Column[], rows: readonly (readonly n
     // B[l] = h_l' W for every column; A = B at the aliased columns; chains Y = -A^-1.
     const bm = new Float64Array(p * a);
     for (let j = 0; j < p; j++) {
-      h(masks[j], g);
+      const o = masks[j] * d;
       for (let q = 0; q < a; q++) {
         let s = 0;
-        for (let i = 0; i < d; i++) s += g[i] * w[(outsideRank + q) * d + i];
+        for (let i = 0; i < d; i++) s += hs[o + i] * w[(outsideRank + q) * d + i];
         bm[j * a + q] = s;
       }
     }
