@@ -98,13 +98,20 @@ export function walshPlan(columns: readonly Column[], rows: readonly (readonly n
   for (let j = 0; j < p; j++) (isAliased[j] ? aliasedIdx : kept).push(j);
   if (kept.length > n) return null;
 
-  // Margin: Cholesky of M - MARGIN N I, M = N I - sum over kept h h' (integer entries, exact).
+  // Margin: Cholesky of M - MARGIN N I, M = N I - sum over kept h h' = sum over the other Walsh
+  // columns of h h' (H[D, :] H[D, :]' = N I): integer entries, exact either way; the shorter sum, lower triangle only.
   const m = new Float64Array(d * d);
-  for (let i = 0; i < d; i++) m[i * d + i] = N * (1 - MARGIN);
-  for (let q = 0; q < kept.length; q++) {
-    const o = masks[kept[q]] * d;
-    for (let a = 0; a < d; a++) for (let b = 0; b < d; b++) m[a * d + b] -= hs[o + a] * hs[o + b];
+  const isKept = new Uint8Array(N);
+  for (let q = 0; q < kept.length; q++) isKept[masks[kept[q]]] = 1;
+  const fromKept = kept.length <= N - kept.length;
+  const sign = fromKept ? -1 : 1;
+  for (let i = 0; i < d; i++) m[i * d + i] = fromKept ? N : 0;
+  for (let t = 0; t < N; t++) {
+    if (isKept[t] !== (fromKept ? 1 : 0)) continue;
+    const o = t * d;
+    for (let a = 0; a < d; a++) for (let b = 0; b <= a; b++) m[a * d + b] += sign * hs[o + a] * hs[o + b];
   }
+  for (let i = 0; i < d; i++) m[i * d + i] -= MARGIN * N;
   if (!positiveDefinite(m, d)) return null;
 
   const a = aliasedIdx.length;
