@@ -180,3 +180,13 @@ export const FLOOR_ROUNDING = 1e-9;
 /** The Box-Cox lambda and the ends of its interval are found to within this (fit/box-cox.ts;
  * far finer than any choice of power needs; our own choice). */
 export const BOX_COX_PRECISION = 1e-6;
+
+/** walsh-plan.ts answers only when the smallest eigenvalue of X_kept'X_kept is at least this
+ * fraction of N, so that every kept column keeps at least sqrt of it (1e-3) of its norm: our own
+ * choice, far above RANK_TOLERANCE and rounding, so Householder QR keeps the same columns. */
+export const WALSH_MARGIN = 1e-6;
+
+/** A Gram-Schmidt residual of a +-1 vector of length d <= 12 below this fraction of its norm means
+ * it lies in the span: an exact residual is 0 or at least d^(-d/2) >= 3e-7, rounding leaves about
+ * 1e-15 (our own choice between the two). */
+export const SPAN_TOLERANCE = 1e-11;

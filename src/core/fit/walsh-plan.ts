@@ -14,13 +14,13 @@
  * d^(-d/2) of |h_l| (a ratio of integer Gram determinants), far above rounding for d <= 12; and
  * the answer is used only when the smallest eigenvalue of X_kept'X_kept (that of
  * M = N I - U_kept U_kept', a d x d matrix, Cauchy interlacing for each leading set) is at least
- * MARGIN N, so every kept column keeps at least sqrt(MARGIN) of its norm and the QR's rank test
+ * WALSH_MARGIN N (tolerance.ts), so every kept column keeps at least sqrt(WALSH_MARGIN) of its norm and the QR's rank test
  * (RANK_TOLERANCE) decides the same way. Otherwise: null, and the caller factorises.
  * Cost O(N d^2 + p d^2 + d^3), no factorisation of the n x p matrix.
  * Example: the 2^3 less the run (+1, +1, +1), columns I, A, B, C, AB, AC, BC, ABC -> the seven
  * runs keep I..BC, and ABC = -(I + A + B + C + AB + AC + BC) on them (every h_l is 1 at the missing run).
  */
-import { ALIAS_WEIGHT_TOLERANCE } from '../tolerance.ts';
+import { ALIAS_WEIGHT_TOLERANCE, SINGULAR_TOLERANCE, SPAN_TOLERANCE, WALSH_MARGIN } from '../tolerance.ts';
 import { SQUARE_FLAG } from '../model/term.ts';
 import type { Column } from './columns.ts';
 import type { AliasedColumn } from './linear-fit.ts';
@@ -29,10 +29,6 @@ import type { AliasedColumn } from './linear-fit.ts';
 const MAX_MISSING = 12;
 /** The largest plan handled (2^k runs), to keep the outside columns few. */
 const MAX_FACTORS = 14;
-/** Smallest eigenvalue of X_kept'X_kept, over N, for the answer to be used (see the file comment). */
-const MARGIN = 1e-6;
-/** Gram-Schmidt residual, relative, below which a +-1 vector is in the span (see the file comment). */
-const SPAN_TOLERANCE = 1e-11;
 
 export interface WalshPlan {
   /** Indices into the columns of the estimable ones, in order. */
@@ -98,7 +94,7 @@ export function walshPlan(columns: readonly Column[], rows: readonly (readonly n
   for (let j = 0; j < p; j++) (isAliased[j] ? aliasedIdx : kept).push(j);
   if (kept.length > n) return null;
 
-  // Margin: Cholesky of M - MARGIN N I, M = N I - sum over kept h h' = sum over the other Walsh
+  // Margin: Cholesky of M - WALSH_MARGIN N I, M = N I - sum over kept h h' = sum over the other Walsh
   // columns of h h' (H[D, :] H[D, :]' = N I): integer entries, exact either way; the shorter sum, lower triangle only.
   const m = new Float64Array(d * d);
   const isKept = new Uint8Array(N);
@@ -111,7 +107,7 @@ export function walshPlan(columns: readonly Column[], rows: readonly (readonly n
     const o = t * d;
     for (let a = 0; a < d; a++) for (let b = 0; b <= a; b++) m[a * d + b] += sign * hs[o + a] * hs[o + b];
   }
-  for (let i = 0; i < d; i++) m[i * d + i] -= MARGIN * N;
+  for (let i = 0; i < d; i++) m[i * d + i] -= WALSH_MARGIN * N;
   if (!positiveDefinite(m, d)) return null;
 
   const a = aliasedIdx.length;
@@ -168,10 +164,12 @@ function popParity(x: number): boolean {
 
 /**
  * Adds v to the orthonormal rows basis[0..rank) when its residual (classical Gram-Schmidt, twice:
- * Giraud, Langou and Rozloznik (2005), "twice is enough") exceeds SPAN_TOLERANCE of |v|; returns
+ * Giraud, Langou and Rozloznik (2005), Computers and Mathematics with Applications 50, from memory:
+ * "twice is enough") exceeds SPAN_TOLERANCE of |v|; returns
  * the new rank. v is overwritten.
  */
 function extend(basis: Float64Array, rank: number, d: number, v: Float64Array): number {
+  const tol = SPAN_TOLERANCE; // a local: module bindings are getters under some loaders
   let norm0 = 0;
   for (let i = 0; i < d; i++) norm0 += v[i] * v[i];
   for (let pass = 0; pass < 2; pass++) {
@@ -184,7 +182,7 @@ function extend(basis: Float64Array, rank: number, d: number, v: Float64Array): 
   let norm = 0;
   for (let i = 0; i < d; i++) norm += v[i] * v[i];
   norm = Math.sqrt(norm);
-  if (!(norm > SPAN_TOLERANCE * Math.sqrt(norm0))) return rank;
+  if (!(norm > tol * Math.sqrt(norm0))) return rank;
   for (let i = 0; i < d; i++) basis[rank * d + i] = v[i] / norm;
   return rank + 1;
 }
@@ -206,15 +204,21 @@ function positiveDefinite(m: Float64Array, d: number): boolean {
   return true;
 }
 
-/** -A^-1 (row-major a x a) by Gauss-Jordan elimination with partial pivoting (Golub and Van Loan, section 3.4), or null if singular. */
+/**
+ * -A^-1 (row-major a x a) by Gauss-Jordan elimination with partial pivoting (Golub and Van Loan,
+ * section 3.4), or null when a pivot falls below SINGULAR_TOLERANCE of the largest entry.
+ */
 function negInverse(am: Float64Array, a: number): Float64Array | null {
+  let scale = 0;
+  for (let i = 0; i < a * a; i++) scale = Math.max(scale, Math.abs(am[i]));
+  const tiny = SINGULAR_TOLERANCE * scale;
   const inv = new Float64Array(a * a);
   for (let i = 0; i < a; i++) inv[i * a + i] = -1;
   for (let c = 0; c < a; c++) {
     let piv = c;
     for (let r = c + 1; r < a; r++) if (Math.abs(am[r * a + c]) > Math.abs(am[piv * a + c])) piv = r;
     const pv = am[piv * a + c];
-    if (!(Math.abs(pv) > 1e-12)) return null;
+    if (!(Math.abs(pv) > tiny)) return null;
     if (piv !== c) {
       for (let q = 0; q < a; q++) {
         let t = am[c * a + q];

@@ -53,7 +53,8 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
   const aliased = new Int32Array(p);
   // Top of each kept column (its R column, rank + 1 entries) and of each aliased one (rank entries), mr apart.
   const topKept = new Float64Array(mr * mr);
-  const topAliased = new Float64Array(p * mr);
+  // Allocated at the first aliased column (most fits have none).
+  let topAliased = new Float64Array(0);
   let rank = 0;
   let na = 0;
   let start = 0;
@@ -67,6 +68,7 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
       for (let i = 0; i <= c; i++) topKept[c * mr + i] = prefix.r[c * rank + i];
     }
     // An aliased column's top was cut at the rank of its time; beyond it the prefix holds zeros, as the result will.
+    if (prefix.aliased.length > 0) topAliased = new Float64Array(p * mr);
     for (let a = 0; a < prefix.aliased.length; a++) {
       aliased[na] = prefix.aliased[a];
       for (let i = 0; i < rank; i++) topAliased[na * mr + i] = prefix.aliasedTop[a * rank + i];
@@ -86,6 +88,7 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
     for (let i = rank; i < n; i++) tail += w[co + i] * w[co + i];
     tail = Math.sqrt(tail);
     if (rank >= n || norm0 === 0 || tail <= tol * norm0) {
+      if (topAliased.length === 0) topAliased = new Float64Array(p * mr);
       for (let i = 0; i < rank; i++) topAliased[na * mr + i] = w[co + i];
       aliased[na++] = j;
       continue;
@@ -109,8 +112,9 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
     rank++;
     reflectColumns(v, k, n, beta[k], w, j - start + 1, p - start);
   }
-  const r = new Float64Array(rank * rank);
-  for (let c = 0; c < rank; c++) for (let i = 0; i <= c; i++) r[c * rank + i] = topKept[c * mr + i];
+  // At full rank the tops are R as they stand (rank = mr apart, zeros below the diagonal).
+  const r = rank === mr ? topKept : new Float64Array(rank * rank);
+  if (rank !== mr) for (let c = 0; c < rank; c++) for (let i = 0; i <= c; i++) r[c * rank + i] = topKept[c * mr + i];
   const aliasedTop = new Float64Array(na * rank);
   // Entries past an aliased column's own rank stay zero in topAliased (never written), as they must.
   for (let a = 0; a < na; a++) for (let i = 0; i < rank; i++) aliasedTop[a * rank + i] = topAliased[a * mr + i];
