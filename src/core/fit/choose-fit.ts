@@ -9,7 +9,9 @@
  * are off their nominal levels, the rank and the alias chains come from a fit on the nominal
  * settings; each chain is estimated through its first term in model order, and the kept
  * columns are then fitted on the ACTUAL settings, so an off-target setting adjusts the
- * estimates but never makes separable what the plan confounds (common practice).
+ * estimates but never makes separable what the plan confounds (common practice). When the
+ * nominal runs are a full factorial less a few, the plan's rank and chains come from
+ * walsh-plan.ts (the same columns, no nominal factorisation).
  * Cost: O(k 2^k + n) on the Yates path, O(n p^2) on the QR path.
  * Throws InputError for a term that names a factor the study does not have.
  * Example: chooseFit(the 2^2 yield data of Montgomery 8th ed. section 6.2, {}) -> method 'yates', terms [A, B, AB].

@@ -3,7 +3,9 @@
  * half-normal chart: one per column of an unreplicated full factorial, one per alias chain of a
  * fraction (represented by its shortest word, since terms are offered lowest order first), with
  * blocks, when present, taken out first. Found by Householder QR with rank detection over the
- * factorial runs alone, adding terms order by order until the runs are used up. The set holds
+ * factorial runs alone, adding terms order by order until the runs are used up; when the runs
+ * are a full factorial less a few, the same set and chains come from walsh-plan.ts without that
+ * factorisation. The set holds
  * two-level products only (bit masks below 2^k, never a square): on factorial runs every
  * coded column is +-1, so a square is the constant 1, the intercept's column.
  * With `actual` given, `coded` holds the nominal settings (nominal-settings.ts), which decide

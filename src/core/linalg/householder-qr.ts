@@ -5,7 +5,8 @@
  * Keeping the given order is what makes the sequential sums of squares follow the model order.
  *
  * Method: Golub and Van Loan, Matrix Computations, 4th ed., Algorithm 5.2.1 (Householder QR),
- * applied left-looking; reflector v with v[0] = 1 and beta = 2 / v'v (their section 5.1.2).
+ * applied right-looking (each reflector to every later column as soon as it is made); reflector v
+ * with v[0] = 1 and beta = 2 / v'v (their section 5.1.2).
  * Cost: O(n p r) for n rows, p columns, rank r. Storage is column-major: X[j*n + i].
  * Example: X = [1,1,1,1 | -1,1,-1,1] (n=4, p=2) -> rank 2, R = [[-2,0],[0,2]] up to signs.
  */
