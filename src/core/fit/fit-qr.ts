@@ -48,7 +48,16 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
   for (let a = 0; a < m && !lean; a++) {
     w.fill(0);
     const ro = a * m;
-    for (let k = 0; k <= a; k++) {
+    // Two columns per pass over w (each entry still adds them in the order k, k + 1).
+    let k = 0;
+    for (; k + 1 <= a; k += 2) {
+      const r0 = rinv[ro + k];
+      const r1 = rinv[ro + k + 1];
+      const x0 = f.kept[k] * n;
+      const x1 = f.kept[k + 1] * n;
+      for (let i = 0; i < n; i++) w[i] = w[i] + r0 * x[x0 + i] + r1 * x[x1 + i];
+    }
+    for (; k <= a; k++) {
       const r = rinv[ro + k];
       const xo = f.kept[k] * n;
       for (let i = 0; i < n; i++) w[i] += r * x[xo + i];
