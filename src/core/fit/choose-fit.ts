@@ -59,7 +59,6 @@ export function chooseFit(data: ResponseData, options: { readonly terms?: readon
   return { terms, blockLevels: blocks ? levels : [], blocks, cells, fit, nominal };
 }
 
-
 /** The fit on the actual settings with what the nominal plan can estimate: from walsh-plan.ts when it applies, else from a nominal factorisation (fit-on-plan.ts). */
 function fitOnNominal(columns: readonly Column[], nominal: readonly (readonly number[])[], data: ResponseData, blocks: readonly number[] | null, k: number): LinearFit {
   const plan = blocks ? null : walshPlan(columns, nominal, k);
