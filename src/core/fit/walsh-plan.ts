@@ -10,12 +10,14 @@
  * Householder QR does (householder-qr.ts), column j is aliased exactly when h_j is not in the span
  * of the h_l of the outside columns and of the columns after j; the weights of its alias chain are
  * the null vector that is zero on the other aliased columns, with -1 at j.
- * Exactness: the h_l are +-1 vectors in R^d, so a residual in Gram-Schmidt is 0 or at least
- * d^(-d/2) of |h_l| (a ratio of integer Gram determinants), far above rounding for d <= 12; and
- * the answer is used only when the smallest eigenvalue of X_kept'X_kept (that of
- * M = N I - U_kept U_kept', a d x d matrix, Cauchy interlacing for each leading set) is at least
- * WALSH_MARGIN N (tolerance.ts), so every kept column keeps at least sqrt(WALSH_MARGIN) of its norm and the QR's rank test
- * (RANK_TOLERANCE) decides the same way. Otherwise: null, and the caller factorises.
+ * Exactness: the span tests in R^d take a Gram-Schmidt residual below SPAN_TOLERANCE of |h| as
+ * 0 and answer null when one lies between that and sqrt(WALSH_MARGIN): with every basis vector
+ * taken from a residual of at least 1e-3 of its norm, rounding leaves a dependent vector's residual
+ * near 1e-12, far below the test. And the answer is used only when the smallest eigenvalue of
+ * X_kept'X_kept (that of M = N I - U_kept U_kept', d x d; Cauchy interlacing for each leading set)
+ * is at least WALSH_MARGIN N (tolerance.ts), so every kept column keeps at least sqrt(WALSH_MARGIN)
+ * of its norm and the QR's rank test (RANK_TOLERANCE) decides the same way. Otherwise: null, and
+ * the caller factorises.
  * Cost O(N d^2 + p d^2 + d^3), no factorisation of the n x p matrix.
  * Example: the 2^3 less the run (+1, +1, +1), columns I, A, B, C, AB, AC, BC, ABC -> the seven
  * runs keep I..BC, and ABC = -(I + A + B + C + AB + AC + BC) on them (every h_l is 1 at the missing run).
@@ -25,7 +27,7 @@ import { SQUARE_FLAG } from '../model/term.ts';
 import type { Column } from './columns.ts';
 import type { AliasedColumn } from './linear-fit.ts';
 
-/** The most missing points handled (the exactness bound above). */
+/** The most missing points handled (beyond, the d x d work and the outside columns grow). */
 const MAX_MISSING = 12;
 /** The largest plan handled (2^k runs), to keep the outside columns few. */
 const MAX_FACTORS = 14;
@@ -81,11 +83,16 @@ export function walshPlan(columns: readonly Column[], rows: readonly (readonly n
   const basis = new Float64Array(d * d);
   const g = new Float64Array(d);
   let rank = 0;
-  for (let t = 0; t < N && rank < d; t++) if (!inModel[t]) rank = extend(basis, rank, d, h(t, g));
+  for (let t = 0; t < N && rank < d; t++) {
+    if (inModel[t]) continue;
+    rank = extend(basis, rank, d, h(t, g));
+    if (rank < 0) return null;
+  }
   const outsideRank = rank;
   const isAliased = new Uint8Array(p);
   for (let j = p - 1; j >= 0 && rank < d; j--) {
     const r = extend(basis, rank, d, h(masks[j], g));
+    if (r < 0) return null;
     if (r > rank) isAliased[j] = 1;
     rank = r;
   }
@@ -113,15 +120,27 @@ export function walshPlan(columns: readonly Column[], rows: readonly (readonly n
   const a = aliasedIdx.length;
   const aliased: AliasedColumn[] = [];
   if (a > 0) {
-    // W: an orthonormal basis of the complement of the outside columns' span (dimension a).
+    // W: an orthonormal basis of the complement of the outside columns' span (dimension a), from
+    // the unit vectors, the one with the largest residual first (at least 1/sqrt(d) of it remains).
     const w = new Float64Array(d * d);
     w.set(basis.subarray(0, outsideRank * d));
     let r = outsideRank;
     const e = new Float64Array(d);
-    for (let i = 0; i < d && r < d; i++) {
-      e.fill(0);
-      e[i] = 1;
-      r = extend(w, r, d, e);
+    const best = new Float64Array(d);
+    while (r < d) {
+      let bestNorm = 0;
+      for (let i = 0; i < d; i++) {
+        e.fill(0);
+        e[i] = 1;
+        const norm = residual(w, r, d, e);
+        if (norm > bestNorm) {
+          bestNorm = norm;
+          best.set(e);
+        }
+      }
+      if (!(bestNorm > 0)) break;
+      for (let i = 0; i < d; i++) w[r * d + i] = best[i] / bestNorm;
+      r++;
     }
     if (r - outsideRank !== a) return null;
     // B[l] = h_l' W for every column; A = B at the aliased columns; chains Y = -A^-1.
@@ -163,15 +182,11 @@ function popParity(x: number): boolean {
 }
 
 /**
- * Adds v to the orthonormal rows basis[0..rank) when its residual (classical Gram-Schmidt, twice:
- * Giraud, Langou and Rozloznik (2005), Computers and Mathematics with Applications 50, from memory:
- * "twice is enough") exceeds SPAN_TOLERANCE of |v|; returns
- * the new rank. v is overwritten.
+ * v <- its residual on the orthonormal rows basis[0..rank) by classical Gram-Schmidt applied twice
+ * (Giraud, Langou and Rozloznik (2005), Computers and Mathematics with Applications 50, from
+ * memory: "twice is enough"); returns the residual's norm.
  */
-function extend(basis: Float64Array, rank: number, d: number, v: Float64Array): number {
-  const tol = SPAN_TOLERANCE; // a local: module bindings are getters under some loaders
-  let norm0 = 0;
-  for (let i = 0; i < d; i++) norm0 += v[i] * v[i];
+function residual(basis: Float64Array, rank: number, d: number, v: Float64Array): number {
   for (let pass = 0; pass < 2; pass++) {
     for (let q = 0; q < rank; q++) {
       let s = 0;
@@ -181,8 +196,23 @@ function extend(basis: Float64Array, rank: number, d: number, v: Float64Array): 
   }
   let norm = 0;
   for (let i = 0; i < d; i++) norm += v[i] * v[i];
-  norm = Math.sqrt(norm);
-  if (!(norm > tol * Math.sqrt(norm0))) return rank;
+  return Math.sqrt(norm);
+}
+
+/**
+ * Adds v (overwritten) to the orthonormal rows basis[0..rank) and returns rank + 1 when its
+ * residual exceeds sqrt(WALSH_MARGIN) of |v|; returns rank when the residual is below
+ * SPAN_TOLERANCE of |v| (v in the span), and -1 in between (too close to call).
+ */
+function extend(basis: Float64Array, rank: number, d: number, v: Float64Array): number {
+  const tol = SPAN_TOLERANCE; // locals: module bindings are getters under some loaders
+  const clear = Math.sqrt(WALSH_MARGIN);
+  let norm0 = 0;
+  for (let i = 0; i < d; i++) norm0 += v[i] * v[i];
+  norm0 = Math.sqrt(norm0);
+  const norm = residual(basis, rank, d, v);
+  if (!(norm > tol * norm0)) return rank;
+  if (!(norm >= clear * norm0)) return -1;
   for (let i = 0; i < d; i++) basis[rank * d + i] = v[i] / norm;
   return rank + 1;
 }
