@@ -180,3 +180,14 @@ export const FLOOR_ROUNDING = 1e-9;
 /** The Box-Cox lambda and the ends of its interval are found to within this (fit/box-cox.ts;
  * far finer than any choice of power needs; our own choice). */
 export const BOX_COX_PRECISION = 1e-6;
+
+/** walsh-plan.ts answers only when the smallest eigenvalue of X_kept'X_kept is at least this
+ * fraction of N, so that every kept column keeps at least sqrt of it (1e-3) of its norm; its span
+ * tests likewise call a residual clear only from sqrt of it up. Our own choice, far above
+ * RANK_TOLERANCE and rounding, so Householder QR keeps the same columns. */
+export const WALSH_MARGIN = 1e-6;
+
+/** A Gram-Schmidt residual below this fraction of the vector's norm means the vector lies in the
+ * span (walsh-plan.ts): with every basis vector taken from a residual of at least
+ * sqrt(WALSH_MARGIN) of its norm, rounding leaves about 1e-12 (our own choice, far between). */
+export const SPAN_TOLERANCE = 1e-6;

@@ -10,9 +10,7 @@ const FOLDER = 'src/core';
  * constant or class) need none and are not listed.
  */
 const EXCEPTIONS: Record<string, string> = {
-  'src/core/fit/columns.ts': 'tested through analyze and the fit tests; its own test comes with the fit work under way in that folder',
   'src/core/fit/half-normal.ts': 'tested through analyze (the half-normal points of Lenth\'s step); own test with the fit work under way',
-  'src/core/fit/saturated-effects.ts': 'tested through lenth-step and analyze; own test with the fit work under way',
 };
 
 const hasCode = (text: string) => /\bexport\s+(?:function|const|class)\b/.test(withoutComments(text));

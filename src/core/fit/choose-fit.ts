@@ -9,7 +9,9 @@
  * are off their nominal levels, the rank and the alias chains come from a fit on the nominal
  * settings; each chain is estimated through its first term in model order, and the kept
  * columns are then fitted on the ACTUAL settings, so an off-target setting adjusts the
- * estimates but never makes separable what the plan confounds (common practice).
+ * estimates but never makes separable what the plan confounds (common practice). When the
+ * nominal runs are a full factorial less a few, the plan's rank and chains come from
+ * walsh-plan.ts (the same columns, no nominal factorisation).
  * Cost: O(k 2^k + n) on the Yates path, O(n p^2) on the QR path.
  * Throws InputError for a term that names a factor the study does not have.
  * Example: chooseFit(the 2^2 yield data of Montgomery 8th ed. section 6.2, {}) -> method 'yates', terms [A, B, AB].
@@ -17,12 +19,13 @@
 import { defaultTerms } from '../model/formula.ts';
 import { checkTerms, compareTerms, isSquare, type Term } from '../model/term.ts';
 import type { ResponseData } from '../study/response-data.ts';
-import { blockLevels, modelColumns, modelMatrix } from './columns.ts';
+import { blockLevels, modelColumns, modelMatrix, type Column } from './columns.ts';
 import { fitOnPlan } from './fit-on-plan.ts';
 import { fitQr } from './fit-qr.ts';
 import { fitYates, yatesCells } from './fit-yates.ts';
 import type { LinearFit } from './linear-fit.ts';
 import { nominalSettings, type NominalSettings } from './nominal-settings.ts';
+import { walshPlan } from './walsh-plan.ts';
 
 export interface FitChoice {
   /** Model terms in model order. */
@@ -52,7 +55,13 @@ export function chooseFit(data: ResponseData, options: { readonly terms?: readon
     ? fitYates(columns, terms, cells, k, data.y)
     : nominal.exact
       ? fitQr(columns, modelMatrix(columns, data.coded, blocks), data.y)
-      : fitOnPlan(columns, modelMatrix(columns, nominal.nominal, blocks), modelMatrix(columns, data.coded, blocks), data.y);
+      : fitOnNominal(columns, nominal.nominal, data, blocks, k);
   return { terms, blockLevels: blocks ? levels : [], blocks, cells, fit, nominal };
 }
 
+/** The fit on the actual settings with what the nominal plan can estimate: from walsh-plan.ts when it applies, else from a nominal factorisation (fit-on-plan.ts). */
+function fitOnNominal(columns: readonly Column[], nominal: readonly (readonly number[])[], data: ResponseData, blocks: readonly number[] | null, k: number): LinearFit {
+  const plan = blocks ? null : walshPlan(columns, nominal, k);
+  const xActual = modelMatrix(columns, data.coded, blocks);
+  return plan ? fitOnPlan(columns, new Float64Array(0), xActual, data.y, plan) : fitOnPlan(columns, modelMatrix(columns, nominal, blocks), xActual, data.y);
+}

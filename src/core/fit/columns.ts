@@ -6,7 +6,7 @@
  * average over blocks and a prediction is for an average block (Montgomery, Design and Analysis
  * of Experiments, 8th ed., section 7.2; the coding is common practice for blocks as fixed offsets).
  */
-import { termValue, type Term } from '../model/term.ts';
+import { SQUARE_FLAG, termValue, type Term } from '../model/term.ts';
 
 export type Column =
   | { readonly kind: 'intercept' }
@@ -42,7 +42,11 @@ export function columnValue(c: Column, coded: ArrayLike<number>, block: number |
   }
 }
 
-/** The model matrix, column-major n x p. */
+/**
+ * The model matrix, column-major n x p. A product column is its parent's column (the term less its
+ * highest factor) times that factor, when the parent is also in the matrix: the same multiplications
+ * in the same order as termValue (lowest factor first), so the same numbers, at one product per entry.
+ */
 export function modelMatrix(
   cols: readonly Column[],
   coded: readonly (readonly number[])[],
@@ -53,9 +57,23 @@ export function modelMatrix(
   const levels = blockLevels(blocks);
   const last = levels[levels.length - 1];
   const x = new Float64Array(n * p);
+  // Offset in x of the column holding each plain product already filled, by factor mask.
+  const filled = new Map<number, number>();
   for (let j = 0; j < p; j++) {
     const c = cols[j];
-    for (let i = 0; i < n; i++) x[j * n + i] = columnValue(c, coded[i], blocks?.[i], last);
+    const o = j * n;
+    if (c.kind === 'term' && (c.term & SQUARE_FLAG) === 0 && c.term !== 0) {
+      const mask = c.term;
+      const top = 31 - Math.clz32(mask);
+      const parent = mask ^ (1 << top);
+      const po = parent === 0 ? -1 : (filled.get(parent) ?? -2);
+      if (po === -1) for (let i = 0; i < n; i++) x[o + i] = 1 * coded[i][top];
+      else if (po >= 0) for (let i = 0; i < n; i++) x[o + i] = x[po + i] * coded[i][top];
+      else for (let i = 0; i < n; i++) x[o + i] = valueOfTerm(mask, coded[i]);
+      if (!filled.has(mask)) filled.set(mask, o);
+      continue;
+    }
+    for (let i = 0; i < n; i++) x[o + i] = columnValue(c, coded[i], blocks?.[i], last);
   }
   return x;
 }

@@ -5,29 +5,42 @@
  * off-target settings adjust the estimates but never separate what the plan confounds. Aliases
  * are those of the plan (weights +-1 in a regular fraction). Source: common practice; the QR
  * method as in fit-qr.ts (Golub and Van Loan, Matrix Computations, 4th ed., section 5.3).
- * Cost: two QR factorisations, O(n p^2). Throws nothing.
+ * The plan may also come from walsh-plan.ts (a full factorial less a few runs), with the same
+ * kept columns and chains and no nominal factorisation.
+ * Cost: two QR factorisations, O(n p^2), or one with the plan given. Throws nothing.
  * Example: a 2^(4-1) with D = ABC and one setting at 0.8 instead of 1, terms A..D and all
  * two-factor interactions -> 7 kept columns, aliased BC (= AD), BD (= AC), CD (= AB).
  */
 import type { Column } from './columns.ts';
 import type { QrFactor } from '../linalg/householder-qr.ts';
 import { fitQr } from './fit-qr.ts';
-import type { LinearFit } from './linear-fit.ts';
+import type { AliasedColumn, LinearFit } from './linear-fit.ts';
+
+/** What the nominal plan decides: kept and aliased columns (a lean nominal fit has them, or walsh-plan.ts). */
+export interface PlanColumns {
+  readonly kept: Int32Array;
+  readonly aliased: readonly AliasedColumn[];
+  readonly qr?: QrFactor;
+}
 
 /**
- * `planFit`: the lean fit on the nominal matrix when the caller already has it (saves one
- * factorisation); `lean`: the actual fit is lean too (fit-qr.ts: no (X'X)^-1, no leverage), for a
+ * `planFit`: the plan's kept and aliased columns when the caller already has them (saves the
+ * nominal factorisation; `xNominal` is then not read); `lean`: the actual fit is lean too (fit-qr.ts: no (X'X)^-1, no leverage), for a
  * caller that needs only the estimates (the saturated set of Lenth's method); `actualPrefix`: a
  * factorisation of the first kept columns on the actual settings, reused when it matches
- * (householder-qr.ts: the same result, less work).
+ * (householder-qr.ts: the same result, less work). `xActual` holds every column, or the kept ones only.
  */
-export function fitOnPlan(columns: readonly Column[], xNominal: Float64Array, xActual: Float64Array, y: readonly number[], planFit?: LinearFit, lean = false, actualPrefix?: QrFactor): LinearFit {
+export function fitOnPlan(columns: readonly Column[], xNominal: Float64Array, xActual: Float64Array, y: readonly number[], planFit?: PlanColumns, lean = false, actualPrefix?: QrFactor): LinearFit {
   const n = y.length;
   const plan = planFit ?? fitQr(columns, xNominal, y, true);
   const m = plan.kept.length;
   const kept = Array.from(plan.kept, (j) => columns[j]);
-  const x = new Float64Array(n * m);
-  for (let a = 0; a < m; a++) x.set(xActual.subarray(plan.kept[a] * n, (plan.kept[a] + 1) * n), a * n);
+  let all = m === columns.length;
+  for (let a = 0; a < m && all; a++) all = plan.kept[a] === a;
+  // Every column kept, or only the kept columns given: the actual matrix as it is (not modified by the fit).
+  const given = all || xActual.length === n * m;
+  const x = given ? xActual : new Float64Array(n * m);
+  if (!given) for (let a = 0; a < m; a++) x.set(xActual.subarray(plan.kept[a] * n, (plan.kept[a] + 1) * n), a * n);
   const act = fitQr(kept, x, y, lean, actualPrefix);
   const up = (a: number): number => plan.kept[a];
   // Should the actual settings lose a further column (they almost never do), it is listed too.

@@ -41,19 +41,28 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
   const rinv = lean ? new Float64Array(0) : invertUpper(f.r, m);
   const covUnscaled = lean ? new Float64Array(0) : crossInverse(rinv, m);
 
-  // Leverage h_i = || R^-T x_i ||^2 over the kept columns (Seber and Lee section 10.2).
+  // Leverage h_i = || R^-T x_i ||^2 over the kept columns (Seber and Lee section 10.2): column a of
+  // X R^-1 is sum_{k<=a} Rinv[k,a] x_(kept k), built for all runs at once, then squared into h.
   const leverage = new Float64Array(n);
-  const w = new Float64Array(m);
-  for (let i = 0; i < n && !lean; i++) {
-    for (let a = 0; a < m; a++) {
-      // w = R^-T x_i: w_a = sum_{k<=a} Rinv[k,a] x_i[kept k]
-      let s = 0;
-      for (let k = 0; k <= a; k++) s += rinv[a * m + k] * x[f.kept[k] * n + i];
-      w[a] = s;
+  const w = new Float64Array(n);
+  for (let a = 0; a < m && !lean; a++) {
+    w.fill(0);
+    const ro = a * m;
+    // Two columns per pass over w (each entry still adds them in the order k, k + 1).
+    let k = 0;
+    for (; k + 1 <= a; k += 2) {
+      const r0 = rinv[ro + k];
+      const r1 = rinv[ro + k + 1];
+      const x0 = f.kept[k] * n;
+      const x1 = f.kept[k + 1] * n;
+      for (let i = 0; i < n; i++) w[i] = w[i] + r0 * x[x0 + i] + r1 * x[x1 + i];
     }
-    let h = 0;
-    for (let a = 0; a < m; a++) h += w[a] * w[a];
-    leverage[i] = h;
+    for (; k <= a; k++) {
+      const r = rinv[ro + k];
+      const xo = f.kept[k] * n;
+      for (let i = 0; i < n; i++) w[i] += r * x[xo + i];
+    }
+    for (let i = 0; i < n; i++) leverage[i] += w[i] * w[i];
   }
 
   const aliased: AliasedColumn[] = [];

@@ -3,7 +3,9 @@
  * half-normal chart: one per column of an unreplicated full factorial, one per alias chain of a
  * fraction (represented by its shortest word, since terms are offered lowest order first), with
  * blocks, when present, taken out first. Found by Householder QR with rank detection over the
- * factorial runs alone, adding terms order by order until the runs are used up. The set holds
+ * factorial runs alone, adding terms order by order until the runs are used up; when the runs
+ * are a full factorial less a few, the same set and chains come from walsh-plan.ts without that
+ * factorisation. The set holds
  * two-level products only (bit masks below 2^k, never a square): on factorial runs every
  * coded column is +-1, so a square is the constant 1, the intercept's column.
  * With `actual` given, `coded` holds the nominal settings (nominal-settings.ts), which decide
@@ -14,10 +16,12 @@
  * the saturated fits resume from them (householder-qr.ts), with the same result.
  */
 import { compareTerms, termOrder, type Term } from '../model/term.ts';
-import { blockLevels, modelColumns, modelMatrix } from './columns.ts';
+import { blockLevels, modelColumns, modelMatrix, type Column } from './columns.ts';
 import { fitOnPlan } from './fit-on-plan.ts';
 import { fitQr } from './fit-qr.ts';
 import type { QrFactor } from '../linalg/householder-qr.ts';
+import type { LinearFit } from './linear-fit.ts';
+import { walshPlan, type WalshPlan } from './walsh-plan.ts';
 
 export interface SaturatedEffect {
   readonly term: Term;
@@ -43,20 +47,32 @@ export function saturatedEffects(
     order++;
     count += binomial(k, order);
   }
-  let fit = null as ReturnType<typeof fitQr> | null;
+  let fit = null as LinearFit | null;
+  // A full factorial less a few runs: the set and its chains without a nominal factorisation (walsh-plan.ts).
+  let plan: WalshPlan | null = null;
+  let cols: Column[] = [];
   for (; order <= k; order++) {
     const terms: Term[] = [];
     for (let t = 1; t < 1 << k; t++) if (termOrder(t) <= order) terms.push(t);
     terms.sort(compareTerms);
-    const cols = modelColumns(levels, terms);
+    cols = modelColumns(levels, terms);
+    plan = blocks ? null : walshPlan(cols, coded, k);
+    if (plan) {
+      if (plan.kept.length >= target) break;
+      continue;
+    }
     fit = fitQr(cols, modelMatrix(cols, coded, blocks), y, true, prefix?.nominal);
     if (fit.kept.length >= target) break;
   }
-  if (!fit) return [];
   // The set comes from the nominal settings (`coded`); the effects, like the model's, from the actual ones.
-  // The lean nominal fit just made is the plan: fitOnPlan need not factorise it again; only the
-  // estimates are read here, so the actual fit is lean as well (no (X'X)^-1, no leverage).
-  if (actual) fit = fitOnPlan(fit.columns, new Float64Array(0), modelMatrix(fit.columns, actual, blocks), y, fit, true, prefix?.actual);
+  // The plan found above (a lean nominal fit, or walsh-plan.ts) is not worked out again by
+  // fitOnPlan; only the estimates are read here, so the actual fit is lean as well (no (X'X)^-1, no leverage).
+  if (plan) {
+    const keptCols = Array.from(plan.kept, (j) => cols[j]);
+    fit = fitOnPlan(cols, new Float64Array(0), modelMatrix(keptCols, actual ?? coded, blocks), y, plan, true, actual ? prefix?.actual : prefix?.nominal);
+  }
+  else if (fit && actual) fit = fitOnPlan(fit.columns, new Float64Array(0), modelMatrix(fit.columns, actual, blocks), y, fit, true, prefix?.actual);
+  if (!fit) return [];
   const byColumn = new Map<number, { term: Term; weight: number }[]>();
   for (const a of fit.aliased) {
     const c = fit.columns[a.column];

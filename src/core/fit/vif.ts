@@ -32,6 +32,9 @@ export function columnVifs(fit: LinearFit, coded: readonly (readonly number[])[]
     return out;
   }
   const value = columnValue; // a local: module bindings are getters under some loaders
+  // The factorised matrix holds the kept columns' values already (the same numbers: columns.ts).
+  const qr = fit.qr;
+  const x = qr && qr.n === n && qr.x.length === n * qr.p && qr.rank === m ? qr.x : null;
   const v = new Float64Array(n);
   for (let a = 0; a < m; a++) {
     const c = fit.columns[fit.kept[a]];
@@ -40,7 +43,8 @@ export function columnVifs(fit: LinearFit, coded: readonly (readonly number[])[]
       continue;
     }
     let mean = 0;
-    for (let i = 0; i < n; i++) mean += v[i] = value(c, coded[i], blocks?.[i], last);
+    if (x) for (let i = 0, o = qr!.kept[a] * n; i < n; i++) mean += v[i] = x[o + i];
+    else for (let i = 0; i < n; i++) mean += v[i] = value(c, coded[i], blocks?.[i], last);
     mean /= n;
     let s = 0;
     for (let i = 0; i < n; i++) s += (v[i] - mean) ** 2;

@@ -5,7 +5,8 @@
  * Keeping the given order is what makes the sequential sums of squares follow the model order.
  *
  * Method: Golub and Van Loan, Matrix Computations, 4th ed., Algorithm 5.2.1 (Householder QR),
- * applied left-looking; reflector v with v[0] = 1 and beta = 2 / v'v (their section 5.1.2).
+ * applied right-looking (each reflector to every later column as soon as it is made); reflector v
+ * with v[0] = 1 and beta = 2 / v'v (their section 5.1.2).
  * Cost: O(n p r) for n rows, p columns, rank r. Storage is column-major: X[j*n + i].
  * Example: X = [1,1,1,1 | -1,1,-1,1] (n=4, p=2) -> rank 2, R = [[-2,0],[0,2]] up to signs.
  */
@@ -41,16 +42,22 @@ export interface QrFactor {
  * tolerance whose matrix equals the first prefix.p columns of X entry for entry, the work on those
  * columns is taken from it: columns are processed left to right and each depends only on those
  * before it, so the result is the same to the last bit. A prefix that does not match is ignored.
+ * Each reflector is applied to every later column as soon as it is made (right-looking), four
+ * columns at a time so that their sums run side by side; each column still sees the same
+ * operations in the same order as when taken alone. Work arrays are allocated once per call.
  */
 export function householderQr(x: Float64Array, n: number, p: number, tol: number = RANK_TOLERANCE, prefix?: QrFactor): QrFactor {
-  const v = new Float64Array(n * Math.min(n, p));
-  const beta = new Float64Array(Math.min(n, p));
-  const kept: number[] = [];
-  const aliased: number[] = [];
-  const topOfKept: Float64Array[] = [];
-  const topOfAliased: Float64Array[] = [];
-  const col = new Float64Array(n);
+  const mr = Math.min(n, p);
+  const v = new Float64Array(n * mr);
+  const beta = new Float64Array(mr);
+  const kept = new Int32Array(p);
+  const aliased = new Int32Array(p);
+  // Top of each kept column (its R column, rank + 1 entries) and of each aliased one (rank entries), mr apart.
+  const topKept = new Float64Array(mr * mr);
+  // Allocated at the first aliased column (most fits have none).
+  let topAliased = new Float64Array(0);
   let rank = 0;
+  let na = 0;
   let start = 0;
   if (prefix && prefix.tol === tol && samePrefix(prefix, x, n, p)) {
     rank = prefix.rank;
@@ -58,76 +65,66 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
     v.set(prefix.v);
     beta.set(prefix.beta);
     for (let c = 0; c < rank; c++) {
-      kept.push(prefix.kept[c]);
-      const top = new Float64Array(c + 1);
-      for (let i = 0; i <= c; i++) top[i] = prefix.r[c * rank + i];
-      topOfKept.push(top);
+      kept[c] = prefix.kept[c];
+      for (let i = 0; i <= c; i++) topKept[c * mr + i] = prefix.r[c * rank + i];
     }
     // An aliased column's top was cut at the rank of its time; beyond it the prefix holds zeros, as the result will.
+    if (prefix.aliased.length > 0) topAliased = new Float64Array(p * mr);
     for (let a = 0; a < prefix.aliased.length; a++) {
-      aliased.push(prefix.aliased[a]);
-      topOfAliased.push(prefix.aliasedTop.slice(a * rank, (a + 1) * rank));
+      aliased[na] = prefix.aliased[a];
+      for (let i = 0; i < rank; i++) topAliased[na * mr + i] = prefix.aliasedTop[a * rank + i];
+      na++;
     }
   }
+  // The columns still to do (column j at (j - start) n), with the prefix's reflectors applied.
+  const w = x.slice(start * n, p * n);
+  for (let k = 0; k < rank; k++) reflectColumns(v, k, n, beta[k], w, 0, p - start);
   for (let j = start; j < p; j++) {
     const off = j * n;
+    const co = (j - start) * n;
     let norm0 = 0;
-    for (let i = 0; i < n; i++) {
-      const a = x[off + i];
-      col[i] = a;
-      norm0 += a * a;
-    }
+    for (let i = 0; i < n; i++) norm0 += x[off + i] * x[off + i];
     norm0 = Math.sqrt(norm0);
-    // Apply the reflectors found so far.
-    for (let k = 0; k < rank; k++) {
-      const vo = k * n;
-      let s = 0;
-      for (let i = k; i < n; i++) s += v[vo + i] * col[i];
-      s *= beta[k];
-      for (let i = k; i < n; i++) col[i] -= s * v[vo + i];
-    }
     let tail = 0;
-    for (let i = rank; i < n; i++) tail += col[i] * col[i];
+    for (let i = rank; i < n; i++) tail += w[co + i] * w[co + i];
     tail = Math.sqrt(tail);
     if (rank >= n || norm0 === 0 || tail <= tol * norm0) {
-      aliased.push(j);
-      topOfAliased.push(col.slice(0, rank));
+      if (topAliased.length === 0) topAliased = new Float64Array(p * mr);
+      for (let i = 0; i < rank; i++) topAliased[na * mr + i] = w[co + i];
+      aliased[na++] = j;
       continue;
     }
     // New reflector from rows rank..n-1 (Golub and Van Loan Algorithm 5.1.1, sign chosen to avoid cancellation).
     const k = rank;
-    const alpha = col[k] >= 0 ? -tail : tail;
+    const alpha = w[co + k] >= 0 ? -tail : tail;
     const vo = k * n;
-    const v0 = col[k] - alpha;
+    const v0 = w[co + k] - alpha;
     v[vo + k] = 1;
     let vtv = 1;
     for (let i = k + 1; i < n; i++) {
-      const t = col[i] / v0;
+      const t = w[co + i] / v0;
       v[vo + i] = t;
       vtv += t * t;
     }
     beta[k] = 2 / vtv;
-    col[k] = alpha;
-    topOfKept.push(col.slice(0, k + 1));
-    kept.push(j);
+    for (let i = 0; i < k; i++) topKept[k * mr + i] = w[co + i];
+    topKept[k * mr + k] = alpha;
+    kept[k] = j;
     rank++;
+    reflectColumns(v, k, n, beta[k], w, j - start + 1, p - start);
   }
-  const r = new Float64Array(rank * rank);
-  for (let c = 0; c < rank; c++) {
-    const t = topOfKept[c];
-    for (let i = 0; i <= c; i++) r[c * rank + i] = t[i];
-  }
-  const aliasedTop = new Float64Array(aliased.length * rank);
-  for (let a = 0; a < aliased.length; a++) {
-    const t = topOfAliased[a];
-    for (let i = 0; i < t.length; i++) aliasedTop[a * rank + i] = t[i];
-  }
+  // At full rank the tops are R as they stand (rank = mr apart, zeros below the diagonal).
+  const r = rank === mr ? topKept : new Float64Array(rank * rank);
+  if (rank !== mr) for (let c = 0; c < rank; c++) for (let i = 0; i <= c; i++) r[c * rank + i] = topKept[c * mr + i];
+  const aliasedTop = new Float64Array(na * rank);
+  // Entries past an aliased column's own rank stay zero in topAliased (never written), as they must.
+  for (let a = 0; a < na; a++) for (let i = 0; i < rank; i++) aliasedTop[a * rank + i] = topAliased[a * mr + i];
   return {
     n,
     p,
     rank,
-    kept: Int32Array.from(kept),
-    aliased: Int32Array.from(aliased),
+    kept: kept.slice(0, rank),
+    aliased: aliased.slice(0, na),
     r,
     v: v.subarray(0, n * rank),
     beta: beta.subarray(0, rank),
@@ -137,9 +134,58 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
   };
 }
 
+/** Reflector k applied to columns from..to-1 of w (n rows each): four at a time, then one by one. */
+function reflectColumns(v: Float64Array, k: number, n: number, beta: number, w: Float64Array, from: number, to: number): void {
+  const vo = k * n;
+  let q = from;
+  for (; q + 3 < to; q += 4) reflect4(v, vo, k, n, beta, w, q * n);
+  for (; q < to; q++) reflect(v, vo, k, n, beta, w, q * n);
+}
+
+/**
+ * col <- (I - beta v v') col over rows k..n-1, col at offset co, v the reflector at offset vo
+ * (Golub and Van Loan section 5.1.4).
+ */
+function reflect(v: Float64Array, vo: number, k: number, n: number, beta: number, col: Float64Array, co: number): void {
+  let s = 0;
+  for (let i = k; i < n; i++) s += v[vo + i] * col[co + i];
+  s *= beta;
+  for (let i = k; i < n; i++) col[co + i] -= s * v[vo + i];
+}
+
+/** reflect on the four columns at co, co + n, co + 2n, co + 3n: each the same sums in the same order. */
+function reflect4(v: Float64Array, vo: number, k: number, n: number, beta: number, w: Float64Array, co: number): void {
+  const c1 = co + n;
+  const c2 = c1 + n;
+  const c3 = c2 + n;
+  let s0 = 0;
+  let s1 = 0;
+  let s2 = 0;
+  let s3 = 0;
+  for (let i = k; i < n; i++) {
+    const vi = v[vo + i];
+    s0 += vi * w[co + i];
+    s1 += vi * w[c1 + i];
+    s2 += vi * w[c2 + i];
+    s3 += vi * w[c3 + i];
+  }
+  s0 *= beta;
+  s1 *= beta;
+  s2 *= beta;
+  s3 *= beta;
+  for (let i = k; i < n; i++) {
+    const vi = v[vo + i];
+    w[co + i] -= s0 * vi;
+    w[c1 + i] -= s1 * vi;
+    w[c2 + i] -= s2 * vi;
+    w[c3 + i] -= s3 * vi;
+  }
+}
+
 /** Whether `prefix` factorised exactly the first prefix.p columns of x (n rows). */
 function samePrefix(prefix: QrFactor, x: Float64Array, n: number, p: number): boolean {
   if (prefix.n !== n || prefix.p > p || prefix.x.length !== n * prefix.p) return false;
+  if (prefix.x === x) return true;
   for (let i = 0; i < n * prefix.p; i++) if (!Object.is(prefix.x[i], x[i])) return false;
   return true;
 }
@@ -147,23 +193,11 @@ function samePrefix(prefix: QrFactor, x: Float64Array, n: number, p: number): bo
 /** y <- Q'y in place (Golub and Van Loan section 5.1.6: apply the reflectors in order). */
 export function applyQt(f: QrFactor, y: Float64Array): void {
   const { n, v, beta } = f;
-  for (let k = 0; k < f.rank; k++) {
-    const vo = k * n;
-    let s = 0;
-    for (let i = k; i < n; i++) s += v[vo + i] * y[i];
-    s *= beta[k];
-    for (let i = k; i < n; i++) y[i] -= s * v[vo + i];
-  }
+  for (let k = 0; k < f.rank; k++) reflect(v, k * n, k, n, beta[k], y, 0);
 }
 
 /** z <- Q z in place (the reflectors in reverse order). */
 export function applyQ(f: QrFactor, z: Float64Array): void {
   const { n, v, beta } = f;
-  for (let k = f.rank - 1; k >= 0; k--) {
-    const vo = k * n;
-    let s = 0;
-    for (let i = k; i < n; i++) s += v[vo + i] * z[i];
-    s *= beta[k];
-    for (let i = k; i < n; i++) z[i] -= s * v[vo + i];
-  }
+  for (let k = f.rank - 1; k >= 0; k--) reflect(v, k * n, k, n, beta[k], z, 0);
 }
