@@ -12,7 +12,8 @@
  * each ANOVA table names its type.
  * Sources: Montgomery, Design and Analysis of Experiments, 8th ed., chapters 6-8 and 10;
  * Lenth (1989), Technometrics 31, 469-473; formulas in the files each step calls.
- * The response's scale is taken out before the fit and put back after it (response-scale.ts): a
+ * The response's scale is taken out before the fit and put back after it (response-scale.ts; a
+ * response within 2^+-64 of [1, 2) is analysed as it is, which gives the same bits): a
  * change of unit by a power of two scales every effect exactly, and t, F and p stay the same, from
  * 1e-300 to 1e300; a sum of squares beyond binary64 is null.
  * Cost: dominated by the fit (O(n p^2) by QR) and, when Lenth applies, the saturated fit.
@@ -42,7 +43,7 @@ import { residualSsQr, residualSsYates } from './residual-ss.ts';
 import { RANK_TOLERANCE } from '../tolerance.ts';
 import { NO_TRANSFORM, transformResponses, type ResponseTransform } from './response-transform.ts';
 import { validateResponseData } from './validate-response.ts';
-import { pow2Scaler, scaleAnalysisBack, scaleExponent } from './response-scale.ts';
+import { analysisScaleExponent, pow2Scaler, scaleAnalysisBack, scaleExponent } from './response-scale.ts';
 import { testedExtent } from '../predict/tested-extent.ts';
 import { columnVifs, VIF_LIMIT, vifDrivers } from './vif.ts';
 import { isWarning } from './verdicts.ts';
@@ -67,10 +68,10 @@ export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analys
   if (fitted !== raw) validateResponseData(fitted);
   // The response's scale comes out before the fit and goes back after it (response-scale.ts), so
   // that sums of squares stay finite at any magnitude and every figure scales exactly.
-  const e = scaleExponent(fitted.y);
+  const e = analysisScaleExponent(fitted.y); // 0 when y needs no rescaling (response-scale.ts)
   const yp = bound === null ? raw.y : raw.y.map((v) => v - bound);
   const ep = scaleExponent(yp);
-  const inner = analyzeOnScale({ ...fitted, y: fitted.y.map(pow2Scaler(-e)) }, yp.map(pow2Scaler(-ep)), transform, bound, options);
+  const inner = analyzeOnScale(e === 0 ? fitted : { ...fitted, y: fitted.y.map(pow2Scaler(-e)) }, yp.map(pow2Scaler(-ep)), transform, bound, options);
   const out = scaleAnalysisBack(inner, e);
   return { ...out, warnings: [...fitted.messages, ...out.verdicts.filter(isWarning).map(verdictText)] };
 }
