@@ -37,7 +37,7 @@ import { lenthStep, withLenthT } from './lenth-step.ts';
 import { screeningStep } from './screening-step.ts';
 import { findRepeats } from './repeats.ts';
 import { boxCoxOn } from './box-cox.ts';
-import { modelMatrix } from './columns.ts';
+import { modelMatrix, type Column } from './columns.ts';
 import { householderQr } from '../linalg/householder-qr.ts';
 import { residualSsQr, residualSsYates } from './residual-ss.ts';
 import { RANK_TOLERANCE } from '../tolerance.ts';
@@ -86,11 +86,13 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
   const nominal = plan.exact ? null : plan.nominal;
   const vifs = columnVifs(fit, coded, blocks);
   const est = estimateTerms(fit, factors, blockLevels, alpha, vifs);
-  const keptColumns = Array.from(fit.kept, (j) => fit.columns[j]);
+  const keptColumns: Column[] = [];
+  for (let j = 0; j < fit.kept.length; j++) keptColumns.push(fit.columns[fit.kept[j]]);
   const vifLimit = VIF_LIMIT; // a local: module bindings are getters under some loaders, read here once per term
-  const collinear = est.terms.flatMap((t) =>
-    t.vif != null && t.vif > vifLimit ? [{ letters: t.estimates ?? t.letters, vif: t.vif, runs: vifDrivers(keptColumns, coded, blocks, y, keptColumns.findIndex((c) => c.kind === 'term' && c.term === t.term), data.labels) }] : [],
-  );
+  const collinear: { letters: string; vif: number; runs: string[] }[] = [];
+  for (const t of est.terms) {
+    if (t.vif != null && t.vif > vifLimit) collinear.push({ letters: t.estimates ?? t.letters, vif: t.vif, runs: vifDrivers(keptColumns, coded, blocks, y, keptColumns.findIndex((c) => c.kind === 'term' && c.term === t.term), data.labels) });
+  }
   const repeats = findRepeats({ coded, y, points: data.points, blocks, cells, k: factors.length, nominal });
   const pe = repeats.pure;
   const tables = anovaTables(fit, y, est.labels, est.terms.map((t) => t.p), pe);
@@ -134,7 +136,7 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
     covUnscaled: fit.covUnscaled,
     sigma: est.sigma,
     dfResidual: fit.dfResidual,
-    pValues: new Map<Term, number | null>(terms.map((t) => [t.term, t.p ?? null])),
+    pValues: termPValues(terms),
     curvatureP: curv?.p ?? null,
     extent: testedExtent(factors, coded),
     transform: { token: transform.token, lambda: transform.lambda, lowerBound: bound, suggestion: bc?.suggestion ?? null },
@@ -165,4 +167,11 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
     boxCox: bc,
     model,
   };
+}
+
+/** Each term's p-value by term, filled in one pass (no array of pairs). */
+function termPValues(terms: readonly { readonly term: Term; readonly p?: number | null }[]): Map<Term, number | null> {
+  const out = new Map<Term, number | null>();
+  for (const t of terms) out.set(t.term, t.p ?? null);
+  return out;
 }

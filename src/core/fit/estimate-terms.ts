@@ -39,10 +39,11 @@ export function estimateTerms(fit: LinearFit, factors: readonly Factor[], blockL
   const dfRes = fit.dfResidual;
   const sigma = dfRes > 0 ? Math.sqrt(fit.rss / dfRes) : null;
   const tq = dfRes > 0 ? tQuantile(1 - alpha / 2, dfRes) : null;
+  const iv = { se: null as number | null, ciLo: null as number | null, ciHi: null as number | null, piLo: null as number | null, piHi: null as number | null }; // reused per column
   const estimate = (j: number): Estimate => {
     const coef = fit.coef[j];
     if (sigma === null || tq === null) return { coef, se: null, t: null, p: null, ci: null };
-    const { se, ciLo, ciHi } = tIntervals(coef, fit.covUnscaled[j * m + j], sigma, tq);
+    const { se, ciLo, ciHi } = tIntervals(coef, fit.covUnscaled[j * m + j], sigma, tq, iv);
     if (se === 0) return { coef, se, t: null, p: null, ci: [ciLo!, ciHi!] };
     const t = coef / se!;
     return { coef, se, t, p: tTwoSidedP(t, dfRes), ci: [ciLo!, ciHi!] };

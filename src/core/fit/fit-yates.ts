@@ -49,6 +49,25 @@ export function yatesCells(coded: readonly (readonly number[])[], k: number): In
   return cells;
 }
 
+/* One-entry memo of (X'X)^-1 = diag(1/N, 1/N_f, ..., 1/N_f): it depends on the design's shape
+ * only, and at p = 128 it is 130 KB to clear per fit. Shared between fits of one shape, so it is
+ * read, never written, by everything downstream (as LinearFit and FittedModel are read-only). */
+let memoCov = new Float64Array(0);
+let memoN = 0;
+let memoNf = 0;
+
+function diagonalCovariance(n: number, nf: number, p: number): Float64Array {
+  if (memoCov.length !== p * p || memoN !== n || memoNf !== nf) {
+    const cov = new Float64Array(p * p);
+    cov[0] = 1 / n;
+    for (let j = 1; j < p; j++) cov[j * p + j] = 1 / nf;
+    memoCov = cov;
+    memoN = n;
+    memoNf = nf;
+  }
+  return memoCov;
+}
+
 export function fitYates(columns: readonly Column[], terms: readonly Term[], cells: Int32Array, k: number, y: ArrayLike<number>): LinearFit {
   const n = y.length;
   const size = 1 << k;
@@ -67,16 +86,14 @@ export function fitYates(columns: readonly Column[], terms: readonly Term[], cel
   walshHadamard(total); // total[t] is now the contrast of term t
   const coef = new Float64Array(p);
   const seqSS = new Float64Array(p);
-  const covUnscaled = new Float64Array(p * p);
+  const covUnscaled = diagonalCovariance(n, nf, p);
   coef[0] = intercept;
   seqSS[0] = n * intercept * intercept;
-  covUnscaled[0] = 1 / n;
   const model = new Float64Array(size);
   for (let j = 0; j < terms.length; j++) {
     const b = total[terms[j]] / nf;
     coef[j + 1] = b;
     seqSS[j + 1] = nf * b * b;
-    covUnscaled[(j + 1) * p + (j + 1)] = 1 / nf;
     model[terms[j]] = b;
   }
   walshHadamard(model); // model[c] is now the fitted deviation from the intercept in cell c
@@ -94,10 +111,12 @@ export function fitYates(columns: readonly Column[], terms: readonly Term[], cel
     rss += e * e;
     leverage[i] = c >= 0 ? hf : 1 / n;
   }
+  const kept = new Int32Array(p);
+  for (let j = 0; j < p; j++) kept[j] = j;
   return {
     n,
     columns,
-    kept: Int32Array.from({ length: p }, (_, j) => j),
+    kept,
     coef,
     covUnscaled,
     seqSS,

@@ -10,8 +10,17 @@
  */
 import { normalQuantile } from '../dist/normal.ts';
 
+/* One-entry memo: the positions depend on m only, and an analysis asks for the same m each time
+ * its model is refitted. A copy goes out, so a caller may keep or change its array. */
+let memoM = -1;
+let memoQ: number[] = [];
+
 export function halfNormalQuantiles(m: number): number[] {
-  const q: number[] = [];
-  for (let i = 1; i <= m; i++) q.push(normalQuantile(0.5 + (0.5 * (i - 0.5)) / m));
-  return q;
+  if (m !== memoM) {
+    const q: number[] = [];
+    for (let i = 1; i <= m; i++) q.push(normalQuantile(0.5 + (0.5 * (i - 0.5)) / m));
+    memoQ = q;
+    memoM = m;
+  }
+  return memoQ.slice();
 }

@@ -104,13 +104,17 @@ function checkIndex(i: number): void {
  * Example: checkTerm(SQUARE_FLAG | 0b11, factors) throws (a square has one factor).
  */
 export function checkTerm(t: Term, factors: readonly Factor[]): void {
-  const k = factors.length;
+  checkTermBelow(t, factors, 2 ** factors.length);
+}
+
+/** checkTerm with 2^k, the first mask beyond the factors, worked out by the caller. */
+function checkTermBelow(t: Term, factors: readonly Factor[], limit: number): void {
   if (!Number.isInteger(t) || t <= 0 || t > (SQUARE_FLAG | FACTOR_BITS)) {
     throw new InputError(`A model term must be a product of factors or the square of one, got ${t}`);
   }
   const mask = t & FACTOR_BITS;
   if (mask === 0) throw new InputError(`A model term must name at least one factor, got ${t}`);
-  if (mask >= 2 ** k) throw new InputError(`Model term ${t} refers to a factor the study does not have (${k} factors)`);
+  if (mask >= limit) throw new InputError(`Model term ${t} refers to a factor the study does not have (${factors.length} factors)`);
   if (isSquare(t)) {
     if ((mask & (mask - 1)) !== 0) {
       const names = termFactors(mask).map((i) => factors[i].letter).join('');
@@ -122,7 +126,8 @@ export function checkTerm(t: Term, factors: readonly Factor[]): void {
 
 /** checkTerm for each term. */
 export function checkTerms(terms: readonly Term[], factors: readonly Factor[]): void {
-  for (const t of terms) checkTerm(t, factors);
+  const limit = 2 ** factors.length;
+  for (let i = 0; i < terms.length; i++) checkTermBelow(terms[i], factors, limit);
 }
 
 /** Order of a term: the number of factors it multiplies, with repeats (A^2 is second order); 0 for the intercept. */
