@@ -1,13 +1,14 @@
 /**
  * The name and letters of every model column, as the reports print them: "Intercept" / "I",
- * "Block 2" / "Block 2", and for a term its factor names joined by ':' and its letters
- * (model/term.ts termName, termLetters). Cost O(p k) the first time for a set of factors, O(p)
- * after it: a term's label depends on the factors' names and letters only, so each is written
- * once per set of factors and handed out again (frozen) while those names and letters stay.
+ * "Block 2" / "Block 2", and for a term its factor names joined by ':' and its letters (the
+ * strings of model/term.ts termName and termLetters). Each term's strings are its lower factors'
+ * strings plus one factor, so they are built by one join per term from those of the term without
+ * its last factor (kept for the call, built the same way when that term is not in the model):
+ * cost O(p) joins rather than O(p k). Squares go through termName and termLetters.
  * Example: the columns [intercept, term AB] of factors Speed, Feed -> [{ name: 'Intercept', letters: 'I' }, { name: 'Speed:Feed', letters: 'AB' }].
  */
 import type { Factor } from '../factor/factor.ts';
-import { termLetters, termName, type Term } from '../model/term.ts';
+import { isSquare, termLetters, termName, type Term } from '../model/term.ts';
 import type { Column } from './columns.ts';
 
 export interface ColumnLabel {
@@ -15,37 +16,32 @@ export interface ColumnLabel {
   readonly letters: string;
 }
 
-const INTERCEPT: ColumnLabel = Object.freeze({ name: 'Intercept', letters: 'I' });
-
-/** Per set of factors, the names and letters the labels were written from, and the labels by term. */
-interface LabelCache {
-  readonly names: string[];
-  readonly letters: string[];
-  readonly byTerm: Map<Term, ColumnLabel>;
-}
-const caches = new WeakMap<readonly Factor[], LabelCache>();
-
-function cacheFor(factors: readonly Factor[]): LabelCache {
-  const c = caches.get(factors);
-  if (c && c.names.length === factors.length && factors.every((f, i) => f.name === c.names[i] && f.letter === c.letters[i])) return c;
-  const fresh: LabelCache = { names: factors.map((f) => f.name), letters: factors.map((f) => f.letter), byTerm: new Map() };
-  caches.set(factors, fresh);
-  return fresh;
-}
-
 export function columnLabels(columns: readonly Column[], factors: readonly Factor[]): ColumnLabel[] {
-  const cache = cacheFor(factors);
+  const known = new Map<Term, ColumnLabel>();
+  // The label of a product term: the label of the term without its highest factor, joined with that factor.
+  const product = (t: Term): ColumnLabel => {
+    let label = known.get(t);
+    if (label !== undefined) return label;
+    const high = 31 - Math.clz32(t);
+    const rest = t & ~(1 << high);
+    const f = factors[high];
+    if (rest === 0) label = { name: f.name, letters: f.letter };
+    else {
+      const r = product(rest);
+      label = { name: `${r.name}:${f.name}`, letters: r.letters + f.letter };
+    }
+    known.set(t, label);
+    return label;
+  };
   const out: ColumnLabel[] = [];
   for (const c of columns) {
-    if (c.kind === 'intercept') out.push(INTERCEPT);
+    if (c.kind === 'intercept') out.push({ name: 'Intercept', letters: 'I' });
     else if (c.kind === 'block') out.push({ name: `Block ${c.block}`, letters: `Block ${c.block}` });
+    else if (isSquare(c.term)) out.push({ name: termName(c.term, factors), letters: termLetters(c.term, factors) });
     else {
-      let label = cache.byTerm.get(c.term);
-      if (label === undefined) {
-        label = Object.freeze({ name: termName(c.term, factors), letters: termLetters(c.term, factors) });
-        cache.byTerm.set(c.term, label);
-      }
-      out.push(label);
+      // A copy, so that no two columns share one object.
+      const l = product(c.term);
+      out.push({ name: l.name, letters: l.letters });
     }
   }
   return out;

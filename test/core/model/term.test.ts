@@ -10,6 +10,7 @@ import {
   isProduct,
   isSquare,
   mainEffect,
+  SQUARE_FLAG,
   squareTerm,
   termColumnFactors,
   termFactors,
@@ -97,5 +98,18 @@ describe('model terms: products of distinct factors and squares of one numeric f
     expect(() => checkTerm(Number.NaN, factors)).toThrow(InputError);
     expect(() => checkTerm(A2, factors)).not.toThrow();
     expect(() => checkTerm(ABC, factors)).not.toThrow();
+  });
+});
+
+describe('termOrder counts factors by bit sums (Hacker\'s Delight, section 5-1): the same as counting them one by one', () => {
+  it('every mask of up to 25 factors, with and without the square flag (fast-check)', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 2 ** 25 - 1 }), (m) => {
+        let n = 0;
+        for (let i = 0; i < 25; i++) n += (m >> i) & 1;
+        expect(termOrder(m)).toBe(n);
+        expect(termOrder(SQUARE_FLAG | m)).toBe(n + 1);
+      }),
+    );
   });
 });
