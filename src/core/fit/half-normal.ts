@@ -6,7 +6,7 @@
  * effects are two-level contrasts (products of distinct factors); the analysis never plots a
  * square term here.
  * Cost O(m log m).
- * Example: halfNormalQuantiles(1) -> [0.674...] (Phi^-1(0.75)).
+ * Example: halfNormalQuantiles(1) -> [0.674...] (Phi^-1(0.75)); bySize([3, -1, 2]) -> [1, 2, 0].
  */
 import { normalQuantile } from '../dist/normal.ts';
 
@@ -23,4 +23,37 @@ export function halfNormalQuantiles(m: number): number[] {
     memoM = m;
   }
   return memoQ.slice();
+}
+
+/**
+ * The order of the effects by absolute size, smallest first, ties in their given order (the
+ * order a stable sort on |effect| gives), for finite effects: a bottom-up merge sort on indices,
+ * comparing the sizes inline (no comparison callback per pair). Cost O(m log m), two index buffers.
+ */
+export function bySize(effects: ArrayLike<number>): Int32Array {
+  const m = effects.length;
+  const size = new Float64Array(m);
+  let order = new Int32Array(m);
+  let spare = new Int32Array(m);
+  for (let i = 0; i < m; i++) {
+    size[i] = Math.abs(effects[i]);
+    order[i] = i;
+  }
+  for (let width = 1; width < m; width *= 2) {
+    for (let lo = 0; lo < m; lo += 2 * width) {
+      const mid = Math.min(lo + width, m);
+      const hi = Math.min(lo + 2 * width, m);
+      let a = lo;
+      let b = mid;
+      let o = lo;
+      // Take from the left run on a tie: that keeps equal sizes in their given order.
+      while (a < mid && b < hi) spare[o++] = size[order[b]] < size[order[a]] ? order[b++] : order[a++];
+      while (a < mid) spare[o++] = order[a++];
+      while (b < hi) spare[o++] = order[b++];
+    }
+    const t = order;
+    order = spare;
+    spare = t;
+  }
+  return order;
 }
