@@ -30,7 +30,7 @@ import { analysisVerdicts } from './analysis-verdicts.ts';
 import { anovaTables } from './anova-tables.ts';
 import { chooseFit } from './choose-fit.ts';
 import { codingRows } from './coding-rows.ts';
-import { adjustedCurvature, curvature, runKinds } from './curvature.ts';
+import { adjustedCurvature, cellKinds, curvature, runKinds } from './curvature.ts';
 import { runDiagnostics } from './diagnostics.ts';
 import { estimateTerms } from './estimate-terms.ts';
 import { lenthStep, withLenthT } from './lenth-step.ts';
@@ -44,7 +44,7 @@ import { RANK_TOLERANCE } from '../tolerance.ts';
 import { NO_TRANSFORM, transformResponses, type ResponseTransform } from './response-transform.ts';
 import { validateResponseData } from './validate-response.ts';
 import { analysisScaleExponent, pow2Scaler, scaleAnalysisBack, scaleExponent } from './response-scale.ts';
-import { testedExtent } from '../predict/tested-extent.ts';
+import { boxExtent, testedExtent } from '../predict/tested-extent.ts';
 import { columnVifs, VIF_LIMIT, vifDrivers } from './vif.ts';
 import { isWarning } from './verdicts.ts';
 
@@ -96,7 +96,7 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
   const repeats = findRepeats({ coded, y, points: data.points, blocks, cells, k: factors.length, nominal });
   const pe = repeats.pure;
   const tables = anovaTables(fit, y, est.labels, est.terms.map((t) => t.p), pe);
-  const kinds = runKinds(factors, nominal ?? coded);
+  const kinds = cells && !nominal ? cellKinds(factors, cells) : runKinds(factors, nominal ?? coded);
   // On Yates' path every term column is 0 at the center runs and balanced over the factorial
   // ones, so the adjusted curvature is exactly the mean difference (curvature.ts): no side fit.
   const curv = cells ? curvature(kinds, y, pe) : adjustedCurvature(keptColumns, coded, blocks, kinds, y, pe);
@@ -138,7 +138,7 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
     dfResidual: fit.dfResidual,
     pValues: termPValues(terms),
     curvatureP: curv?.p ?? null,
-    extent: testedExtent(factors, coded),
+    extent: cells ? boxExtent(factors.length) : testedExtent(factors, coded),
     transform: { token: transform.token, lambda: transform.lambda, lowerBound: bound, suggestion: bc?.suggestion ?? null },
   };
   return {

@@ -22,7 +22,7 @@ import { fitOnPlan } from './fit-on-plan.ts';
 import { fitQr } from './fit-qr.ts';
 import { fitYates, yatesCells } from './fit-yates.ts';
 import type { LinearFit } from './linear-fit.ts';
-import { nominalSettings, type NominalSettings } from './nominal-settings.ts';
+import { exactNominal, nominalSettings, type NominalSettings } from './nominal-settings.ts';
 
 export interface FitChoice {
   /** Model terms in model order. */
@@ -47,7 +47,8 @@ export function chooseFit(data: ResponseData, options: { readonly terms?: readon
   const columns = modelColumns(blocks ? levels : [], terms);
   // Yates' algorithm holds for products of two-level columns only: any square takes the QR path.
   const cells = !blocks && !options.forceQr && !terms.some(isSquare) ? yatesCells(data.coded, k) : null;
-  const nominal = nominalSettings(data.coded, data.planned);
+  // Yates' cells hold only settings exactly at -1, 0 or +1: without a plan they are the nominal ones.
+  const nominal = cells && !data.planned ? exactNominal(data.coded) : nominalSettings(data.coded, data.planned);
   const fit = cells
     ? fitYates(columns, terms, cells, k, data.y)
     : nominal.exact

@@ -38,11 +38,7 @@ export function columnLabels(columns: readonly Column[], factors: readonly Facto
     if (c.kind === 'intercept') out.push({ name: 'Intercept', letters: 'I' });
     else if (c.kind === 'block') out.push({ name: `Block ${c.block}`, letters: `Block ${c.block}` });
     else if (isSquare(c.term)) out.push({ name: termName(c.term, factors), letters: termLetters(c.term, factors) });
-    else {
-      // A copy, so that no two columns share one object.
-      const l = product(c.term);
-      out.push({ name: l.name, letters: l.letters });
-    }
+    else out.push(product(c.term));
   }
   return out;
 }

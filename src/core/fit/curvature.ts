@@ -47,6 +47,19 @@ export function runKinds(factors: readonly Factor[], coded: readonly (readonly n
   return out;
 }
 
+/**
+ * runKinds for runs on Yates' path (fit-yates.ts yatesCells: each run exactly at +-1 in every
+ * factor, or exactly at 0 in every factor, cell -1): 'factorial' and 'center' by the cell, with no
+ * pass over the settings. A categorical factor is never at 0, so with one the center cells are
+ * 'other', as runKinds has it.
+ */
+export function cellKinds(factors: readonly Factor[], cells: Int32Array): ('factorial' | 'center' | 'other')[] {
+  const center = factors.every((f) => f.kind === 'numeric') ? 'center' : 'other';
+  const out: ('factorial' | 'center' | 'other')[] = [];
+  for (let i = 0; i < cells.length; i++) out.push(cells[i] < 0 ? center : 'factorial');
+  return out;
+}
+
 /** Null when there are no center runs or no factorial runs. */
 export function curvature(
   kinds: readonly ('factorial' | 'center' | 'other')[],

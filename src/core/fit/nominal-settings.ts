@@ -82,3 +82,12 @@ function nominalLevel(v: number, plan: readonly number[] | null, f: number, tol:
   if (Math.abs(v - 1) <= tol) return 1;
   return NaN;
 }
+
+/**
+ * The plan of runs whose settings are all exactly -1, 0 or +1 and that have no planned settings
+ * (Yates' path, fit-yates.ts yatesCells): every setting is its own level, so nothing moved and
+ * nothing is away; what nominalSettings(coded) gives, without the pass over the settings. Cost O(1).
+ */
+export function exactNominal(coded: readonly (readonly number[])[]): NominalSettings {
+  return { nominal: coded, moved: 0, away: 0, exact: true };
+}

@@ -50,3 +50,10 @@ export function testedExtent(factors: readonly Factor[], coded: readonly (readon
   for (let f = 0; f < k; f++) out.push(Math.max(1, Math.min(pos[f], neg[f])));
   return out;
 }
+
+/** testedExtent of runs that all lie in the factorial box (every |setting| <= 1, as on Yates' path): 1 for every factor. Cost O(k). */
+export function boxExtent(k: number): number[] {
+  const out: number[] = [];
+  for (let f = 0; f < k; f++) out.push(1);
+  return out;
+}
