@@ -15,7 +15,7 @@
  * Example: chooseFit(the 2^2 yield data of Montgomery 8th ed. section 6.2, {}) -> method 'yates', terms [A, B, AB].
  */
 import { defaultTerms } from '../model/formula.ts';
-import { checkTerms, compareTerms, isSquare, type Term } from '../model/term.ts';
+import { checkTerms, isSquare, modelOrder, type Term } from '../model/term.ts';
 import type { ResponseData } from '../study/response-data.ts';
 import { blockLevels, modelColumns, modelMatrix } from './columns.ts';
 import { fitOnPlan } from './fit-on-plan.ts';
@@ -40,7 +40,7 @@ export interface FitChoice {
 
 export function chooseFit(data: ResponseData, options: { readonly terms?: readonly Term[]; readonly forceQr?: boolean } = {}): FitChoice {
   const k = data.factors.length;
-  const terms = [...new Set(options.terms ?? defaultTerms(k))].sort(compareTerms);
+  const terms = modelOrder(options.terms ?? defaultTerms(k));
   checkTerms(terms, data.factors);
   const levels = blockLevels(data.blocks);
   const blocks = levels.length > 1 ? data.blocks : null;

@@ -17,10 +17,13 @@ export interface ColumnLabel {
 }
 
 export function columnLabels(columns: readonly Column[], factors: readonly Factor[]): ColumnLabel[] {
+  // Labels built so far, by term: a plain array over the masks for up to 2^12 of them, else a Map.
+  const small = factors.length <= 12;
+  const table: (ColumnLabel | undefined)[] = small ? new Array<ColumnLabel | undefined>(1 << factors.length).fill(undefined) : [];
   const known = new Map<Term, ColumnLabel>();
   // The label of a product term: the label of the term without its highest factor, joined with that factor.
   const product = (t: Term): ColumnLabel => {
-    let label = known.get(t);
+    let label = small ? table[t] : known.get(t);
     if (label !== undefined) return label;
     const high = 31 - Math.clz32(t);
     const rest = t & ~(1 << high);
@@ -30,7 +33,8 @@ export function columnLabels(columns: readonly Column[], factors: readonly Facto
       const r = product(rest);
       label = { name: `${r.name}:${f.name}`, letters: r.letters + f.letter };
     }
-    known.set(t, label);
+    if (small) table[t] = label;
+    else known.set(t, label);
     return label;
   };
   const out: ColumnLabel[] = [];

@@ -203,6 +203,18 @@ export function compareTerms(a: Term, b: Term): number {
 }
 
 /**
+ * The distinct terms in model order (compareTerms), as a new array: a list already in that order
+ * without repeats (as formula.ts builds them) is copied after one pass of comparisons, else
+ * de-duplicated and sorted. Cost O(p), or O(p log p) for a list out of order.
+ * Example: modelOrder([AB, A, A]) -> [A, AB].
+ */
+export function modelOrder(terms: readonly Term[]): Term[] {
+  let ordered = true;
+  for (let i = 1; i < terms.length && ordered; i++) if (!(compareTerms(terms[i - 1], terms[i]) < 0)) ordered = false;
+  return ordered ? terms.slice() : [...new Set(terms)].sort(compareTerms);
+}
+
+/**
  * Value of a term's model column at one run: the product of the coded settings of its factors,
  * or x_i^2 for the square of factor i. Cost O(number of factors). Example: termValue(A^2, [0.5]) -> 0.25.
  */
