@@ -98,7 +98,10 @@ export function anovaTables(
   if (pure.df > 0) tail.push({ source: 'Pure error', df: pure.df, ss: pure.ss, ms: pure.ss / pure.df, f: null, p: null });
   tail.push({ source: 'Total', df: n - 1, ss: ssTot, ms: null, f: null, p: null });
   const head = (blocksSS: number): AnovaRow[] => [...(dfBlocks > 0 ? [fRow('Blocks', dfBlocks, blocksSS)] : []), fRow('Model', dfModel, ssModel)];
-  const anova: AnovaTable = { type: 'sequential', rows: [...head(ssBlocksSeq), ...termRowsSeq, ...tail] };
+  const seqRows = head(ssBlocksSeq);
+  for (const r of termRowsSeq) seqRows.push(r);
+  for (const r of tail) seqRows.push(r);
+  const anova: AnovaTable = { type: 'sequential', rows: seqRows };
   let anovaAdjusted: AnovaTable | null = null;
   if (!fit.orthogonal) {
     let ssBlocksAdj = ssBlocksSeq;
