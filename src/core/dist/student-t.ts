@@ -13,6 +13,9 @@ import { lnBeta } from './log-gamma.ts';
 import { normalQuantile } from './normal.ts';
 import { TAIL_SERIES_ODDS } from '../tolerance.ts';
 
+// A local: module bindings are getters under some loaders, and this runs once per p-value.
+const betaXY = incompleteBetaXY;
+
 /** Below x = e^-600 the tail I_x(a, 1/2) is its first series term x^a / (a B(a, 1/2)) to rounding. */
 const LN_X_ASYMPTOTE = -600;
 
@@ -30,7 +33,7 @@ function twoSided(at: number, df: number): number {
   const sd = Math.sqrt(df);
   if (at <= sd) {
     const r = (at * at) / df;
-    return incompleteBetaXY(1 / (1 + r), r / (1 + r), a, 0.5);
+    return betaXY(1 / (1 + r), r / (1 + r), a, 0.5);
   }
   const w = df / at / at;
   if (w < TAIL_SERIES_ODDS) {
@@ -38,7 +41,7 @@ function twoSided(at: number, df: number): number {
     const lnW = Math.log(df) - 2 * Math.log(at);
     if (lnW < LN_X_ASYMPTOTE) return Math.exp(a * lnW - Math.log(a) - lnBeta(a, 0.5));
   }
-  return incompleteBetaXY(w / (1 + w), 1 / (1 + w), a, 0.5);
+  return betaXY(w / (1 + w), 1 / (1 + w), a, 0.5);
 }
 
 /**

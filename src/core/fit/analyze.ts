@@ -59,6 +59,8 @@ export interface AnalyzeOptions {
   readonly transform?: ResponseTransform;
 }
 
+const square = isSquare; // a local: module bindings are getters under some loaders, read per term
+
 export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analysis {
   validateResponseData(raw);
   const transform = options.transform ?? NO_TRANSFORM;
@@ -112,7 +114,7 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
     orthogonal: fit.orthogonal,
     collinear: { limit: VIF_LIMIT, terms: collinear },
     curvature: curv,
-    squares: est.terms.filter((t) => isSquare(t.term)).map((t) => t.letters),
+    squares: est.terms.filter((t) => square(t.term)).map((t) => t.letters),
     pureErrorDf: pe.df,
     lackOfFitP: tables.lackOfFitP,
     lenth: lenthOut.lenth,

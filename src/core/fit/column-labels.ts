@@ -16,6 +16,8 @@ export interface ColumnLabel {
   readonly letters: string;
 }
 
+const square = isSquare; // a local: module bindings are getters under some loaders, read per column
+
 export function columnLabels(columns: readonly Column[], factors: readonly Factor[]): ColumnLabel[] {
   // Labels built so far, by term: a plain array over the masks for up to 2^12 of them, else a Map.
   const small = factors.length <= 12;
@@ -41,7 +43,7 @@ export function columnLabels(columns: readonly Column[], factors: readonly Facto
   for (const c of columns) {
     if (c.kind === 'intercept') out.push({ name: 'Intercept', letters: 'I' });
     else if (c.kind === 'block') out.push({ name: `Block ${c.block}`, letters: `Block ${c.block}` });
-    else if (isSquare(c.term)) out.push({ name: termName(c.term, factors), letters: termLetters(c.term, factors) });
+    else if (square(c.term)) out.push({ name: termName(c.term, factors), letters: termLetters(c.term, factors) });
     else out.push(product(c.term));
   }
   return out;

@@ -17,6 +17,10 @@ import { combinationLabel } from './combination-label.ts';
 import type { LinearFit } from './linear-fit.ts';
 import { tIntervals } from './t-intervals.ts';
 
+// Locals: module bindings are getters under some loaders, and these run once per term.
+const tPValue = tTwoSidedP;
+const intervals = tIntervals;
+
 export interface TermEstimates {
   readonly intercept: Estimate;
   /** One per kept term column, in model order. */
@@ -49,7 +53,7 @@ export function estimateTerms(fit: LinearFit, factors: readonly Factor[], blockL
       est.se = est.t = est.p = est.ci = null;
       return;
     }
-    const { se, ciLo, ciHi } = tIntervals(coef, fit.covUnscaled[j * m + j], sigma, tq, iv);
+    const { se, ciLo, ciHi } = intervals(coef, fit.covUnscaled[j * m + j], sigma, tq, iv);
     est.se = se;
     est.ci = [ciLo!, ciHi!];
     if (se === 0) {
@@ -58,7 +62,7 @@ export function estimateTerms(fit: LinearFit, factors: readonly Factor[], blockL
     }
     const t = coef / se!;
     est.t = t;
-    est.p = tTwoSidedP(t, dfRes);
+    est.p = tPValue(t, dfRes);
   };
 
   const labels = columnLabels(fit.columns, factors);

@@ -55,6 +55,8 @@ export interface LenthInput {
   readonly contrasts?: { readonly columns: readonly (readonly number[])[]; readonly labels: readonly { readonly name: string; readonly letters: string }[] };
 }
 
+const product = isProduct; // a local: module bindings are getters under some loaders, read per term
+
 export function lenthStep(input: LenthInput): LenthStep {
   const { factors, coded, y, points, blocks, kinds, groups, terms, nominal } = input;
   const factorialRows: number[] = [];
@@ -63,7 +65,7 @@ export function lenthStep(input: LenthInput): LenthStep {
   const unblockedGroups = !blocks ? groups : nominal ? settingGroups(nominal, null) : points ? labelGroups(points, null) : settingGroups(coded, null);
   const unreplicated = allDistinct(factorialRows, unblockedGroups);
   // The half-normal chart shows two-level contrasts only: products of distinct factors, never a square.
-  let effects: { name: string; letters: string; effect: number }[] = terms.filter((t) => isProduct(t.term)).map((t) => ({ name: t.name, letters: t.estimates ?? t.letters, effect: t.effect }));
+  let effects: { name: string; letters: string; effect: number }[] = terms.filter((t) => product(t.term)).map((t) => ({ name: t.name, letters: t.estimates ?? t.letters, effect: t.effect }));
   let result: LenthResult | null = null;
   if (factorialRows.length >= 2 && unreplicated && input.contrasts) {
     const { columns, labels } = input.contrasts;
