@@ -11,7 +11,6 @@ const FOLDER = 'src/core';
  */
 const EXCEPTIONS: Record<string, string> = {
   'src/core/fit/columns.ts': 'tested through analyze and the fit tests; its own test comes with the fit work under way in that folder',
-  'src/core/fit/half-normal.ts': 'tested through analyze (the half-normal points of Lenth\'s step); own test with the fit work under way',
   'src/core/fit/saturated-effects.ts': 'tested through lenth-step and analyze; own test with the fit work under way',
 };
 
