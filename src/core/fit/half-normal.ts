@@ -27,8 +27,8 @@ export function halfNormalQuantiles(m: number): number[] {
 
 /**
  * The order of the effects by absolute size, smallest first, ties in their given order (the
- * order a stable sort on |effect| gives), for finite effects: a bottom-up merge sort on indices,
- * comparing the sizes inline (no comparison callback per pair). Cost O(m log m), two index buffers.
+ * order a stable sort on |effect| gives), for finite effects: insertion sort of runs of 8, then a
+ * bottom-up merge sort on indices, comparing the sizes inline (no comparison callback per pair). Cost O(m log m), two index buffers.
  */
 export function bySize(effects: ArrayLike<number>): Int32Array {
   const m = effects.length;
@@ -39,7 +39,22 @@ export function bySize(effects: ArrayLike<number>): Int32Array {
     size[i] = Math.abs(effects[i]);
     order[i] = i;
   }
-  for (let width = 1; width < m; width *= 2) {
+  // Runs of RUN by insertion (a later index moves only past strictly larger sizes), then merges.
+  const RUN = 8;
+  for (let lo = 0; lo < m; lo += RUN) {
+    const hi = Math.min(lo + RUN, m);
+    for (let i = lo + 1; i < hi; i++) {
+      const v = order[i];
+      const sv = size[v];
+      let j = i - 1;
+      while (j >= lo && size[order[j]] > sv) {
+        order[j + 1] = order[j];
+        j--;
+      }
+      order[j + 1] = v;
+    }
+  }
+  for (let width = RUN; width < m; width *= 2) {
     for (let lo = 0; lo < m; lo += 2 * width) {
       const mid = Math.min(lo + width, m);
       const hi = Math.min(lo + 2 * width, m);
