@@ -79,7 +79,7 @@ describe('fitYates: (X\'X)^-1 = diag(1/N, 1/N_f, ...) kept per design shape', ()
     const terms = termsUpToOrder(3, 3);
     const cols = modelColumns([], terms);
     const p = cols.length;
-    const check = (coded: number[][], y: number[]) => {
+    const check = (coded: readonly (readonly number[])[], y: readonly number[]) => {
       const yates = fitYates(cols, terms, yatesCells(coded, 3)!, 3, y);
       const qr = fitQr(cols, modelMatrix(cols, coded, null), y);
       for (let i = 0; i < p * p; i++) expect(Math.abs(yates.covUnscaled[i] - qr.covUnscaled[i])).toBeLessThan(1e-14);
