@@ -105,17 +105,12 @@ function continuedFraction(x: number, y: number, a: number, b: number): number {
   let c = f;
   let d = 0;
   const maxTerms = 1000 + Math.ceil(20 * Math.sqrt(Math.max(a, b)));
-  // d_{2m-1} carried from the step before (d_1 for the first); one reciprocal per step serves
-  // d_{2m}, d_{2m+1} and 1 + d_{2m+1}, whose denominators share (a+2m-1)(a+2m)(a+2m+1).
-  let dOddPrev = (-a * (a + b) * x) / (a * (a + 1));
   for (let m = 1; m <= maxTerms; m++) {
     const a2m = a + 2 * m;
-    const r = 1 / ((a2m - 1) * a2m * (a2m + 1));
-    const dEven = m * (b - m) * x * (a2m + 1) * r;
+    const dEven = (m * (b - m) * x) / ((a2m - 1) * a2m);
+    const dOddPrev = (-(a + m - 1) * (a + b + m - 1) * x) / ((a2m - 2) * (a2m - 1));
     const alpha = -dOddPrev * dEven;
-    const q = (a2m - 1) * r; // 1 / (a2m (a2m + 1))
-    const beta = dEven + (a * (2 * m + 1) + m * (3 * m + 2) + (a + m) * (lambda + m * y)) * q;
-    dOddPrev = -(a + m) * (a + b + m) * x * q;
+    const beta = dEven + (a * (2 * m + 1) + m * (3 * m + 2) + (a + m) * (lambda + m * y)) / (a2m * (a2m + 1));
     d = beta + alpha * d;
     if (Math.abs(d) < CF_TINY) d = CF_TINY;
     c = beta + alpha / c;
