@@ -68,11 +68,25 @@ function diagonalCovariance(n: number, nf: number, p: number): Float64Array {
   return memoCov;
 }
 
+/* Two work buffers of 2^k cells (the totals, the fitted cell deviations), kept for the next fit of
+ * the same k up to 2^12 cells and cleared on each use: a typed array's allocation costs more than
+ * its clearing at these sizes. Nothing that leaves fitYates points into them. */
+const buffers: Float64Array[] = [new Float64Array(0), new Float64Array(0)];
+const KEEP_CELLS = 1 << 12;
+
+function scratch(which: 0 | 1, size: number): Float64Array {
+  if (size > KEEP_CELLS) return new Float64Array(size);
+  let b = buffers[which];
+  if (b.length !== size) buffers[which] = b = new Float64Array(size);
+  else b.fill(0);
+  return b;
+}
+
 export function fitYates(columns: readonly Column[], terms: readonly Term[], cells: Int32Array, k: number, y: ArrayLike<number>): LinearFit {
   const n = y.length;
   const size = 1 << k;
   const p = columns.length;
-  const total = new Float64Array(size);
+  const total = scratch(0, size);
   let sumAll = 0;
   let nf = 0;
   for (let i = 0; i < n; i++) {
@@ -89,7 +103,7 @@ export function fitYates(columns: readonly Column[], terms: readonly Term[], cel
   const covUnscaled = diagonalCovariance(n, nf, p);
   coef[0] = intercept;
   seqSS[0] = n * intercept * intercept;
-  const model = new Float64Array(size);
+  const model = scratch(1, size);
   for (let j = 0; j < terms.length; j++) {
     const b = total[terms[j]] / nf;
     coef[j + 1] = b;
