@@ -13,6 +13,9 @@ import { lnBeta } from './log-gamma.ts';
 import { normalQuantile } from './normal.ts';
 import { TAIL_SERIES_ODDS } from '../tolerance.ts';
 
+// A local: module bindings are getters under some loaders, and this runs once per p-value.
+const betaXY = incompleteBetaXY;
+
 /** Below x = e^-600 the tail I_x(a, 1/2) is its first series term x^a / (a B(a, 1/2)) to rounding. */
 const LN_X_ASYMPTOTE = -600;
 
@@ -30,7 +33,7 @@ function twoSided(at: number, df: number): number {
   const sd = Math.sqrt(df);
   if (at <= sd) {
     const r = (at * at) / df;
-    return incompleteBetaXY(1 / (1 + r), r / (1 + r), a, 0.5);
+    return betaXY(1 / (1 + r), r / (1 + r), a, 0.5);
   }
   const w = df / at / at;
   if (w < TAIL_SERIES_ODDS) {
@@ -38,7 +41,7 @@ function twoSided(at: number, df: number): number {
     const lnW = Math.log(df) - 2 * Math.log(at);
     if (lnW < LN_X_ASYMPTOTE) return Math.exp(a * lnW - Math.log(a) - lnBeta(a, 0.5));
   }
-  return incompleteBetaXY(w / (1 + w), 1 / (1 + w), a, 0.5);
+  return betaXY(w / (1 + w), 1 / (1 + w), a, 0.5);
 }
 
 /**
@@ -91,7 +94,7 @@ export function tCdf(t: number, df: number): number {
  * Accuracy (measured against 50-digit references): within 7e-14 relative for df from 0.5 to 1e7
  * and p from 1e-100 to 1 - 1e-10. With df < 1 and a tiny p the quantile, about p^(-1/df), can
  * pass the largest double; it is then returned as -Infinity (or +Infinity).
- * Cost: typically 3 to 5 incomplete beta evaluations; no allocation.
+ * Cost: typically 3 to 5 incomplete beta evaluations (none for the same p and df as the call before); no allocation.
  * Throws InputError unless 0 < p < 1 and df is a finite number > 0.
  * Example: tQuantile(0.975, 10) -> 2.22813885198627; tQuantile(0.75, 1) -> 1 (Cauchy quartile, to 1e-15).
  */
@@ -100,6 +103,22 @@ export function tQuantile(p: number, df: number): number {
     throw new InputError(`tQuantile needs a probability strictly between 0 and 1, got ${p}`);
   }
   checkDf(df, 'tQuantile');
+  // One-entry memo: an analysis asks for the same quantile (1 - alpha/2 on the residual df) each
+  // time it is refitted; plain numbers, the value the search below returns for them.
+  if (p === memoP && df === memoDf) return memoQ;
+  const q = quantileSearch(p, df);
+  memoP = p;
+  memoDf = df;
+  memoQ = q;
+  return q;
+}
+
+let memoP = NaN;
+let memoDf = NaN;
+let memoQ = NaN;
+
+/** tQuantile for validated p and df (see there). */
+function quantileSearch(p: number, df: number): number {
   if (p === 0.5) return 0;
   const sign = p < 0.5 ? -1 : 1;
   const q = p < 0.5 ? p : 1 - p;

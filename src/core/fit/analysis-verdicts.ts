@@ -51,9 +51,11 @@ export function analysisVerdicts(v: VerdictInput): Verdict[] {
   if (v.collinear && v.collinear.terms.length > 0) out.push({ kind: 'collinear', limit: v.collinear.limit, terms: v.collinear.terms });
   const c = v.curvature;
   if (c) {
-    const base = { kind: 'curvature', p: c.p, alpha: v.alpha, estimate: c.estimate, nCenter: c.nCenter, nFactorial: c.nFactorial, squares: v.squares ?? [] } as const;
-    if (c.p === null) out.push({ ...base, outcome: 'untestable', reason: v.pureErrorDf > 0 ? 'no-spread' : 'no-repeats' });
-    else out.push({ ...base, outcome: c.p < v.alpha ? 'curved' : 'flat', reason: null });
+    // Written out field by field (the order of the keys kept): no spread of a base object.
+    const squares = v.squares ?? [];
+    if (c.p === null) {
+      out.push({ kind: 'curvature', p: c.p, alpha: v.alpha, estimate: c.estimate, nCenter: c.nCenter, nFactorial: c.nFactorial, squares, outcome: 'untestable', reason: v.pureErrorDf > 0 ? 'no-spread' : 'no-repeats' });
+    } else out.push({ kind: 'curvature', p: c.p, alpha: v.alpha, estimate: c.estimate, nCenter: c.nCenter, nFactorial: c.nFactorial, squares, outcome: c.p < v.alpha ? 'curved' : 'flat', reason: null });
   }
   if (secondOrder) {
     out.push({ kind: 'squares', alpha: v.alpha, terms: v.terms.filter((t) => isSquare(t.term)).map((t) => ({ name: t.name, letters: t.letters, p: t.p })) });

@@ -12,7 +12,8 @@
  * each ANOVA table names its type.
  * Sources: Montgomery, Design and Analysis of Experiments, 8th ed., chapters 6-8 and 10;
  * Lenth (1989), Technometrics 31, 469-473; formulas in the files each step calls.
- * The response's scale is taken out before the fit and put back after it (response-scale.ts): a
+ * The response's scale is taken out before the fit and put back after it (response-scale.ts; a
+ * response within 2^+-64 of [1, 2) is analysed as it is, which gives the same bits): a
  * change of unit by a power of two scales every effect exactly, and t, F and p stay the same, from
  * 1e-300 to 1e300; a sum of squares beyond binary64 is null.
  * Cost: dominated by the fit (O(n p^2) by QR) and, when Lenth applies, the saturated fit.
@@ -29,21 +30,21 @@ import { analysisVerdicts } from './analysis-verdicts.ts';
 import { anovaTables } from './anova-tables.ts';
 import { chooseFit } from './choose-fit.ts';
 import { codingRows } from './coding-rows.ts';
-import { adjustedCurvature, curvature, runKinds } from './curvature.ts';
+import { adjustedCurvature, cellKinds, curvature, runKinds } from './curvature.ts';
 import { runDiagnostics } from './diagnostics.ts';
 import { estimateTerms } from './estimate-terms.ts';
 import { lenthStep, withLenthT } from './lenth-step.ts';
 import { screeningStep } from './screening-step.ts';
 import { findRepeats } from './repeats.ts';
 import { boxCoxOn } from './box-cox.ts';
-import { modelMatrix } from './columns.ts';
+import { modelMatrix, type Column } from './columns.ts';
 import { householderQr } from '../linalg/householder-qr.ts';
 import { residualSsQr, residualSsYates } from './residual-ss.ts';
 import { RANK_TOLERANCE } from '../tolerance.ts';
 import { NO_TRANSFORM, transformResponses, type ResponseTransform } from './response-transform.ts';
 import { validateResponseData } from './validate-response.ts';
-import { pow2Scaler, scaleAnalysisBack, scaleExponent } from './response-scale.ts';
-import { testedExtent } from '../predict/tested-extent.ts';
+import { analysisScaleExponent, pow2Scaler, scaleAnalysisBack, scaleExponent } from './response-scale.ts';
+import { boxExtent, testedExtent } from '../predict/tested-extent.ts';
 import { columnVifs, VIF_LIMIT, vifDrivers } from './vif.ts';
 import { isWarning } from './verdicts.ts';
 
@@ -58,6 +59,8 @@ export interface AnalyzeOptions {
   readonly transform?: ResponseTransform;
 }
 
+const square = isSquare; // a local: module bindings are getters under some loaders, read per term
+
 export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analysis {
   validateResponseData(raw);
   const transform = options.transform ?? NO_TRANSFORM;
@@ -67,10 +70,10 @@ export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analys
   if (fitted !== raw) validateResponseData(fitted);
   // The response's scale comes out before the fit and goes back after it (response-scale.ts), so
   // that sums of squares stay finite at any magnitude and every figure scales exactly.
-  const e = scaleExponent(fitted.y);
+  const e = analysisScaleExponent(fitted.y); // 0 when y needs no rescaling (response-scale.ts)
   const yp = bound === null ? raw.y : raw.y.map((v) => v - bound);
   const ep = scaleExponent(yp);
-  const inner = analyzeOnScale({ ...fitted, y: fitted.y.map(pow2Scaler(-e)) }, yp.map(pow2Scaler(-ep)), transform, bound, options);
+  const inner = analyzeOnScale(e === 0 ? fitted : { ...fitted, y: fitted.y.map(pow2Scaler(-e)) }, yp.map(pow2Scaler(-ep)), transform, bound, options);
   const out = scaleAnalysisBack(inner, e);
   return { ...out, warnings: [...fitted.messages, ...out.verdicts.filter(isWarning).map(verdictText)] };
 }
@@ -85,15 +88,17 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
   const nominal = plan.exact ? null : plan.nominal;
   const vifs = columnVifs(fit, coded, blocks);
   const est = estimateTerms(fit, factors, blockLevels, alpha, vifs);
-  const keptColumns = Array.from(fit.kept, (j) => fit.columns[j]);
+  const keptColumns: Column[] = [];
+  for (let j = 0; j < fit.kept.length; j++) keptColumns.push(fit.columns[fit.kept[j]]);
   const vifLimit = VIF_LIMIT; // a local: module bindings are getters under some loaders, read here once per term
-  const collinear = est.terms.flatMap((t) =>
-    t.vif != null && t.vif > vifLimit ? [{ letters: t.estimates ?? t.letters, vif: t.vif, runs: vifDrivers(keptColumns, coded, blocks, y, keptColumns.findIndex((c) => c.kind === 'term' && c.term === t.term), data.labels) }] : [],
-  );
+  const collinear: { letters: string; vif: number; runs: string[] }[] = [];
+  for (const t of est.terms) {
+    if (t.vif != null && t.vif > vifLimit) collinear.push({ letters: t.estimates ?? t.letters, vif: t.vif, runs: vifDrivers(keptColumns, coded, blocks, y, keptColumns.findIndex((c) => c.kind === 'term' && c.term === t.term), data.labels) });
+  }
   const repeats = findRepeats({ coded, y, points: data.points, blocks, cells, k: factors.length, nominal });
   const pe = repeats.pure;
   const tables = anovaTables(fit, y, est.labels, est.terms.map((t) => t.p), pe);
-  const kinds = runKinds(factors, nominal ?? coded);
+  const kinds = cells && !nominal ? cellKinds(factors, cells) : runKinds(factors, nominal ?? coded);
   // On Yates' path every term column is 0 at the center runs and balanced over the factorial
   // ones, so the adjusted curvature is exactly the mean difference (curvature.ts): no side fit.
   const curv = cells ? curvature(kinds, y, pe) : adjustedCurvature(keptColumns, coded, blocks, kinds, y, pe);
@@ -109,7 +114,7 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
     orthogonal: fit.orthogonal,
     collinear: { limit: VIF_LIMIT, terms: collinear },
     curvature: curv,
-    squares: est.terms.filter((t) => isSquare(t.term)).map((t) => t.letters),
+    squares: est.terms.filter((t) => square(t.term)).map((t) => t.letters),
     pureErrorDf: pe.df,
     lackOfFitP: tables.lackOfFitP,
     lenth: lenthOut.lenth,
@@ -133,9 +138,9 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
     covUnscaled: fit.covUnscaled,
     sigma: est.sigma,
     dfResidual: fit.dfResidual,
-    pValues: new Map<Term, number | null>(terms.map((t) => [t.term, t.p ?? null])),
+    pValues: termPValues(terms),
     curvatureP: curv?.p ?? null,
-    extent: testedExtent(factors, coded),
+    extent: cells ? boxExtent(factors.length) : testedExtent(factors, coded),
     transform: { token: transform.token, lambda: transform.lambda, lowerBound: bound, suggestion: bc?.suggestion ?? null },
   };
   return {
@@ -164,4 +169,11 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
     boxCox: bc,
     model,
   };
+}
+
+/** Each term's p-value by term, filled in one pass (no array of pairs). */
+function termPValues(terms: readonly { readonly term: Term; readonly p?: number | null }[]): Map<Term, number | null> {
+  const out = new Map<Term, number | null>();
+  for (const t of terms) out.set(t.term, t.p ?? null);
+  return out;
 }

@@ -46,10 +46,10 @@ export function anovaTables(
   const m = fit.kept.length;
   const dfRes = fit.dfResidual;
   let mean = 0;
-  for (const v of y) mean += v;
+  for (let i = 0; i < n; i++) mean += y[i];
   mean /= n;
   let ssTot = 0;
-  for (const v of y) ssTot += (v - mean) ** 2;
+  for (let i = 0; i < n; i++) ssTot += (y[i] - mean) ** 2;
   const msRes = dfRes > 0 ? fit.rss / dfRes : null;
   const fRow = (source: string, df: number, ss: number): AnovaRow => {
     const ms = df > 0 ? ss / df : null;
@@ -63,6 +63,10 @@ export function anovaTables(
   const termRowsSeq: AnovaRow[] = [];
   const termRowsAdj: AnovaRow[] = [];
   const blockIdx: number[] = [];
+  // Orthogonal columns have no adjusted table (it would equal the sequential one): its rows, each
+  // an F tail, are only worked out when it is reported.
+  const adjusted = !fit.orthogonal;
+  const tByF = fit.orthogonal && msRes !== null && msRes > 0;
   for (let j = 1; j < m; j++) {
     const c = fit.columns[fit.kept[j]];
     if (c.kind === 'block') {
@@ -73,11 +77,12 @@ export function anovaTables(
       ssModel += fit.seqSS[j];
       dfModel++;
       const name = labels[fit.kept[j]].name;
-      if (fit.orthogonal && msRes !== null && msRes > 0) {
+      const ss = fit.seqSS[j];
+      if (tByF) {
         // Orthogonal columns: the one-df F is the square of the term's t, so its p is the t-test's.
-        termRowsSeq.push({ source: name, df: 1, ss: fit.seqSS[j], ms: fit.seqSS[j], f: fit.seqSS[j] / msRes, p: termP[dfModel - 1] ?? null });
-      } else termRowsSeq.push(fRow(name, 1, fit.seqSS[j]));
-      termRowsAdj.push(fRow(name, 1, (fit.coef[j] * fit.coef[j]) / fit.covUnscaled[j * m + j]));
+        termRowsSeq.push({ source: name, df: 1, ss, ms: ss, f: ss / msRes!, p: termP[dfModel - 1] ?? null });
+      } else termRowsSeq.push(fRow(name, 1, ss));
+      if (adjusted) termRowsAdj.push(fRow(name, 1, (fit.coef[j] * fit.coef[j]) / fit.covUnscaled[j * m + j]));
     }
   }
   const dfLof = dfRes - pure.df;
@@ -93,7 +98,10 @@ export function anovaTables(
   if (pure.df > 0) tail.push({ source: 'Pure error', df: pure.df, ss: pure.ss, ms: pure.ss / pure.df, f: null, p: null });
   tail.push({ source: 'Total', df: n - 1, ss: ssTot, ms: null, f: null, p: null });
   const head = (blocksSS: number): AnovaRow[] => [...(dfBlocks > 0 ? [fRow('Blocks', dfBlocks, blocksSS)] : []), fRow('Model', dfModel, ssModel)];
-  const anova: AnovaTable = { type: 'sequential', rows: [...head(ssBlocksSeq), ...termRowsSeq, ...tail] };
+  const seqRows = head(ssBlocksSeq);
+  for (const r of termRowsSeq) seqRows.push(r);
+  for (const r of tail) seqRows.push(r);
+  const anova: AnovaTable = { type: 'sequential', rows: seqRows };
   let anovaAdjusted: AnovaTable | null = null;
   if (!fit.orthogonal) {
     let ssBlocksAdj = ssBlocksSeq;

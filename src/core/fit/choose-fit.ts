@@ -17,14 +17,14 @@
  * Example: chooseFit(the 2^2 yield data of Montgomery 8th ed. section 6.2, {}) -> method 'yates', terms [A, B, AB].
  */
 import { defaultTerms } from '../model/formula.ts';
-import { checkTerms, compareTerms, isSquare, type Term } from '../model/term.ts';
+import { checkTerms, isSquare, modelOrder, type Term } from '../model/term.ts';
 import type { ResponseData } from '../study/response-data.ts';
 import { blockLevels, modelColumns, modelMatrix, type Column } from './columns.ts';
 import { fitOnPlan } from './fit-on-plan.ts';
 import { fitQr } from './fit-qr.ts';
 import { fitYates, yatesCells } from './fit-yates.ts';
 import type { LinearFit } from './linear-fit.ts';
-import { nominalSettings, type NominalSettings } from './nominal-settings.ts';
+import { exactNominal, nominalSettings, type NominalSettings } from './nominal-settings.ts';
 import { walshPlan } from './walsh-plan.ts';
 
 export interface FitChoice {
@@ -43,14 +43,15 @@ export interface FitChoice {
 
 export function chooseFit(data: ResponseData, options: { readonly terms?: readonly Term[]; readonly forceQr?: boolean } = {}): FitChoice {
   const k = data.factors.length;
-  const terms = [...new Set(options.terms ?? defaultTerms(k))].sort(compareTerms);
+  const terms = modelOrder(options.terms ?? defaultTerms(k));
   checkTerms(terms, data.factors);
   const levels = blockLevels(data.blocks);
   const blocks = levels.length > 1 ? data.blocks : null;
   const columns = modelColumns(blocks ? levels : [], terms);
   // Yates' algorithm holds for products of two-level columns only: any square takes the QR path.
   const cells = !blocks && !options.forceQr && !terms.some(isSquare) ? yatesCells(data.coded, k) : null;
-  const nominal = nominalSettings(data.coded, data.planned);
+  // Yates' cells hold only settings exactly at -1, 0 or +1: without a plan they are the nominal ones.
+  const nominal = cells && !data.planned ? exactNominal(data.coded) : nominalSettings(data.coded, data.planned);
   const fit = cells
     ? fitYates(columns, terms, cells, k, data.y)
     : nominal.exact

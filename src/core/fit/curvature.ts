@@ -28,17 +28,36 @@ export interface Curvature {
 /** Each run's kind by its actual settings: 'factorial', 'center' or 'other'. */
 export function runKinds(factors: readonly Factor[], coded: readonly (readonly number[])[]): ('factorial' | 'center' | 'other')[] {
   const tol = CENTER_TOLERANCE; // a local: module bindings are getters under some loaders
-  return coded.map((row) => {
+  const k = factors.length;
+  const numeric = new Uint8Array(k);
+  for (let f = 0; f < k; f++) numeric[f] = factors[f].kind === 'numeric' ? 1 : 0;
+  const out: ('factorial' | 'center' | 'other')[] = [];
+  for (let i = 0; i < coded.length; i++) {
+    const row = coded[i];
     let center = true;
     let corner = true;
-    for (let f = 0; f < factors.length; f++) {
+    for (let f = 0; f < k && (center || corner); f++) {
       const v = row[f];
       const atCorner = Math.abs(Math.abs(v) - 1) <= tol;
       if (!atCorner) corner = false;
-      if (factors[f].kind === 'numeric' ? Math.abs(v) > tol : !atCorner) center = false;
+      if (numeric[f] ? Math.abs(v) > tol : !atCorner) center = false;
     }
-    return corner ? 'factorial' : center ? 'center' : 'other';
-  });
+    out.push(corner ? 'factorial' : center ? 'center' : 'other');
+  }
+  return out;
+}
+
+/**
+ * runKinds for runs on Yates' path (fit-yates.ts yatesCells: each run exactly at +-1 in every
+ * factor, or exactly at 0 in every factor, cell -1): 'factorial' and 'center' by the cell, with no
+ * pass over the settings. A categorical factor is never at 0, so with one the center cells are
+ * 'other', as runKinds has it.
+ */
+export function cellKinds(factors: readonly Factor[], cells: Int32Array): ('factorial' | 'center' | 'other')[] {
+  const center = factors.every((f) => f.kind === 'numeric') ? 'center' : 'other';
+  const out: ('factorial' | 'center' | 'other')[] = [];
+  for (let i = 0; i < cells.length; i++) out.push(cells[i] < 0 ? center : 'factorial');
+  return out;
 }
 
 /** Null when there are no center runs or no factorial runs. */

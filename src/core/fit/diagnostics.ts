@@ -35,12 +35,20 @@ export function runDiagnostics(
   let press = 0;
   let pressOk = true;
   const runs: RunDiagnostics[] = [];
+  const withSigma = sigma !== null && sigma > 0;
+  // sigma sqrt(1 - h) for the last leverage seen: a complete balanced design has two leverages only.
+  let lastH = NaN;
+  let scale = NaN;
   for (let i = 0; i < n; i++) {
     const h = fit.leverage[i];
     const e = fit.residuals[i];
     if (h >= leverageOne) pressOk = false;
     else press += (e / (1 - h)) ** 2;
-    const r = sigma !== null && sigma > 0 && h < leverageOne ? e / (sigma * Math.sqrt(1 - h)) : null;
+    if (withSigma && h !== lastH) {
+      lastH = h;
+      scale = sigma! * Math.sqrt(1 - h);
+    }
+    const r = withSigma && h < leverageOne ? e / scale : null;
     runs.push({
       label: labels[i] ?? String(i + 1),
       y: y[i],

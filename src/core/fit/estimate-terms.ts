@@ -17,6 +17,10 @@ import { combinationLabel } from './combination-label.ts';
 import type { LinearFit } from './linear-fit.ts';
 import { tIntervals } from './t-intervals.ts';
 
+// Locals: module bindings are getters under some loaders, and these run once per term.
+const tPValue = tTwoSidedP;
+const intervals = tIntervals;
+
 export interface TermEstimates {
   readonly intercept: Estimate;
   /** One per kept term column, in model order. */
@@ -39,13 +43,26 @@ export function estimateTerms(fit: LinearFit, factors: readonly Factor[], blockL
   const dfRes = fit.dfResidual;
   const sigma = dfRes > 0 ? Math.sqrt(fit.rss / dfRes) : null;
   const tq = dfRes > 0 ? tQuantile(1 - alpha / 2, dfRes) : null;
-  const estimate = (j: number): Estimate => {
+  const iv = { se: null as number | null, ciLo: null as number | null, ciHi: null as number | null, piLo: null as number | null, piHi: null as number | null }; // reused per column
+  // The figures of column j, written into one scratch object (no object per column besides the result).
+  const est: { coef: number; se: number | null; t: number | null; p: number | null; ci: [number, number] | null } = { coef: 0, se: null, t: null, p: null, ci: null };
+  const estimate = (j: number): void => {
     const coef = fit.coef[j];
-    if (sigma === null || tq === null) return { coef, se: null, t: null, p: null, ci: null };
-    const { se, ciLo, ciHi } = tIntervals(coef, fit.covUnscaled[j * m + j], sigma, tq);
-    if (se === 0) return { coef, se, t: null, p: null, ci: [ciLo!, ciHi!] };
+    est.coef = coef;
+    if (sigma === null || tq === null) {
+      est.se = est.t = est.p = est.ci = null;
+      return;
+    }
+    const { se, ciLo, ciHi } = intervals(coef, fit.covUnscaled[j * m + j], sigma, tq, iv);
+    est.se = se;
+    est.ci = [ciLo!, ciHi!];
+    if (se === 0) {
+      est.t = est.p = null;
+      return;
+    }
     const t = coef / se!;
-    return { coef, se, t, p: tTwoSidedP(t, dfRes), ci: [ciLo!, ciHi!] };
+    est.t = t;
+    est.p = tPValue(t, dfRes);
   };
 
   const labels = columnLabels(fit.columns, factors);
@@ -76,7 +93,7 @@ export function estimateTerms(fit: LinearFit, factors: readonly Factor[], blockL
     if (c.kind !== 'term') continue;
     const label = labels[fit.kept[j]];
     const extra = carried.get(fit.kept[j]);
-    const est = estimate(j);
+    estimate(j);
     // Built field by field: object spreads are slow on this hot path (see test/bench).
     const base: TermEstimate = vifs
       ? { term: c.term, name: label.name, letters: label.letters, coef: est.coef, se: est.se, t: est.t, p: est.p, ci: est.ci, effect: 2 * est.coef, vif: vifs[j] ?? null }
@@ -85,5 +102,7 @@ export function estimateTerms(fit: LinearFit, factors: readonly Factor[], blockL
   }
   const blocked = blockLevels.length > 1;
   if (blocked) blockOffsets.push({ block: blockLevels[blockLevels.length - 1], offset: -blockSum });
-  return { intercept: estimate(0), terms, aliased, blockOffsets: blocked ? blockOffsets : null, sigma, labels, aliasedWithInterceptOrBlocks: withInterceptOrBlocks };
+  estimate(0);
+  const intercept: Estimate = { coef: est.coef, se: est.se, t: est.t, p: est.p, ci: est.ci };
+  return { intercept, terms, aliased, blockOffsets: blocked ? blockOffsets : null, sigma, labels, aliasedWithInterceptOrBlocks: withInterceptOrBlocks };
 }

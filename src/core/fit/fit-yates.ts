@@ -49,11 +49,44 @@ export function yatesCells(coded: readonly (readonly number[])[], k: number): In
   return cells;
 }
 
+/* One-entry memo of (X'X)^-1 = diag(1/N, 1/N_f, ..., 1/N_f): it depends on the design's shape
+ * only, and at p = 128 it is 130 KB to clear per fit. Shared between fits of one shape, so it is
+ * read, never written, by everything downstream (as LinearFit and FittedModel are read-only). */
+let memoCov = new Float64Array(0);
+let memoN = 0;
+let memoNf = 0;
+
+function diagonalCovariance(n: number, nf: number, p: number): Float64Array {
+  if (memoCov.length !== p * p || memoN !== n || memoNf !== nf) {
+    const cov = new Float64Array(p * p);
+    cov[0] = 1 / n;
+    for (let j = 1; j < p; j++) cov[j * p + j] = 1 / nf;
+    memoCov = cov;
+    memoN = n;
+    memoNf = nf;
+  }
+  return memoCov;
+}
+
+/* Two work buffers of 2^k cells (the totals, the fitted cell deviations), kept for the next fit of
+ * the same k up to 2^12 cells and cleared on each use: a typed array's allocation costs more than
+ * its clearing at these sizes. Nothing that leaves fitYates points into them. */
+const buffers: Float64Array[] = [new Float64Array(0), new Float64Array(0)];
+const KEEP_CELLS = 1 << 12;
+
+function scratch(which: 0 | 1, size: number): Float64Array {
+  if (size > KEEP_CELLS) return new Float64Array(size);
+  let b = buffers[which];
+  if (b.length !== size) buffers[which] = b = new Float64Array(size);
+  else b.fill(0);
+  return b;
+}
+
 export function fitYates(columns: readonly Column[], terms: readonly Term[], cells: Int32Array, k: number, y: ArrayLike<number>): LinearFit {
   const n = y.length;
   const size = 1 << k;
   const p = columns.length;
-  const total = new Float64Array(size);
+  const total = scratch(0, size);
   let sumAll = 0;
   let nf = 0;
   for (let i = 0; i < n; i++) {
@@ -67,16 +100,14 @@ export function fitYates(columns: readonly Column[], terms: readonly Term[], cel
   walshHadamard(total); // total[t] is now the contrast of term t
   const coef = new Float64Array(p);
   const seqSS = new Float64Array(p);
-  const covUnscaled = new Float64Array(p * p);
+  const covUnscaled = diagonalCovariance(n, nf, p);
   coef[0] = intercept;
   seqSS[0] = n * intercept * intercept;
-  covUnscaled[0] = 1 / n;
-  const model = new Float64Array(size);
+  const model = scratch(1, size);
   for (let j = 0; j < terms.length; j++) {
     const b = total[terms[j]] / nf;
     coef[j + 1] = b;
     seqSS[j + 1] = nf * b * b;
-    covUnscaled[(j + 1) * p + (j + 1)] = 1 / nf;
     model[terms[j]] = b;
   }
   walshHadamard(model); // model[c] is now the fitted deviation from the intercept in cell c
@@ -94,10 +125,12 @@ export function fitYates(columns: readonly Column[], terms: readonly Term[], cel
     rss += e * e;
     leverage[i] = c >= 0 ? hf : 1 / n;
   }
+  const kept = new Int32Array(p);
+  for (let j = 0; j < p; j++) kept[j] = j;
   return {
     n,
     columns,
-    kept: Int32Array.from({ length: p }, (_, j) => j),
+    kept,
     coef,
     covUnscaled,
     seqSS,

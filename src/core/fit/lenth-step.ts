@@ -17,7 +17,7 @@ import { isProduct, termLetters, termName } from '../model/term.ts';
 import type { EffectPoint, TermEstimate } from './analysis.ts';
 import { combinationLabel } from './combination-label.ts';
 import { contrastEffects } from './contrast-effects.ts';
-import { halfNormalQuantiles } from './half-normal.ts';
+import { bySize, halfNormalQuantiles } from './half-normal.ts';
 import { lenth, type LenthResult } from './lenth.ts';
 import { labelGroups, settingGroups } from './pure-error.ts';
 import { saturatedEffects } from './saturated-effects.ts';
@@ -55,17 +55,19 @@ export interface LenthInput {
   readonly contrasts?: { readonly columns: readonly (readonly number[])[]; readonly labels: readonly { readonly name: string; readonly letters: string }[] };
 }
 
+const product = isProduct; // a local: module bindings are getters under some loaders, read per term
+
 export function lenthStep(input: LenthInput): LenthStep {
   const { factors, coded, y, points, blocks, kinds, groups, terms, nominal } = input;
   const factorialRows: number[] = [];
-  kinds.forEach((kd, i) => kd === 'factorial' && factorialRows.push(i));
+  for (let i = 0; i < kinds.length; i++) if (kinds[i] === 'factorial') factorialRows.push(i);
   // Unreplicated: no two factorial runs share their planned point or settings (blocks aside).
   const unblockedGroups = !blocks ? groups : nominal ? settingGroups(nominal, null) : points ? labelGroups(points, null) : settingGroups(coded, null);
-  const distinctPoints = new Set(factorialRows.map((i) => unblockedGroups[i])).size;
+  const unreplicated = allDistinct(factorialRows, unblockedGroups);
   // The half-normal chart shows two-level contrasts only: products of distinct factors, never a square.
-  let effects: { name: string; letters: string; effect: number }[] = terms.filter((t) => isProduct(t.term)).map((t) => ({ name: t.name, letters: t.estimates ?? t.letters, effect: t.effect }));
+  let effects: { name: string; letters: string; effect: number }[] = terms.filter((t) => product(t.term)).map((t) => ({ name: t.name, letters: t.estimates ?? t.letters, effect: t.effect }));
   let result: LenthResult | null = null;
-  if (factorialRows.length >= 2 && distinctPoints === factorialRows.length && input.contrasts) {
+  if (factorialRows.length >= 2 && unreplicated && input.contrasts) {
     const { columns, labels } = input.contrasts;
     const est = contrastEffects(
       columns.map((c) => factorialRows.map((i) => c[i])),
@@ -75,7 +77,7 @@ export function lenthStep(input: LenthInput): LenthStep {
       result = lenth(est.map((e) => e.effect));
       effects = est.map((e) => ({ ...labels[e.column], effect: e.effect }));
     }
-  } else if (factorialRows.length >= 2 && distinctPoints === factorialRows.length) {
+  } else if (factorialRows.length >= 2 && unreplicated) {
     const sat = saturatedEffects(
       factors.length,
       factorialRows.map((i) => (nominal ?? coded)[i]),
@@ -96,13 +98,28 @@ export function lenthStep(input: LenthInput): LenthStep {
   const l = result;
   const mark = (effect: number): 'likely' | 'active' | undefined =>
     l === null ? undefined : Math.abs(effect) > l.sme ? 'active' : Math.abs(effect) > l.me ? 'likely' : undefined;
-  const sorted = [...effects].sort((a, b) => Math.abs(a.effect) - Math.abs(b.effect));
-  const q = halfNormalQuantiles(sorted.length);
-  const halfNormal: EffectPoint[] = sorted.map((e, i) => {
+  const order = bySize(effects.map((e) => e.effect));
+  const q = halfNormalQuantiles(order.length);
+  const halfNormal: EffectPoint[] = [];
+  for (let i = 0; i < order.length; i++) {
+    const e = effects[order[i]];
     const mk = mark(e.effect);
-    return mk ? { name: e.name, letters: e.letters, effect: e.effect, quantile: q[i], mark: mk } : { name: e.name, letters: e.letters, effect: e.effect, quantile: q[i] };
-  });
+    halfNormal.push(mk ? { name: e.name, letters: e.letters, effect: e.effect, quantile: q[i], mark: mk } : { name: e.name, letters: e.letters, effect: e.effect, quantile: q[i] });
+  }
   return { lenth: result, halfNormal };
+}
+
+/** True when no two of the runs share a group (stops at the first repeat). */
+function allDistinct(rows: readonly number[], groups: Int32Array): boolean {
+  let size = 0;
+  for (let i = 0; i < rows.length; i++) if (groups[rows[i]] >= size) size = groups[rows[i]] + 1;
+  const seen = new Uint8Array(size);
+  for (let i = 0; i < rows.length; i++) {
+    const g = groups[rows[i]];
+    if (seen[g]) return false;
+    seen[g] = 1;
+  }
+  return true;
 }
 
 /**

@@ -30,11 +30,11 @@ export interface NominalSettings {
   readonly exact: boolean;
 }
 
-const LEVELS = [-1, 0, 1] as const;
-
 /**
  * `planned`: the planned coded settings of each run (null for a run without a plan), or absent
- * for a plain table, when -1, 0 and +1 are the levels. Throws nothing; cost O(n k).
+ * for a plain table, when -1, 0 and +1 are the levels. When every nominal setting is the actual
+ * one exactly (the common case: runs logged at their levels), `nominal` is `coded` itself: one
+ * pass over the settings and no copy. Throws nothing; cost O(n k).
  */
 export function nominalSettings(
   coded: readonly (readonly number[])[],
@@ -45,25 +45,49 @@ export function nominalSettings(
   const exactTol = SETTING_TOLERANCE;
   let moved = 0;
   let away = 0;
-  const nominal = coded.map((row, i) => {
+  let same = true; // every nominal setting === its actual one
+  const n = coded.length;
+  for (let i = 0; i < n; i++) {
+    const row = coded[i];
     const plan = planned?.[i] ?? null;
     let runAway = false;
-    const out = row.map((v, f) => {
-      let level: number | null = null;
-      if (plan) {
-        if (Math.abs(v - plan[f]) <= tol) level = plan[f];
-      } else {
-        for (const l of LEVELS) if (Math.abs(v - l) <= tol) level = l;
-      }
-      if (level === null) {
+    for (let f = 0; f < row.length; f++) {
+      const v = row[f];
+      const level = nominalLevel(v, plan, f, tol);
+      if (level !== level) {
         if (plan || Math.abs(v) < 1) runAway = true;
-        return v;
+        continue;
       }
+      if (level !== v) same = false;
       if (Math.abs(v - level) > exactTol) moved++;
-      return level;
-    });
+    }
     if (runAway) away++;
-    return out;
+  }
+  if (same) return { nominal: coded, moved, away, exact: moved === 0 };
+  const nominal = coded.map((row, i) => {
+    const plan = planned?.[i] ?? null;
+    return row.map((v, f) => {
+      const level = nominalLevel(v, plan, f, tol);
+      return level !== level ? v : level;
+    });
   });
   return { nominal, moved, away, exact: moved === 0 };
+}
+
+/** The level a setting v of factor f counts as (see the file comment), or NaN when it stands for itself. */
+function nominalLevel(v: number, plan: readonly number[] | null, f: number, tol: number): number {
+  if (plan) return Math.abs(v - plan[f]) <= tol ? plan[f] : NaN;
+  if (Math.abs(v + 1) <= tol) return -1;
+  if (Math.abs(v) <= tol) return 0;
+  if (Math.abs(v - 1) <= tol) return 1;
+  return NaN;
+}
+
+/**
+ * The plan of runs whose settings are all exactly -1, 0 or +1 and that have no planned settings
+ * (Yates' path, fit-yates.ts yatesCells): every setting is its own level, so nothing moved and
+ * nothing is away; what nominalSettings(coded) gives, without the pass over the settings. Cost O(1).
+ */
+export function exactNominal(coded: readonly (readonly number[])[]): NominalSettings {
+  return { nominal: coded, moved: 0, away: 0, exact: true };
 }

@@ -42,7 +42,7 @@ export interface RepeatsInput {
 export function findRepeats(input: RepeatsInput): Repeats {
   const { coded, y, points, blocks, cells, k, nominal } = input;
   const groups = cells
-    ? Int32Array.from(cells, (c) => (c < 0 ? 1 << k : c))
+    ? cellGroups(cells, k)
     : nominal
       ? settingGroups(nominal, blocks)
       : points
@@ -62,4 +62,12 @@ export function findRepeats(input: RepeatsInput): Repeats {
     nearReplicates = near.size;
   }
   return { groups, pure, nearReplicates };
+}
+
+/** On Yates' path the group of a run is its cell, and 2^k for every center run. */
+function cellGroups(cells: Int32Array, k: number): Int32Array {
+  const out = new Int32Array(cells.length);
+  const center = 1 << k;
+  for (let i = 0; i < cells.length; i++) out[i] = cells[i] < 0 ? center : cells[i];
+  return out;
 }

@@ -29,6 +29,23 @@ export function scaleExponent(values: ArrayLike<number>): number {
   return e;
 }
 
+/**
+ * The largest |scaleExponent| at which the analysis is made on y as it is: up to 2^64 either way
+ * of [1, 2), every value the analysis forms (sums, products and quotients of y, squares and sums
+ * of squares up to n 2^130, square roots of sums of squares) stays a normal double, and each of
+ * those operations commutes exactly with a power of two (IEEE 754, sections 3.4 and 5.4: a
+ * correctly rounded +, -, x, / or square root of x 2^k, of x^2 2^2k, is the result times that
+ * power), so the analysis of y equals the scaled one scaled back, figure for figure and bit for
+ * bit, without the two passes (test/core/fit/response-scale.test.ts checks it).
+ */
+export const SCALE_FREE_EXPONENT = 64;
+
+/** The exponent to take out before the analysis: scaleExponent(values), or 0 within SCALE_FREE_EXPONENT of it. Cost O(n). */
+export function analysisScaleExponent(values: ArrayLike<number>): number {
+  const e = scaleExponent(values);
+  return e >= -SCALE_FREE_EXPONENT && e <= SCALE_FREE_EXPONENT ? 0 : e;
+}
+
 /** x 2^e, in two halves when 2^e itself is not a normal double (e outside -1022..1023). Exact unless the result over- or underflows. */
 export function timesPow2(x: number, e: number): number {
   if (e >= -1022 && e <= 1023) return x * 2 ** e;

@@ -35,14 +35,19 @@ export function validateResponseData(data: ResponseData): void {
   }
   for (let f = 0; f < factors.length; f++) {
     const first = coded[0][f];
-    if (coded.every((row) => row[f] === first)) {
+    let i = 1;
+    while (i < n && coded[i][f] === first) i++;
+    if (i === n) {
       const real = factors[f].kind === 'categorical' ? toReal(factors[f], first) : shortNumber(toReal(factors[f], first) as number);
       throw new InputError(`${factors[f].name} has the same setting (${real}) in every run, so its effect cannot be estimated`);
     }
   }
   let lo = Infinity;
   let hi = -Infinity;
-  for (const v of y) (lo = Math.min(lo, v)), (hi = Math.max(hi, v));
+  for (let i = 0; i < n; i++) {
+    lo = Math.min(lo, y[i]);
+    hi = Math.max(hi, y[i]);
+  }
   // Relative to the values' own scale (no absolute floor); all zeros give 0 <= 0 and are refused.
   if (hi - lo <= CONSTANT_TOLERANCE * Math.max(Math.abs(lo), Math.abs(hi))) {
     throw new InputError(`${response} is the same (${shortNumber(lo)}) in every run: there is no variation to analyze`);

@@ -104,13 +104,17 @@ function checkIndex(i: number): void {
  * Example: checkTerm(SQUARE_FLAG | 0b11, factors) throws (a square has one factor).
  */
 export function checkTerm(t: Term, factors: readonly Factor[]): void {
-  const k = factors.length;
+  checkTermBelow(t, factors, 2 ** factors.length);
+}
+
+/** checkTerm with 2^k, the first mask beyond the factors, worked out by the caller. */
+function checkTermBelow(t: Term, factors: readonly Factor[], limit: number): void {
   if (!Number.isInteger(t) || t <= 0 || t > (SQUARE_FLAG | FACTOR_BITS)) {
     throw new InputError(`A model term must be a product of factors or the square of one, got ${t}`);
   }
   const mask = t & FACTOR_BITS;
   if (mask === 0) throw new InputError(`A model term must name at least one factor, got ${t}`);
-  if (mask >= 2 ** k) throw new InputError(`Model term ${t} refers to a factor the study does not have (${k} factors)`);
+  if (mask >= limit) throw new InputError(`Model term ${t} refers to a factor the study does not have (${factors.length} factors)`);
   if (isSquare(t)) {
     if ((mask & (mask - 1)) !== 0) {
       const names = termFactors(mask).map((i) => factors[i].letter).join('');
@@ -122,14 +126,20 @@ export function checkTerm(t: Term, factors: readonly Factor[]): void {
 
 /** checkTerm for each term. */
 export function checkTerms(terms: readonly Term[], factors: readonly Factor[]): void {
-  for (const t of terms) checkTerm(t, factors);
+  const limit = 2 ** factors.length;
+  for (let i = 0; i < terms.length; i++) checkTermBelow(terms[i], factors, limit);
 }
 
 /** Order of a term: the number of factors it multiplies, with repeats (A^2 is second order); 0 for the intercept. */
 export function termOrder(t: Term): number {
-  let n = t & SQUARE_FLAG ? 1 : 0;
-  for (let m = t & FACTOR_BITS; m !== 0; m &= m - 1) n++;
-  return n;
+  return (t & SQUARE_FLAG ? 1 : 0) + bitCount(t & FACTOR_BITS);
+}
+
+/** Number of set bits of a 32-bit integer, by the SWAR sums of bit pairs, nibbles and bytes (Warren, Hacker's Delight, 2nd ed., section 5-1). */
+function bitCount(m: number): number {
+  m = m - ((m >>> 1) & 0x55555555);
+  m = (m & 0x33333333) + ((m >>> 2) & 0x33333333);
+  return Math.imul((m + (m >>> 4)) & 0x0f0f0f0f, 0x01010101) >>> 24;
 }
 
 /** The distinct factor indices of a term, in declared order (A^2 -> [0]). */
@@ -190,6 +200,18 @@ export function compareTerms(a: Term, b: Term): number {
     y ^= ly;
   }
   return 0;
+}
+
+/**
+ * The distinct terms in model order (compareTerms), as a new array: a list already in that order
+ * without repeats (as formula.ts builds them) is copied after one pass of comparisons, else
+ * de-duplicated and sorted. Cost O(p), or O(p log p) for a list out of order.
+ * Example: modelOrder([AB, A, A]) -> [A, AB].
+ */
+export function modelOrder(terms: readonly Term[]): Term[] {
+  let ordered = true;
+  for (let i = 1; i < terms.length && ordered; i++) if (!(compareTerms(terms[i - 1], terms[i]) < 0)) ordered = false;
+  return ordered ? terms.slice() : [...new Set(terms)].sort(compareTerms);
 }
 
 /**

@@ -200,3 +200,14 @@ describe('tCdf and tTwoSidedP', () => {
     expect(tTwoSidedP(-Infinity, 4)).toBe(0);
   });
 });
+
+describe('tQuantile asked twice in a row for one p and df (the analysis refitted) gives the same value', () => {
+  it('t(0.975; 10) on each call, against jstat, and a different p or df in between is not confused with it', () => {
+    const a = tQuantile(0.975, 10);
+    expect(a).toBeCloseTo(jStat.studentt.inv(0.975, 10), 6); // jstat is good to ~1e-7; 2.228 in printed t tables (from memory)
+    expect(tQuantile(0.975, 10)).toBe(a);
+    expect(tQuantile(0.95, 10)).toBeCloseTo(jStat.studentt.inv(0.95, 10), 6);
+    expect(tQuantile(0.975, 12)).toBeCloseTo(jStat.studentt.inv(0.975, 12), 6);
+    expect(tQuantile(0.975, 10)).toBe(a);
+  });
+});

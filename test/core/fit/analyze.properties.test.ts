@@ -53,6 +53,11 @@ describe('analyze: properties (fast-check)', () => {
           expect(Math.abs(qr.runs[i].fitted - r.fitted)).toBeLessThan(1e-9 * scale);
           expect(qr.runs[i].leverage).toBeCloseTo(r.leverage, 10);
         });
+        // The closed forms of Yates' path (run kinds by cell, the factorial box as tested extent,
+        // the settings as their own plan) against the general passes over the settings.
+        expect(yates.runs.map((r) => r.kind)).toEqual(qr.runs.map((r) => r.kind));
+        expect(yates.model.extent).toEqual(qr.model.extent);
+        expect(yates.verdicts.map((v) => v.kind)).toEqual(qr.verdicts.map((v) => v.kind));
       }),
       { numRuns: 150 },
     );

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import jStat from 'jstat';
 import MLR from 'ml-regression-multivariate-linear';
-import { adjustedCurvature, curvature, runKinds } from '../../../src/core/fit/curvature.ts';
+import { adjustedCurvature, cellKinds, curvature, runKinds } from '../../../src/core/fit/curvature.ts';
+import { yatesCells } from '../../../src/core/fit/fit-yates.ts';
 import { modelColumns } from '../../../src/core/fit/columns.ts';
 import { pureError } from '../../../src/core/fit/pure-error.ts';
 import { defineFactors } from '../../../src/core/factor/factor.ts';
@@ -100,3 +101,18 @@ function residualMs(ref: MLR, x: number[][], y: number[], p: number): number {
   const pred = ref.predict(x) as number[][];
   return y.reduce((s, v, i) => s + (v - pred[i][0]) ** 2, 0) / (y.length - p);
 }
+
+describe('cellKinds: run kinds on Yates\' path from the cells, the same as runKinds from the settings', () => {
+  it('the 2^2 with five center points (Montgomery 8th ed., section 6.8), and with a categorical factor', () => {
+    const d = fixtureData('montgomery-8e-ex6-6-center-points.csv', { factors: ['Time', 'Temperature'], response: 'Yield' });
+    const cells = yatesCells(d.coded, 2)!;
+    expect(cells).not.toBeNull();
+    expect(cellKinds(d.factors, cells)).toEqual(runKinds(d.factors, d.coded));
+    expect(cellKinds(d.factors, cells).filter((k) => k === 'center')).toHaveLength(5);
+    const mixed = defineFactors([
+      { kind: 'numeric', name: 'Time', low: 30, high: 40 },
+      { kind: 'categorical', name: 'Powder', levels: ['matte', 'gloss'] },
+    ]);
+    expect(cellKinds(mixed, cells)).toEqual(runKinds(mixed, d.coded));
+  });
+});

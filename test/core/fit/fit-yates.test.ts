@@ -73,3 +73,24 @@ describe('fitYates', () => {
     expect(f.dfResidual).toBe(1);
   });
 });
+
+describe('fitYates: (X\'X)^-1 = diag(1/N, 1/N_f, ...) kept per design shape', () => {
+  it('equals the QR path\'s covariance on the 2^3 plasma etch runs (Montgomery 8th ed., Example 6.1), with and without center runs, and a second shape leaves the first as it was', () => {
+    const terms = termsUpToOrder(3, 3);
+    const cols = modelColumns([], terms);
+    const p = cols.length;
+    const check = (coded: readonly (readonly number[])[], y: readonly number[]) => {
+      const yates = fitYates(cols, terms, yatesCells(coded, 3)!, 3, y);
+      const qr = fitQr(cols, modelMatrix(cols, coded, null), y);
+      for (let i = 0; i < p * p; i++) expect(Math.abs(yates.covUnscaled[i] - qr.covUnscaled[i])).toBeLessThan(1e-14);
+      return yates.covUnscaled;
+    };
+    const plain = check(etch.coded, etch.y);
+    const kept = Array.from(plain);
+    const centered = check([...etch.coded, [0, 0, 0], [0, 0, 0]], [...etch.y, 600, 640]);
+    expect(centered[0]).toBeCloseTo(1 / 18, 15);
+    expect(centered[p + 1]).toBeCloseTo(1 / 16, 15);
+    expect(Array.from(plain)).toEqual(kept);
+    expect(plain[0]).toBeCloseTo(1 / 16, 15);
+  });
+});

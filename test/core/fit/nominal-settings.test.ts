@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { nominalSettings } from '../../../src/core/fit/nominal-settings.ts';
+import { exactNominal, nominalSettings } from '../../../src/core/fit/nominal-settings.ts';
 
 describe('nominalSettings', () => {
   it('without a plan, a setting within 0.1 coded of -1, 0 or +1 counts as that level; others stand for themselves', () => {
@@ -18,5 +18,14 @@ describe('nominalSettings', () => {
   it('degenerate input: no runs give an exact empty plan; settings exactly on their levels are exact', () => {
     expect(nominalSettings([])).toEqual({ nominal: [], moved: 0, away: 0, exact: true });
     expect(nominalSettings([[1, -1, 0]]).exact).toBe(true);
+  });
+});
+
+describe('exactNominal: settings all exactly at -1, 0 or +1 without a plan are their own plan', () => {
+  it('equals nominalSettings on such runs, and hands the settings on without a copy', () => {
+    const coded = [[1, -1, 0], [-1, -1, 1], [0, 0, 0]];
+    expect(exactNominal(coded)).toEqual(nominalSettings(coded));
+    expect(nominalSettings(coded).nominal).toBe(coded);
+    expect(exactNominal(coded).nominal).toBe(coded);
   });
 });

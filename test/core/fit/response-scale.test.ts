@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { analyze } from '../../../src/core/fit/analyze.ts';
-import { scaleExponent, timesPow2 } from '../../../src/core/fit/response-scale.ts';
+import { analysisScaleExponent, SCALE_FREE_EXPONENT, scaleExponent, timesPow2 } from '../../../src/core/fit/response-scale.ts';
 import { defineFactors } from '../../../src/core/factor/factor.ts';
 import { termsUpToOrder } from '../../../src/core/model/formula.ts';
 import { InputError } from '../../../src/core/errors.ts';
@@ -192,4 +192,35 @@ describe('analyze: Montgomery, Design and Analysis of Experiments, 8th ed., Exam
     const y = base.y.map((_, i) => (i % 2 ? 1.2e-300 : 1e-300));
     expect(() => analyze({ ...base, y }, { terms })).not.toThrow();
   });
+});
+
+describe('the scale-free window: a response within 2^+-64 of [1, 2) is analysed as it is, and that gives the bits of the scaled analysis (IEEE 754, sections 3.4 and 5.4)', () => {
+  it('analysisScaleExponent is 0 inside the window and scaleExponent outside it', () => {
+    expect(SCALE_FREE_EXPONENT).toBe(64);
+    expect(analysisScaleExponent([100])).toBe(0); // 100 = 1.5625 x 2^6
+    expect(analysisScaleExponent([timesPow2(1.5, 64)])).toBe(0);
+    expect(analysisScaleExponent([timesPow2(1.5, 65)])).toBe(65);
+    expect(analysisScaleExponent([timesPow2(1.5, -64)])).toBe(0);
+    expect(analysisScaleExponent([timesPow2(1.5, -65)])).toBe(-65);
+  });
+
+  // Montgomery 8th ed., Example 6.1 (2^3 plasma etch, n = 2; Yates' path), the same with its first
+  // run lost (QR path), and with one setting logged off its level (the fit on the plan): each
+  // analysed as it is (largest |y| about 2^10) against its copies moved just outside the window
+  // either way, which are analysed on the scaled response.
+  const base = fixtureData('montgomery-8e-ex6-1-plasma-etch-2x3.csv', { factors: ['Gap', 'Flow', 'Power'], response: 'Etch rate' });
+  const lost = { ...base, coded: base.coded.slice(1), y: base.y.slice(1), labels: base.labels.slice(1) };
+  const off = { ...base, coded: base.coded.map((row, i) => (i === 2 ? [row[0] * 0.97, row[1], row[2]] : row)) };
+  const center = { ...base, coded: [...base.coded, [0, 0, 0], [0, 0, 0]], y: [...base.y, 600, 640], labels: [...base.labels, 'c1', 'c2'] };
+  const terms = termsUpToOrder(3, 2);
+  for (const [name, d] of [['complete, Yates', base], ['with center runs', center], ['a lost run, QR', lost], ['a setting off its level', off]] as const) {
+    it(`${name}: shifts that put the response just inside and just outside the window either way scale every figure exactly`, () => {
+      const e = scaleExponent(d.y);
+      expect(analysisScaleExponent(d.y)).toBe(0);
+      const a = analyze(d, { terms });
+      for (const shift of [-SCALE_FREE_EXPONENT - e - 1, -SCALE_FREE_EXPONENT - e, SCALE_FREE_EXPONENT - e, SCALE_FREE_EXPONENT - e + 1]) {
+        expectScaled(a, analyze({ ...d, y: d.y.map((v) => timesPow2(v, shift)) }, { terms }), shift);
+      }
+    });
+  }
 });

@@ -10,6 +10,7 @@ import {
   isProduct,
   isSquare,
   mainEffect,
+  SQUARE_FLAG,
   squareTerm,
   termColumnFactors,
   termFactors,
@@ -17,6 +18,7 @@ import {
   termMask,
   termName,
   termOrder,
+  modelOrder,
   termValue,
 } from '../../../src/core/model/term.ts';
 
@@ -97,5 +99,32 @@ describe('model terms: products of distinct factors and squares of one numeric f
     expect(() => checkTerm(Number.NaN, factors)).toThrow(InputError);
     expect(() => checkTerm(A2, factors)).not.toThrow();
     expect(() => checkTerm(ABC, factors)).not.toThrow();
+  });
+});
+
+describe('termOrder counts factors by bit sums (Hacker\'s Delight, section 5-1): the same as counting them one by one', () => {
+  it('every mask of up to 25 factors, with and without the square flag (fast-check)', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 2 ** 25 - 1 }), (m) => {
+        let n = 0;
+        for (let i = 0; i < 25; i++) n += (m >> i) & 1;
+        expect(termOrder(m)).toBe(n);
+        expect(termOrder(SQUARE_FLAG | m)).toBe(n + 1);
+      }),
+    );
+  });
+});
+
+describe('modelOrder: the distinct terms in model order, with a one-pass copy for a list already in order', () => {
+  it('equals de-duplicating and sorting by compareTerms, on lists in order, out of order and with repeats (fast-check)', () => {
+    const term = fc.oneof(fc.integer({ min: 1, max: 63 }), fc.integer({ min: 0, max: 5 }).map((i) => SQUARE_FLAG | (1 << i)));
+    fc.assert(
+      fc.property(fc.array(term, { maxLength: 40 }), fc.boolean(), (list, presort) => {
+        const input = presort ? [...new Set(list)].sort(compareTerms) : list;
+        const got = modelOrder(input);
+        expect(got).toEqual([...new Set(input)].sort(compareTerms));
+        expect(got).not.toBe(input);
+      }),
+    );
   });
 });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { centralComposite } from '../../../src/core/design/central-composite.ts';
 import { defineFactors } from '../../../src/core/factor/factor.ts';
-import { testedExtent } from '../../../src/core/predict/tested-extent.ts';
+import { boxExtent, testedExtent } from '../../../src/core/predict/tested-extent.ts';
 import { fullFactorial, numeric } from './designs.ts';
 
 describe('testedExtent: the axial distance widens the tested range on its axis (Montgomery 8th ed., section 11.4.1, from memory)', () => {
@@ -36,5 +36,14 @@ describe('testedExtent: the axial distance widens the tested range on its axis (
   it('degenerate: no runs give 1 on every axis; no factors give an empty list', () => {
     expect(testedExtent(defineFactors([numeric('A')]), [])).toEqual([1]);
     expect(testedExtent([], [[]])).toEqual([]);
+  });
+});
+
+describe('boxExtent: runs inside the factorial box (as on Yates\' path) are tested to 1 on every axis', () => {
+  it('equals testedExtent on a replicated 2^3 with center runs, and on three factors with no runs', () => {
+    const f = defineFactors([numeric('A'), numeric('B'), numeric('C')]);
+    expect(boxExtent(3)).toEqual(testedExtent(f, [...fullFactorial(3), ...fullFactorial(3), [0, 0, 0], [0, 0, 0]]));
+    expect(boxExtent(3)).toEqual(testedExtent(f, []));
+    expect(boxExtent(0)).toEqual([]);
   });
 });
