@@ -39,7 +39,7 @@ import { findRepeats } from './repeats.ts';
 import { boxCoxOn } from './box-cox.ts';
 import { modelMatrix, type Column } from './columns.ts';
 import { householderQr } from '../linalg/householder-qr.ts';
-import { residualSsQr, residualSsYates } from './residual-ss.ts';
+import { residualSsBasis, residualSsQr, residualSsYates } from './residual-ss.ts';
 import { RANK_TOLERANCE } from '../tolerance.ts';
 import { NO_TRANSFORM, transformResponses, type ResponseTransform } from './response-transform.ts';
 import { validateResponseData } from './validate-response.ts';
@@ -126,7 +126,7 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
   });
 
   // Box-Cox refits the same columns to each power of y': one factorisation serves them all.
-  const refit = cells ? residualSsYates(cells, factors.length, fit.columns.flatMap((c) => (c.kind === 'term' ? [c.term] : []))) : residualSsQr(fit.qr ?? householderQr(modelMatrix(keptColumns, coded, blocks), y.length, keptColumns.length, RANK_TOLERANCE));
+  const refit = cells ? residualSsYates(cells, factors.length, fit.columns.flatMap((c) => (c.kind === 'term' ? [c.term] : []))) : fit.basis ? residualSsBasis(fit.basis, y.length, fit.kept.length) : residualSsQr(fit.qr ?? householderQr(modelMatrix(keptColumns, coded, blocks), y.length, keptColumns.length, RANK_TOLERANCE));
   const bc = boxCoxOn(refit, yp);
   const model: FittedModel = {
     factors,

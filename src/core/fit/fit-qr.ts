@@ -44,9 +44,11 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
   // Leverage h_i = || R^-T x_i ||^2 over the kept columns (Seber and Lee section 10.2): column a of
   // X R^-1 is sum_{k<=a} Rinv[k,a] x_(kept k), built for all runs at once, then squared into h.
   const leverage = new Float64Array(n);
-  const w = new Float64Array(n);
+  // The columns are kept: X R^-1 is the thin Q1, orthonormal columns spanning the model, which the
+  // Box-Cox search reuses for every power of y (residual-ss.ts residualSsBasis).
+  const basis = new Float64Array(lean ? 0 : n * m);
   for (let a = 0; a < m && !lean; a++) {
-    w.fill(0);
+    const w = basis.subarray(a * n, (a + 1) * n);
     const ro = a * m;
     // Two columns per pass over w (each entry still adds them in the order k, k + 1).
     let k = 0;
@@ -95,6 +97,7 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
     fitted,
     residuals,
     leverage,
+    ...(lean ? {} : { basis }),
     rss,
     dfResidual: n - m,
     aliased,

@@ -27,6 +27,8 @@ export interface LinearFit {
   readonly fitted: Float64Array;
   readonly residuals: Float64Array;
   readonly leverage: Float64Array;
+  /** X R^-1 over the kept columns, column-major n x rank (the thin Q1 up to signs), when the fit computed leverage by QR. */
+  readonly basis?: Float64Array;
   /** Residual sum of squares. */
   readonly rss: number;
   readonly dfResidual: number;

@@ -9,6 +9,10 @@
  *   RSS(w) = sum w_i^2 - n wbar^2 - sum_{t in model} C_t^2 / N_f (the sums of squares of
  *   Montgomery, Design and Analysis of Experiments, 8th ed., section 6.6); O(n + k 2^k) per
  *   response. Computed about the mean (w_i - wbar) so that a large common part cancels exactly.
+ * - from the thin Q1 of the model (n x rank, orthonormal columns: fit-qr.ts keeps X R^-1):
+ *   RSS(w) = ||w||^2 - ||Q1'w||^2, O(n rank) per response with half the work of the reflectors;
+ *   computed about the first run's value, which the intercept's column absorbs (the model must
+ *   hold the intercept, as every model here does), so that a large common part cancels exactly.
  * `cross(a, b)` gives a'Ma and a'Mb together (M the residual projector, symmetric), the two sums the
  * Box-Cox search needs for the likelihood and its slope; one pass serves both. When the model holds
  * every cell contrast of the factorial (a full model), the model part is all but the mean's by
@@ -71,6 +75,48 @@ export function residualSsQr(f: QrFactor): ResidualSs {
       out[0] = aa;
       out[1] = ab;
     },
+  };
+}
+
+/** `basis`: Q1, column-major n x rank, the model's span including the intercept (see above). */
+export function residualSsBasis(basis: Float64Array, n: number, rank: number): ResidualSs {
+  const proj = new Float64Array(2);
+  const other = new Float64Array(n);
+  // ||d||^2 - ||Q1'd||^2 and d'e - (Q1'd)'(Q1'e), d and e shifted by their first entries.
+  const sums = (a: Float64Array, b: Float64Array, out: Float64Array): void => {
+    const a0 = a[0];
+    const b0 = b[0];
+    let aa = 0;
+    let ab = 0;
+    for (let i = 0; i < n; i++) {
+      const da = (a[i] -= a0);
+      aa += da * da;
+      ab += da * (b[i] -= b0);
+    }
+    for (let j = 0; j < rank; j++) {
+      const o = j * n;
+      let pa = 0;
+      let pb = 0;
+      for (let i = 0; i < n; i++) {
+        const q = basis[o + i];
+        pa += q * a[i];
+        pb += q * b[i];
+      }
+      aa -= pa * pa;
+      ab -= pa * pb;
+    }
+    out[0] = Math.max(0, aa);
+    out[1] = ab;
+  };
+  return {
+    n,
+    df: n - rank,
+    ss(w) {
+      other.set(w);
+      sums(w, other, proj);
+      return proj[0];
+    },
+    cross: sums,
   };
 }
 

@@ -2,7 +2,8 @@ import MLR from 'ml-regression-multivariate-linear';
 import { describe, expect, it } from 'vitest';
 import { modelColumns, modelMatrix } from '../../../src/core/fit/columns.ts';
 import { yatesCells } from '../../../src/core/fit/fit-yates.ts';
-import { residualSsQr, residualSsYates } from '../../../src/core/fit/residual-ss.ts';
+import { residualSsBasis, residualSsQr, residualSsYates } from '../../../src/core/fit/residual-ss.ts';
+import { fitQr } from '../../../src/core/fit/fit-qr.ts';
 import { householderQr } from '../../../src/core/linalg/householder-qr.ts';
 import { termsUpToOrder } from '../../../src/core/model/formula.ts';
 import { termValue } from '../../../src/core/model/term.ts';
@@ -42,7 +43,7 @@ describe('residualSsYates and residualSsQr', () => {
       expect(qr.ss(Float64Array.from(y)) / ref).toBeCloseTo(1, 10);
     }
   });
-  it("cross: a'Ma and a'Mb by polarisation of the reference library's RSS ((RSS(a + b) - RSS(a - b)) / 4), for a part of the model and for the full model (Parseval), both forms", () => {
+  it("cross: a'Ma and a'Mb by polarisation of the reference library's RSS ((RSS(a + b) - RSS(a - b)) / 4), for a part of the model and for the full model (Parseval), all three forms", () => {
     const coded = [...etch.coded, [0, 0, 0], [0, 0, 0], [0, 0, 0]];
     const a = [...etch.y, 700, 650, 720];
     const b = coded.map((_, i) => ((i * 7919) % 13) - 6 + 1e3);
@@ -50,9 +51,12 @@ describe('residualSsYates and residualSsQr', () => {
       const yates = residualSsYates(yatesCells(coded, 3)!, 3, model);
       const cols = modelColumns([], model);
       const qr = residualSsQr(householderQr(modelMatrix(cols, coded, null), coded.length, cols.length));
+      const fit = fitQr(cols, modelMatrix(cols, coded, null), a);
+      const basis = residualSsBasis(fit.basis!, coded.length, fit.kept.length);
       const aa = referenceRss(coded, model, a);
       const ab = (referenceRss(coded, model, a.map((v, i) => v + b[i])) - referenceRss(coded, model, a.map((v, i) => v - b[i]))) / 4;
-      for (const form of [yates, qr]) {
+      expect(basis.ss(Float64Array.from(a)) / aa).toBeCloseTo(1, 10);
+      for (const form of [yates, qr, basis]) {
         const out = new Float64Array(2);
         form.cross(Float64Array.from(a), Float64Array.from(b), out);
         expect(out[0] / aa).toBeCloseTo(1, 10);
