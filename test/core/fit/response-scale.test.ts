@@ -120,7 +120,7 @@ describe('analyze is exact under a power-of-two change of unit, from 1e-300 to 1
       }),
       { numRuns: 150 },
     );
-  });
+  }, 60_000); // 150 pairs of analyses: seconds on a busy shared machine
 
   it('the end points: 2^-1000 (9.3e-302) and 2^990 (1.0e298) (the fixed cases of the property above)', () => {
     const y = [3.1, 4.7, 2.2, 8.9, 5.5, 1.25, 7.75, 6.5];
@@ -150,7 +150,7 @@ describe('scaling back keeps the shape of the analysis (invented data, fast-chec
       }),
       { numRuns: 100 },
     );
-  });
+  }, 60_000);
 });
 
 describe('analyze: Montgomery, Design and Analysis of Experiments, 8th ed., Example 6.1 (2^3 plasma etch, n = 2) in units 1e200 and 1e-200 apart', () => {
