@@ -73,13 +73,21 @@ export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analys
   const e = analysisScaleExponent(fitted.y); // 0 when y needs no rescaling (response-scale.ts)
   const yp = bound === null ? raw.y : raw.y.map((v) => v - bound);
   const ep = scaleExponent(yp);
-  const inner = analyzeOnScale(e === 0 ? fitted : { ...fitted, y: fitted.y.map(pow2Scaler(-e)) }, yp.map(pow2Scaler(-ep)), transform, bound, options);
+  const ypScaled = new Float64Array(yp.length);
+  if (ep >= -1022 && ep <= 1022) {
+    const f = 2 ** -ep; // exact: a power of two within binary64's normal range (pow2Scaler's common case, without its closure)
+    for (let i = 0; i < yp.length; i++) ypScaled[i] = yp[i] * f;
+  } else {
+    const toUnit = pow2Scaler(-ep);
+    for (let i = 0; i < yp.length; i++) ypScaled[i] = toUnit(yp[i]);
+  }
+  const inner = analyzeOnScale(e === 0 ? fitted : { ...fitted, y: fitted.y.map(pow2Scaler(-e)) }, ypScaled, transform, bound, options);
   const out = scaleAnalysisBack(inner, e);
   return { ...out, warnings: [...fitted.messages, ...out.verdicts.filter(isWarning).map(verdictText)] };
 }
 
 /** The analysis of a response already scaled (largest magnitude in [1, 2)); `yp` the Box-Cox response, scaled alike; warnings left empty. */
-function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: ResponseTransform, bound: number | null, options: AnalyzeOptions): Analysis {
+function analyzeOnScale(data: ResponseData, yp: ArrayLike<number>, transform: ResponseTransform, bound: number | null, options: AnalyzeOptions): Analysis {
   const { factors, coded, y } = data;
   const alpha = options.alpha ?? 0.05;
   const screening = screeningStep(data);
@@ -126,7 +134,7 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
   });
 
   // Box-Cox refits the same columns to each power of y': one factorisation serves them all.
-  const refit = cells ? residualSsYates(cells, factors.length, fit.columns.flatMap((c) => (c.kind === 'term' ? [c.term] : []))) : fit.basis ? residualSsBasis(fit.basis, y.length, fit.kept.length) : residualSsQr(fit.qr ?? householderQr(modelMatrix(keptColumns, coded, blocks), y.length, keptColumns.length, RANK_TOLERANCE));
+  const refit = cells ? residualSsYates(cells, factors.length, termColumns(fit.columns)) : fit.basis ? residualSsBasis(fit.basis, y.length, fit.kept.length) : residualSsQr(fit.qr ?? householderQr(modelMatrix(keptColumns, coded, blocks), y.length, keptColumns.length, RANK_TOLERANCE));
   const bc = boxCoxOn(refit, yp);
   const model: FittedModel = {
     factors,
@@ -175,5 +183,15 @@ function analyzeOnScale(data: ResponseData, yp: readonly number[], transform: Re
 function termPValues(terms: readonly { readonly term: Term; readonly p?: number | null }[]): Map<Term, number | null> {
   const out = new Map<Term, number | null>();
   for (const t of terms) out.set(t.term, t.p ?? null);
+  return out;
+}
+
+/** The term masks of the model's columns, in order (a plain loop: flatMap's arrays cost more than the rest of the step). */
+function termColumns(columns: readonly Column[]): Int32Array {
+  let count = 0;
+  for (const c of columns) if (c.kind === 'term') count++;
+  const out = new Int32Array(count);
+  let j = 0;
+  for (const c of columns) if (c.kind === 'term') out[j++] = c.term;
   return out;
 }

@@ -58,7 +58,7 @@ export function boxCox(x: Float64Array, n: number, p: number, yp: readonly numbe
 }
 
 /** The same search over a model already factorised (residual-ss.ts); null as boxCox. */
-export function boxCoxOn(model: ResidualSs, yp: readonly number[]): BoxCox | null {
+export function boxCoxOn(model: ResidualSs, yp: ArrayLike<number>): BoxCox | null {
   const n = model.n;
   if (yp.length !== n || n === 0 || model.df <= 0) return null;
   for (let i = 0; i < n; i++) if (!(yp[i] > 0)) return null;

@@ -121,7 +121,7 @@ export function residualSsBasis(basis: Float64Array, n: number, rank: number): R
 }
 
 /** `cells`: each run's Yates cell, -1 for a center run (fit-yates.ts yatesCells); `terms` the model's. */
-export function residualSsYates(cells: Int32Array, k: number, terms: readonly Term[]): ResidualSs {
+export function residualSsYates(cells: Int32Array, k: number, terms: ArrayLike<Term>): ResidualSs {
   const n = cells.length;
   const size = 1 << k;
   const total = new Float64Array(size);
@@ -130,7 +130,16 @@ export function residualSsYates(cells: Int32Array, k: number, terms: readonly Te
   const list = Int32Array.from(terms);
   const totalB = new Float64Array(size);
   // Every contrast but the mean's in the model: the model part needs no transform (Parseval).
-  const everyContrast = new Set(terms).size === size - 1 && !terms.includes(0);
+  const seen = new Uint8Array(size);
+  let distinct = 0;
+  for (let j = 0; j < list.length; j++) {
+    const t = list[j];
+    if (t > 0 && t < size && seen[t] === 0) {
+      seen[t] = 1;
+      distinct++;
+    }
+  }
+  const everyContrast = distinct === size - 1;
   return {
     n,
     df: n - 1 - list.length,
