@@ -26,6 +26,7 @@ import { ALIAS_WEIGHT_TOLERANCE, SINGULAR_TOLERANCE, SPAN_TOLERANCE, WALSH_MARGI
 import { SQUARE_FLAG } from '../model/term.ts';
 import type { Column } from './columns.ts';
 import type { AliasedColumn } from './linear-fit.ts';
+import { cholesky } from '../linalg/cholesky.ts';
 
 /** The most missing points handled (beyond, the d x d work and the outside columns grow). */
 const MAX_MISSING = 12;
@@ -115,7 +116,7 @@ export function walshPlan(columns: readonly Column[], rows: readonly (readonly n
     for (let a = 0; a < d; a++) for (let b = 0; b <= a; b++) m[a * d + b] += sign * hs[o + a] * hs[o + b];
   }
   for (let i = 0; i < d; i++) m[i * d + i] -= WALSH_MARGIN * N;
-  if (!positiveDefinite(m, d)) return null;
+  if (!cholesky(m, d, m)) return null; // positive definite (Golub and Van Loan, Algorithm 4.2.1; m overwritten)
 
   const a = aliasedIdx.length;
   const aliased: AliasedColumn[] = [];
@@ -217,22 +218,6 @@ function extend(basis: Float64Array, rank: number, d: number, v: Float64Array): 
   return rank + 1;
 }
 
-/** Whether the symmetric d x d matrix m (overwritten) is positive definite: Cholesky (Golub and Van Loan, Algorithm 4.2.1). */
-function positiveDefinite(m: Float64Array, d: number): boolean {
-  for (let j = 0; j < d; j++) {
-    let s = m[j * d + j];
-    for (let q = 0; q < j; q++) s -= m[j * d + q] * m[j * d + q];
-    if (!(s > 0)) return false;
-    const l = Math.sqrt(s);
-    m[j * d + j] = l;
-    for (let i = j + 1; i < d; i++) {
-      let t = m[i * d + j];
-      for (let q = 0; q < j; q++) t -= m[i * d + q] * m[j * d + q];
-      m[i * d + j] = t / l;
-    }
-  }
-  return true;
-}
 
 /**
  * -A^-1 (row-major a x a) by Gauss-Jordan elimination with partial pivoting (Golub and Van Loan,
