@@ -81,8 +81,8 @@ export function boxCoxOn(model: ResidualSs, yp: ArrayLike<number>): BoxCox | nul
     slope = n * (logG - q[1] / q[0]);
     return -(n / 2) * (2 * (1 - lambda) * logG + Math.log(q[0]) - logN);
   };
-  // Near 0 the closed forms cancel: the Taylor series in t = lambda z (four terms: |t| < SERIES_T
-  // leaves a relative error below SERIES_T^4 / 120).
+  // Near 0 the closed forms cancel: the Taylor series in t = lambda z, five terms each (with
+  // |t| < SERIES_T the first term left out is below SERIES_T^5 of the sum).
   const series = (lambda: number): void => {
     for (let i = 0; i < n; i++) {
       const zi = z[i];
