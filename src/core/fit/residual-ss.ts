@@ -1,14 +1,14 @@
 /**
  * The residual sum of squares of any response on a model that is already factorised, for steps
  * that refit the same columns to many responses (the Box-Cox search: only the response changes).
- * Two forms, the same number:
+ * Three forms, the same number:
  * - from a Householder factorisation: RSS(w) = || (Q'w)[rank..n) ||^2 (Golub and Van Loan,
  *   Matrix Computations, 4th ed., section 5.3.3); O(n rank) per response, no allocation;
  * - for a complete balanced two-level factorial on Yates' path (fit-yates.ts): with n runs, N_f
  *   factorial runs, cell totals T_c and contrasts C_t (their Walsh-Hadamard transform),
  *   RSS(w) = sum w_i^2 - n wbar^2 - sum_{t in model} C_t^2 / N_f (the sums of squares of
  *   Montgomery, Design and Analysis of Experiments, 8th ed., section 6.6); O(n + k 2^k) per
- *   response. Computed about the mean (w_i - wbar) so that a large common part cancels exactly.
+ *   response. Computed about the first run's value so that a large common part cancels exactly.
  * - from the thin Q1 of the model (n x rank, orthonormal columns: fit-qr.ts keeps X R^-1):
  *   RSS(w) = ||w||^2 - ||Q1'w||^2, O(n rank) per response with half the work of the reflectors;
  *   computed about the first run's value, which the intercept's column absorbs (the model must
@@ -18,21 +18,27 @@
  * every cell contrast of the factorial (a full model), the model part is all but the mean's by
  * Parseval's identity for the Walsh-Hadamard transform (sum_t A_t B_t = 2^k sum_c a_c b_c), so no
  * transform is needed.
- * `ss` and `cross` may overwrite their arguments. Example: residualSsYates on the 2^2 yield data of Montgomery
- * 8th ed. section 6.2 with terms A, B, AB -> the error sum of squares 31.33 (printed 31.34).
+ * `cross` may overwrite its arguments; `residualSs` gives one response's RSS from it. Example:
+ * residualSs(residualSsYates(...), y) on the 2^2 yield data of Montgomery 8th ed. section 6.2
+ * with terms A, B, AB -> the error sum of squares 31.33 (printed 31.34).
  */
 import type { Term } from '../model/term.ts';
-import { applyQt, type QrFactor } from '../linalg/householder-qr.ts';
+import type { QrFactor } from '../linalg/householder-qr.ts';
 import { walshHadamard } from './walsh-hadamard.ts';
 
 export interface ResidualSs {
   readonly n: number;
   /** Residual degrees of freedom. */
   readonly df: number;
-  /** RSS of `w` (length n) on the model; `w` may be overwritten. */
-  ss(w: Float64Array): number;
   /** out[0] = a'Ma, out[1] = a'Mb (M the residual projector); `a` and `b` may be overwritten. */
   cross(a: Float64Array, b: Float64Array, out: Float64Array): void;
+}
+
+/** The RSS of one response `w` on the model (copied; `w` is left as it is). */
+export function residualSs(form: ResidualSs, w: ArrayLike<number>): number {
+  const out = new Float64Array(2);
+  form.cross(Float64Array.from(w), Float64Array.from(w), out);
+  return out[0];
 }
 
 export function residualSsQr(f: QrFactor): ResidualSs {
@@ -40,12 +46,6 @@ export function residualSsQr(f: QrFactor): ResidualSs {
   return {
     n,
     df: n - rank,
-    ss(w) {
-      applyQt(f, w);
-      let s = 0;
-      for (let i = rank; i < n; i++) s += w[i] * w[i];
-      return s;
-    },
     cross(a, b, out) {
       // Q'a and Q'b in one pass over each reflector (householder-qr.ts applyQt, twice over).
       const { v, beta } = f;
@@ -80,8 +80,6 @@ export function residualSsQr(f: QrFactor): ResidualSs {
 
 /** `basis`: Q1, column-major n x rank, the model's span including the intercept (see above). */
 export function residualSsBasis(basis: Float64Array, n: number, rank: number): ResidualSs {
-  const proj = new Float64Array(2);
-  const other = new Float64Array(n);
   // ||d||^2 - ||Q1'd||^2 and d'e - (Q1'd)'(Q1'e), d and e shifted by their first entries.
   const sums = (a: Float64Array, b: Float64Array, out: Float64Array): void => {
     const a0 = a[0];
@@ -111,11 +109,6 @@ export function residualSsBasis(basis: Float64Array, n: number, rank: number): R
   return {
     n,
     df: n - rank,
-    ss(w) {
-      other.set(w);
-      sums(w, other, proj);
-      return proj[0];
-    },
     cross: sums,
   };
 }
@@ -143,23 +136,6 @@ export function residualSsYates(cells: Int32Array, k: number, terms: ArrayLike<T
   return {
     n,
     df: n - 1 - list.length,
-    ss(w) {
-      let mean = 0;
-      for (let i = 0; i < n; i++) mean += w[i];
-      mean /= n;
-      total.fill(0);
-      let s = 0;
-      for (let i = 0; i < n; i++) {
-        const d = w[i] - mean;
-        s += d * d;
-        const c = cells[i];
-        if (c >= 0) total[c] += d;
-      }
-      walshHadamard(total);
-      let model = 0;
-      for (let j = 0; j < list.length; j++) model += total[list[j]] * total[list[j]];
-      return Math.max(0, s - model / nf);
-    },
     cross(a, b, out) {
       // One pass, about the first run's values (a shift changes no contrast but the mean's, and
       // the sums of squares about the mean follow from the shifted sums: Chan, Golub and LeVeque

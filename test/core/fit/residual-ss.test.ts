@@ -2,7 +2,7 @@ import MLR from 'ml-regression-multivariate-linear';
 import { describe, expect, it } from 'vitest';
 import { modelColumns, modelMatrix } from '../../../src/core/fit/columns.ts';
 import { yatesCells } from '../../../src/core/fit/fit-yates.ts';
-import { residualSsBasis, residualSsQr, residualSsYates } from '../../../src/core/fit/residual-ss.ts';
+import { residualSs, residualSsBasis, residualSsQr, residualSsYates } from '../../../src/core/fit/residual-ss.ts';
 import { fitQr } from '../../../src/core/fit/fit-qr.ts';
 import { householderQr } from '../../../src/core/linalg/householder-qr.ts';
 import { termsUpToOrder } from '../../../src/core/model/formula.ts';
@@ -25,11 +25,11 @@ describe('residualSsYates and residualSsQr', () => {
   it('the 2^2 yield data: SS_E 31.34 on 8 df, SS_T 323.00 less SS_A 208.33, SS_B 75.00, SS_AB 8.33 (Montgomery 8th ed., section 6.2, ANOVA table, printed to two decimals), both forms', () => {
     const yates = residualSsYates(yatesCells(yieldData.coded, 2)!, 2, terms);
     expect(yates.df).toBe(8);
-    expect(yates.ss(Float64Array.from(yieldData.y))).toBeCloseTo(323 - 208.3333333 - 75 - 8.3333333, 6);
+    expect(residualSs(yates, Float64Array.from(yieldData.y))).toBeCloseTo(323 - 208.3333333 - 75 - 8.3333333, 6);
     const cols = modelColumns([], terms);
     const qr = residualSsQr(householderQr(modelMatrix(cols, yieldData.coded, null), 12, cols.length));
     expect(qr.df).toBe(8);
-    expect(qr.ss(Float64Array.from(yieldData.y))).toBeCloseTo(323 - 208.3333333 - 75 - 8.3333333, 6);
+    expect(residualSs(qr, Float64Array.from(yieldData.y))).toBeCloseTo(323 - 208.3333333 - 75 - 8.3333333, 6);
   });
   it('the 2^3 etch data with center runs added and a part of the model: the same as the reference library, for several responses', () => {
     const coded = [...etch.coded, [0, 0, 0], [0, 0, 0], [0, 0, 0]];
@@ -39,8 +39,8 @@ describe('residualSsYates and residualSsQr', () => {
     const qr = residualSsQr(householderQr(modelMatrix(cols, coded, null), coded.length, cols.length));
     for (const y of [[...etch.y, 700, 650, 720], [...etch.y, 700, 650, 720].map((v) => Math.log(v)), coded.map((_, i) => ((i * 7919) % 13) - 6)]) {
       const ref = referenceRss(coded, model, y);
-      expect(yates.ss(Float64Array.from(y)) / ref).toBeCloseTo(1, 10);
-      expect(qr.ss(Float64Array.from(y)) / ref).toBeCloseTo(1, 10);
+      expect(residualSs(yates, Float64Array.from(y)) / ref).toBeCloseTo(1, 10);
+      expect(residualSs(qr, Float64Array.from(y)) / ref).toBeCloseTo(1, 10);
     }
   });
   it("cross: a'Ma and a'Mb by polarisation of the reference library's RSS ((RSS(a + b) - RSS(a - b)) / 4), for a part of the model and for the full model (Parseval), all three forms", () => {
@@ -55,7 +55,7 @@ describe('residualSsYates and residualSsQr', () => {
       const basis = residualSsBasis(fit.basis!, coded.length, fit.kept.length);
       const aa = referenceRss(coded, model, a);
       const ab = (referenceRss(coded, model, a.map((v, i) => v + b[i])) - referenceRss(coded, model, a.map((v, i) => v - b[i]))) / 4;
-      expect(basis.ss(Float64Array.from(a)) / aa).toBeCloseTo(1, 10);
+      expect(residualSs(basis, Float64Array.from(a)) / aa).toBeCloseTo(1, 10);
       for (const form of [yates, qr, basis]) {
         const out = new Float64Array(2);
         form.cross(Float64Array.from(a), Float64Array.from(b), out);
@@ -66,7 +66,7 @@ describe('residualSsYates and residualSsQr', () => {
   });
   it('degenerate input: a response the model fits exactly gives 0, never a negative sum', () => {
     const yates = residualSsYates(yatesCells(yieldData.coded, 2)!, 2, terms);
-    expect(yates.ss(Float64Array.from(yieldData.coded, (r) => 3 + r[0] - 2 * r[0] * r[1]))).toBeGreaterThanOrEqual(0);
-    expect(yates.ss(Float64Array.from(yieldData.coded, (r) => 3 + r[0] - 2 * r[0] * r[1]))).toBeLessThan(1e-20);
+    expect(residualSs(yates, Float64Array.from(yieldData.coded, (r) => 3 + r[0] - 2 * r[0] * r[1]))).toBeGreaterThanOrEqual(0);
+    expect(residualSs(yates, Float64Array.from(yieldData.coded, (r) => 3 + r[0] - 2 * r[0] * r[1]))).toBeLessThan(1e-20);
   });
 });
