@@ -43,7 +43,7 @@ import { residualSsBasis, residualSsQr, residualSsYates } from './residual-ss.ts
 import { RANK_TOLERANCE } from '../tolerance.ts';
 import { NO_TRANSFORM, transformResponses, type ResponseTransform } from './response-transform.ts';
 import { validateResponseData } from './validate-response.ts';
-import { analysisScaleExponent, pow2Scaler, scaleAnalysisBack, scaleExponent } from './response-scale.ts';
+import { analysisScaleExponent, pow2Scaler, scaleAnalysisBack, scaledByPow2, scaleExponent } from './response-scale.ts';
 import { boxExtent, testedExtent } from '../predict/tested-extent.ts';
 import { columnVifs, VIF_LIMIT, vifDrivers } from './vif.ts';
 import { isWarning } from './verdicts.ts';
@@ -73,14 +73,7 @@ export function analyze(raw: ResponseData, options: AnalyzeOptions = {}): Analys
   const e = analysisScaleExponent(fitted.y); // 0 when y needs no rescaling (response-scale.ts)
   const yp = bound === null ? raw.y : raw.y.map((v) => v - bound);
   const ep = scaleExponent(yp);
-  const ypScaled = new Float64Array(yp.length);
-  if (ep >= -1022 && ep <= 1022) {
-    const f = 2 ** -ep; // exact: a power of two within binary64's normal range (pow2Scaler's common case, without its closure)
-    for (let i = 0; i < yp.length; i++) ypScaled[i] = yp[i] * f;
-  } else {
-    const toUnit = pow2Scaler(-ep);
-    for (let i = 0; i < yp.length; i++) ypScaled[i] = toUnit(yp[i]);
-  }
+  const ypScaled = scaledByPow2(yp, -ep);
   const inner = analyzeOnScale(e === 0 ? fitted : { ...fitted, y: fitted.y.map(pow2Scaler(-e)) }, ypScaled, transform, bound, options);
   const out = scaleAnalysisBack(inner, e);
   return { ...out, warnings: [...fitted.messages, ...out.verdicts.filter(isWarning).map(verdictText)] };

@@ -66,6 +66,16 @@ export function pow2Scaler(e: number): (x: number) => number {
   return (x) => x * f1 * f2;
 }
 
+/** values times 2^e, exact, into a new array (one factor for all where 2^e is a normal double, as in pow2Scaler). */
+export function scaledByPow2(values: ArrayLike<number>, e: number): Float64Array {
+  const out = new Float64Array(values.length);
+  if (e >= -1022 && e <= 1023) {
+    const f = 2 ** e;
+    for (let i = 0; i < values.length; i++) out[i] = values[i] * f;
+  } else for (let i = 0; i < values.length; i++) out[i] = timesPow2(values[i], e);
+  return out;
+}
+
 /** The smallest normal double (IEEE 754 binary64): below it a number keeps fewer than 53 bits. */
 const SMALLEST_NORMAL = 2 ** -1022;
 

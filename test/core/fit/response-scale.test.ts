@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { analyze } from '../../../src/core/fit/analyze.ts';
-import { analysisScaleExponent, SCALE_FREE_EXPONENT, scaleExponent, timesPow2 } from '../../../src/core/fit/response-scale.ts';
+import { analysisScaleExponent, SCALE_FREE_EXPONENT, scaledByPow2, scaleExponent, timesPow2 } from '../../../src/core/fit/response-scale.ts';
 import { defineFactors } from '../../../src/core/factor/factor.ts';
 import { termsUpToOrder } from '../../../src/core/model/formula.ts';
 import { InputError } from '../../../src/core/errors.ts';
@@ -27,6 +27,10 @@ describe('scaleExponent and timesPow2 (IEEE 754 binary64, section 3.4: a power o
     expect(scaleExponent([])).toBe(0);
   });
 
+  it('scaledByPow2 equals timesPow2 entry by entry, inside binary64\'s normal powers and beyond them (IEEE 754: exact either way)', () => {
+    const v = [1.5, -3.25e-200, 7e300, 2 ** -1074, 0];
+    for (const e of [0, -5, 1023, -1022, -2046, 1500]) expect(Array.from(scaledByPow2(v, e))).toEqual(v.map((x) => timesPow2(x, e)));
+  });
   it('timesPow2 is exact over the whole range, even where 2^e alone would overflow', () => {
     expect(timesPow2(Number.MAX_VALUE, -2046)).toBe(Number.MAX_VALUE / 2 ** 1023 / 2 ** 1023);
     expect(timesPow2(2 ** -1074, 1074)).toBe(1);
