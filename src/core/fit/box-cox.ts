@@ -81,27 +81,10 @@ export function boxCoxOn(model: ResidualSs, yp: ArrayLike<number>): BoxCox | nul
     slope = n * (logG - q[1] / q[0]);
     return -(n / 2) * (2 * (1 - lambda) * logG + Math.log(q[0]) - logN);
   };
-  // Near 0 the closed forms cancel: the Taylor series in t = lambda z, five terms each (with
-  // |t| < SERIES_T the first term left out is below SERIES_T^5 of the sum).
-  const series = (lambda: number): void => {
-    for (let i = 0; i < n; i++) {
-      const zi = z[i];
-      const t = lambda * zi;
-      u[i] = zi * (1 + t * (1 / 2 + t * (1 / 6 + t * (1 / 24 + t / 120))));
-      du[i] = zi * zi * (1 / 2 + t * (1 / 3 + t * (1 / 8 + t * (1 / 30 + t / 144))));
-    }
-  };
+  // Near 0 the closed forms cancel: the Taylor series there (seriesAt).
   const atLambda = (lambda: number): number => {
-    if (Math.abs(lambda) * zMax < SERIES_T) series(lambda);
-    else {
-      const inv = 1 / lambda;
-      for (let i = 0; i < n; i++) {
-        const e = Math.expm1(lambda * z[i]);
-        const ui = e * inv;
-        u[i] = ui;
-        du[i] = (z[i] * (e + 1) - ui) * inv;
-      }
-    }
+    if (Math.abs(lambda) * zMax < SERIES_T) seriesAt(z, u, du, lambda);
+    else closedAt(z, u, du, lambda);
     return finish(lambda);
   };
   // The grid: y'^lambda stepped by one multiplication per run (its rounding, some tens of ulps,
@@ -119,18 +102,10 @@ export function boxCoxOn(model: ResidualSs, yp: ArrayLike<number>): BoxCox | nul
   }
   for (let s = 0; s <= steps; s++) {
     const lambda = LAMBDA_MIN + s * GRID_STEP;
-    if (Math.abs(lambda) * zMax < SERIES_T) series(lambda);
-    else {
-      const inv = 1 / lambda;
-      for (let i = 0; i < n; i++) {
-        const v = power[i];
-        const ui = (v - 1) * inv;
-        u[i] = ui;
-        du[i] = (z[i] * v - ui) * inv;
-        power[i] = v * stepBy[i];
-      }
-    }
-    if (Math.abs(lambda) * zMax < SERIES_T) for (let i = 0; i < n; i++) power[i] *= stepBy[i];
+    if (Math.abs(lambda) * zMax < SERIES_T) {
+      seriesAt(z, u, du, lambda);
+      for (let i = 0; i < n; i++) power[i] *= stepBy[i];
+    } else gridAt(z, u, du, power, stepBy, lambda);
     gridL[s] = finish(lambda);
     gridD[s] = slope;
     if (!Number.isFinite(gridL[s]) || !Number.isFinite(slope)) return null; // a perfect fit, or beyond binary64
@@ -201,4 +176,40 @@ export function boxCoxOn(model: ResidualSs, yp: ArrayLike<number>): BoxCox | nul
   const named = [1, 0, 0.5, -1].find(inCi);
   const suggestion = named !== undefined ? transformToken(named) : transformToken(Math.round(lambda * 10) / 10);
   return { lambda, ci: [lo, hi], suggestion };
+}
+
+// The three fillers of u and du take their arrays as arguments: arrays that closures capture live in
+// a context, whose loads V8 does not hoist out of a loop nested in another (measured about 4x slower).
+
+/** u and du at lambda from their Taylor series in t = lambda z, five terms each (|t| < SERIES_T: the first term left out is below SERIES_T^5 of the sum). */
+function seriesAt(z: Float64Array, u: Float64Array, du: Float64Array, lambda: number): void {
+  for (let i = 0; i < z.length; i++) {
+    const zi = z[i];
+    const t = lambda * zi;
+    u[i] = zi * (1 + t * (1 / 2 + t * (1 / 6 + t * (1 / 24 + t / 120))));
+    du[i] = zi * zi * (1 / 2 + t * (1 / 3 + t * (1 / 8 + t * (1 / 30 + t / 144))));
+  }
+}
+
+/** u and du at lambda from expm1 (away from 0, where the closed forms do not cancel). */
+function closedAt(z: Float64Array, u: Float64Array, du: Float64Array, lambda: number): void {
+  const inv = 1 / lambda;
+  for (let i = 0; i < z.length; i++) {
+    const e = Math.expm1(lambda * z[i]);
+    const ui = e * inv;
+    u[i] = ui;
+    du[i] = (z[i] * (e + 1) - ui) * inv;
+  }
+}
+
+/** u and du at a grid point from power = y'^lambda, which is then stepped on by one multiplication per run. */
+function gridAt(z: Float64Array, u: Float64Array, du: Float64Array, power: Float64Array, stepBy: Float64Array, lambda: number): void {
+  const inv = 1 / lambda;
+  for (let i = 0; i < z.length; i++) {
+    const v = power[i];
+    const ui = (v - 1) * inv;
+    u[i] = ui;
+    du[i] = (z[i] * v - ui) * inv;
+    power[i] = v * stepBy[i];
+  }
 }

@@ -80,36 +80,10 @@ export function residualSsQr(f: QrFactor): ResidualSs {
 
 /** `basis`: Q1, column-major n x rank, the model's span including the intercept (see above). */
 export function residualSsBasis(basis: Float64Array, n: number, rank: number): ResidualSs {
-  // ||d||^2 - ||Q1'd||^2 and d'e - (Q1'd)'(Q1'e), d and e shifted by their first entries.
-  const sums = (a: Float64Array, b: Float64Array, out: Float64Array): void => {
-    const a0 = a[0];
-    const b0 = b[0];
-    let aa = 0;
-    let ab = 0;
-    for (let i = 0; i < n; i++) {
-      const da = (a[i] -= a0);
-      aa += da * da;
-      ab += da * (b[i] -= b0);
-    }
-    for (let j = 0; j < rank; j++) {
-      const o = j * n;
-      let pa = 0;
-      let pb = 0;
-      for (let i = 0; i < n; i++) {
-        const q = basis[o + i];
-        pa += q * a[i];
-        pb += q * b[i];
-      }
-      aa -= pa * pa;
-      ab -= pa * pb;
-    }
-    out[0] = Math.max(0, aa);
-    out[1] = ab;
-  };
   return {
     n,
     df: n - rank,
-    cross: sums,
+    cross: (a, b, out) => basisCross(basis, n, rank, a, b, out),
   };
 }
 
@@ -188,4 +162,31 @@ export function residualSsYates(cells: Int32Array, k: number, terms: ArrayLike<T
       out[1] = ab - modelAb / nf;
     },
   };
+}
+
+/** The thin-Q1 form's cross: ||d||^2 - ||Q1'd||^2 and d'e - (Q1'd)'(Q1'e), d and e shifted by their first entries. */
+function basisCross(basis: Float64Array, n: number, rank: number, a: Float64Array, b: Float64Array, out: Float64Array): void {
+  const a0 = a[0];
+  const b0 = b[0];
+  let aa = 0;
+  let ab = 0;
+  for (let i = 0; i < n; i++) {
+    const da = (a[i] -= a0);
+    aa += da * da;
+    ab += da * (b[i] -= b0);
+  }
+  for (let j = 0; j < rank; j++) {
+    const o = j * n;
+    let pa = 0;
+    let pb = 0;
+    for (let i = 0; i < n; i++) {
+      const q = basis[o + i];
+      pa += q * a[i];
+      pb += q * b[i];
+    }
+    aa -= pa * pa;
+    ab -= pa * pb;
+  }
+  out[0] = Math.max(0, aa);
+  out[1] = ab;
 }
