@@ -10,6 +10,7 @@ import { MissingScreen } from '../screens/missing/index.tsx';
 import { StudiesScreen } from '../screens/studies/index.tsx';
 import { lazyScreen, type LazyScreen } from './lazy-screen.tsx';
 import { ROUTE_NAMES, type Route, type RouteName, type RouteParams } from './routes.ts';
+import { nextTask } from '../lib/next-task.ts';
 
 const SCREENS: { readonly [N in RouteName]: LazyScreen<RouteParams<N> & { readonly store: Store }> } = {
   // The studies list is the usual first screen and its first card the page's largest paint: its
@@ -43,9 +44,12 @@ export function preloadScreen(route: Route): Promise<void> {
 
 /**
  * Fetches every screen's code, one after another in table order (so each fetch takes the
- * network alone); the app calls it when idle after the first screen, so every screen opens
+ * network alone, and its code runs in a task of its own); the app calls it when idle after the first screen, so every screen opens
  * offline later. A screen that fails is skipped here and offers a retry when it is opened.
  */
 export async function preloadAllScreens(): Promise<void> {
-  for (const name of ROUTE_NAMES) await SCREENS[name].preload();
+  for (const name of ROUTE_NAMES) {
+    await SCREENS[name].preload();
+    await nextTask(); // each screen's code runs in a task of its own, not all in one long one
+  }
 }

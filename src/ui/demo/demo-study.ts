@@ -5,7 +5,9 @@
  * say it is invented, and every screen showing it says so again (is-demo.ts). The app loads this
  * module only when the store holds no study.
  */
-import { importBackup, type ImportReport } from '../../store/files.ts';
+import { readBackup } from '../../io/backup/backup.ts';
+import { mergeBackup, type ImportReport } from '../../store/files.ts';
+import { nextTask } from '../lib/next-task.ts';
 import { listStudies } from '../../store/studies.ts';
 import type { Store } from '../../store/store.ts';
 import { demoUrl, fetchDemoText } from './demo-file.ts';
@@ -17,6 +19,10 @@ export async function addDemoIfEmpty(store: Store, fetchText: (url: string) => P
   const studies = await listStudies(store);
   if (studies.length > 0) return null;
   const text = await fetchText(demoUrl());
-  // importBackup checks the whole file (format, checksum) before it writes anything.
-  return importBackup(store, text);
+  // The whole file is read and checked (format, checksum) before anything is written, as
+  // importBackup does, with a new task between the two, so that a first start blocks the page
+  // in two shorter tasks rather than one long one.
+  const backup = await readBackup(text);
+  await nextTask();
+  return mergeBackup(store, backup);
 }
