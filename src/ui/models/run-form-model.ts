@@ -22,6 +22,7 @@ import { registerOnScreen } from '../lib/on-screen.ts';
 import { storageCleared } from '../lib/storage-cleared.ts';
 import { markTyping } from '../lib/unsaved-forms.ts';
 import { formIdFor } from '../lib/form-id.ts';
+import { num } from '../lib/format.ts';
 
 /** The channel on which a tab says it saved a run (the other tabs' forms keep their typing again). */
 const SAVES_CHANNEL = 'trialbook-run-saves';
@@ -140,6 +141,12 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
   });
   /** The far-outside warnings waiting for the person's yes before saving, or null. */
   const confirmingFar = signal<readonly string[] | null>(null);
+  /**
+   * A save with no reading of any response (and not excluded) waiting for the person's yes, or
+   * null: `dropped` names the readings saved before that this save would take away (each with
+   * its unit), empty for a run that had none.
+   */
+  const confirmingNoReading = signal<{ readonly dropped: readonly string[] } | null>(null);
 
   /** Per response: a message when a reading cannot be read, else null. */
   const readingErrors = computed<(string | null)[]>(() => {
@@ -201,6 +208,7 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     form.value = { ...f, ...patch };
     saveState.value = 'editing';
     confirmingFar.value = null;
+    confirmingNoReading.value = null;
     if (problem.peek()?.kind === 'input') problem.value = null;
     keepDraft();
   }
@@ -333,6 +341,11 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     /** The person goes back to correct a far-outside setting: nothing is saved. */
     cancelFar() {
       confirmingFar.value = null;
+    },
+    confirmingNoReading: confirmingNoReading as ReadonlySignal<{ readonly dropped: readonly string[] } | null>,
+    /** The person goes back to type the reading: nothing is saved. */
+    cancelNoReading() {
+      confirmingNoReading.value = null;
     },
     readingErrors,
     means,
@@ -468,9 +481,12 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
 
     /**
      * Checks the form and saves it as a new revision; a wrong entry changes nothing. A setting far
-     * outside the planned range waits for a yes (save again with `confirmed`) before saving.
+     * outside the planned range waits for a yes (save again with `confirmed`) before saving, and so
+     * does a run with no reading at all that is not excluded (save again with `noReading`): a
+     * reading can come later, but a tap on Save must not log an empty run, nor take away the
+     * readings saved before, without a word.
      */
-    async save(confirmed = false) {
+    async save(confirmed = false, noReading = false) {
       const s = state.peek();
       const typed = form.peek();
       if (!s || !typed || saveState.peek() === 'saving') return;
@@ -496,6 +512,11 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
         return;
       }
       problem.value = null;
+      if (!noReading && !values.excluded && values.readings.every((r) => r.length === 0)) {
+        confirmingNoReading.value = { dropped: droppedReadings(s) };
+        return;
+      }
+      confirmingNoReading.value = null;
       saveState.value = 'saving';
       try {
         await drafts; // the last draft write lands before the save drops the draft
@@ -517,3 +538,15 @@ export const RunFormModel = createModel((store: Store, studyId: string, plannedR
     },
   };
 });
+
+/** The readings of the run's saved state, one line per response that has any ("Thickness 70.4, 70.6 µm"). */
+function droppedReadings(s: RunFormState): string[] {
+  const saved = s.current?.readings;
+  if (!saved) return [];
+  const out: string[] = [];
+  s.study.responses.forEach((r, i) => {
+    const values = saved[i] ?? [];
+    if (values.length > 0) out.push(`${r.name} ${values.map((v) => num(v, 6)).join(', ')}${r.unit ? ` ${r.unit}` : ''}`);
+  });
+  return out;
+}

@@ -33,6 +33,11 @@ export interface SheetRow {
   readonly farOutside: readonly string[];
 }
 
+/** True when the run is logged (not excluded) with no reading of any response yet: its settings are kept, the reading can come later. */
+export function awaitsReading(row: SheetRow): boolean {
+  return row.logged.length > 0 && !row.excluded && row.means.every((m) => m === null);
+}
+
 export const RunSheetModel = createModel((store: Store, studyId: string) => {
   const study = signal<StudyRecord | null>(null);
   const runs = signal<LoggedRun[]>([]);

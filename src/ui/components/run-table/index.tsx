@@ -7,7 +7,7 @@ import { RUN_KIND_NAMES } from '../../../core/design/design.ts';
 import type { StudyRecord } from '../../../core/study/study.ts';
 import { hrefTo } from '../../app/routes.ts';
 import { setting, withUnit } from '../../lib/format.ts';
-import type { SheetRow } from '../../models/run-sheet-model.ts';
+import { awaitsReading, type SheetRow } from '../../models/run-sheet-model.ts';
 import './style.css';
 
 export type RunTableProps = {
@@ -20,7 +20,7 @@ export type RunTableProps = {
 
 function stateOf(row: SheetRow): string {
   if (row.logged.length === 0) return 'Not logged';
-  return row.excluded ? 'Excluded' : 'Logged ✓';
+  return row.excluded ? 'Excluded' : awaitsReading(row) ? 'No reading yet' : 'Logged ✓';
 }
 
 export function RunTable({ study, rows, blank = false, class: extra }: RunTableProps) {

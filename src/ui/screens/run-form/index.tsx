@@ -4,7 +4,7 @@
  * kept as a draft on every change; "Saved" appears only once the save is on disk.
  */
 import { useModel, useSignal } from '@preact/signals';
-import { useEffect } from 'preact/hooks';
+import { useEffect, useRef } from 'preact/hooks';
 import { RUN_KIND_NAMES } from '../../../core/design/design.ts';
 import { negativeAllowed } from '../../../core/factor/negative-allowed.ts';
 import type { Store } from '../../../store/store.ts';
@@ -33,6 +33,11 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
   const exportNote = useSignal<string | null>(null);
   const showHistory = useSignal(false);
   useEffect(() => void model.load(), []);
+  // A question about the save opens beside the Save bar, where it could sit under the bar: it is brought into view.
+  const farRef = useRef<HTMLDivElement>(null);
+  const noReadingRef = useRef<HTMLDivElement>(null);
+  useEffect(() => farRef.current?.scrollIntoView?.({ block: 'center' }), [model.confirmingFar.value]);
+  useEffect(() => noReadingRef.current?.scrollIntoView?.({ block: 'center' }), [model.confirmingNoReading.value]);
 
   const state = model.state.value;
   const form = model.form.value;
@@ -229,7 +234,7 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
         </fieldset>
 
         {model.confirmingFar.value && (
-          <div class="far-confirm" role="alertdialog" aria-label="Save a setting far outside the plan?">
+          <div class="far-confirm" role="alertdialog" aria-label="Save a setting far outside the plan?" ref={farRef}>
             <p>
               <strong>Save with {model.confirmingFar.value.length === 1 ? 'this setting' : 'these settings'}?</strong>
             </p>
@@ -243,6 +248,31 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
             </button>
             <button type="button" class="btn big block" onClick={() => void model.save(true)}>
               Yes, it was run at {model.confirmingFar.value.length === 1 ? 'this setting' : 'these settings'}: save
+            </button>
+          </div>
+        )}
+        {model.confirmingNoReading.value && (
+          <div class="far-confirm" role="alertdialog" aria-label="Save this run with no reading?" ref={noReadingRef}>
+            <p>
+              <strong>Save run {plannedRun} with no reading?</strong>
+            </p>
+            {model.confirmingNoReading.value.dropped.length > 0 ? (
+              <>
+                <p>This save takes away the readings saved before (they stay in the run's history):</p>
+                <ul>
+                  {model.confirmingNoReading.value.dropped.map((t) => (
+                    <li key={t}>{t}</li>
+                  ))}
+                </ul>
+              </>
+            ) : (
+              <p>The settings and notes are kept. The analysis leaves this run out until a reading is added.</p>
+            )}
+            <button type="button" class="btn primary big block" onClick={() => model.cancelNoReading()}>
+              Type the reading
+            </button>
+            <button type="button" class="btn big block" onClick={() => void model.save(true, true)}>
+              Yes, save with no reading
             </button>
           </div>
         )}

@@ -14,7 +14,7 @@ import { RunTable } from '../../components/run-table/index.tsx';
 import { StudyHeader } from '../../components/study-header/index.tsx';
 import { setting, withUnit } from '../../lib/format.ts';
 import { hrefTo } from '../../app/routes.ts';
-import { RunSheetModel } from '../../models/run-sheet-model.ts';
+import { awaitsReading, RunSheetModel } from '../../models/run-sheet-model.ts';
 import { RUN_KIND_NAMES } from '../../../core/design/design.ts';
 import type { Setting } from '../../../core/study/study.ts';
 import { SETTING_TOLERANCE } from '../../../core/tolerance.ts';
@@ -52,12 +52,13 @@ export function RunSheetScreen({ store, studyId }: RunSheetScreenProps) {
       <ol class="runs phone-only screen-only">
         {rows.map((row) => {
           const logged = row.logged.length > 0;
+          const waiting = awaitsReading(row);
           return (
             <li key={row.run} class={logged ? (row.excluded ? 'run-card excluded' : 'run-card logged') : 'run-card'} data-run={row.run}>
               <div class="run-head">
                 <span class="run-no">Run {row.run}</span>
                 <span class="run-kind">{RUN_KIND_NAMES[row.kind]}</span>
-                <span class={logged ? (row.excluded ? 'run-state out' : 'run-state done') : 'run-state'}>{logged ? (row.excluded ? '⊘ Excluded' : 'Logged ✓') : 'Not logged'}</span>
+                <span class={logged && !waiting ? (row.excluded ? 'run-state out' : 'run-state done') : 'run-state'}>{logged ? (row.excluded ? '⊘ Excluded' : waiting ? 'Settings logged · no reading yet' : 'Logged ✓') : 'Not logged'}</span>
               </div>
               <dl class="settings">
                 {study.factors.map((f, i) => {
