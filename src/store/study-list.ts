@@ -1,6 +1,7 @@
 /**
- * What the list of studies reads: the studies, newest first, and how many planned runs of each
- * have a logged run. Reads only, in their own file, so the first screen does not load the write
+ * What the list of studies reads: the studies, newest first, how many planned runs each has
+ * beyond its own plan (added blocks: path, foldover or confirmation runs), and how many of its
+ * planned runs have a logged run. Reads only, in their own file, so the first screen does not load the write
  * path (the record checks, revisions and run forms) with them.
  */
 import type { StudyRecord } from '../core/study/study.ts';
@@ -24,4 +25,11 @@ export async function loggedPlannedRuns(store: Store): Promise<Map<string, numbe
     }),
   );
   return new Map([...planned].map(([id, set]) => [id, set.size]));
+}
+
+/** For each study with added blocks, the number of planned runs they add (one pass over the blocks). */
+export async function addedPlannedRuns(store: Store): Promise<Map<string, number>> {
+  const added = new Map<string, number>();
+  await guarded(() => store.db.blocks.each((block) => void added.set(block.studyId, (added.get(block.studyId) ?? 0) + block.runs.length)));
+  return added;
 }

@@ -71,6 +71,9 @@ for (const size of [
       ] as const) {
         await logThickness(page, run, value);
       }
+      // The studies list counts the added runs with the plan's, as the run sheet does.
+      await page.goto('/');
+      await expect(page.locator('.card').first()).toContainText(`of ${study.design.runs.length + 2} planned runs logged`);
       await page.goto(`/#/study/${study.id}/next`);
       await expect(page.getByTestId('confirmation')).toContainText(/^.*(Confirmed|Not confirmed): the mean of the 2 confirmation runs, 72\.1, lies (inside|outside) the 95% interval for the mean of 2 new runs/);
       await page.screenshot({ path: `test-results/next-runs-verdict-${size.width}.png`, fullPage: true });

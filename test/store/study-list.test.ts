@@ -2,7 +2,8 @@ import 'fake-indexeddb/auto';
 import { describe, expect, it } from 'vitest';
 import { parseRunForm } from '../../src/core/study/run-form.ts';
 import { listRuns, openNewRun, saveRun } from '../../src/store/runs.ts';
-import { listStudies, loggedPlannedRuns } from '../../src/store/study-list.ts';
+import { addPlannedRuns, planOf } from '../../src/store/added-blocks.ts';
+import { addedPlannedRuns, listStudies, loggedPlannedRuns } from '../../src/store/study-list.ts';
 import { createStudy, listStudies as listStudiesFromStudies } from '../../src/store/studies.ts';
 import { coatingPlan, freshStore } from './helpers.ts';
 
@@ -39,5 +40,20 @@ describe('the studies list reads', () => {
     // The same numbers as counting each study's runs by planned run.
     for (const s of [a, b]) expect(counts.get(s.id)).toBe(new Set((await listRuns(store, s.id)).map((r) => r.plannedRun)).size);
     expect(counts).toEqual(new Map([[a.id, 2], [b.id, 1]]));
+  });
+
+  it('counts the planned runs added after the plan, per study, as planOf gives them to the run sheet', async () => {
+    const store = await freshStore();
+    const a = await createStudy(store, coatingPlan('Invented demo: a'));
+    const b = await createStudy(store, coatingPlan('Invented demo: b'));
+    expect(await addedPlannedRuns(store)).toEqual(new Map());
+    await addPlannedRuns(store, a.id, 'path', [{ kind: 'path', coded: [1.5, -0.5, 0.25] }, { kind: 'path', coded: [3, -1, 0.5] }], 'invented path');
+    await addPlannedRuns(store, a.id, 'confirmation', [{ kind: 'confirmation', coded: [1, 1, 1] }], 'invented');
+    const added = await addedPlannedRuns(store);
+    expect(added).toEqual(new Map([[a.id, 3]]));
+    // The plan with its blocks has exactly that many runs more than the study's own plan.
+    const plan = await planOf(store, a);
+    expect(plan.design.runs.length - a.design.runs.length).toBe(added.get(a.id));
+    expect(added.has(b.id)).toBe(false);
   });
 });
