@@ -64,6 +64,11 @@ for (const size of [
       const first = study.design.runs.length + 1;
       await expect(page.getByRole('status')).toContainText(`Added runs ${first} to ${first + 1}`);
       await expect(page.getByTestId('confirmation')).toContainText('None logged yet with a value for this response');
+      // The runs are planned at the setting the screen showed, which the run form starts from.
+      const shown = (await result.locator('strong').first().innerText()).replace(' °C', '').replace('−', '-');
+      await page.goto(`/#/study/${study.id}/run/${first}`);
+      await expect(page.getByRole('textbox', { name: 'Oven temperature' })).toHaveValue(shown);
+      await page.goto(`/#/study/${study.id}/next`);
       await page.screenshot({ path: `test-results/next-runs-confirm-${size.width}.png`, fullPage: true });
       for (const [run, value] of [
         [first, '72.4'],

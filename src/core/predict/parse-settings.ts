@@ -6,6 +6,7 @@ import { InputError } from '../errors.ts';
 import { parseNumber, toCoded, toReal } from '../factor/coding.ts';
 import { findFactor, type CategoricalFactor, type Factor } from '../factor/factor.ts';
 import { readSetting } from '../factor/read-setting.ts';
+import { shownSetting } from '../factor/shown-setting.ts';
 
 export type SettingValue = number | string;
 
@@ -45,7 +46,7 @@ export interface ParseSettingsOptions {
  */
 export function formatSetting(value: number | string, unit?: string): string {
   if (typeof value === 'string') return value;
-  const s = Number.isInteger(value) ? String(value) : String(Number(value.toPrecision(4)));
+  const s = String(shownSetting(value));
   return unit ? `${s} ${unit}` : s;
 }
 

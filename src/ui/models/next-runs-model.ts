@@ -10,6 +10,7 @@ import { computed, createModel, signal } from '@preact/signals';
 import { toReal } from '../../core/factor/coding.ts';
 import type { Factor } from '../../core/factor/factor.ts';
 import { readNumber } from '../../core/factor/read-setting.ts';
+import { shownCoded } from '../../core/factor/shown-setting.ts';
 import { confirmationRowsOf, confirmationSets, judgeConfirmationSets } from '../../core/predict/confirmation-sets.ts';
 import { parseSettings } from '../../core/predict/parse-settings.ts';
 import { predict } from '../../core/predict/predict.ts';
@@ -211,7 +212,9 @@ export const NextRunsModel = createModel((store: Store, shared: StudyAnalysis) =
     saveProblem.value = null;
     saved.value = null;
     try {
-      const block = await addPlannedRuns(store, studyId, purpose, runs, note);
+      // Planned at the settings the screen shows (4 significant digits), which the run form then starts from.
+      const fs = factors.peek();
+      const block = await addPlannedRuns(store, studyId, purpose, runs.map((r) => ({ ...r, coded: shownCoded(fs, r.coded) })), note);
       const first = block.runs[0].run;
       const last = block.runs[block.runs.length - 1].run;
       saved.value = `Added ${block.runs.length === 1 ? `run ${first}` : `runs ${first} to ${last}`} to the run sheet as block ${block.runs[0].block}. Log them there like any other run.`;
