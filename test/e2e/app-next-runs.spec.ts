@@ -37,6 +37,17 @@ for (const size of [
       await page.screenshot({ path: `test-results/next-runs-path-${size.width}.png`, fullPage: true });
 
       await page.getByRole('button', { name: 'Add the 3 steps as planned runs' }).click();
+      // Added runs stay for good: the button asks first, beside itself, and "not now" adds nothing.
+      const question = page.getByRole('alertdialog', { name: 'Add the 3 steps to the run sheet as planned runs?' });
+      await expect(question).toBeVisible();
+      await question.getByRole('button', { name: 'Not now' }).click();
+      await expect(question).toHaveCount(0);
+      await expect(page.getByRole('status')).toHaveCount(0);
+      await page.getByRole('button', { name: 'Confirm at step 1' }).click();
+      await expect(page.getByRole('alertdialog', { name: 'Add 3 confirmation runs at path step 1 to the run sheet?' })).toBeVisible();
+      await page.getByRole('button', { name: 'Not now' }).click();
+      await page.getByRole('button', { name: 'Add the 3 steps as planned runs' }).click();
+      await question.getByRole('button', { name: 'Yes, add them' }).click();
       const first = study.design.runs.length + 1;
       await expect(page.getByRole('status')).toContainText(`Added runs ${first} to ${first + 2} to the run sheet as block 2`);
       await expect(page.getByRole('table', { name: /observed against predicted/ }).locator('tbody tr')).toHaveCount(3);
@@ -61,6 +72,7 @@ for (const size of [
       await expect(result).toContainText('Predicted Film thickness there: 72 µm');
       await page.getByRole('textbox', { name: 'How many confirmation runs to plan' }).fill('2');
       await page.getByRole('button', { name: 'Plan confirmation runs at this setting' }).click();
+      await page.getByRole('alertdialog', { name: /^Add 2 confirmation runs at Oven temperature .* °C to the run sheet\?$/ }).getByRole('button', { name: 'Yes, add them' }).click();
       const first = study.design.runs.length + 1;
       await expect(page.getByRole('status')).toContainText(`Added runs ${first} to ${first + 1}`);
       await expect(page.getByTestId('confirmation')).toContainText('None logged yet with a value for this response');

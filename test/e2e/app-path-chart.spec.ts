@@ -23,6 +23,7 @@ for (const size of [
       await page.getByRole('textbox', { name: 'Step of Oven temperature (°C)' }).fill('10');
       await page.getByRole('textbox', { name: 'Number of steps' }).fill('3');
       await page.getByRole('button', { name: 'Add the 3 steps as planned runs' }).click();
+      await page.getByRole('button', { name: 'Yes, add them' }).click();
       const first = study.design.runs.length + 1;
       await expect(page.getByRole('status')).toContainText(`Added runs ${first} to ${first + 2}`);
       const table = page.getByRole('table', { name: /observed against predicted/ });

@@ -4,7 +4,7 @@
  * a chosen setting, and see whether the logged confirmation runs confirm the model. Every
  * proposed setting comes with the standing caution.
  */
-import { useModel } from '@preact/signals';
+import { useModel, useSignal } from '@preact/signals';
 import { useEffect } from 'preact/hooks';
 import { intervalText } from '../../../core/text/interval-text.ts';
 import { pathNeedsFirstOrder } from '../../../core/text/second-order-text.ts';
@@ -46,6 +46,37 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
   const base = model.pathBase.value;
   const baseFactor = base !== null ? study.factors[base] : null;
   const saving = model.saving.value;
+  // Added runs stay in the study for good, so each add button asks first, beside itself, and the
+  // outcome is shown there too (the status line at the top says it to screen readers).
+  const asking = useSignal<string | null>(null);
+  const lastAdd = useSignal<string | null>(null);
+  const count = model.confirmCountText.value.trim();
+  const runsWord = count === '1' ? 'run' : 'runs';
+  const ask = (key: string, question: string, yes: () => void) =>
+    asking.value === key ? (
+      <div class="add-question" role="alertdialog" aria-label={question}>
+        <p>
+          <strong>{question}</strong> Added runs stay in the study for good; a run not made can be left unlogged.
+        </p>
+        <button
+          type="button"
+          class="btn primary big block"
+          disabled={saving}
+          onClick={() => {
+            asking.value = null;
+            lastAdd.value = key;
+            yes();
+          }}
+        >
+          Yes, add them
+        </button>
+        <button type="button" class="btn big block" onClick={() => (asking.value = null)}>
+          Not now
+        </button>
+      </div>
+    ) : lastAdd.value === key && !saving && (model.saved.value || model.saveProblem.value) ? (
+      <p class={model.saved.value ? 'saved-note' : 'problem input'}>{model.saved.value ?? model.saveProblem.value}</p>
+    ) : null;
   return (
     <section class="next-runs">
       <StudyHeader study={study} current="nextRuns" />
@@ -90,9 +121,10 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
                 ))}
               </ul>
             )}
-            <button type="button" class="btn block" disabled={saving} onClick={() => model.addConfirmation(study.id, { from: 'solve' })}>
+            <button type="button" class="btn block" disabled={saving} onClick={() => (asking.value = 'solve')}>
               Plan confirmation runs at this setting
             </button>
+            {ask('solve', `Add ${count} confirmation ${runsWord} at ${solution.value.factor.name} ${setting(solution.value.setting, solution.value.factor.unit)} to the run sheet?`, () => model.addConfirmation(study.id, { from: 'solve' }))}
           </div>
         )}
       </section>
@@ -150,10 +182,11 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
                         Predicted {withUnit(s.fit, response.unit)}; 95% for one run {range(s.pi, response.unit)}
                       </p>
                       {s.step > 0 && (
-                        <button type="button" class="btn ghost" disabled={saving} onClick={() => model.addConfirmation(study.id, { from: 'path', step: s.step })}>
+                        <button type="button" class="btn ghost" disabled={saving} onClick={() => (asking.value = `step-${s.step}`)}>
                           Confirm at step {s.step}
                         </button>
                       )}
+                      {s.step > 0 && ask(`step-${s.step}`, `Add ${count} confirmation ${runsWord} at path step ${s.step} to the run sheet?`, () => model.addConfirmation(study.id, { from: 'path', step: s.step }))}
                     </li>
                   ))}
                 </ol>
@@ -164,9 +197,10 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
                     ))}
                   </ul>
                 )}
-                <button type="button" class="btn primary block" disabled={saving || model.pathAdded.value} onClick={() => model.addPath(study.id)}>
+                <button type="button" class="btn primary block" disabled={saving || model.pathAdded.value} onClick={() => (asking.value = 'path')}>
                   {model.pathAdded.value ? 'These steps are on the run sheet' : `Add the ${path.value.steps.length - 1} steps as planned runs`}
                 </button>
+                {ask('path', `Add the ${path.value.steps.length - 1} steps to the run sheet as planned runs?`, () => model.addPath(study.id))}
           </>
         )}
           </>
