@@ -70,6 +70,9 @@ test('three tabs on one run: each keeps its own typing across reloads, none take
     await gloss(tab).fill(typed[i]);
     await expect(tab.getByRole('status')).toHaveText(kept);
   }
+  // Tab 3 also changes a setting: the summary elsewhere names it, and only it of the settings.
+  await tabs[2].getByRole('textbox', { name: 'Oven temperature' }).fill('183');
+  await expect(tabs[2].getByRole('status')).toHaveText(kept);
   await tabs[0].getByRole('button', { name: 'Save run 5' }).click();
   await expect(tabs[0].getByRole('status')).toHaveText('Saved ✓ run 5');
 
@@ -79,6 +82,8 @@ test('three tabs on one run: each keeps its own typing across reloads, none take
   await expect(tabs[1].getByText('Your earlier typing was kept and is back. It is not saved yet.')).toBeVisible();
   const waiting2 = tabs[1].getByRole('group', { name: 'Typing from another tab' });
   await expect(waiting2).toContainText('Gloss: 77.3');
+  await expect(waiting2).toContainText('Oven temperature: 183 °C');
+  await expect(waiting2).not.toContainText('Line speed');
   await expect(waiting2).not.toContainText('76.2');
   // Taking other typing would replace this form's own: it waits for a save or a discard.
   await expect(waiting2.getByRole('button', { name: 'Use this typing here' })).toBeDisabled();

@@ -4,7 +4,7 @@
  * twice). Nothing here is taken over without the person's tap, so no tab's typing is lost.
  */
 import { useSignal } from '@preact/signals';
-import type { StudyRecord } from '../../../core/study/study.ts';
+import { plannedSettings, type Setting, type StudyRecord } from '../../../core/study/study.ts';
 import type { Draft } from '../../../store/db.ts';
 import { when } from '../../lib/when.ts';
 import './style.css';
@@ -19,12 +19,26 @@ export type OtherTypingProps = {
   readonly onDiscard: (formId: string) => void;
 };
 
-/** What a draft holds, in the run form's own words: readings, changed settings, notes. */
+/** What a draft holds, in the run form's own words: readings, settings changed from the plan, notes. */
 function typed(study: StudyRecord, d: Draft): string {
   const parts = study.responses.map((r, i) => `${r.name}: ${d.form.readings[i]?.trim() || 'nothing typed'}`);
+  const planned = plannedOrNull(study, d.plannedRun);
+  study.factors.forEach((f, i) => {
+    const v = d.form.actual[i]?.trim() ?? '';
+    if (planned === null || v !== String(planned[i])) parts.push(`${f.name}: ${v || 'nothing typed'}${f.kind === 'numeric' && f.unit && v ? ` ${f.unit}` : ''}`);
+  });
   if (d.form.notes.trim()) parts.push(`notes: ${d.form.notes.trim()}`);
   if (d.form.excluded) parts.push('marked to be excluded');
   return parts.join(' · ');
+}
+
+/** The planned settings of the run, or null when the plan at hand does not hold it (every setting is then listed). */
+function plannedOrNull(study: StudyRecord, plannedRun: number): readonly Setting[] | null {
+  try {
+    return plannedSettings(study, plannedRun);
+  } catch {
+    return null;
+  }
 }
 
 export function OtherTyping({ study, drafts, ownTyping, busy, onTake, onDiscard }: OtherTypingProps) {
@@ -34,8 +48,8 @@ export function OtherTyping({ study, drafts, ownTyping, busy, onTake, onDiscard 
   return (
     <div class="other-typing" role="group" aria-label={one ? 'Typing from another tab' : `Typing from ${drafts.length} other tabs`}>
       <p class="other-typing-head">
-        <strong>{one ? 'Another tab has typing for this run' : `${drafts.length} other tabs have typing for this run`}</strong>, not saved yet. It is
-        kept as it is until you use it here or throw it away.
+        <strong>{one ? 'Typing for this run was not saved' : `${drafts.length} lots of typing for this run were not saved`}</strong>, in another tab
+        or in a tab since closed. {one ? 'It is' : 'They are'} kept as {one ? 'it is' : 'they are'} until you use {one ? 'it' : 'one'} here or throw {one ? 'it' : 'them'} away.
       </p>
       <ul class="other-typing-list">
         {drafts.map((d) => (
