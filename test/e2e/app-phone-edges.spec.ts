@@ -188,6 +188,8 @@ for (const size of [
       await expect(caution.getByText(CAUTION[0])).toBeHidden();
       await more.click();
       for (const line of CAUTION) await expect(caution.getByText(line)).toBeVisible();
+      // Opened, the full caution scrolls away with the page instead of covering the settings.
+      await expect(sticky).toHaveCSS('position', 'static');
 
       // A field that takes the focus from far below is scrolled clear of the block (the measured height's scroll padding).
       await more.click();
@@ -196,6 +198,13 @@ for (const size of [
       const after = (await page.getByRole('textbox', { name: 'Oven temperature (A)' }).boundingBox())!;
       const s2 = (await sticky.boundingBox())!;
       expect(after.y).toBeGreaterThanOrEqual(s2.y + s2.height);
+
+      // A short screen (a phone with its keyboard up) pins nothing: the field being typed in stays in view.
+      await expect(sticky).toHaveCSS('position', 'sticky');
+      await page.setViewportSize({ width: size.width, height: 430 });
+      await expect(sticky).toHaveCSS('position', 'static');
+      await page.setViewportSize(size);
+      await expect(sticky).toHaveCSS('position', 'sticky');
     });
 
     test("the demo's residual charts name every run without two names overlapping", async ({ page }) => {
