@@ -21,6 +21,7 @@ test('a new run with no reading asks first; going back saves nothing; yes saves 
 
   await question(page).getByRole('button', { name: 'Type the reading' }).click();
   await expect(question(page)).toHaveCount(0);
+  await expect(page.getByRole('textbox', { name: 'Film thickness reading' })).toBeFocused();
   await page.getByRole('link', { name: 'Run sheet' }).click();
   await expect(run10(page)).toContainText('Not logged');
 

@@ -91,6 +91,7 @@ test('editing a logged run adds a revision, and excluding it needs a reason', as
   await page.getByRole('button', { name: 'Exclude it' }).click();
   await page.getByRole('button', { name: 'Save run 1' }).click();
   await expect(page.locator('.problem')).toContainText('an excluded run needs a reason');
+  await expect(page.locator('.problem')).toBeInViewport();
   await expect(page.getByRole('status')).not.toContainText('Saved');
   await page.getByRole('textbox', { name: 'Reason for excluding (needed)' }).fill('panel dropped (test)');
   await page.getByRole('button', { name: 'Save run 1' }).click();

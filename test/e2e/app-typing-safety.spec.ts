@@ -160,9 +160,13 @@ test('an actual setting far outside the planned range: strong warning naming the
   await page.getByRole('button', { name: 'Save run 3' }).click();
   const ask = page.getByRole('alertdialog', { name: 'Save a setting far outside the plan?' });
   await expect(ask).toContainText(warning);
+  await expect(ask).toBeInViewport();
   await expect(page.getByRole('status')).not.toContainText('Saved');
   await ask.getByRole('button', { name: 'Correct it' }).click();
   await expect(ask).toHaveCount(0);
+  // Back at the setting in question, ready to be typed again.
+  await expect(temp).toBeFocused();
+  await expect(temp).toBeInViewport();
   await expect(page.getByRole('status')).not.toContainText('Saved');
   await page.reload();
   await expect(page.getByText('1 revision kept')).toBeVisible(); // nothing was saved

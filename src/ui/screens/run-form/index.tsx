@@ -132,8 +132,13 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
         onSubmit={(e) => {
           e.preventDefault();
           void model.save().then(() => {
-            // A refused entry: take the person to the first field that needs them.
-            if (model.problem.peek()?.kind === 'input') document.querySelector<HTMLElement>('.run-form [aria-invalid="true"]')?.focus();
+            // A refused entry: take the person to the first field that needs them, or, when the
+            // message is about the run as a whole (an excluded run needs a reason), to the message.
+            if (model.problem.peek()?.kind === 'input') {
+              const field = document.querySelector<HTMLElement>('.run-form [aria-invalid="true"]');
+              if (field) field.focus();
+              else document.querySelector<HTMLElement>('.run-form .problem')?.scrollIntoView?.({ block: 'center' });
+            }
           });
         }}
       >
@@ -243,7 +248,16 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
                 <li key={t}>{t}</li>
               ))}
             </ul>
-            <button type="button" class="btn primary big block" onClick={() => model.cancelFar()}>
+            <button
+              type="button"
+              class="btn primary big block"
+              onClick={() => {
+                // Back to the first setting in question, not left at the bottom of the form.
+                const i = model.farOutside.peek().findIndex((x) => x !== null);
+                model.cancelFar();
+                if (i >= 0) document.getElementById(`actual-${i}`)?.focus();
+              }}
+            >
               Correct it
             </button>
             <button type="button" class="btn big block" onClick={() => void model.save(true)}>
@@ -268,7 +282,14 @@ export function RunFormScreen({ store, studyId, plannedRun }: RunFormScreenProps
             ) : (
               <p>The settings and notes are kept. The analysis leaves this run out until a reading is added.</p>
             )}
-            <button type="button" class="btn primary big block" onClick={() => model.cancelNoReading()}>
+            <button
+              type="button"
+              class="btn primary big block"
+              onClick={() => {
+                model.cancelNoReading();
+                document.getElementById('reading-0-0')?.focus();
+              }}
+            >
               Type the reading
             </button>
             <button type="button" class="btn big block" onClick={() => void model.save(true, true)}>
