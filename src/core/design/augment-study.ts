@@ -87,11 +87,16 @@ export function augmentStudy(study: StudyPlan, logged: readonly LoggedRun[], opt
   const properties = secondOrderProperties('central composite', study.factors, all, alpha);
 
   const notes: string[] = [];
-  const loggedPlanned = new Set(used.map((l) => l.plannedRun));
-  const missing = runs.filter((r) => !loggedPlanned.has(r.run)).map((r) => r.run);
+  // Earlier runs that give nothing yet: not logged at all, or logged and excluded (said apart: an excluded run is logged).
+  const usedPlanned = new Set(used.map((l) => l.plannedRun));
+  const anyPlanned = new Set(logged.map((l) => l.plannedRun));
+  const notLogged = runs.filter((r) => !anyPlanned.has(r.run)).map((r) => r.run);
+  const excluded = runs.filter((r) => anyPlanned.has(r.run) && !usedPlanned.has(r.run)).map((r) => r.run);
+  const listed = (what: string, list: number[]) => `${list.length} of them ${what}: ${list.slice(0, 12).join(', ')}${list.length > 12 ? ', ...' : ''}`;
+  const gaps = [...(notLogged.length > 0 ? [listed('not logged yet', notLogged)] : []), ...(excluded.length > 0 ? [listed('excluded', excluded)] : [])];
   notes.push(
     `New block ${block}: ${ns} axial runs at ±${Number(alpha.toPrecision(4))} (coded) and ${ns0} center run${ns0 === 1 ? '' : 's'}, runs ${first} to ${first + added.length - 1}; the ${runs.length} earlier runs are reused` +
-      (missing.length > 0 ? ` (${missing.length} of them not logged yet: ${missing.slice(0, 12).join(', ')}${missing.length > 12 ? ', ...' : ''}).` : '.'),
+      (gaps.length > 0 ? ` (${gaps.join('; ')}).` : '.'),
   );
   if (properties.fullQuadratic) {
     notes.push(`The augmented design can estimate the full second-order model (main effects, two-factor interactions, squares) with a block effect${properties.blocksOrthogonal ? ' orthogonal to it' : ', though not orthogonal to it'}.`);

@@ -53,7 +53,10 @@ describe('augmentStudy', () => {
 
   it('says which earlier runs are not logged yet, and what a resolution IV fraction cannot estimate', () => {
     const a = augmentStudy(plan2, logAll(plan2, [2, 5]), { seed: 1 });
-    expect(a.notes[0]).toMatch(/2 of them not logged yet: 2, 5/);
+    expect(a.notes[0]).toMatch(/2 of them not logged yet: 2, 5\)/);
+    // A logged but excluded run is logged: it is named apart from those not logged yet.
+    const withExcluded = logAll(plan2, [2]).map((r) => (r.plannedRun === 5 ? { ...r, excluded: true, reason: 'invented: panel dropped' } : r));
+    expect(augmentStudy(plan2, withExcluded, { seed: 1 }).notes[0]).toMatch(/\(1 of them not logged yet: 2; 1 of them excluded: 5\)/);
     const frac = studyPlan('Four factors', 'invented', [{ name: 'Y', goal: 'maximize' }], buildDesign({ factors: numeric(4), fraction: '1/2', centerRuns: 2, seed: 4 }));
     const b = augmentStudy(frac, logAll(frac), { seed: 1 });
     expect(b.properties.fullQuadratic).toBe(false);
