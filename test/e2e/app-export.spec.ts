@@ -39,6 +39,14 @@ test('a damaged backup file is refused and nothing changes', async ({ page }) =>
 
 test('importing the same backup again adds nothing', async ({ page }) => {
   await page.goto('/#/export');
+  // The person scrolls down to the file picker at the foot of the screen.
+  await page.getByText('Choose a backup file').scrollIntoViewIfNeeded();
   await page.locator('input[type="file"]').setInputFiles({ name: 'demo.json', mimeType: 'application/json', buffer: Buffer.from(fixtureText) });
   await expect(page.getByRole('status')).toContainText('Nothing new: everything in the file was already here.');
+  // The outcome is beside the file picker, where the person tapped, not at the top of a long screen.
+  await expect(page.getByRole('status')).toBeInViewport();
+  // A file of another kind says so in plain words, there too, and imports nothing.
+  await page.locator('input[type="file"]').setInputFiles({ name: 'runs.csv', mimeType: 'text/csv', buffer: Buffer.from('run,Oven temperature\n1,180\n') });
+  await expect(page.getByRole('alert')).toContainText('is not a Trialbook backup');
+  await expect(page.getByRole('alert')).toBeInViewport();
 });

@@ -179,6 +179,11 @@ export function parseJsonText(textIn: string, what = 'The file'): unknown {
       throw new InputError(`${what} is not valid JSON: it ends early at line ${line}, column ${column}; it may have been cut short`);
     }
     const near = JSON.stringify(body.slice(at, at + 12));
+    // Wrong from the first character: another kind of file (a CSV, a picture), not a damaged backup.
+    const first = body.search(/\S/);
+    if (at === first && body[first] !== '{' && body[first] !== '[') {
+      throw new InputError(`${what} is not a Trialbook backup: a backup is a JSON document that starts with "{", and this file starts with ${near}. A CSV of runs or any other file cannot be imported here. Nothing was imported.`);
+    }
     throw new InputError(`${what} is not valid JSON at line ${line}, column ${column} (near ${near})`);
   }
 }

@@ -79,6 +79,16 @@ describe('reading a backup', () => {
   });
 });
 
+describe('parseJsonText on a file of another kind (RFC 8259: a JSON text starts with a value)', () => {
+  it('says a CSV or other file is not a backup, naming how it starts, and points at the break in a damaged one', () => {
+    expect(() => parseJsonText('hello,world\n1,2\n')).toThrow(/The file is not a Trialbook backup: .*starts with "hello,world\\n". A CSV of runs or any other file cannot be imported here/);
+    expect(() => parseJsonText('  \nrun,A,B')).toThrow(/not a Trialbook backup/);
+    // A file that starts like JSON and breaks later is a damaged backup: line and column, as before.
+    expect(() => parseJsonText('{"format": x}')).toThrow(/is not valid JSON at line 1, column 12/);
+    expect(() => parseJsonText('[1, 2')).toThrow(/ends early/);
+  });
+});
+
 describe('jsonErrorOffset', () => {
   it('finds where a text first breaks the JSON grammar (RFC 8259)', async () => {
     const { jsonErrorOffset } = await import('../../../src/io/backup/json-error.ts');

@@ -4,8 +4,8 @@
  */
 import { MAX_BACKUP_TEXT } from '../../../io/backup/size-limit.ts';
 import type { ImportProgress } from '../../import-worker/protocol.ts';
-import { useModel } from '@preact/signals';
-import { useEffect } from 'preact/hooks';
+import { useModel, useSignal } from '@preact/signals';
+import { useEffect, useRef } from 'preact/hooks';
 import type { StudyRecord } from '../../../core/study/study.ts';
 import type { Store } from '../../../store/store.ts';
 import { DemoBadge } from '../../components/demo-badge/index.tsx';
@@ -36,17 +36,31 @@ export function ExportScreen({ store, studyId }: ExportScreenProps) {
   const busy = model.busy.value;
   const problem = model.problem.value;
   const share = model.canShare.value;
-  return (
-    <section>
-      {focus ? <StudyHeader study={focus} current="export" /> : <a class="back" href={hrefTo('studies', {})}>‹ All studies</a>}
-      <h2>Export</h2>
-      <p>The backup (JSON) keeps everything, history included, and can be imported on another device. The CSV is for a spreadsheet or the desktop analysis.</p>
+  // An import's outcome is shown beside the file picker at the foot of the screen, an export's at the top.
+  const lastWasImport = useSignal(false);
+  const importOutcome = useRef<HTMLDivElement>(null);
+  // Brought into view when it comes: the picker sits at the foot of the screen, the message below it.
+  useEffect(() => importOutcome.current?.scrollIntoView?.({ block: 'nearest' }), [lastWasImport.value, model.done.value, problem]);
+  const outcome = (
+    <>
       {problem && <ProblemBox problem={problem} />}
       {model.done.value && (
         <p class="notice" role="status">
           {model.done.value}
         </p>
       )}
+    </>
+  );
+  const save = (id: string | null, kind: Parameters<typeof model.save>[1]) => {
+    lastWasImport.value = false;
+    void model.save(id, kind);
+  };
+  return (
+    <section>
+      {focus ? <StudyHeader study={focus} current="export" /> : <a class="back" href={hrefTo('studies', {})}>‹ All studies</a>}
+      <h2>Export</h2>
+      <p>The backup (JSON) keeps everything, history included, and can be imported on another device. The CSV is for a spreadsheet or the desktop analysis.</p>
+      {!lastWasImport.value && outcome}
       {status && status.persistence.asked && status.persistence.granted === false && (
         <p class="warning">This browser keeps Trialbook's records only as long as it has room. Export a backup often.</p>
       )}
@@ -59,14 +73,14 @@ export function ExportScreen({ store, studyId }: ExportScreenProps) {
               {isDemo(s) && <DemoBadge compact />}
               <p class="card-line quiet">Last exported: {status?.lastExports[s.id] ? when(status.lastExports[s.id]) : 'never'}</p>
               {due && <p class="card-line due">A backup is due: runs logged here since {when(due.unexportedSince)} are in no backup yet. Download or share one now.</p>}
-              <button type="button" class="btn primary block" disabled={busy} onClick={() => void model.save(s.id, 'json')}>
+              <button type="button" class="btn primary block" disabled={busy} onClick={() => save(s.id, 'json')}>
                 {share ? 'Save or share backup (JSON)' : 'Download backup (JSON)'}
               </button>
-              <button type="button" class="btn block" disabled={busy} onClick={() => void model.save(s.id, 'csv')}>
+              <button type="button" class="btn block" disabled={busy} onClick={() => save(s.id, 'csv')}>
                 {share ? 'Save or share CSV' : 'Download CSV'}
               </button>
               {s.design.runs.some((r) => r.kind === 'confirmation') && (
-                <button type="button" class="btn block" disabled={busy} onClick={() => void model.save(s.id, 'confirmations')}>
+                <button type="button" class="btn block" disabled={busy} onClick={() => save(s.id, 'confirmations')}>
                   {share ? 'Save or share confirmation verdicts (CSV)' : 'Download confirmation verdicts (CSV)'}
                 </button>
               )}
@@ -75,7 +89,7 @@ export function ExportScreen({ store, studyId }: ExportScreenProps) {
         })}
       </ul>
       {!focus && model.studies.value.length > 1 && (
-        <button type="button" class="btn block" disabled={busy} onClick={() => void model.save(null, 'json')}>
+        <button type="button" class="btn block" disabled={busy} onClick={() => save(null, 'json')}>
           {share ? 'Save or share one backup of all studies' : 'Download one backup of all studies'}
         </button>
       )}
@@ -96,10 +110,14 @@ export function ExportScreen({ store, studyId }: ExportScreenProps) {
           onChange={(e) => {
             const input = e.currentTarget as HTMLInputElement;
             const file = input.files?.[0];
-            if (file) void model.importFile(file).then(() => (input.value = ''));
+            if (file) {
+              lastWasImport.value = true;
+              void model.importFile(file).then(() => (input.value = ''));
+            }
           }}
         />
       </label>
+      {lastWasImport.value && <div ref={importOutcome}>{outcome}</div>}
     </section>
   );
 }
