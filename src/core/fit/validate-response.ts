@@ -21,7 +21,7 @@ export function validateResponseData(data: ResponseData): void {
   if (coded.length !== n) throw new InputError(`${response}: ${n} responses but ${coded.length} rows of settings`);
   if (n < factors.length + 1) {
     throw new InputError(
-      `${response}: ${n} runs cannot estimate even the intercept and ${factors.length} main effects; at least ${factors.length + 1} runs are needed`,
+      `${response}: ${n} ${n === 1 ? 'run' : 'runs'} cannot estimate even the intercept and ${factors.length} main ${factors.length === 1 ? 'effect' : 'effects'}; at least ${factors.length + 1} runs are needed`,
     );
   }
   const label = (i: number) => data.labels[i] ?? String(i + 1);

@@ -19,6 +19,8 @@ describe('validateResponseData', () => {
   it('says what was needed and what came', () => {
     expect(() => validateResponseData({ ...base, y: [1, 2, 3] })).toThrow('Gloss: 3 responses but 4 rows of settings');
     expect(() => validateResponseData({ ...base, y: [1, Number.NaN, 3, 4] })).toThrow('Gloss, run 2: needs a number, got NaN');
+    // One run is "1 run" (common practice in English), not "1 runs".
+    expect(() => validateResponseData({ ...base, coded: base.coded.slice(0, 1), y: [1], labels: ['1'] })).toThrow(/^Gloss: 1 run cannot estimate even the intercept and \d+ main effects?;/);
     expect(() => validateResponseData({ ...base, coded: [[-1, -1], [1, Number.NaN], [-1, 1], [1, 1]] })).toThrow('Run 2: Powder needs a number, got NaN');
     expect(() => validateResponseData({ ...base, coded: [[-1], [1], [-1], [1]] })).toThrow('Run 1: 1 settings for 2 factors');
     expect(() => validateResponseData({ ...base, coded: coded.map((r) => [r[0], 1]) })).toThrow('Powder has the same setting (gloss) in every run');
