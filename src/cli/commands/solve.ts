@@ -28,7 +28,7 @@ ${modelOptionUsage}`,
     if (values.for === undefined || values.for.trim() === '') throw new InputError('Name the factor to solve for with --for FACTOR');
     const { data, terms, transform } = loadModelInput(positionals, values);
     const at = values.at === undefined ? [] : parseAssignments(values.at, '--at');
-    const result = solveForTarget(analyze(data, { terms, transform }).model, { factor: values.for, target, at });
+    const result = solveForTarget(analyze(data, { terms, transform }).model, { factor: values.for, target, at, ...(data.unit ? { responseUnit: data.unit } : {}) });
     return values.json ? JSON.stringify(solveJson(result), null, 2) : solveText(result);
   },
 };

@@ -29,6 +29,8 @@ export interface SolveOptions {
   readonly level?: number;
   /** Significance level for the curvature note; default 0.05. */
   readonly alpha?: number;
+  /** The response's unit, written after the target and the response values the messages quote ("To reach 72 µm"). */
+  readonly responseUnit?: string;
 }
 
 export interface Solution {
@@ -134,10 +136,12 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
     const b = backTransform(z, tr.lambda);
     return b === null ? Infinity : bound + b;
   };
+  const unitOfY = options.responseUnit;
   const show = (z: number): string => {
     const v = back(z);
-    return Number.isFinite(v) ? fmt(v) : 'a value with no finite limit';
+    return Number.isFinite(v) ? formatSetting(v, unitOfY) : 'a value with no finite limit';
   };
+  const goal = formatSetting(target, unitOfY);
   const f = findFactor(model.factors, options.factor);
   if (!f) {
     throw new InputError(
@@ -212,7 +216,7 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
       messages.push(
         reachable
           ? `${f.name} has no effect at these settings (slope 0) and the fit already equals the target: every setting in the tested range gives ${show(a)}; its center is shown.`
-          : `${f.name} has no effect at these settings (slope 0): every setting in the tested range gives ${show(a)}, so the target ${fmt(target)} cannot be reached by ${f.name}; its center is shown.`,
+          : `${f.name} has no effect at these settings (slope 0): every setting in the tested range gives ${show(a)}, so the target ${goal} cannot be reached by ${f.name}; its center is shown.`,
       );
     } else {
       const xs = (zTarget - a) / s;
@@ -220,14 +224,14 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
         coded = clamp(xs);
         reachable = true;
         solutions = [{ setting: realOf(coded), coded }];
-        messages.push(`To reach ${fmt(target)}, set ${f.name} to ${formatSetting(realOf(coded), unit)} (coded ${signed(coded)}).`);
+        messages.push(`To reach ${goal}, set ${f.name} to ${formatSetting(realOf(coded), unit)} (coded ${signed(coded)}).`);
       } else {
         coded = Math.sign(xs);
         reachable = false;
         const real = realOf(xs);
         needed = { real: Number.isFinite(real) ? real : null, coded: xs };
         messages.push(
-          `The target ${fmt(target)} lies outside what the tested range of ${f.name} reaches at these settings (${span})` +
+          `The target ${goal} lies outside what the tested range of ${f.name} reaches at these settings (${span})` +
             (needed.real !== null ? `; the model would need ${f.name} = ${formatSetting(needed.real, unit)} (coded ${signed(xs)}), an extrapolation` : '; the model would need a setting far outside the range') +
             `. The nearest setting inside the range is ${formatSetting(realOf(coded), unit)} (the ${coded > 0 ? 'high' : 'low'} setting).`,
         );
@@ -261,8 +265,8 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
       coded = inside.reduce((best, c) => (Math.abs(c) < Math.abs(best) ? c : best));
       messages.push(
         inside.length === 1
-          ? `To reach ${fmt(target)}, set ${f.name} to ${at(coded)}.`
-          : `Two settings of ${f.name} inside the tested range give ${fmt(target)}: ${at(inside[0])} and ${at(inside[1])}; the one nearer the center is shown.`,
+          ? `To reach ${goal}, set ${f.name} to ${at(coded)}.`
+          : `Two settings of ${f.name} inside the tested range give ${goal}: ${at(inside[0])} and ${at(inside[1])}; the one nearer the center is shown.`,
       );
     } else {
       reachable = false;
@@ -281,7 +285,7 @@ export function solveForTarget(model: FittedModel, options: SolveOptions): Solut
         need = `; no setting of ${f.name} reaches it in the fitted model, whose fit ${q < 0 ? 'peaks' : 'bottoms out'} at ${show(yv)}`;
       }
       messages.push(
-        `The target ${fmt(target)} lies outside what the tested range of ${f.name} reaches at these settings (${span})${need}. ` +
+        `The target ${goal} lies outside what the tested range of ${f.name} reaches at these settings (${span})${need}. ` +
           `The nearest setting inside the range is ${formatSetting(realOf(coded), unit)} (${where}).`,
       );
     }

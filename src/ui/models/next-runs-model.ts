@@ -135,7 +135,8 @@ export const NextRunsModel = createModel((store: Store, shared: StudyAnalysis) =
     return attempt(() => {
       const target = readNumber(targetText.value.replace(',', '.'), 'The target');
       const at = m.factors.flatMap((f, j) => (f.kind === 'categorical' ? [[f.name, f.levels[0]] as [string, string]] : []));
-      return solveForTarget(m, { factor: m.factors[i].name, target, at });
+      const unit = shared.shown.value?.response.unit;
+      return solveForTarget(m, { factor: m.factors[i].name, target, at, ...(unit ? { responseUnit: unit } : {}) });
     });
   });
 

@@ -250,6 +250,10 @@ describe('solveForTarget under a transform: solved on the fitted scale, reported
       expect(Math.abs(sol.pi![0] / gInv(r.pi[0], lambda) - 1)).toBeLessThan(1e-8);
       expect(Math.abs(sol.ci![1] / gInv(r.ci[1], lambda) - 1)).toBeLessThan(1e-8);
       expect(sol.messages.join(' ')).toContain('To reach 700, set Power to');
+      // With the response's unit given, the target is quoted with it; the figures stay the same.
+      const withUnit = solveForTarget(model, { factor: 'Power', target: 700, at: { Gap: 1.2 }, responseUnit: 'mm/min' });
+      expect(withUnit.messages.join(' ')).toContain('To reach 700 mm/min, set Power to');
+      expect(withUnit.setting).toBe(sol.setting);
     });
 
     it(`${token}: an unreachable target quotes the reach in the response units, and the nearest setting`, () => {
