@@ -34,10 +34,11 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
     z[i] = qty[i];
     rss += qty[i] * qty[i];
   }
-  applyQ(f, z);
+  // Square (rank = n, the saturated fit): Q (0) is 0 and y - 0 is y, the same bits without the pass.
+  if (m < n) applyQ(f, z);
   const residuals = z;
-  const fitted = new Float64Array(n);
-  for (let i = 0; i < n; i++) fitted[i] = y[i] - residuals[i];
+  const fitted = m < n ? new Float64Array(n) : Float64Array.from(y);
+  if (m < n) for (let i = 0; i < n; i++) fitted[i] = y[i] - residuals[i];
   const rinv = lean ? new Float64Array(0) : invertUpper(f.r, m);
   const covUnscaled = lean ? new Float64Array(0) : crossInverse(rinv, m);
 

@@ -86,7 +86,7 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
     // Every reflector made so far, in order, to the block's columns.
     if (rank > 0) {
       if (b1 - b0 === 4) reflect4Run(v, beta, 0, rank, n, w, (b0 - start) * n);
-      else for (let j = b0; j < b1; j++) for (let k = 0; k < rank; k++) reflect(v, k * n, k, n, beta[k], w, (j - start) * n);
+      else for (let j = b0; j < b1; j++) reflect1Run(v, beta, 0, rank, n, w, (j - start) * n);
     }
     for (let j = b0; j < b1; j++) {
       const off = j * n;
@@ -154,6 +154,29 @@ function reflect(v: Float64Array, vo: number, k: number, n: number, beta: number
   for (let i = k; i < n; i++) s += v[vo + i] * col[co + i];
   s *= beta;
   for (let i = k; i < n; i++) col[co + i] -= s * v[vo + i];
+}
+
+/** Reflectors k0..k1-1 (k1 > k0), in order, to the column at co: reflect4Run for one column. */
+function reflect1Run(v: Float64Array, beta: Float64Array, k0: number, k1: number, n: number, w: Float64Array, co: number): void {
+  let s = 0;
+  let vo = k0 * n;
+  for (let i = k0; i < n; i++) s += v[vo + i] * w[co + i];
+  for (let k = k0; k < k1; k++) {
+    s *= beta[k];
+    w[co + k] -= s * v[vo + k];
+    if (k + 1 === k1) {
+      for (let i = k + 1; i < n; i++) w[co + i] -= s * v[vo + i];
+      return;
+    }
+    const un = vo + n; // reflector k + 1
+    let a = 0;
+    for (let i = k + 1; i < n; i++) {
+      const xi = (w[co + i] -= s * v[vo + i]);
+      a += v[un + i] * xi;
+    }
+    s = a;
+    vo = un;
+  }
 }
 
 /**
@@ -234,8 +257,7 @@ function samePrefix(prefix: QrFactor, x: Float64Array, n: number, p: number): bo
 
 /** y <- Q'y in place (Golub and Van Loan section 5.1.6: apply the reflectors in order). */
 export function applyQt(f: QrFactor, y: Float64Array): void {
-  const { n, v, beta } = f;
-  for (let k = 0; k < f.rank; k++) reflect(v, k * n, k, n, beta[k], y, 0);
+  if (f.rank > 0) reflect1Run(f.v, f.beta, 0, f.rank, f.n, y, 0);
 }
 
 /** z <- Q z in place (the reflectors in reverse order). */
