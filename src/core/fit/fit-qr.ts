@@ -51,8 +51,19 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
   for (let a = 0; a < m && !lean; a++) {
     const w = basis.subarray(a * n, (a + 1) * n);
     const ro = a * m;
-    // Two columns per pass over w (each entry still adds them in the order k, k + 1).
+    // Four, then two columns per pass over w (each entry still adds them in the order k, k + 1, ...).
     let k = 0;
+    for (; k + 3 <= a; k += 4) {
+      const r0 = rinv[ro + k];
+      const r1 = rinv[ro + k + 1];
+      const r2 = rinv[ro + k + 2];
+      const r3 = rinv[ro + k + 3];
+      const x0 = f.kept[k] * n;
+      const x1 = f.kept[k + 1] * n;
+      const x2 = f.kept[k + 2] * n;
+      const x3 = f.kept[k + 3] * n;
+      for (let i = 0; i < n; i++) w[i] = w[i] + r0 * x[x0 + i] + r1 * x[x1 + i] + r2 * x[x2 + i] + r3 * x[x3 + i];
+    }
     for (; k + 1 <= a; k += 2) {
       const r0 = rinv[ro + k];
       const r1 = rinv[ro + k + 1];

@@ -43,6 +43,21 @@ export function lenth(effects: readonly number[]): LenthResult {
   const trimmed = abs.filter((a) => a < 2.5 * s0);
   const pse = trimmed.length > 0 ? 1.5 * median(trimmed) : s0;
   const df = m / 3;
-  const gamma = (1 + Math.pow(0.95, 1 / m)) / 2;
-  return { m, df, pse, me: tQuantile(0.975, df) * pse, sme: tQuantile(gamma, df) * pse };
+  const [tMe, tSme] = quantiles(m);
+  return { m, df, pse, me: tMe * pse, sme: tSme * pse };
+}
+
+/* One-entry memo: the two t quantiles depend on m only, and every analysis of a study asks for the same m. */
+let memoM = -1;
+let memoT: readonly [number, number] = [NaN, NaN];
+
+/** t(0.975; m/3) and t(gamma; m/3), gamma = (1 + 0.95^(1/m)) / 2. */
+function quantiles(m: number): readonly [number, number] {
+  if (m !== memoM) {
+    const df = m / 3;
+    const gamma = (1 + Math.pow(0.95, 1 / m)) / 2;
+    memoT = [tQuantile(0.975, df), tQuantile(gamma, df)];
+    memoM = m;
+  }
+  return memoT;
 }
