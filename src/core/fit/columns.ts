@@ -54,11 +54,20 @@ export function modelMatrix(
 ): Float64Array {
   const n = coded.length;
   const p = cols.length;
-  const levels = blockLevels(blocks);
+  const levels = blocks ? blockLevels(blocks) : [];
   const last = levels[levels.length - 1];
   const x = new Float64Array(n * p);
-  // Offset in x of the column holding each plain product already filled, by factor mask.
-  const filled = new Map<number, number>();
+  // Each factor's settings as one column (factor f at f n), read once per product column.
+  const k = n > 0 ? coded[0].length : 0;
+  const settings = new Float64Array(n * k);
+  for (let i = 0; i < n; i++) {
+    const row = coded[i];
+    for (let f = 0; f < k; f++) settings[f * n + i] = row[f]; // a missing setting is NaN, as termValue gives
+  }
+  // Offset in x of the column holding each plain product already filled, by factor mask
+  // (a table for up to 2^16 masks, else a Map).
+  const table = k <= 16 ? new Int32Array(1 << k).fill(-1) : null;
+  const filled = table ? null : new Map<number, number>();
   for (let j = 0; j < p; j++) {
     const c = cols[j];
     const o = j * n;
@@ -66,11 +75,14 @@ export function modelMatrix(
       const mask = c.term;
       const top = 31 - Math.clz32(mask);
       const parent = mask ^ (1 << top);
-      const po = parent === 0 ? -1 : (filled.get(parent) ?? -2);
-      if (po === -1) for (let i = 0; i < n; i++) x[o + i] = 1 * coded[i][top];
-      else if (po >= 0) for (let i = 0; i < n; i++) x[o + i] = x[po + i] * coded[i][top];
+      const po = parent === 0 ? -1 : table ? (parent < table.length ? table[parent] : -1) : (filled!.get(parent) ?? -1);
+      if (top >= k) for (let i = 0; i < n; i++) x[o + i] = valueOfTerm(mask, coded[i]);
+      else if (parent === 0) for (let i = 0, so = top * n; i < n; i++) x[o + i] = 1 * settings[so + i];
+      else if (po >= 0) for (let i = 0, so = top * n; i < n; i++) x[o + i] = x[po + i] * settings[so + i];
       else for (let i = 0; i < n; i++) x[o + i] = valueOfTerm(mask, coded[i]);
-      if (!filled.has(mask)) filled.set(mask, o);
+      if (table) {
+        if (mask < table.length && table[mask] < 0) table[mask] = o;
+      } else if (!filled!.has(mask)) filled!.set(mask, o);
       continue;
     }
     for (let i = 0; i < n; i++) x[o + i] = columnValue(c, coded[i], blocks?.[i], last);
