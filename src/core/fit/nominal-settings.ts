@@ -64,13 +64,18 @@ export function nominalSettings(
     if (runAway) away++;
   }
   if (same) return { nominal: coded, moved, away, exact: moved === 0 };
-  const nominal = coded.map((row, i) => {
+  const nominal: number[][] = [];
+  for (let i = 0; i < n; i++) {
+    const row = coded[i];
     const plan = planned?.[i] ?? null;
-    return row.map((v, f) => {
+    const out: number[] = [];
+    for (let f = 0; f < row.length; f++) {
+      const v = row[f];
       const level = nominalLevel(v, plan, f, tol);
-      return level !== level ? v : level;
-    });
-  });
+      out.push(level !== level ? v : level);
+    }
+    nominal.push(out);
+  }
   return { nominal, moved, away, exact: moved === 0 };
 }
 
