@@ -34,7 +34,10 @@ export function fitOnPlan(columns: readonly Column[], xNominal: Float64Array, xA
   const n = y.length;
   const plan = planFit ?? fitQr(columns, xNominal, y, true);
   const m = plan.kept.length;
-  const kept = Array.from(plan.kept, (j) => columns[j]);
+  // Plain loops here and below: Array.from and Int32Array.from with a map function, and object
+  // spreads, cost more than the rest of a small fit.
+  const kept: Column[] = [];
+  for (let a = 0; a < m; a++) kept.push(columns[plan.kept[a]]);
   let all = m === columns.length;
   for (let a = 0; a < m && all; a++) all = plan.kept[a] === a;
   // Every column kept, or only the kept columns given: the actual matrix as it is (not modified by the fit).
@@ -44,6 +47,29 @@ export function fitOnPlan(columns: readonly Column[], xNominal: Float64Array, xA
   const act = fitQr(kept, x, y, lean, actualPrefix);
   const up = (a: number): number => plan.kept[a];
   // Should the actual settings lose a further column (they almost never do), it is listed too.
-  const extra = act.aliased.map((al) => ({ column: up(al.column), combination: al.combination.map((w) => ({ column: up(w.column), weight: w.weight })) }));
-  return { ...act, columns, kept: Int32Array.from(act.kept, up), aliased: [...plan.aliased, ...extra], ...(plan.qr ? { planQr: plan.qr } : {}) };
+  const aliased = plan.aliased.slice();
+  for (const al of act.aliased) aliased.push({ column: up(al.column), combination: al.combination.map((w) => ({ column: up(w.column), weight: w.weight })) });
+  const keptUp = new Int32Array(act.kept.length);
+  for (let a = 0; a < keptUp.length; a++) keptUp[a] = plan.kept[act.kept[a]];
+  // The actual fit's fields, with the plan's columns, kept columns and aliases.
+  const out: { -readonly [K in keyof LinearFit]: LinearFit[K] } = {
+    n: act.n,
+    columns,
+    kept: keptUp,
+    coef: act.coef,
+    covUnscaled: act.covUnscaled,
+    seqSS: act.seqSS,
+    fitted: act.fitted,
+    residuals: act.residuals,
+    leverage: act.leverage,
+    rss: act.rss,
+    dfResidual: act.dfResidual,
+    aliased,
+    orthogonal: act.orthogonal,
+    method: act.method,
+    qr: act.qr,
+  };
+  if (act.basis) out.basis = act.basis;
+  if (plan.qr) out.planQr = plan.qr;
+  return out;
 }

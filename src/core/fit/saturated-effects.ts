@@ -52,10 +52,7 @@ export function saturatedEffects(
   let plan: WalshPlan | null = null;
   let cols: Column[] = [];
   for (; order <= k; order++) {
-    const terms: Term[] = [];
-    for (let t = 1; t < 1 << k; t++) if (termOrder(t) <= order) terms.push(t);
-    terms.sort(compareTerms);
-    cols = modelColumns(levels, terms);
+    cols = modelColumns(levels, termsUpTo(k, order));
     plan = blocks ? null : walshPlan(cols, coded, k);
     if (plan) {
       if (plan.kept.length >= target) break;
@@ -68,7 +65,8 @@ export function saturatedEffects(
   // The plan found above (a lean nominal fit, or walsh-plan.ts) is not worked out again by
   // fitOnPlan; only the estimates are read here, so the actual fit is lean as well (no (X'X)^-1, no leverage).
   if (plan) {
-    const keptCols = Array.from(plan.kept, (j) => cols[j]);
+    const keptCols: Column[] = [];
+    for (let a = 0; a < plan.kept.length; a++) keptCols.push(cols[plan.kept[a]]);
     fit = fitOnPlan(cols, new Float64Array(0), modelMatrix(keptCols, actual ?? coded, blocks), y, plan, true, actual ? prefix?.actual : prefix?.nominal);
   }
   else if (fit && actual) fit = fitOnPlan(fit.columns, new Float64Array(0), modelMatrix(fit.columns, actual, blocks), y, fit, true, prefix?.actual);
@@ -88,6 +86,22 @@ export function saturatedEffects(
     out.push({ term: c.term, effect: 2 * fit.coef[j], aliases: byColumn.get(fit.kept[j]) ?? [] });
   }
   return out;
+}
+
+/* One-entry memo: every product of up to `order` of k factors, in model order; the same for every analysis of a study. */
+let memoKey = '';
+let memoTerms: readonly Term[] = [];
+
+function termsUpTo(k: number, order: number): readonly Term[] {
+  const key = `${k}|${order}`;
+  if (key !== memoKey) {
+    const terms: Term[] = [];
+    for (let t = 1; t < 1 << k; t++) if (termOrder(t) <= order) terms.push(t);
+    terms.sort(compareTerms);
+    memoTerms = terms;
+    memoKey = key;
+  }
+  return memoTerms;
 }
 
 function binomial(n: number, r: number): number {
