@@ -43,8 +43,8 @@ export interface QrFactor {
  * columns is taken from it: columns are processed left to right and each depends only on those
  * before it, so the result is the same to the last bit. A prefix that does not match is ignored.
  * Columns are taken four at a time (left-looking by blocks): every reflector made so far is
- * applied to the four, then each of them in turn gives its reflector, applied at once to the
- * rest of the four. Each column still sees the same operations in the same order as in the
+ * applied to the four, then each of them in turn takes the reflectors of the block's earlier
+ * columns and gives its own. Each column still sees the same operations in the same order as in the
  * plain right-looking loop (Golub and Van Loan Algorithm 5.2.1); only the passes are merged
  * (reflect4Run: reflector k's update and reflector k + 1's sum in one pass over the rows).
  * Work arrays are allocated once per call.
@@ -84,6 +84,7 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
   for (let b0 = start; b0 < p; b0 += 4) {
     const b1 = Math.min(b0 + 4, p);
     // Every reflector made so far, in order, to the block's columns.
+    const blockRank = rank;
     if (rank > 0) {
       if (b1 - b0 === 4) reflect4Run(v, beta, 0, rank, n, w, (b0 - start) * n);
       else for (let j = b0; j < b1; j++) reflect1Run(v, beta, 0, rank, n, w, (j - start) * n);
@@ -91,6 +92,8 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
     for (let j = b0; j < b1; j++) {
       const off = j * n;
       const co = (j - start) * n;
+      // The reflectors made from the block's earlier columns, in order.
+      if (rank > blockRank) reflect1Run(v, beta, blockRank, rank, n, w, co);
       let norm0 = 0;
       for (let i = 0; i < n; i++) norm0 += x[off + i] * x[off + i];
       norm0 = Math.sqrt(norm0);
@@ -120,8 +123,6 @@ export function householderQr(x: Float64Array, n: number, p: number, tol: number
       topKept[k * mr + k] = alpha;
       kept[k] = j;
       rank++;
-      // The new reflector to the rest of the block (later blocks take it in their run).
-      for (let q = j + 1; q < b1; q++) reflect(v, vo, k, n, beta[k], w, (q - start) * n);
     }
   }
   // At full rank the tops are R as they stand (rank = mr apart, zeros below the diagonal).
@@ -195,11 +196,11 @@ function reflect4Run(v: Float64Array, beta: Float64Array, k0: number, k1: number
   let s3 = 0;
   let vo = k0 * n;
   for (let i = k0; i < n; i++) {
-    const vi = v[vo + i];
-    s0 += vi * w[co + i];
-    s1 += vi * w[c1 + i];
-    s2 += vi * w[c2 + i];
-    s3 += vi * w[c3 + i];
+    const vi = v[(vo + i) | 0];
+    s0 += vi * w[(co + i) | 0];
+    s1 += vi * w[(c1 + i) | 0];
+    s2 += vi * w[(c2 + i) | 0];
+    s3 += vi * w[(c3 + i) | 0];
   }
   for (let k = k0; k < k1; k++) {
     const b = beta[k];
@@ -214,11 +215,11 @@ function reflect4Run(v: Float64Array, beta: Float64Array, k0: number, k1: number
     w[c3 + k] -= s3 * vk;
     if (k + 1 === k1) {
       for (let i = k + 1; i < n; i++) {
-        const vi = v[vo + i];
-        w[co + i] -= s0 * vi;
-        w[c1 + i] -= s1 * vi;
-        w[c2 + i] -= s2 * vi;
-        w[c3 + i] -= s3 * vi;
+        const vi = v[(vo + i) | 0];
+        w[(co + i) | 0] -= s0 * vi;
+        w[(c1 + i) | 0] -= s1 * vi;
+        w[(c2 + i) | 0] -= s2 * vi;
+        w[(c3 + i) | 0] -= s3 * vi;
       }
       return;
     }
@@ -228,12 +229,12 @@ function reflect4Run(v: Float64Array, beta: Float64Array, k0: number, k1: number
     let a2 = 0;
     let a3 = 0;
     for (let i = k + 1; i < n; i++) {
-      const vi = v[vo + i];
-      const ui = v[un + i];
-      const x0 = (w[co + i] -= s0 * vi);
-      const x1 = (w[c1 + i] -= s1 * vi);
-      const x2 = (w[c2 + i] -= s2 * vi);
-      const x3 = (w[c3 + i] -= s3 * vi);
+      const vi = v[(vo + i) | 0];
+      const ui = v[(un + i) | 0];
+      const x0 = (w[(co + i) | 0] -= s0 * vi);
+      const x1 = (w[(c1 + i) | 0] -= s1 * vi);
+      const x2 = (w[(c2 + i) | 0] -= s2 * vi);
+      const x3 = (w[(c3 + i) | 0] -= s3 * vi);
       a0 += ui * x0;
       a1 += ui * x1;
       a2 += ui * x2;
