@@ -51,8 +51,29 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
   for (let a = 0; a < m && !lean; a++) {
     const w = basis.subarray(a * n, (a + 1) * n);
     const ro = a * m;
-    // Four, then two columns per pass over w (each entry still adds them in the order k, k + 1, ...).
+    // Eight, four, then two columns per pass over w (each entry still adds them in the order k, k + 1, ...).
     let k = 0;
+    for (; k + 7 <= a; k += 8) {
+      const r0 = rinv[ro + k];
+      const r1 = rinv[ro + k + 1];
+      const r2 = rinv[ro + k + 2];
+      const r3 = rinv[ro + k + 3];
+      const r4 = rinv[ro + k + 4];
+      const r5 = rinv[ro + k + 5];
+      const r6 = rinv[ro + k + 6];
+      const r7 = rinv[ro + k + 7];
+      const x0 = f.kept[k] * n;
+      const x1 = f.kept[k + 1] * n;
+      const x2 = f.kept[k + 2] * n;
+      const x3 = f.kept[k + 3] * n;
+      const x4 = f.kept[k + 4] * n;
+      const x5 = f.kept[k + 5] * n;
+      const x6 = f.kept[k + 6] * n;
+      const x7 = f.kept[k + 7] * n;
+      for (let i = 0; i < n; i++) {
+        w[i] = w[i] + r0 * x[x0 + i] + r1 * x[x1 + i] + r2 * x[x2 + i] + r3 * x[x3 + i] + r4 * x[x4 + i] + r5 * x[x5 + i] + r6 * x[x6 + i] + r7 * x[x7 + i];
+      }
+    }
     for (; k + 3 <= a; k += 4) {
       const r0 = rinv[ro + k];
       const r1 = rinv[ro + k + 1];

@@ -252,7 +252,13 @@ function reflect4Run(v: Float64Array, beta: Float64Array, k0: number, k1: number
 function samePrefix(prefix: QrFactor, x: Float64Array, n: number, p: number): boolean {
   if (prefix.n !== n || prefix.p > p || prefix.x.length !== n * prefix.p) return false;
   if (prefix.x === x) return true;
-  for (let i = 0; i < n * prefix.p; i++) if (!Object.is(prefix.x[i], x[i])) return false;
+  // Object.is, written out (the call per entry costs more than the test): equal and of the same sign at zero, or both NaN.
+  const px = prefix.x;
+  for (let i = 0; i < n * prefix.p; i++) {
+    const a = px[i];
+    const b = x[i];
+    if (a === b ? a === 0 && 1 / a !== 1 / b : a === a || b === b) return false;
+  }
   return true;
 }
 
