@@ -7,6 +7,7 @@
  * of Experiments, 8th ed., section 7.2; the coding is common practice for blocks as fixed offsets).
  */
 import { SQUARE_FLAG, termValue, type Term } from '../model/term.ts';
+import { matrixMemo } from './matrix-memo.ts';
 
 export type Column =
   | { readonly kind: 'intercept' }
@@ -46,6 +47,8 @@ export function columnValue(c: Column, coded: ArrayLike<number>, block: number |
  * The model matrix, column-major n x p. A product column is its parent's column (the term less its
  * highest factor) times that factor, when the parent is also in the matrix: the same multiplications
  * in the same order as termValue (lowest factor first), so the same numbers, at one product per entry.
+ * The last few matrices are kept by their whole input (matrix-memo.ts): every analysis of the same
+ * runs asks for the same ones. Each call returns its own array.
  */
 export function modelMatrix(
   cols: readonly Column[],
@@ -54,16 +57,43 @@ export function modelMatrix(
 ): Float64Array {
   const n = coded.length;
   const p = cols.length;
-  const levels = blocks ? blockLevels(blocks) : [];
-  const last = levels[levels.length - 1];
-  const x = new Float64Array(n * p);
-  // Each factor's settings as one column (factor f at f n), read once per product column.
-  const k = n > 0 ? coded[0].length : 0;
-  const settings = new Float64Array(n * k);
+  // Each factor's settings as one column (factor f at f n), read once per product column; the
+  // whole input (columns, settings, blocks) is also the key under which the last matrices are kept.
+  let k = 0;
+  for (let i = 0; i < n; i++) if (coded[i].length > k) k = coded[i].length;
+  const key = new Float64Array(2 * p + n * k + (blocks ? n : 0));
+  for (let j = 0; j < p; j++) {
+    const c = cols[j];
+    key[2 * j] = c.kind === 'intercept' ? 0 : c.kind === 'block' ? 1 : 2;
+    key[2 * j + 1] = c.kind === 'block' ? c.block : c.kind === 'term' ? c.term : 0;
+  }
+  const settings = key.subarray(2 * p, 2 * p + n * k);
   for (let i = 0; i < n; i++) {
     const row = coded[i];
     for (let f = 0; f < k; f++) settings[f * n + i] = row[f]; // a missing setting is NaN, as termValue gives
   }
+  if (blocks) for (let i = 0; i < n; i++) key[2 * p + n * k + i] = blocks[i];
+  const tag = `${n}|${p}|${k}|${blocks ? 'blocks' : ''}`;
+  const known = matrices.recall(key, tag) ?? matrices.keep(key, tag, () => buildMatrix(cols, coded, blocks, settings, n, p, k));
+  return known.slice();
+}
+
+/** The last eight model matrices, by their columns, settings and blocks (matrix-memo.ts; never modified). */
+const matrices = matrixMemo<Float64Array>(8, 1 << 16);
+
+/** modelMatrix's work; `settings` holds factor f's settings at f n. */
+function buildMatrix(
+  cols: readonly Column[],
+  coded: readonly (readonly number[])[],
+  blocks: readonly number[] | null | undefined,
+  settings: Float64Array,
+  n: number,
+  p: number,
+  k: number,
+): Float64Array {
+  const levels = blocks ? blockLevels(blocks) : [];
+  const last = levels[levels.length - 1];
+  const x = new Float64Array(n * p);
   // Offset in x of the column holding each plain product already filled, by factor mask
   // (a table for up to 2^16 masks, else a Map).
   const table = k <= 16 ? new Int32Array(1 << k).fill(-1) : null;

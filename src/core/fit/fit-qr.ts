@@ -4,13 +4,29 @@
  * in model order; residuals Q (0, Q2'y); (X'X)^-1 = R^-1 R^-T; leverage h_i = x_i'(X'X)^-1 x_i.
  * Source: Golub and Van Loan, Matrix Computations, 4th ed., section 5.3 (the full-rank LS problem);
  * Seber and Lee, Linear Regression Analysis, 2nd ed., section 11.3 (QR for regression, sequential SS).
- * Cost O(n p^2).
+ * Cost O(n p^2). The part that does not depend on y (the factorisation, (X'X)^-1, the thin Q1,
+ * leverage, aliases, orthogonality) is kept for the last few model matrices (matrix-memo.ts), so
+ * another response on the same runs, or the same analysis again, costs O(n p) beyond it.
  */
 import { ALIAS_WEIGHT_TOLERANCE, ORTHOGONALITY_TOLERANCE, RANK_TOLERANCE } from '../tolerance.ts';
 import { applyQ, applyQt, householderQr, type QrFactor } from '../linalg/householder-qr.ts';
 import { crossInverse, invertUpper, solveUpper } from '../linalg/triangular.ts';
 import type { Column } from './columns.ts';
 import type { AliasedColumn, LinearFit } from './linear-fit.ts';
+import { matrixMemo } from './matrix-memo.ts';
+
+/** What a fit takes from the model matrix alone, shared by every response fitted to it (never modified). */
+interface DesignPart {
+  readonly f: QrFactor;
+  readonly covUnscaled: Float64Array;
+  readonly leverage: Float64Array;
+  readonly basis: Float64Array;
+  readonly aliased: readonly AliasedColumn[];
+  readonly orthogonal: boolean;
+}
+
+/** The last four model matrices' parts, up to 2^16 numbers each (a 1000-run, 65-column fit). */
+const designs = matrixMemo<DesignPart>(4, 1 << 16);
 
 /**
  * With `lean`, only the coefficients, sums of squares, residuals and aliases are computed
@@ -19,8 +35,9 @@ import type { AliasedColumn, LinearFit } from './linear-fit.ts';
 export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<number>, lean = false, prefix?: QrFactor): LinearFit {
   const n = y.length;
   const p = columns.length;
-  // `prefix`: a factorisation of the first columns of x, reused when it matches (householder-qr.ts).
-  const f = householderQr(x, n, p, RANK_TOLERANCE, prefix);
+  const tag = `${n}|${p}|${lean ? 'lean' : 'full'}`;
+  const d = designs.recall(x, tag) ?? designs.keep(x, tag, (own) => designPart(own, n, p, lean, prefix));
+  const f = d.f;
   const m = f.rank;
   const qty = Float64Array.from(y);
   applyQt(f, qty);
@@ -39,6 +56,38 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
   const residuals = z;
   const fitted = m < n ? new Float64Array(n) : Float64Array.from(y);
   if (m < n) for (let i = 0; i < n; i++) fitted[i] = y[i] - residuals[i];
+  // Copies of the shared part, so that a caller may keep or change what it is given.
+  const covUnscaled = d.covUnscaled.slice();
+  const leverage = d.leverage.slice();
+  const basis = lean ? null : d.basis.slice();
+  const aliased: AliasedColumn[] = [];
+  for (const a of d.aliased) aliased.push({ column: a.column, combination: a.combination.map((w) => ({ column: w.column, weight: w.weight })) });
+  const orthogonal = d.orthogonal;
+  return {
+    n,
+    columns,
+    kept: f.kept.slice(),
+    coef,
+    covUnscaled,
+    seqSS,
+    fitted,
+    residuals,
+    leverage,
+    ...(basis ? { basis } : {}),
+    rss,
+    dfResidual: n - m,
+    aliased,
+    orthogonal,
+    method: 'qr',
+    qr: f,
+  };
+}
+
+/** The factorisation of x and what follows from it alone; `x` is the memo's own copy. */
+function designPart(x: Float64Array, n: number, p: number, lean: boolean, prefix: QrFactor | undefined): DesignPart {
+  // `prefix`: a factorisation of the first columns of x, reused when it matches (householder-qr.ts).
+  const f = householderQr(x, n, p, RANK_TOLERANCE, prefix);
+  const m = f.rank;
   const rinv = lean ? new Float64Array(0) : invertUpper(f.r, m);
   const covUnscaled = lean ? new Float64Array(0) : crossInverse(rinv, m);
 
@@ -120,22 +169,5 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
     }
   }
 
-  return {
-    n,
-    columns,
-    kept: f.kept,
-    coef,
-    covUnscaled,
-    seqSS,
-    fitted,
-    residuals,
-    leverage,
-    ...(lean ? {} : { basis }),
-    rss,
-    dfResidual: n - m,
-    aliased,
-    orthogonal,
-    method: 'qr',
-    qr: f,
-  };
+  return { f, covUnscaled, leverage, basis, aliased, orthogonal };
 }

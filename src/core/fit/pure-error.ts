@@ -8,6 +8,7 @@
  * says so (common practice: the runs were meant as replicates).
  */
 import { SETTING_TOLERANCE } from '../tolerance.ts';
+import { matrixMemo } from './matrix-memo.ts';
 
 export interface PureError {
   readonly ss: number;
@@ -41,7 +42,16 @@ export function settingGroups(coded: readonly (readonly number[])[], blocks: rea
     if (blocks) s[o++] = blocks[i];
     for (let f = 0; f < k; f++) s[o + f] = row[f];
   }
-  const lead = blocks ? 1 : 0;
+  // The groups depend on the settings alone: the last few answers are kept by them (matrix-memo.ts).
+  const tag = `${n}|${width}|${blocks ? 'blocks' : ''}`;
+  return (groupsBySettings.recall(s, tag) ?? groupsBySettings.keep(s, tag, (own) => groupsOf(own, n, width, blocks ? 1 : 0, tol))).slice();
+}
+
+/** The last four answers of settingGroups (never modified). */
+const groupsBySettings = matrixMemo<Int32Array>(4, 1 << 16);
+
+/** settingGroups' work on the row-major settings `s` (`lead` 1 when a block leads each row). */
+function groupsOf(s: Float64Array, n: number, width: number, lead: number, tol: number): Int32Array {
   /** The sign of the comparison of runs a and b (a block difference, else the first setting difference beyond tol). */
   const compare = (a: number, b: number): number => {
     const oa = a * width;
