@@ -61,7 +61,9 @@ export function modelMatrix(
   // whole input (columns, settings, blocks) is also the key under which the last matrices are kept.
   let k = 0;
   for (let i = 0; i < n; i++) if (coded[i].length > k) k = coded[i].length;
-  const key = new Float64Array(2 * p + n * k + (blocks ? n : 0));
+  const size = 2 * p + n * k + (blocks ? n : 0);
+  if (scratch.length < size) scratch = new Float64Array(Math.max(size, 2 * scratch.length));
+  const key = scratch.subarray(0, size);
   for (let j = 0; j < p; j++) {
     const c = cols[j];
     key[2 * j] = c.kind === 'intercept' ? 0 : c.kind === 'block' ? 1 : 2;
@@ -80,6 +82,8 @@ export function modelMatrix(
 
 /** The last eight model matrices, by their columns, settings and blocks (matrix-memo.ts; never modified). */
 const matrices = matrixMemo<Float64Array>(8, 1 << 16);
+/** The key of the current call, reused from call to call (the memo keeps its own copy). */
+let scratch = new Float64Array(0);
 
 /** modelMatrix's work; `settings` holds factor f's settings at f n. */
 function buildMatrix(

@@ -39,7 +39,8 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
   const d = designs.recall(x, tag) ?? designs.keep(x, tag, (own) => designPart(own, n, p, lean, prefix));
   const f = d.f;
   const m = f.rank;
-  const qty = Float64Array.from(y);
+  const qty = new Float64Array(n); // a loop, not Float64Array.from: y is often a plain array, which from() iterates
+  for (let i = 0; i < n; i++) qty[i] = y[i];
   applyQt(f, qty);
   const coef = qty.slice(0, m);
   solveUpper(f.r, m, coef);
@@ -54,8 +55,9 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
   // Square (rank = n, the saturated fit): Q (0) is 0 and y - 0 is y, the same bits without the pass.
   if (m < n) applyQ(f, z);
   const residuals = z;
-  const fitted = m < n ? new Float64Array(n) : Float64Array.from(y);
+  const fitted = new Float64Array(n);
   if (m < n) for (let i = 0; i < n; i++) fitted[i] = y[i] - residuals[i];
+  else for (let i = 0; i < n; i++) fitted[i] = y[i];
   // Copies of the shared part, so that a caller may keep or change what it is given.
   const covUnscaled = d.covUnscaled.slice();
   const leverage = d.leverage.slice();
