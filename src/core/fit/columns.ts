@@ -62,8 +62,10 @@ export function modelMatrix(
   let k = 0;
   for (let i = 0; i < n; i++) if (coded[i].length > k) k = coded[i].length;
   const size = 2 * p + n * k + (blocks ? n : 0);
-  if (scratch.length < size) scratch = new Float64Array(Math.max(size, 2 * scratch.length));
-  const key = scratch.subarray(0, size);
+  // A large matrix is built as it is, neither kept nor keyed (the store stays small).
+  const kept = size <= MEMO_LIMIT && n * p <= MEMO_LIMIT;
+  if (kept && scratch.length < size) scratch = new Float64Array(Math.min(MEMO_LIMIT, Math.max(size, 2 * scratch.length)));
+  const key = kept ? scratch.subarray(0, size) : new Float64Array(size);
   for (let j = 0; j < p; j++) {
     const c = cols[j];
     key[2 * j] = c.kind === 'intercept' ? 0 : c.kind === 'block' ? 1 : 2;
@@ -75,13 +77,16 @@ export function modelMatrix(
     for (let f = 0; f < k; f++) settings[f * n + i] = row[f]; // a missing setting is NaN, as termValue gives
   }
   if (blocks) for (let i = 0; i < n; i++) key[2 * p + n * k + i] = blocks[i];
+  if (!kept) return buildMatrix(cols, coded, blocks, settings, n, p, k);
   const tag = `${n}|${p}|${k}|${blocks ? 'blocks' : ''}`;
   const known = matrices.recall(key, tag) ?? matrices.keep(key, tag, () => buildMatrix(cols, coded, blocks, settings, n, p, k));
   return known.slice();
 }
 
+/** The most numbers in a kept matrix or its key (2^16: a 1000-run, 65-column matrix). */
+const MEMO_LIMIT = 1 << 16;
 /** The last eight model matrices, by their columns, settings and blocks (matrix-memo.ts; never modified). */
-const matrices = matrixMemo<Float64Array>(8, 1 << 16);
+const matrices = matrixMemo<Float64Array>(8, MEMO_LIMIT);
 /** The key of the current call, reused from call to call (the memo keeps its own copy). */
 let scratch = new Float64Array(0);
 

@@ -51,4 +51,17 @@ describe('modelMatrix', () => {
     const x = modelMatrix(cols, nudged, blocks);
     expect(Object.is(x[3 * n + 3], nudged[3][1])).toBe(true);
   });
+
+  it('a matrix beyond the kept size (1100 runs x 64 columns) is built the same way, entry for entry termValue', () => {
+    const r = lcg(9);
+    const coded = Array.from({ length: 1100 }, () => Array.from({ length: 6 }, () => (r() - 0.5) * 2.2));
+    const cols = modelColumns([], Array.from({ length: 63 }, (_, t) => t + 1));
+    const x = modelMatrix(cols, coded, null);
+    const n = coded.length;
+    let same = true;
+    cols.forEach((c, j) => {
+      for (let i = 0; i < n; i++) if (!Object.is(x[j * n + i], c.kind === 'term' ? termValue(c.term, coded[i]) : 1)) same = false;
+    });
+    expect(same).toBe(true);
+  });
 });
