@@ -47,7 +47,8 @@ export function fitOnPlan(columns: readonly Column[], xNominal: Float64Array, xA
   const act = fitQr(kept, x, y, lean, actualPrefix);
   const up = (a: number): number => plan.kept[a];
   // Should the actual settings lose a further column (they almost never do), it is listed too.
-  const aliased = plan.aliased.slice();
+  const aliased: AliasedColumn[] = [];
+  for (const a of plan.aliased) aliased.push(a); // a loop: slice() of a frozen array (walsh-plan.ts keeps them frozen) takes a slow path
   for (const al of act.aliased) aliased.push({ column: up(al.column), combination: al.combination.map((w) => ({ column: up(w.column), weight: w.weight })) });
   const keptUp = new Int32Array(act.kept.length);
   for (let a = 0; a < keptUp.length; a++) keptUp[a] = plan.kept[act.kept[a]];
