@@ -55,10 +55,36 @@ export function modelMatrix(
   coded: readonly (readonly number[])[],
   blocks: readonly number[] | null | undefined,
 ): Float64Array {
+  const mk = matrixKey(cols, coded, blocks);
   const n = coded.length;
   const p = cols.length;
-  // Each factor's settings as one column (factor f at f n), read once per product column; the
-  // whole input (columns, settings, blocks) is also the key under which the last matrices are kept.
+  if (!mk.kept) return buildMatrix(cols, coded, blocks, mk.settings, n, p, mk.k);
+  const known = matrices.recall(mk.key, mk.tag) ?? matrices.keep(mk.key, mk.tag, () => buildMatrix(cols, coded, blocks, mk.settings, n, p, mk.k));
+  return known.slice();
+}
+
+/** What decides a model matrix, as numbers: see matrixKey. */
+export interface MatrixKey {
+  /** Column kinds and terms (or block labels), each factor's settings (factor f at f n), then the blocks. */
+  readonly key: Float64Array;
+  /** The shape: runs, columns, factors, blocked or not. */
+  readonly tag: string;
+  /** The settings part of the key. */
+  readonly settings: Float64Array;
+  readonly k: number;
+  /** False when the matrix or its key is beyond MEMO_LIMIT numbers: then not to be kept. */
+  readonly kept: boolean;
+}
+
+/**
+ * The whole input of modelMatrix (columns, settings, blocks) as one array of numbers, under which
+ * the matrix, or what follows from it alone, can be kept and found again (matrix-memo.ts). A
+ * shortened row reads NaN, as termValue gives. The key of a kept size lives in a buffer reused by
+ * the next call (a memo copies what it keeps). Cost O(n k + p).
+ */
+export function matrixKey(cols: readonly Column[], coded: readonly (readonly number[])[], blocks: readonly number[] | null | undefined): MatrixKey {
+  const n = coded.length;
+  const p = cols.length;
   let k = 0;
   for (let i = 0; i < n; i++) if (coded[i].length > k) k = coded[i].length;
   const size = 2 * p + n * k + (blocks ? n : 0);
@@ -74,13 +100,10 @@ export function modelMatrix(
   const settings = key.subarray(2 * p, 2 * p + n * k);
   for (let i = 0; i < n; i++) {
     const row = coded[i];
-    for (let f = 0; f < k; f++) settings[f * n + i] = row[f]; // a missing setting is NaN, as termValue gives
+    for (let f = 0; f < k; f++) settings[f * n + i] = row[f];
   }
   if (blocks) for (let i = 0; i < n; i++) key[2 * p + n * k + i] = blocks[i];
-  if (!kept) return buildMatrix(cols, coded, blocks, settings, n, p, k);
-  const tag = `${n}|${p}|${k}|${blocks ? 'blocks' : ''}`;
-  const known = matrices.recall(key, tag) ?? matrices.keep(key, tag, () => buildMatrix(cols, coded, blocks, settings, n, p, k));
-  return known.slice();
+  return { key, tag: `${n}|${p}|${k}|${blocks ? 'blocks' : ''}`, settings, k, kept };
 }
 
 /** The most numbers in a kept matrix or its key (2^16: a 1000-run, 65-column matrix). */

@@ -11,7 +11,7 @@
 import { ALIAS_WEIGHT_TOLERANCE, ORTHOGONALITY_TOLERANCE, RANK_TOLERANCE } from '../tolerance.ts';
 import { applyQ, applyQt, householderQr, type QrFactor } from '../linalg/householder-qr.ts';
 import { crossInverse, invertUpper, solveUpper } from '../linalg/triangular.ts';
-import type { Column } from './columns.ts';
+import { matrixKey, modelMatrix, type Column } from './columns.ts';
 import type { AliasedColumn, LinearFit } from './linear-fit.ts';
 import { matrixMemo } from './matrix-memo.ts';
 
@@ -27,6 +27,8 @@ interface DesignPart {
 
 /** The last four model matrices' parts, up to 2^16 numbers each (a 1000-run, 65-column fit). */
 const designs = matrixMemo<DesignPart>(4, 1 << 16);
+/** The same, found by the matrices' input (columns, settings, blocks) for fitQrOnSettings. */
+const bySettings = matrixMemo<DesignPart>(4, 1 << 16);
 
 /**
  * With `lean`, only the coefficients, sums of squares, residuals and aliases are computed
@@ -37,6 +39,33 @@ export function fitQr(columns: readonly Column[], x: Float64Array, y: ArrayLike<
   const p = columns.length;
   const tag = `${n}|${p}|${lean ? 'lean' : 'full'}`;
   const d = designs.recall(x, tag) ?? designs.keep(x, tag, (own) => designPart(own, n, p, lean, prefix));
+  return responsePart(columns, d, y, lean);
+}
+
+/**
+ * fitQr(columns, modelMatrix(columns, coded, blocks), y, lean, prefix), with the response-free
+ * part kept by the matrix's input itself (columns.ts matrixKey): a fit found again builds no
+ * matrix and compares n k + p numbers instead of n p. The same numbers as fitQr.
+ */
+export function fitQrOnSettings(
+  columns: readonly Column[],
+  coded: readonly (readonly number[])[],
+  blocks: readonly number[] | null | undefined,
+  y: ArrayLike<number>,
+  lean = false,
+  prefix?: QrFactor,
+): LinearFit {
+  const mk = matrixKey(columns, coded, blocks);
+  if (!mk.kept) return fitQr(columns, modelMatrix(columns, coded, blocks), y, lean, prefix);
+  const tag = `${mk.tag}|${lean ? 'lean' : 'full'}`;
+  // The key is copied before the matrix is built (modelMatrix reuses the key's buffer).
+  const d = bySettings.recall(mk.key, tag) ?? bySettings.keep(mk.key, tag, () => designPart(modelMatrix(columns, coded, blocks), y.length, columns.length, lean, prefix));
+  return responsePart(columns, d, y, lean);
+}
+
+/** The fit of y on a factorised model: coefficients, sums of squares, residuals, and copies of the shared part. */
+function responsePart(columns: readonly Column[], d: DesignPart, y: ArrayLike<number>, lean: boolean): LinearFit {
+  const n = y.length;
   const f = d.f;
   const m = f.rank;
   const qty = new Float64Array(n); // a loop, not Float64Array.from: y is often a plain array, which from() iterates

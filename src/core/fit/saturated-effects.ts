@@ -64,12 +64,9 @@ export function saturatedEffects(
   // The set comes from the nominal settings (`coded`); the effects, like the model's, from the actual ones.
   // The plan found above (a lean nominal fit, or walsh-plan.ts) is not worked out again by
   // fitOnPlan; only the estimates are read here, so the actual fit is lean as well (no (X'X)^-1, no leverage).
-  if (plan) {
-    const keptCols: Column[] = [];
-    for (let a = 0; a < plan.kept.length; a++) keptCols.push(cols[plan.kept[a]]);
-    fit = fitOnPlan(cols, new Float64Array(0), modelMatrix(keptCols, actual ?? coded, blocks), y, plan, true, actual ? prefix?.actual : prefix?.nominal);
-  }
-  else if (fit && actual) fit = fitOnPlan(fit.columns, new Float64Array(0), modelMatrix(fit.columns, actual, blocks), y, fit, true, prefix?.actual);
+  // The actual fit is found by its settings (fit-qr.ts fitQrOnSettings), its matrix built only when new.
+  if (plan) fit = fitOnPlan(cols, new Float64Array(0), { coded: actual ?? coded, blocks }, y, plan, true, actual ? prefix?.actual : prefix?.nominal);
+  else if (fit && actual) fit = fitOnPlan(fit.columns, new Float64Array(0), { coded: actual, blocks }, y, fit, true, prefix?.actual);
   if (!fit) return [];
   const byColumn = new Map<number, { term: Term; weight: number }[]>();
   for (const a of fit.aliased) {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import MLR from 'ml-regression-multivariate-linear';
 import { modelColumns, modelMatrix } from '../../../src/core/fit/columns.ts';
-import { fitQr } from '../../../src/core/fit/fit-qr.ts';
+import { fitQr, fitQrOnSettings } from '../../../src/core/fit/fit-qr.ts';
 import { fixtureData } from '../../helpers/fixtures.ts';
 
 /** Two factors, terms A, B, AB, at scattered coded settings (not orthogonal). */
@@ -106,6 +106,10 @@ describe('fitQr with a recalled factorisation', () => {
         recalled.leverage.fill(7);
         recalled.coef.fill(7);
         same(cold, fitQr(cols, modelMatrix(cols, data.coded, null), y2, lean));
+        // Found by the settings instead of the matrix (fitQrOnSettings): the same numbers, new or found again.
+        same(cold, fitQrOnSettings(cols, data.coded, null, y2, lean));
+        same(first, fitQrOnSettings(cols, data.coded, null, data.y, lean));
+        same(cold, fitQrOnSettings(cols, data.coded, null, y2, lean));
       }
     });
   }
