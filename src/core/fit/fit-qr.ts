@@ -10,7 +10,7 @@
  */
 import { ALIAS_WEIGHT_TOLERANCE, ORTHOGONALITY_TOLERANCE, RANK_TOLERANCE } from '../tolerance.ts';
 import { applyQ, applyQt, householderQr, type QrFactor } from '../linalg/householder-qr.ts';
-import { crossInverse, invertUpper, solveUpper } from '../linalg/triangular.ts';
+import { crossInverse, invertUpper, solveUpper, solveUpperRows, upperRows } from '../linalg/triangular.ts';
 import { matrixKey, modelMatrix, type Column } from './columns.ts';
 import type { AliasedColumn, LinearFit } from './linear-fit.ts';
 import { matrixMemo } from './matrix-memo.ts';
@@ -18,6 +18,8 @@ import { matrixMemo } from './matrix-memo.ts';
 /** What a fit takes from the model matrix alone, shared by every response fitted to it (never modified). */
 interface DesignPart {
   readonly f: QrFactor;
+  /** R by rows, for the back substitution of each response (triangular.ts solveUpperRows). */
+  readonly rRows: Float64Array;
   readonly covUnscaled: Float64Array;
   readonly leverage: Float64Array;
   readonly basis: Float64Array;
@@ -72,7 +74,7 @@ function responsePart(columns: readonly Column[], d: DesignPart, y: ArrayLike<nu
   for (let i = 0; i < n; i++) qty[i] = y[i];
   applyQt(f, qty);
   const coef = qty.slice(0, m);
-  solveUpper(f.r, m, coef);
+  solveUpperRows(d.rRows, m, coef);
   const seqSS = new Float64Array(m);
   for (let k = 0; k < m; k++) seqSS[k] = qty[k] * qty[k];
   const z = new Float64Array(n);
@@ -200,5 +202,5 @@ function designPart(x: Float64Array, n: number, p: number, lean: boolean, prefix
     }
   }
 
-  return { f, covUnscaled, leverage, basis, aliased, orthogonal };
+  return { f, rRows: upperRows(f.r, m), covUnscaled, leverage, basis, aliased, orthogonal };
 }
