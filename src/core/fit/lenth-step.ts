@@ -78,14 +78,10 @@ export function lenthStep(input: LenthInput): LenthStep {
       effects = est.map((e) => ({ ...labels[e.column], effect: e.effect }));
     }
   } else if (factorialRows.length >= 2 && unreplicated) {
-    const sat = saturatedEffects(
-      factors.length,
-      factorialRows.map((i) => (nominal ?? coded)[i]),
-      factorialRows.map((i) => y[i]),
-      blocks ? factorialRows.map((i) => blocks[i]) : null,
-      nominal ? factorialRows.map((i) => coded[i]) : undefined,
-      input.prefix,
-    );
+    // Every run factorial (the common case): the runs as they are, no copies.
+    const every = factorialRows.length === coded.length;
+    const pick = <T,>(list: readonly T[]): readonly T[] => (every ? list : factorialRows.map((i) => list[i]));
+    const sat = saturatedEffects(factors.length, pick(nominal ?? coded), pick(y), blocks ? pick(blocks) : null, nominal ? pick(coded) : undefined, input.prefix);
     if (sat.length > 0) {
       const sizes: number[] = [];
       for (const e of sat) sizes.push(e.effect);

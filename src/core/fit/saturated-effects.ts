@@ -52,7 +52,7 @@ export function saturatedEffects(
   let plan: WalshPlan | null = null;
   let cols: Column[] = [];
   for (; order <= k; order++) {
-    cols = modelColumns(levels, termsUpTo(k, order));
+    cols = levels.length > 1 ? modelColumns(levels, termsUpTo(k, order)) : unblockedColumns(k, order);
     plan = blocks ? null : walshPlan(cols, coded, k);
     if (plan) {
       if (plan.kept.length >= target) break;
@@ -85,9 +85,11 @@ export function saturatedEffects(
   return out;
 }
 
-/* One-entry memo: every product of up to `order` of k factors, in model order; the same for every analysis of a study. */
+/* One-entry memo: every product of up to `order` of k factors, in model order, and its columns
+ * without blocks; the same for every analysis of a study (shared, never modified). */
 let memoKey = '';
 let memoTerms: readonly Term[] = [];
+let memoColumns: Column[] = [];
 
 function termsUpTo(k: number, order: number): readonly Term[] {
   const key = `${k}|${order}`;
@@ -96,9 +98,16 @@ function termsUpTo(k: number, order: number): readonly Term[] {
     for (let t = 1; t < 1 << k; t++) if (termOrder(t) <= order) terms.push(t);
     terms.sort(compareTerms);
     memoTerms = terms;
+    memoColumns = modelColumns([], terms);
     memoKey = key;
   }
   return memoTerms;
+}
+
+/** modelColumns([], termsUpTo(k, order)), kept with the terms. */
+function unblockedColumns(k: number, order: number): Column[] {
+  termsUpTo(k, order);
+  return memoColumns;
 }
 
 function binomial(n: number, r: number): number {
