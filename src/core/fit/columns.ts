@@ -60,7 +60,7 @@ export function modelMatrix(
   const p = cols.length;
   if (!mk.kept) return buildMatrix(cols, coded, blocks, mk.settings, n, p, mk.k);
   const known = matrices.recall(mk.key, mk.tag) ?? matrices.keep(mk.key, mk.tag, () => buildMatrix(cols, coded, blocks, mk.settings, n, p, mk.k));
-  return known.slice();
+  return new Float64Array(known); // a copy by the constructor (slice() looks up a species each time)
 }
 
 /** What decides a model matrix, as numbers: see matrixKey. */

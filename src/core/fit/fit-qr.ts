@@ -73,7 +73,8 @@ function responsePart(columns: readonly Column[], d: DesignPart, y: ArrayLike<nu
   const qty = new Float64Array(n); // a loop, not Float64Array.from: y is often a plain array, which from() iterates
   for (let i = 0; i < n; i++) qty[i] = y[i];
   applyQt(f, qty);
-  const coef = qty.slice(0, m);
+  const coef = new Float64Array(m);
+  for (let k = 0; k < m; k++) coef[k] = qty[k];
   solveUpperRows(d.rRows, m, coef);
   const seqSS = new Float64Array(m);
   for (let k = 0; k < m; k++) seqSS[k] = qty[k] * qty[k];
@@ -90,16 +91,16 @@ function responsePart(columns: readonly Column[], d: DesignPart, y: ArrayLike<nu
   if (m < n) for (let i = 0; i < n; i++) fitted[i] = y[i] - residuals[i];
   else for (let i = 0; i < n; i++) fitted[i] = y[i];
   // Copies of the shared part, so that a caller may keep or change what it is given.
-  const covUnscaled = d.covUnscaled.slice();
-  const leverage = d.leverage.slice();
-  const basis = lean ? null : d.basis.slice();
+  const covUnscaled = new Float64Array(d.covUnscaled); // copies by the constructor: slice() looks up a species each time
+  const leverage = new Float64Array(d.leverage);
+  const basis = lean ? null : new Float64Array(d.basis);
   const aliased: AliasedColumn[] = [];
   for (const a of d.aliased) aliased.push({ column: a.column, combination: a.combination.map((w) => ({ column: w.column, weight: w.weight })) });
   const orthogonal = d.orthogonal;
   return {
     n,
     columns,
-    kept: f.kept.slice(),
+    kept: new Int32Array(f.kept),
     coef,
     covUnscaled,
     seqSS,

@@ -36,7 +36,7 @@ export function matrixMemo<T>(size: number, maxEntries: number): MatrixMemo<T> {
       return undefined;
     },
     keep(x, tag, make) {
-      const own = x.slice();
+      const own = new Float64Array(x);
       const value = make(own);
       if (own.length <= maxEntries) {
         entries.unshift({ x: own, tag, value });

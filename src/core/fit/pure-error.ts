@@ -44,7 +44,7 @@ export function settingGroups(coded: readonly (readonly number[])[], blocks: rea
   }
   // The groups depend on the settings alone: the last few answers are kept by them (matrix-memo.ts).
   const tag = `${n}|${width}|${blocks ? 'blocks' : ''}`;
-  return (groupsBySettings.recall(s, tag) ?? groupsBySettings.keep(s, tag, (own) => groupsOf(own, n, width, blocks ? 1 : 0, tol))).slice();
+  return new Int32Array(groupsBySettings.recall(s, tag) ?? groupsBySettings.keep(s, tag, (own) => groupsOf(own, n, width, blocks ? 1 : 0, tol)));
 }
 
 /** The last four answers of settingGroups (never modified). */

@@ -75,10 +75,10 @@ export function walshPlan(columns: readonly Column[], rows: readonly (readonly n
   // The answer depends only on the missing points and the column masks: the same plan is asked
   // for at every analysis of a study (and its saturated set), so the last few answers are kept.
   const known = remembered(k, missing, masks);
-  if (known !== undefined) return known && { kept: known.kept.slice(), aliased: known.aliased };
+  if (known !== undefined) return known && { kept: new Int32Array(known.kept), aliased: known.aliased };
   const plan = planOf(p, N, d, missing, masks, inModel, n);
   remember(k, missing, masks, plan);
-  return plan && { kept: plan.kept.slice(), aliased: plan.aliased };
+  return plan && { kept: new Int32Array(plan.kept), aliased: plan.aliased };
 }
 
 /** The last answers of walshPlan, by factor count, missing points and column masks (shared; never modified). */
