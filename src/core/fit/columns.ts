@@ -63,6 +63,19 @@ export function modelMatrix(
   return new Float64Array(known); // a copy by the constructor (slice() looks up a species each time)
 }
 
+/** modelMatrix built afresh, neither looked up nor kept: for a caller that keeps what follows from it instead (fit-qr.ts fitQrOnSettings). */
+export function freshModelMatrix(cols: readonly Column[], coded: readonly (readonly number[])[], blocks: readonly number[] | null | undefined): Float64Array {
+  const n = coded.length;
+  let k = 0;
+  for (let i = 0; i < n; i++) if (coded[i].length > k) k = coded[i].length;
+  const settings = new Float64Array(n * k);
+  for (let i = 0; i < n; i++) {
+    const row = coded[i];
+    for (let f = 0; f < k; f++) settings[f * n + i] = row[f];
+  }
+  return buildMatrix(cols, coded, blocks, settings, n, cols.length, k);
+}
+
 /** What decides a model matrix, as numbers: see matrixKey. */
 export interface MatrixKey {
   /** Column kinds and terms (or block labels), each factor's settings (factor f at f n), then the blocks. */

@@ -11,7 +11,7 @@
 import { ALIAS_WEIGHT_TOLERANCE, ORTHOGONALITY_TOLERANCE, RANK_TOLERANCE } from '../tolerance.ts';
 import { applyQ, applyQt, householderQr, type QrFactor } from '../linalg/householder-qr.ts';
 import { crossInverse, invertUpper, solveUpper, solveUpperRows, upperRows } from '../linalg/triangular.ts';
-import { matrixKey, modelMatrix, type Column } from './columns.ts';
+import { freshModelMatrix, matrixKey, modelMatrix, type Column } from './columns.ts';
 import type { AliasedColumn, LinearFit } from './linear-fit.ts';
 import { matrixMemo } from './matrix-memo.ts';
 
@@ -60,8 +60,7 @@ export function fitQrOnSettings(
   const mk = matrixKey(columns, coded, blocks);
   if (!mk.kept) return fitQr(columns, modelMatrix(columns, coded, blocks), y, lean, prefix);
   const tag = `${mk.tag}|${lean ? 'lean' : 'full'}`;
-  // The key is copied before the matrix is built (modelMatrix reuses the key's buffer).
-  const d = bySettings.recall(mk.key, tag) ?? bySettings.keep(mk.key, tag, () => designPart(modelMatrix(columns, coded, blocks), y.length, columns.length, lean, prefix));
+  const d = bySettings.recall(mk.key, tag) ?? bySettings.keep(mk.key, tag, () => designPart(freshModelMatrix(columns, coded, blocks), y.length, columns.length, lean, prefix));
   return responsePart(columns, d, y, lean);
 }
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { modelColumns, modelMatrix } from '../../../src/core/fit/columns.ts';
+import { freshModelMatrix, modelColumns, modelMatrix } from '../../../src/core/fit/columns.ts';
 import { squareTerm, termValue } from '../../../src/core/model/term.ts';
 
 function lcg(seed: number) {
@@ -50,6 +50,9 @@ describe('modelMatrix', () => {
     nudged[3][1] = nudged[3][1] + Math.abs(nudged[3][1]) * Number.EPSILON;
     const x = modelMatrix(cols, nudged, blocks);
     expect(Object.is(x[3 * n + 3], nudged[3][1])).toBe(true);
+    // Built afresh (freshModelMatrix, neither looked up nor kept): the same numbers.
+    expect(Array.from(freshModelMatrix(cols, nudged, blocks))).toEqual(Array.from(x));
+    expect(Array.from(freshModelMatrix(cols, coded, blocks))).toEqual(Array.from(third));
   });
 
   it('a matrix beyond the kept size (1100 runs x 64 columns) is built the same way, entry for entry termValue', () => {
