@@ -12,7 +12,8 @@
  * estimates but never makes separable what the plan confounds (common practice). When the
  * nominal runs are a full factorial less a few, the plan's rank and chains come from
  * walsh-plan.ts (the same columns, no nominal factorisation).
- * Cost: O(k 2^k + n) on the Yates path, O(n p^2) on the QR path.
+ * Cost: O(k 2^k + n) on the Yates path, O(n p^2) on the QR path; the response-free part of the
+ * QR fit is kept by the runs' settings (fit-qr.ts fitQrOnSettings), so the same runs again cost O(n p).
  * Throws InputError for a term that names a factor the study does not have.
  * Example: chooseFit(the 2^2 yield data of Montgomery 8th ed. section 6.2, {}) -> method 'yates', terms [A, B, AB].
  */

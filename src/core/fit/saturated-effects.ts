@@ -13,7 +13,8 @@
  * half-normal chart shows the same kind of estimates as the model's bars.
  * Cost O(n r T) for n factorial runs, rank r and T terms tried. `prefix`: the model's factorisations
  * (nominal and actual settings); when the model's columns lead the saturated set on the same runs,
- * the saturated fits resume from them (householder-qr.ts), with the same result.
+ * the saturated fits resume from them (householder-qr.ts), with the same result. The actual fit
+ * is kept by its settings (fit-qr.ts fitQrOnSettings): the same runs again cost O(n^2).
  */
 import { compareTerms, termOrder, type Term } from '../model/term.ts';
 import { blockLevels, modelColumns, modelMatrix, type Column } from './columns.ts';

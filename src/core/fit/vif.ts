@@ -5,7 +5,8 @@
  * 1 / (S_jj (1 - R_j^2)), S_jj the centred sum of squares of column j, so VIF_j = S_jj [(X'X)^-1]_jj.
  * Source: Montgomery, Peck and Vining, Introduction to Linear Regression Analysis, 5th ed.,
  * section 9.4 (variance inflation factors; VIF above 10 signals serious collinearity), from memory.
- * In an orthogonal two-level design every VIF is 1. Cost O(n p) beyond the fit.
+ * In an orthogonal two-level design every VIF is 1. Cost O(n p) beyond the fit, O(p) for a
+ * factorisation whose VIFs were already worked out (kept with it).
  * Example: a complete 2^2 with center runs, terms A, B, AB -> VIFs [1, 1, 1].
  */
 import { columnValue, blockLevels, modelMatrix, type Column } from './columns.ts';

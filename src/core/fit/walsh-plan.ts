@@ -18,7 +18,8 @@
  * is at least WALSH_MARGIN N (tolerance.ts), so every kept column keeps at least sqrt(WALSH_MARGIN)
  * of its norm and the QR's rank test (RANK_TOLERANCE) decides the same way. Otherwise: null, and
  * the caller factorises.
- * Cost O(N d^2 + p d^2 + d^3), no factorisation of the n x p matrix.
+ * Cost O(N d^2 + p d^2 + d^3), no factorisation of the n x p matrix; the last few answers are
+ * kept by the missing points and column masks, so the same plan again costs O(n k + p).
  * Example: the 2^3 less the run (+1, +1, +1), columns I, A, B, C, AB, AC, BC, ABC -> the seven
  * runs keep I..BC, and ABC = -(I + A + B + C + AB + AC + BC) on them (every h_l is 1 at the missing run).
  */
