@@ -119,10 +119,10 @@ export function matrixKey(cols: readonly Column[], coded: readonly (readonly num
   return { key, tag: `${n}|${p}|${k}|${blocks ? 'blocks' : ''}`, settings, k, kept };
 }
 
-/** The most numbers in a kept matrix or its key (2^16: a 1000-run, 65-column matrix). */
-const MEMO_LIMIT = 1 << 16;
-/** The last eight model matrices, by their columns, settings and blocks (matrix-memo.ts; never modified). */
-const matrices = matrixMemo<Float64Array>(8, MEMO_LIMIT);
+/** The most numbers in a kept matrix or its key (2^15, 256 KB: a 500-run, 65-column matrix), so that the store stays small on a phone. */
+const MEMO_LIMIT = 1 << 15;
+/** The last four model matrices, by their columns, settings and blocks (matrix-memo.ts; never modified). */
+const matrices = matrixMemo<Float64Array>(4, MEMO_LIMIT);
 /** The key of the current call, reused from call to call (the memo keeps its own copy). */
 let scratch = new Float64Array(0);
 

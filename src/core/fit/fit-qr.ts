@@ -27,10 +27,10 @@ interface DesignPart {
   readonly orthogonal: boolean;
 }
 
-/** The last four model matrices' parts, up to 2^16 numbers each (a 1000-run, 65-column fit). */
-const designs = matrixMemo<DesignPart>(4, 1 << 16);
+/** The last four model matrices' parts, for matrices up to 2^15 numbers (a 500-run, 65-column fit; a part holds about three times that). */
+const designs = matrixMemo<DesignPart>(4, 1 << 15);
 /** The same, found by the matrices' input (columns, settings, blocks) for fitQrOnSettings. */
-const bySettings = matrixMemo<DesignPart>(4, 1 << 16);
+const bySettings = matrixMemo<DesignPart>(4, 1 << 15);
 
 /**
  * With `lean`, only the coefficients, sums of squares, residuals and aliases are computed

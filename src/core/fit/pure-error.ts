@@ -48,7 +48,7 @@ export function settingGroups(coded: readonly (readonly number[])[], blocks: rea
 }
 
 /** The last four answers of settingGroups (never modified). */
-const groupsBySettings = matrixMemo<Int32Array>(4, 1 << 16);
+const groupsBySettings = matrixMemo<Int32Array>(4, 1 << 15);
 
 /** settingGroups' work on the row-major settings `s` (`lead` 1 when a block leads each row). */
 function groupsOf(s: Float64Array, n: number, width: number, lead: number, tol: number): Int32Array {
