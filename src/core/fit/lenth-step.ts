@@ -45,13 +45,13 @@ export interface LenthInput {
   readonly nominal?: readonly (readonly number[])[] | null;
   /** The model's estimates, for the half-normal points when Lenth does not apply. */
   readonly terms: readonly TermEstimate[];
+  /** The model's factorisations, which the saturated fits resume from when its columns lead theirs (saturated-effects.ts). */
+  readonly prefix?: { readonly nominal?: QrFactor; readonly actual?: QrFactor };
   /**
    * Orthogonal contrast columns to judge instead of the saturated set (a Plackett-Burman plan's
    * N - 1 columns, the unused ones included): one value per run, with each column's name and
    * letters. Absent: the saturated set of saturated-effects.ts.
    */
-  /** The model's factorisations, which the saturated fits resume from when its columns lead theirs (saturated-effects.ts). */
-  readonly prefix?: { readonly nominal?: QrFactor; readonly actual?: QrFactor };
   readonly contrasts?: { readonly columns: readonly (readonly number[])[]; readonly labels: readonly { readonly name: string; readonly letters: string }[] };
 }
 
