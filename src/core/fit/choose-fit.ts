@@ -12,7 +12,8 @@
  * estimates but never makes separable what the plan confounds (common practice). When the
  * nominal runs are a full factorial less a few, the plan's rank and chains come from
  * walsh-plan.ts (the same columns, no nominal factorisation).
- * Cost: O(k 2^k + n) on the Yates path, O(n p^2) on the QR path.
+ * Cost: O(k 2^k + n) on the Yates path, O(n p^2) on the QR path; the response-free part of the
+ * QR fit is kept by the runs' settings (fit-qr.ts fitQrOnSettings), so the same runs again cost O(n p).
  * Throws InputError for a term that names a factor the study does not have.
  * Example: chooseFit(the 2^2 yield data of Montgomery 8th ed. section 6.2, {}) -> method 'yates', terms [A, B, AB].
  */
@@ -21,7 +22,7 @@ import { checkTerms, isSquare, modelOrder, type Term } from '../model/term.ts';
 import type { ResponseData } from '../study/response-data.ts';
 import { blockLevels, modelColumns, modelMatrix, type Column } from './columns.ts';
 import { fitOnPlan } from './fit-on-plan.ts';
-import { fitQr } from './fit-qr.ts';
+import { fitQrOnSettings } from './fit-qr.ts';
 import { fitYates, yatesCells } from './fit-yates.ts';
 import type { LinearFit } from './linear-fit.ts';
 import { exactNominal, nominalSettings, type NominalSettings } from './nominal-settings.ts';
@@ -55,7 +56,7 @@ export function chooseFit(data: ResponseData, options: { readonly terms?: readon
   const fit = cells
     ? fitYates(columns, terms, cells, k, data.y)
     : nominal.exact
-      ? fitQr(columns, modelMatrix(columns, data.coded, blocks), data.y)
+      ? fitQrOnSettings(columns, data.coded, blocks, data.y)
       : fitOnNominal(columns, nominal.nominal, data, blocks, k);
   return { terms, blockLevels: blocks ? levels : [], blocks, cells, fit, nominal };
 }
@@ -63,6 +64,7 @@ export function chooseFit(data: ResponseData, options: { readonly terms?: readon
 /** The fit on the actual settings with what the nominal plan can estimate: from walsh-plan.ts when it applies, else from a nominal factorisation (fit-on-plan.ts). */
 function fitOnNominal(columns: readonly Column[], nominal: readonly (readonly number[])[], data: ResponseData, blocks: readonly number[] | null, k: number): LinearFit {
   const plan = blocks ? null : walshPlan(columns, nominal, k);
-  const xActual = modelMatrix(columns, data.coded, blocks);
-  return plan ? fitOnPlan(columns, new Float64Array(0), xActual, data.y, plan) : fitOnPlan(columns, modelMatrix(columns, nominal, blocks), xActual, data.y);
+  // The actual fit is found by its settings (fit-qr.ts fitQrOnSettings), its matrix built only when new.
+  const actual = { coded: data.coded, blocks };
+  return plan ? fitOnPlan(columns, new Float64Array(0), actual, data.y, plan) : fitOnPlan(columns, modelMatrix(columns, nominal, blocks), actual, data.y);
 }

@@ -20,7 +20,7 @@ import { contrastEffects } from './contrast-effects.ts';
 import { bySize, halfNormalQuantiles } from './half-normal.ts';
 import { lenth, type LenthResult } from './lenth.ts';
 import { labelGroups, settingGroups } from './pure-error.ts';
-import { saturatedEffects } from './saturated-effects.ts';
+import { saturatedEffects, type SaturatedEffect } from './saturated-effects.ts';
 import type { QrFactor } from '../linalg/householder-qr.ts';
 
 export interface LenthStep {
@@ -45,13 +45,13 @@ export interface LenthInput {
   readonly nominal?: readonly (readonly number[])[] | null;
   /** The model's estimates, for the half-normal points when Lenth does not apply. */
   readonly terms: readonly TermEstimate[];
+  /** The model's factorisations, which the saturated fits resume from when its columns lead theirs (saturated-effects.ts). */
+  readonly prefix?: { readonly nominal?: QrFactor; readonly actual?: QrFactor };
   /**
    * Orthogonal contrast columns to judge instead of the saturated set (a Plackett-Burman plan's
    * N - 1 columns, the unused ones included): one value per run, with each column's name and
    * letters. Absent: the saturated set of saturated-effects.ts.
    */
-  /** The model's factorisations, which the saturated fits resume from when its columns lead theirs (saturated-effects.ts). */
-  readonly prefix?: { readonly nominal?: QrFactor; readonly actual?: QrFactor };
   readonly contrasts?: { readonly columns: readonly (readonly number[])[]; readonly labels: readonly { readonly name: string; readonly letters: string }[] };
 }
 
@@ -78,21 +78,17 @@ export function lenthStep(input: LenthInput): LenthStep {
       effects = est.map((e) => ({ ...labels[e.column], effect: e.effect }));
     }
   } else if (factorialRows.length >= 2 && unreplicated) {
-    const sat = saturatedEffects(
-      factors.length,
-      factorialRows.map((i) => (nominal ?? coded)[i]),
-      factorialRows.map((i) => y[i]),
-      blocks ? factorialRows.map((i) => blocks[i]) : null,
-      nominal ? factorialRows.map((i) => coded[i]) : undefined,
-      input.prefix,
-    );
+    // Every run factorial (the common case): the runs as they are, no copies.
+    const every = factorialRows.length === coded.length;
+    const pick = <T,>(list: readonly T[]): readonly T[] => (every ? list : factorialRows.map((i) => list[i]));
+    const sat = saturatedEffects(factors.length, pick(nominal ?? coded), pick(y), blocks ? pick(blocks) : null, nominal ? pick(coded) : undefined, input.prefix);
     if (sat.length > 0) {
-      result = lenth(sat.map((s) => s.effect));
-      effects = sat.map((s) => ({
-        name: termName(s.term, factors),
-        letters: combinationLabel([{ letters: termLetters(s.term, factors), weight: 1 }, ...s.aliases.map((a) => ({ letters: termLetters(a.term, factors), weight: a.weight }))]),
-        effect: s.effect,
-      }));
+      const sizes: number[] = [];
+      for (const e of sat) sizes.push(e.effect);
+      result = lenth(sizes);
+      const labels = saturatedLabels(sat, factors);
+      effects = [];
+      for (let j = 0; j < sat.length; j++) effects.push({ name: labels[j].name, letters: labels[j].letters, effect: sat[j].effect });
     }
   }
   const l = result;
@@ -107,6 +103,48 @@ export function lenthStep(input: LenthInput): LenthStep {
     halfNormal.push(mk ? { name: e.name, letters: e.letters, effect: e.effect, quantile: q[i], mark: mk } : { name: e.name, letters: e.letters, effect: e.effect, quantile: q[i] });
   }
   return { lenth: result, halfNormal };
+}
+
+/* One-entry memo of the saturated set's labels: they depend only on the factors' names and
+ * letters and on the set's terms and alias chains, the same at every analysis of a study. */
+let memoLabels: { key: Float64Array; names: readonly string[]; labels: readonly { readonly name: string; readonly letters: string }[] } | null = null;
+
+/** Name and letters ("AB + CD") of each saturated effect, as termName, termLetters and combinationLabel write them. */
+function saturatedLabels(sat: readonly SaturatedEffect[], factors: readonly Factor[]): readonly { readonly name: string; readonly letters: string }[] {
+  let size = 0;
+  for (const e of sat) size += 2 + 2 * e.aliases.length;
+  const key = new Float64Array(size);
+  let o = 0;
+  for (const e of sat) {
+    key[o++] = e.term;
+    key[o++] = e.aliases.length;
+    for (const a of e.aliases) {
+      key[o++] = a.term;
+      key[o++] = a.weight;
+    }
+  }
+  const names: string[] = [];
+  for (const f of factors) names.push(f.name, f.letter);
+  if (memoLabels && sameStrings(memoLabels.names, names) && sameNumbers(memoLabels.key, key)) return memoLabels.labels;
+  const labels = sat.map((e) => ({
+    name: termName(e.term, factors),
+    letters: combinationLabel([{ letters: termLetters(e.term, factors), weight: 1 }, ...e.aliases.map((a) => ({ letters: termLetters(a.term, factors), weight: a.weight }))]),
+  }));
+  memoLabels = { key, names, labels };
+  return labels;
+}
+
+function sameStrings(a: readonly string[], b: readonly string[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
+}
+
+/** Entry for entry Object.is (terms and weights; -0 and 0 are written alike, but kept apart here to be safe). */
+function sameNumbers(a: Float64Array, b: Float64Array): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (!Object.is(a[i], b[i])) return false;
+  return true;
 }
 
 /** True when no two of the runs share a group (stops at the first repeat). */

@@ -25,8 +25,8 @@ export interface LenthResult {
 /** Fewer contrasts than this and Lenth's method has little power (Lenth 1989, section 4: m >= 7 recommended). */
 export const LENTH_MIN_CONTRASTS = 7;
 
-function median(sorted: readonly number[]): number {
-  const n = sorted.length;
+/** The median of the first n of the sorted values. */
+function median(sorted: Float64Array, n: number): number {
   const h = n >> 1;
   return n % 2 ? sorted[h] : (sorted[h - 1] + sorted[h]) / 2;
 }
@@ -34,15 +34,36 @@ function median(sorted: readonly number[]): number {
 export function lenth(effects: readonly number[]): LenthResult {
   const m = effects.length;
   if (m === 0) throw new InputError("Lenth's method needs at least one effect, got none");
-  const abs = effects.map((e) => {
+  // A typed array sorts numbers by value without a comparison callback; the sizes are finite and
+  // at least +0, so the order is that of (a, b) => a - b.
+  const abs = new Float64Array(m);
+  for (let j = 0; j < m; j++) {
+    const e = effects[j];
     if (!Number.isFinite(e)) throw new InputError(`Lenth's method needs finite effects, got ${e}`);
-    return Math.abs(e);
-  });
-  abs.sort((a, b) => a - b);
-  const s0 = 1.5 * median(abs);
-  const trimmed = abs.filter((a) => a < 2.5 * s0);
-  const pse = trimmed.length > 0 ? 1.5 * median(trimmed) : s0;
+    abs[j] = Math.abs(e);
+  }
+  abs.sort();
+  const s0 = 1.5 * median(abs, m);
+  // The sizes below 2.5 s0 are a leading run of the sorted ones.
+  let kept = 0;
+  while (kept < m && abs[kept] < 2.5 * s0) kept++;
+  const pse = kept > 0 ? 1.5 * median(abs, kept) : s0;
   const df = m / 3;
-  const gamma = (1 + Math.pow(0.95, 1 / m)) / 2;
-  return { m, df, pse, me: tQuantile(0.975, df) * pse, sme: tQuantile(gamma, df) * pse };
+  const [tMe, tSme] = quantiles(m);
+  return { m, df, pse, me: tMe * pse, sme: tSme * pse };
+}
+
+/* One-entry memo: the two t quantiles depend on m only, and every analysis of a study asks for the same m. */
+let memoM = -1;
+let memoT: readonly [number, number] = [NaN, NaN];
+
+/** t(0.975; m/3) and t(gamma; m/3), gamma = (1 + 0.95^(1/m)) / 2. */
+function quantiles(m: number): readonly [number, number] {
+  if (m !== memoM) {
+    const df = m / 3;
+    const gamma = (1 + Math.pow(0.95, 1 / m)) / 2;
+    memoT = [tQuantile(0.975, df), tQuantile(gamma, df)];
+    memoM = m;
+  }
+  return memoT;
 }

@@ -47,6 +47,11 @@ export function nominalSettings(
   let away = 0;
   let same = true; // every nominal setting === its actual one
   const n = coded.length;
+  // Each nominal setting, written down in the one pass (rows one after another), for the copy below.
+  let width = 0;
+  for (let i = 0; i < n; i++) width += coded[i].length;
+  const levels = new Float64Array(width);
+  let o = 0;
   for (let i = 0; i < n; i++) {
     const row = coded[i];
     const plan = planned?.[i] ?? null;
@@ -55,22 +60,24 @@ export function nominalSettings(
       const v = row[f];
       const level = nominalLevel(v, plan, f, tol);
       if (level !== level) {
+        levels[o++] = v;
         if (plan || Math.abs(v) < 1) runAway = true;
         continue;
       }
+      levels[o++] = level;
       if (level !== v) same = false;
       if (Math.abs(v - level) > exactTol) moved++;
     }
     if (runAway) away++;
   }
   if (same) return { nominal: coded, moved, away, exact: moved === 0 };
-  const nominal = coded.map((row, i) => {
-    const plan = planned?.[i] ?? null;
-    return row.map((v, f) => {
-      const level = nominalLevel(v, plan, f, tol);
-      return level !== level ? v : level;
-    });
-  });
+  const nominal: number[][] = [];
+  o = 0;
+  for (let i = 0; i < n; i++) {
+    const out: number[] = [];
+    for (let f = 0; f < coded[i].length; f++) out.push(levels[o++]);
+    nominal.push(out);
+  }
   return { nominal, moved, away, exact: moved === 0 };
 }
 

@@ -8,6 +8,7 @@
  * says so (common practice: the runs were meant as replicates).
  */
 import { SETTING_TOLERANCE } from '../tolerance.ts';
+import { matrixMemo } from './matrix-memo.ts';
 
 export interface PureError {
   readonly ss: number;
@@ -24,23 +25,76 @@ export function pureError(coded: readonly (readonly number[])[], y: ArrayLike<nu
 
 /**
  * Group number of each run: runs with the same settings (within SETTING_TOLERANCE) and block
- * share one. Found by sorting the runs on their settings. Cost O(n log n k).
+ * share one. Found by sorting the runs on their settings (block first, then factor by factor), a
+ * stable sort: insertion sort of runs of 8, then a bottom-up merge, comparing inline on a copy of
+ * the settings (no comparison callback per pair). Cost O(n log n k).
  */
 export function settingGroups(coded: readonly (readonly number[])[], blocks: readonly number[] | null | undefined): Int32Array {
   const n = coded.length;
   const k = n > 0 ? coded[0].length : 0;
   const tol = SETTING_TOLERANCE; // a local: module bindings are getters under some loaders
+  // Row-major copy of the settings, with the block (when any) as a leading setting compared exactly.
+  const width = k + (blocks ? 1 : 0);
+  const s = new Float64Array(n * width);
+  for (let i = 0; i < n; i++) {
+    const row = coded[i];
+    let o = i * width;
+    if (blocks) s[o++] = blocks[i];
+    for (let f = 0; f < k; f++) s[o + f] = row[f];
+  }
+  // The groups depend on the settings alone: the last few answers are kept by them (matrix-memo.ts).
+  const tag = `${n}|${width}|${blocks ? 'blocks' : ''}`;
+  return new Int32Array(groupsBySettings.recall(s, tag) ?? groupsBySettings.keep(s, tag, (own) => groupsOf(own, n, width, blocks ? 1 : 0, tol)));
+}
+
+/** The last four answers of settingGroups (never modified). */
+const groupsBySettings = matrixMemo<Int32Array>(4, 1 << 15);
+
+/** settingGroups' work on the row-major settings `s` (`lead` 1 when a block leads each row). */
+function groupsOf(s: Float64Array, n: number, width: number, lead: number, tol: number): Int32Array {
+  /** The sign of the comparison of runs a and b (a block difference, else the first setting difference beyond tol). */
   const compare = (a: number, b: number): number => {
-    if (blocks && blocks[a] !== blocks[b]) return blocks[a] - blocks[b];
-    const ra = coded[a];
-    const rb = coded[b];
-    for (let f = 0; f < k; f++) {
-      const d = ra[f] - rb[f];
+    const oa = a * width;
+    const ob = b * width;
+    if (lead && s[oa] !== s[ob]) return s[oa] - s[ob];
+    for (let f = lead; f < width; f++) {
+      const d = s[oa + f] - s[ob + f];
       if (d > tol || d < -tol) return d;
     }
     return 0;
   };
-  const order = Array.from({ length: n }, (_, i) => i).sort(compare);
+  let order = new Int32Array(n);
+  let spare = new Int32Array(n);
+  for (let i = 0; i < n; i++) order[i] = i;
+  const RUN = 8;
+  for (let lo = 0; lo < n; lo += RUN) {
+    const hi = Math.min(lo + RUN, n);
+    for (let i = lo + 1; i < hi; i++) {
+      const v = order[i];
+      let j = i - 1;
+      while (j >= lo && compare(order[j], v) > 0) {
+        order[j + 1] = order[j];
+        j--;
+      }
+      order[j + 1] = v;
+    }
+  }
+  for (let run = RUN; run < n; run *= 2) {
+    for (let lo = 0; lo < n; lo += 2 * run) {
+      const mid = Math.min(lo + run, n);
+      const hi = Math.min(lo + 2 * run, n);
+      let a = lo;
+      let b = mid;
+      let o = lo;
+      // Take from the left run on a tie: equal runs keep their given order.
+      while (a < mid && b < hi) spare[o++] = compare(order[b], order[a]) < 0 ? order[b++] : order[a++];
+      while (a < mid) spare[o++] = order[a++];
+      while (b < hi) spare[o++] = order[b++];
+    }
+    const t = order;
+    order = spare;
+    spare = t;
+  }
   const groupOf = new Int32Array(n);
   let g = -1;
   for (let i = 0; i < n; i++) {

@@ -13,7 +13,8 @@
  * half-normal chart shows the same kind of estimates as the model's bars.
  * Cost O(n r T) for n factorial runs, rank r and T terms tried. `prefix`: the model's factorisations
  * (nominal and actual settings); when the model's columns lead the saturated set on the same runs,
- * the saturated fits resume from them (householder-qr.ts), with the same result.
+ * the saturated fits resume from them (householder-qr.ts), with the same result. The actual fit
+ * is kept by its settings (fit-qr.ts fitQrOnSettings): the same runs again cost O(n^2).
  */
 import { compareTerms, termOrder, type Term } from '../model/term.ts';
 import { blockLevels, modelColumns, modelMatrix, type Column } from './columns.ts';
@@ -52,10 +53,7 @@ export function saturatedEffects(
   let plan: WalshPlan | null = null;
   let cols: Column[] = [];
   for (; order <= k; order++) {
-    const terms: Term[] = [];
-    for (let t = 1; t < 1 << k; t++) if (termOrder(t) <= order) terms.push(t);
-    terms.sort(compareTerms);
-    cols = modelColumns(levels, terms);
+    cols = levels.length > 1 ? modelColumns(levels, termsUpTo(k, order)) : unblockedColumns(k, order);
     plan = blocks ? null : walshPlan(cols, coded, k);
     if (plan) {
       if (plan.kept.length >= target) break;
@@ -67,11 +65,9 @@ export function saturatedEffects(
   // The set comes from the nominal settings (`coded`); the effects, like the model's, from the actual ones.
   // The plan found above (a lean nominal fit, or walsh-plan.ts) is not worked out again by
   // fitOnPlan; only the estimates are read here, so the actual fit is lean as well (no (X'X)^-1, no leverage).
-  if (plan) {
-    const keptCols = Array.from(plan.kept, (j) => cols[j]);
-    fit = fitOnPlan(cols, new Float64Array(0), modelMatrix(keptCols, actual ?? coded, blocks), y, plan, true, actual ? prefix?.actual : prefix?.nominal);
-  }
-  else if (fit && actual) fit = fitOnPlan(fit.columns, new Float64Array(0), modelMatrix(fit.columns, actual, blocks), y, fit, true, prefix?.actual);
+  // The actual fit is found by its settings (fit-qr.ts fitQrOnSettings), its matrix built only when new.
+  if (plan) fit = fitOnPlan(cols, new Float64Array(0), { coded: actual ?? coded, blocks }, y, plan, true, actual ? prefix?.actual : prefix?.nominal);
+  else if (fit && actual) fit = fitOnPlan(fit.columns, new Float64Array(0), { coded: actual, blocks }, y, fit, true, prefix?.actual);
   if (!fit) return [];
   const byColumn = new Map<number, { term: Term; weight: number }[]>();
   for (const a of fit.aliased) {
@@ -88,6 +84,31 @@ export function saturatedEffects(
     out.push({ term: c.term, effect: 2 * fit.coef[j], aliases: byColumn.get(fit.kept[j]) ?? [] });
   }
   return out;
+}
+
+/* One-entry memo: every product of up to `order` of k factors, in model order, and its columns
+ * without blocks; the same for every analysis of a study (shared, never modified). */
+let memoKey = '';
+let memoTerms: readonly Term[] = [];
+let memoColumns: Column[] = [];
+
+function termsUpTo(k: number, order: number): readonly Term[] {
+  const key = `${k}|${order}`;
+  if (key !== memoKey) {
+    const terms: Term[] = [];
+    for (let t = 1; t < 1 << k; t++) if (termOrder(t) <= order) terms.push(t);
+    terms.sort(compareTerms);
+    memoTerms = terms;
+    memoColumns = modelColumns([], terms);
+    memoKey = key;
+  }
+  return memoTerms;
+}
+
+/** modelColumns([], termsUpTo(k, order)), kept with the terms. */
+function unblockedColumns(k: number, order: number): Column[] {
+  termsUpTo(k, order);
+  return memoColumns;
 }
 
 function binomial(n: number, r: number): number {

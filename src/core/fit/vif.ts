@@ -5,12 +5,14 @@
  * 1 / (S_jj (1 - R_j^2)), S_jj the centred sum of squares of column j, so VIF_j = S_jj [(X'X)^-1]_jj.
  * Source: Montgomery, Peck and Vining, Introduction to Linear Regression Analysis, 5th ed.,
  * section 9.4 (variance inflation factors; VIF above 10 signals serious collinearity), from memory.
- * In an orthogonal two-level design every VIF is 1. Cost O(n p) beyond the fit.
+ * In an orthogonal two-level design every VIF is 1. Cost O(n p) beyond the fit, O(p) for a
+ * factorisation whose VIFs were already worked out (kept with it).
  * Example: a complete 2^2 with center runs, terms A, B, AB -> VIFs [1, 1, 1].
  */
 import { columnValue, blockLevels, modelMatrix, type Column } from './columns.ts';
 import { fitQr } from './fit-qr.ts';
 import type { LinearFit } from './linear-fit.ts';
+import type { QrFactor } from '../linalg/householder-qr.ts';
 
 /** A VIF above this names the term in a warning (Montgomery, Peck and Vining, 5th ed., section 9.4: common practice, from memory). */
 export const VIF_LIMIT = 10;
@@ -35,6 +37,12 @@ export function columnVifs(fit: LinearFit, coded: readonly (readonly number[])[]
   // The factorised matrix holds the kept columns' values already (the same numbers: columns.ts).
   const qr = fit.qr;
   const x = qr && qr.n === n && qr.x.length === n * qr.p && qr.rank === m ? qr.x : null;
+  // Then the VIFs follow from the factorisation alone (its matrix and (X'X)^-1, which fit-qr.ts
+  // keeps with it): a factorisation found again (matrix-memo.ts) gives its VIFs again.
+  let kinds = '';
+  for (let a = 0; a < m; a++) kinds += fit.columns[fit.kept[a]].kind === 'term' ? 't' : 'o';
+  const known = x ? byFactor.get(qr!) : undefined;
+  if (known && known.kinds === kinds && known.n === n && sameDiagonal(known.diag, fit.covUnscaled, m)) return known.vifs.slice();
   const v = new Float64Array(n);
   for (let a = 0; a < m; a++) {
     const c = fit.columns[fit.kept[a]];
@@ -51,7 +59,26 @@ export function columnVifs(fit: LinearFit, coded: readonly (readonly number[])[]
     const vif = s * fit.covUnscaled[a * m + a];
     out.push(s > 0 && Number.isFinite(vif) ? vif : null);
   }
+  if (x) {
+    const diag = new Float64Array(fit.covUnscaled.length === m * m ? m : 0);
+    for (let a = 0; a < diag.length; a++) diag[a] = fit.covUnscaled[a * m + a];
+    byFactor.set(qr!, { kinds, n, diag, vifs: out.slice() });
+  }
   return out;
+}
+
+/** The VIFs last worked out from each factorisation, with what else they were read from (held weakly). */
+const byFactor = new WeakMap<QrFactor, { kinds: string; n: number; diag: Float64Array; vifs: (number | null)[] }>();
+
+/** Whether the diagonal of cov (m x m, or empty) is `diag`, entry for entry (Object.is, written out). */
+function sameDiagonal(diag: Float64Array, cov: Float64Array, m: number): boolean {
+  if (diag.length !== (cov.length === m * m ? m : 0)) return false;
+  for (let a = 0; a < diag.length; a++) {
+    const u = diag[a];
+    const v = cov[a * m + a];
+    if (u === v ? u === 0 && 1 / u !== 1 / v : u === u || v === v) return false;
+  }
+  return true;
 }
 
 /**

@@ -18,7 +18,8 @@
  * is at least WALSH_MARGIN N (tolerance.ts), so every kept column keeps at least sqrt(WALSH_MARGIN)
  * of its norm and the QR's rank test (RANK_TOLERANCE) decides the same way. Otherwise: null, and
  * the caller factorises.
- * Cost O(N d^2 + p d^2 + d^3), no factorisation of the n x p matrix.
+ * Cost O(N d^2 + p d^2 + d^3), no factorisation of the n x p matrix; the last few answers are
+ * kept by the missing points and column masks, so the same plan again costs O(n k + p).
  * Example: the 2^3 less the run (+1, +1, +1), columns I, A, B, C, AB, AC, BC, ABC -> the seven
  * runs keep I..BC, and ABC = -(I + A + B + C + AB + AC + BC) on them (every h_l is 1 at the missing run).
  */
@@ -72,6 +73,45 @@ export function walshPlan(columns: readonly Column[], rows: readonly (readonly n
   }
   const missing = new Int32Array(d);
   for (let c = 0, i = 0; c < N; c++) if (!seen[c]) missing[i++] = c;
+  // The answer depends only on the missing points and the column masks: the same plan is asked
+  // for at every analysis of a study (and its saturated set), so the last few answers are kept.
+  const known = remembered(k, missing, masks);
+  if (known !== undefined) return known && { kept: new Int32Array(known.kept), aliased: known.aliased };
+  const plan = planOf(p, N, d, missing, masks, inModel, n);
+  remember(k, missing, masks, plan);
+  return plan && { kept: new Int32Array(plan.kept), aliased: plan.aliased };
+}
+
+/** The last answers of walshPlan, by factor count, missing points and column masks (shared; never modified). */
+const memo: { k: number; missing: Int32Array; masks: Int32Array; plan: WalshPlan | null }[] = [];
+const MEMO_SIZE = 4;
+
+function remembered(k: number, missing: Int32Array, masks: Int32Array): WalshPlan | null | undefined {
+  for (const e of memo) if (e.k === k && sameInts(e.missing, missing) && sameInts(e.masks, masks)) return e.plan;
+  return undefined;
+}
+
+function remember(k: number, missing: Int32Array, masks: Int32Array, plan: WalshPlan | null): void {
+  if (plan) {
+    for (const a of plan.aliased) {
+      for (const w of a.combination) Object.freeze(w);
+      Object.freeze(a.combination);
+      Object.freeze(a);
+    }
+    Object.freeze(plan.aliased);
+  }
+  if (memo.length === MEMO_SIZE) memo.shift();
+  memo.push({ k, missing, masks, plan });
+}
+
+function sameInts(a: Int32Array, b: Int32Array): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
+}
+
+/** walshPlan's work once the runs' missing points and the columns' masks are known. */
+function planOf(p: number, N: number, d: number, missing: Int32Array, masks: Int32Array, inModel: Uint8Array, n: number): WalshPlan | null {
   // h_t = H[D, t] for every Walsh column t, d apart.
   const hs = new Float64Array(N * d);
   for (let t = 0; t < N; t++) for (let i = 0; i < d; i++) hs[t * d + i] = popParity(t & missing[i]) ? -1 : 1;

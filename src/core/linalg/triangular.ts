@@ -12,6 +12,26 @@ export function solveUpper(r: Float64Array, m: number, c: Float64Array): void {
   }
 }
 
+/**
+ * solveUpper with R given by rows (rows[i m + j] = R[i,j], e.g. from upperRows): the same
+ * operations in the same order, reading each row along memory. Cost O(m^2).
+ */
+export function solveUpperRows(rows: Float64Array, m: number, c: Float64Array): void {
+  for (let i = m - 1; i >= 0; i--) {
+    const o = i * m;
+    let s = c[i];
+    for (let j = i + 1; j < m; j++) s -= rows[o + j] * c[j];
+    c[i] = s / rows[o + i];
+  }
+}
+
+/** R (upper triangular, column-major m x m) by rows, for solveUpperRows. Cost O(m^2). */
+export function upperRows(r: Float64Array, m: number): Float64Array {
+  const rows = new Float64Array(m * m);
+  for (let j = 0; j < m; j++) for (let i = 0; i <= j; i++) rows[i * m + j] = r[j * m + i];
+  return rows;
+}
+
 /** Inverse of R (upper triangular, column-major). Cost O(m^3 / 3). */
 export function invertUpper(r: Float64Array, m: number): Float64Array {
   const inv = new Float64Array(m * m);

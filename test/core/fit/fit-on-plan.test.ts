@@ -60,3 +60,26 @@ function termProduct(t: number, r: readonly number[]): number {
   for (let f = 0; f < r.length; f++) if (t & (1 << f)) p *= r[f];
   return p;
 }
+
+describe('fitOnPlan given the actual settings', () => {
+  it('instead of their matrix (the fit kept by its settings): the same fit to the last bit, found again or not', () => {
+    // The 2^(4-1) (D = ABC, Montgomery 8th ed. section 8.2) with three center runs, two settings
+    // off target and one lost run (floor data).
+    const actual = corners.map((r, i) => (i === 1 ? [0.8, ...r.slice(1)] : i === 4 ? [r[0], 1.06, r[2], r[3]] : r)).filter((_, i) => i !== 6);
+    const nominal = corners.filter((_, i) => i !== 6);
+    const y = [5, 7, 4, 9, 6, 3, 10, 6, 7, 6.5]; // invented
+    for (let round = 0; round < 2; round++) {
+      for (const lean of [false, true]) {
+        const ref = fitOnPlan(cols, modelMatrix(cols, nominal, null), modelMatrix(cols, actual, null), y, undefined, lean);
+        const bySettings = fitOnPlan(cols, modelMatrix(cols, nominal, null), { coded: actual, blocks: null }, y, undefined, lean);
+        expect(ref.kept.length).toBe(8);
+        for (const key of ['kept', 'coef', 'covUnscaled', 'seqSS', 'fitted', 'residuals', 'leverage'] as const) {
+          expect(bySettings[key].length).toBe(ref[key].length);
+          for (let i = 0; i < ref[key].length; i++) expect(Object.is(bySettings[key][i], ref[key][i])).toBe(true);
+        }
+        expect(bySettings.aliased).toEqual(ref.aliased);
+        expect(Array.from(bySettings.basis ?? [])).toEqual(Array.from(ref.basis ?? []));
+      }
+    }
+  });
+});

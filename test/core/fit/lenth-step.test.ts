@@ -50,4 +50,17 @@ describe('lenthStep', () => {
     expect(out.lenth).toBeNull();
     expect(out.halfNormal).toEqual([]);
   });
+
+  it('the labels of the saturated set follow the factors: renamed factors, then the first names again, are written afresh (the kept labels are by names and chains)', () => {
+    // A 2^4 half fraction (D = ABC, Montgomery 8th ed., section 8.2) so that the chains carry aliases.
+    const half = { ...filtration, coded: filtration.coded.filter((r) => r[0] * r[1] * r[2] * r[3] === 1), y: filtration.y.filter((_, i) => filtration.coded[i][0] * filtration.coded[i][1] * filtration.coded[i][2] * filtration.coded[i][3] === 1) };
+    half.labels = half.y.map((_, i) => String(i + 1));
+    const labels = (d: ResponseData) => step(d).out.halfNormal.map((p) => `${p.name}|${p.letters}`).sort();
+    const first = labels(half);
+    expect(first).toContain('Temperature:Pressure|AB + CD');
+    const renamed = { ...half, factors: half.factors.map((f, i) => ({ ...f, name: `F${i}`, letter: 'WXYZ'[i] })) };
+    const second = labels(renamed);
+    expect(second).toContain('F0:F1|WX + YZ');
+    expect(labels(half)).toEqual(first);
+  });
 });

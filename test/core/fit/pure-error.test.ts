@@ -1,5 +1,7 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { labelGroups, pureError, pureErrorOfGroups, settingGroups } from '../../../src/core/fit/pure-error.ts';
+import { SETTING_TOLERANCE } from '../../../src/core/tolerance.ts';
 import { fixtureData } from '../../helpers/fixtures.ts';
 
 describe('pure error (Montgomery 8th ed., section 10.7; Draper and Smith, 3rd ed., ch. 2.1)', () => {
@@ -24,6 +26,38 @@ describe('pure error (Montgomery 8th ed., section 10.7; Draper and Smith, 3rd ed
     expect(g[2]).not.toBe(g[0]);
     expect(g[3]).not.toBe(g[0]);
     expect(new Set(g).size).toBe(3);
+  });
+
+  it('settingGroups numbers the groups as the built-in stable sort with the same comparison does (property, fast-check)', () => {
+    // Reference: Array.prototype.sort (stable, ECMAScript 2019) with the comparison stated in
+    // pure-error.ts, group numbers given in sorted order. Settings from a few levels (some a hair
+    // apart, within the tolerance) so that runs repeat.
+    const level = fc.constantFrom(-1, 0, 1, 0.5, 1 + 1e-12, -1 - 1e-12);
+    const runs = fc.integer({ min: 1, max: 3 }).chain((k) =>
+      fc.array(fc.record({ row: fc.array(level, { minLength: k, maxLength: k }), block: fc.integer({ min: 1, max: 3 }) }), { minLength: 1, maxLength: 70 }),
+    );
+    fc.assert(
+      fc.property(runs, fc.boolean(), (list, blocked) => {
+        const coded = list.map((r) => r.row);
+        const blocks = blocked ? list.map((r) => r.block) : null;
+        const compare = (a: number, b: number): number => {
+          if (blocks && blocks[a] !== blocks[b]) return blocks[a] - blocks[b];
+          for (let f = 0; f < coded[a].length; f++) {
+            const d = coded[a][f] - coded[b][f];
+            if (Math.abs(d) > SETTING_TOLERANCE) return d;
+          }
+          return 0;
+        };
+        const order = coded.map((_, i) => i).sort(compare);
+        const expected = new Array<number>(coded.length);
+        let g = -1;
+        order.forEach((r, i) => {
+          if (i === 0 || compare(order[i - 1], r) !== 0) g++;
+          expected[r] = g;
+        });
+        expect([...settingGroups(coded, blocks)]).toEqual(expected);
+      }),
+    );
   });
 
   it('labelGroups: one group per label within a block', () => {

@@ -69,3 +69,21 @@ describe('columnVifs (Montgomery, Peck and Vining, 5th ed., section 9.4)', () =>
     expect(vifDrivers(cols, [[1, 1], [-1, -1], [1, -1], [-1, 1]], null, y, 1, ['1', '2', '3', '4'])).toEqual([]);
   });
 });
+
+describe('columnVifs found again from a kept factorisation', () => {
+  it('gives the reference VIFs again for another response on the same runs, and follows a changed (X\'X)^-1', () => {
+    // Floor-like runs: a 2^3 with two settings off target and one lost run (invented), terms A, B, C, AB.
+    const coded = [[-1, -1, -1], [1, -1, -1], [-1, 1, -1], [1, 1, -1], [-1, -1, 1], [0.8, -1, 1], [-1, 1, 1.1]];
+    const cols = modelColumns([], [1, 2, 4, 3]);
+    const x = coded.map((r) => [r[0], r[1], r[2], r[0] * r[1]]);
+    const first = columnVifs(fitQr(cols, modelMatrix(cols, coded, null), [1, 2, 3, 4, 5, 6, 7]), coded, null);
+    const fit2 = fitQr(cols, modelMatrix(cols, coded, null), [7, 1, 6, 2, 5, 3, 4]);
+    const again = columnVifs(fit2, coded, null);
+    expect(again).toEqual(first);
+    for (let j = 0; j < 4; j++) expect(again[j + 1]!).toBeCloseTo(referenceVif(x, j), 8);
+    // A fit on the same factorisation whose (X'X)^-1 diagonal differs is worked out afresh, not recalled.
+    const cov = fit2.covUnscaled.slice();
+    cov[2 * 5 + 2] *= 2;
+    expect(columnVifs({ ...fit2, covUnscaled: cov }, coded, null)[2]).toBeCloseTo(2 * again[2]!, 12);
+  });
+});
