@@ -37,6 +37,9 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
   const shared = useStudyAnalysis(store, studyId);
   const model = useModel(() => new NextRunsModel(store, shared));
   useEffect(() => void model.refreshBlocks(studyId), []);
+  // Which add button's question is open, and which button the last add came from (hooks before the early return).
+  const asking = useSignal<string | null>(null);
+  const lastAdd = useSignal<string | null>(null);
   const open = shownStudy(shared);
   if (!open) return <StudyPending shared={shared} />;
   const { study, shown, response } = open;
@@ -48,10 +51,9 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
   const saving = model.saving.value;
   // Added runs stay in the study for good, so each add button asks first, beside itself, and the
   // outcome is shown there too (the status line at the top says it to screen readers).
-  const asking = useSignal<string | null>(null);
-  const lastAdd = useSignal<string | null>(null);
   const count = model.confirmCountText.value.trim();
-  const runsWord = count === '1' ? 'run' : 'runs';
+  // A count the model will refuse is left out of the question; the refusal comes with the yes.
+  const counted = /^\d+$/.test(count) ? `${count} confirmation ${count === '1' ? 'run' : 'runs'}` : 'confirmation runs';
   const ask = (key: string, question: string, yes: () => void) =>
     asking.value === key ? (
       <div class="add-question" role="alertdialog" aria-label={question}>
@@ -124,7 +126,7 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
             <button type="button" class="btn block" disabled={saving} onClick={() => (asking.value = 'solve')}>
               Plan confirmation runs at this setting
             </button>
-            {ask('solve', `Add ${count} confirmation ${runsWord} at ${solution.value.factor.name} ${setting(solution.value.setting, solution.value.factor.unit)} to the run sheet?`, () => model.addConfirmation(study.id, { from: 'solve' }))}
+            {ask('solve', `Add ${counted} at ${solution.value.factor.name} ${setting(solution.value.setting, solution.value.factor.unit)} to the run sheet?`, () => model.addConfirmation(study.id, { from: 'solve' }))}
           </div>
         )}
       </section>
@@ -186,7 +188,7 @@ export function NextRunsScreen({ store, studyId }: NextRunsScreenProps) {
                           Confirm at step {s.step}
                         </button>
                       )}
-                      {s.step > 0 && ask(`step-${s.step}`, `Add ${count} confirmation ${runsWord} at path step ${s.step} to the run sheet?`, () => model.addConfirmation(study.id, { from: 'path', step: s.step }))}
+                      {s.step > 0 && ask(`step-${s.step}`, `Add ${counted} at path step ${s.step} to the run sheet?`, () => model.addConfirmation(study.id, { from: 'path', step: s.step }))}
                     </li>
                   ))}
                 </ol>
