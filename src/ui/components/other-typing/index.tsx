@@ -48,8 +48,8 @@ export function OtherTyping({ study, drafts, ownTyping, busy, onTake, onDiscard 
   return (
     <div class="other-typing" role="group" aria-label={one ? 'Typing from another tab' : `Typing from ${drafts.length} other tabs`}>
       <p class="other-typing-head">
-        <strong>{one ? 'Typing for this run was not saved' : `${drafts.length} lots of typing for this run were not saved`}</strong>, in another tab
-        or in a tab since closed. {one ? 'It is' : 'They are'} kept as {one ? 'it is' : 'they are'} until you use {one ? 'it' : 'one'} here or throw {one ? 'it' : 'them'} away.
+        <strong>{one ? 'Typing for this run was not saved' : `Typing for this run was not saved in ${drafts.length} places`}</strong>, in another
+        tab or in a tab since closed. {one ? 'It is' : 'Each is'} kept as it is until you use it here or throw it away.
       </p>
       <ul class="other-typing-list">
         {drafts.map((d) => (
